@@ -1,0 +1,141 @@
+// The database schema. Migrations under db/migrations are generated from this
+// file with `npx drizzle-kit generate` and committed; never edit them by hand.
+import { sql } from "drizzle-orm";
+import {
+  bigint,
+  integer,
+  jsonb,
+  pgEnum,
+  pgTable,
+  primaryKey,
+  text,
+  timestamp,
+  unique,
+  uuid,
+} from "drizzle-orm/pg-core";
+
+export const roleEnum = pgEnum("role", ["owner", "lead", "animator", "firmware", "viewer"]);
+
+export const versionStateEnum = pgEnum("version_state", [
+  "committed",
+  "in-review",
+  "sent-back",
+  "approved",
+  "released",
+  "retired",
+]);
+
+const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
+
+export const users = pgTable("users", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  githubId: bigint("github_id", { mode: "number" }).unique(),
+  login: text("login").notNull().unique(),
+  name: text("name").notNull(),
+  email: text("email").notNull(),
+  avatarUrl: text("avatar_url"),
+  createdAt: createdAt(),
+});
+
+export const workspaces = pgTable("workspaces", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  slug: text("slug").notNull().unique(),
+  name: text("name").notNull(),
+  createdAt: createdAt(),
+});
+
+export const memberships = pgTable(
+  "memberships",
+  {
+    workspaceId: uuid("workspace_id")
+      .notNull()
+      .references(() => workspaces.id, { onDelete: "cascade" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    role: roleEnum("role").notNull(),
+    createdAt: createdAt(),
+  },
+  (table) => [primaryKey({ columns: [table.workspaceId, table.userId] })],
+);
+
+export const robots = pgTable(
+  "robots",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    workspaceId: uuid("workspace_id")
+      .notNull()
+      .references(() => workspaces.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    createdById: uuid("created_by_id").references(() => users.id),
+    createdAt: createdAt(),
+  },
+  (table) => [unique("robots_workspace_name").on(table.workspaceId, table.name)],
+);
+
+/** Every save of a robot is a new, immutable revision. */
+export const robotRevisions = pgTable(
+  "robot_revisions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    robotId: uuid("robot_id")
+      .notNull()
+      .references(() => robots.id, { onDelete: "cascade" }),
+    number: integer("number").notNull(),
+    definition: jsonb("definition").notNull(),
+    message: text("message").notNull().default(""),
+    authorId: uuid("author_id").references(() => users.id),
+    createdAt: createdAt(),
+  },
+  (table) => [unique("robot_revisions_robot_number").on(table.robotId, table.number)],
+);
+
+/** A gait holds its working draft; committed versions live in gait_versions. */
+export const gaits = pgTable(
+  "gaits",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    workspaceId: uuid("workspace_id")
+      .notNull()
+      .references(() => workspaces.id, { onDelete: "cascade" }),
+    robotId: uuid("robot_id")
+      .notNull()
+      .references(() => robots.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    description: text("description").notNull().default(""),
+    draftSequence: jsonb("draft_sequence"),
+    draftRobotRevisionId: uuid("draft_robot_revision_id").references(() => robotRevisions.id),
+    // Optimistic concurrency: every draft save must name the revision it started from.
+    draftRevision: integer("draft_revision").notNull().default(0),
+    draftUpdatedAt: timestamp("draft_updated_at", { withTimezone: true }).notNull().defaultNow(),
+    draftUpdatedById: uuid("draft_updated_by_id").references(() => users.id),
+    createdById: uuid("created_by_id").references(() => users.id),
+    createdAt: createdAt(),
+  },
+  (table) => [unique("gaits_robot_name").on(table.robotId, table.name)],
+);
+
+export const gaitVersions = pgTable(
+  "gait_versions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    gaitId: uuid("gait_id")
+      .notNull()
+      .references(() => gaits.id, { onDelete: "cascade" }),
+    number: integer("number").notNull(),
+    message: text("message").notNull(),
+    authorId: uuid("author_id").references(() => users.id),
+    robotRevisionId: uuid("robot_revision_id")
+      .notNull()
+      .references(() => robotRevisions.id),
+    sequence: jsonb("sequence").notNull(),
+    summary: jsonb("summary").notNull().default(sql`'{}'::jsonb`),
+    contentHash: text("content_hash").notNull(),
+    state: versionStateEnum("state").notNull().default("committed"),
+    createdAt: createdAt(),
+  },
+  (table) => [unique("gait_versions_gait_number").on(table.gaitId, table.number)],
+);
+
+export type Role = (typeof roleEnum.enumValues)[number];
+export type VersionState = (typeof versionStateEnum.enumValues)[number];

@@ -1,0 +1,30 @@
+import { defineConfig } from "@playwright/test";
+
+// Debian's Chromium, never a downloaded browser. The flags keep it from
+// calling home: this machine's network is closed beyond loopback.
+export default defineConfig({
+  testDir: ".",
+  outputDir: "../.data/reports/e2e-artifacts",
+  fullyParallel: false,
+  workers: 2,
+  retries: 0,
+  timeout: 30_000,
+  expect: { timeout: 7_000 },
+  use: {
+    baseURL: process.env.GAITLOOM_E2E_URL ?? "http://127.0.0.1:3100",
+    trace: "retain-on-failure",
+    screenshot: "only-on-failure",
+    launchOptions: {
+      executablePath: "/usr/bin/chromium",
+      args: [
+        "--no-sandbox",
+        "--disable-gpu",
+        "--disable-quic",
+        "--no-first-run",
+        "--disable-background-networking",
+        "--disable-component-update",
+        "--disable-sync",
+      ],
+    },
+  },
+});

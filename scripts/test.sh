@@ -1,0 +1,70 @@
+#!/usr/bin/env bash
+# npm test: typecheck, unit, integration (real PostgreSQL) and e2e (Debian's
+# Chromium), each set up from scratch, ending with one "N passed, N failed" line.
+set -uo pipefail
+source "$(dirname "$0")/lib/common.sh"
+source "$(dirname "$0")/lib/postgres.sh"
+source "$(dirname "$0")/lib/services.sh"
+set -e
+
+export GAITLOOM_ENV=test
+APP_PORT="${GAITLOOM_TEST_PORT:-3100}"
+REPORTS="$DATA_DIR/reports"
+TEMPLATE_DB="gaitloom_test_template"
+E2E_DB="gaitloom_test_e2e"
+STARTED_AT=$(date +%s)
+
+require_free_disk "$ROOT" 800
+ensure_debian_packages postgresql chromium gcc libc6-dev
+ensure_node_modules
+trap 'services_stop_all; [ -n "$PG_STARTED_HERE" ] && pg_stop' EXIT
+pg_start
+rm -rf "$REPORTS" && mkdir -p "$REPORTS"
+
+say "preparing the test template database"
+pg_recreate_database "$TEMPLATE_DB"
+(cd "$ROOT" && DATABASE_URL="$(pg_url "$TEMPLATE_DB")" npx tsx db/migrate.ts >/dev/null)
+export GAITLOOM_TEST_ADMIN_URL="$(pg_url postgres)"
+export GAITLOOM_TEST_TEMPLATE_DB="$TEMPLATE_DB"
+export GAITLOOM_TEST_DATABASE_URL_PREFIX="$(pg_url gaitloom_test_w)"
+set +e
+
+say "typecheck (react-router typegen && tsc)"
+(cd "$ROOT" && npx react-router typegen >/dev/null 2>&1 && npx tsc -p tsconfig.json) >"$REPORTS/typecheck.log" 2>&1
+TYPECHECK_RC=$?
+[ $TYPECHECK_RC -eq 0 ] && say "typecheck passed" || { cat "$REPORTS/typecheck.log"; warn "typecheck failed"; }
+
+say "unit and integration tests (vitest)"
+(cd "$ROOT" && npx vitest run --reporter=default --reporter=json --outputFile.json="$REPORTS/vitest.json")
+VITEST_RC=$?
+
+say "building the app for the browser tests"
+E2E_RC=1
+if (cd "$ROOT" && npx react-router build >"$REPORTS/build.log" 2>&1); then
+  pg_recreate_database "$E2E_DB" "$TEMPLATE_DB"
+  export DATABASE_URL="$(pg_url "$E2E_DB")"
+  (cd "$ROOT" && npx tsx db/seed.ts >/dev/null)
+  export PUBLIC_URL="http://127.0.0.1:$APP_PORT"
+  if port_in_use "$APP_PORT"; then
+    warn "port $APP_PORT is taken; set GAITLOOM_TEST_PORT to a free one"
+  else
+    service_start test-app "$REPORTS/app.log" env NODE_ENV=production HOST=127.0.0.1 PORT="$APP_PORT" \
+      node_modules/.bin/react-router-serve build/server/index.js
+    ( service_wait_port test-app "$APP_PORT" "$REPORTS/app.log" ) && {
+      say "browser tests (Playwright driving /usr/bin/chromium)"
+      (cd "$ROOT" && GAITLOOM_E2E_URL="$PUBLIC_URL" PLAYWRIGHT_JSON_OUTPUT_NAME="$REPORTS/e2e.json" \
+        npx playwright test -c e2e/playwright.config.ts --reporter=list,json)
+      E2E_RC=$?
+    }
+  fi
+else
+  tail -n 30 "$REPORTS/build.log"
+  warn "the build failed, so the browser tests did not run"
+fi
+
+services_stop_all
+if [ -n "$PG_STARTED_HERE" ]; then pg_stop; PG_STARTED_HERE=""; fi
+say "finished in $(( $(date +%s) - STARTED_AT )) s"
+node "$ROOT/scripts/lib/summarize.mjs" "$REPORTS" "$TYPECHECK_RC"
+SUMMARY_RC=$?
+[ $TYPECHECK_RC -eq 0 ] && [ $VITEST_RC -eq 0 ] && [ $E2E_RC -eq 0 ] && [ $SUMMARY_RC -eq 0 ]

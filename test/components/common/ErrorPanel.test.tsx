@@ -1,0 +1,55 @@
+// @vitest-environment jsdom
+import { cleanup, render, screen } from "@testing-library/react";
+import { createRoutesStub, data, useRouteError } from "react-router";
+import { afterEach, describe, expect, test } from "vitest";
+import { ErrorPanel } from "~/components/common/ErrorPanel";
+
+afterEach(cleanup);
+
+function renderFailingRoute(fail: () => never) {
+  const Stub = createRoutesStub([
+    {
+      path: "/",
+      loader: fail,
+      Component: () => null,
+      HydrateFallback: () => null,
+      ErrorBoundary: () => {
+        // createRoutesStub hands the error to the boundary through the router.
+        return <RouteError />;
+      },
+    },
+  ]);
+  render(<Stub initialEntries={["/"]} />);
+}
+
+
+function RouteError() {
+  return <ErrorPanel error={useRouteError()} />;
+}
+
+describe("ErrorPanel", () => {
+  test("a 404 says there is no page and links home", async () => {
+    renderFailingRoute(() => {
+      throw data(null, { status: 404 });
+    });
+    expect(await screen.findByRole("heading", { name: "There is no page here" })).toBeTruthy();
+    expect(screen.getByText("Error 404")).toBeTruthy();
+    expect(screen.getByRole("link", { name: "Back to the start page" }).getAttribute("href")).toBe("/");
+  });
+
+  test("a 403 names the role problem and keeps the server's message", async () => {
+    renderFailingRoute(() => {
+      throw data({ message: "Viewers cannot edit robots." }, { status: 403 });
+    });
+    expect(await screen.findByRole("heading", { name: "Your role cannot do this" })).toBeTruthy();
+    expect(screen.getByText("Viewers cannot edit robots.")).toBeTruthy();
+  });
+
+  test("a crash is a 500 that says nothing saved was lost", async () => {
+    renderFailingRoute(() => {
+      throw new Error("boom");
+    });
+    expect(await screen.findByRole("heading", { name: "Something broke on our side" })).toBeTruthy();
+    expect(screen.getByText(/Nothing you saved was lost/)).toBeTruthy();
+  });
+});
