@@ -1,0 +1,48 @@
+// forwardLeg: where the foot is for given servo angles, the exact inverse of solveLeg.
+import * as bodyPoseModule from "./body-pose";
+import * as legConstantsModule from "./leg-constants";
+import * as kernel from "./leg-kernel";
+import * as robotModule from "./robot";
+import type { BodyPose, JointAngles, Robot, Vec3 } from "./robot";
+
+// Module-local copies: some module loaders read imported bindings through getters (see leg-kernel.ts).
+const poseRotation = bodyPoseModule.poseRotation;
+const cachedLegConstants = legConstantsModule.cachedLegConstants;
+const forwardLegInto = kernel.forwardLegInto;
+const findLeg = robotModule.findLeg;
+
+const footScratch = new Float64Array(3);
+const rotationScratch = new Float64Array(9);
+// The legs of one frame share a pose: its rotation is worked out once, not per leg.
+let rotationRollDeg = Number.NaN;
+let rotationPitchDeg = Number.NaN;
+let rotationYawDeg = Number.NaN;
+
+function rotationOf(pose: BodyPose): Float64Array {
+  if (pose.roll !== rotationRollDeg || pose.pitch !== rotationPitchDeg || pose.yaw !== rotationYawDeg) {
+    poseRotation(pose, rotationScratch);
+    rotationRollDeg = pose.roll;
+    rotationPitchDeg = pose.pitch;
+    rotationYawDeg = pose.yaw;
+  }
+  return rotationScratch;
+}
+
+/**
+ * The foot (mm) in the neutral body frame for servo angles `angles` (degrees),
+ * the body moved by `bodyPose` if given: R·p + t of the foot p in the moved body frame.
+ */
+export function forwardLeg(robot: Robot, legId: string, angles: JointAngles, bodyPose?: BodyPose): Vec3 {
+  const k = cachedLegConstants(findLeg(robot, legId));
+  forwardLegInto(k, angles.coxa, angles.femur, angles.tibia, footScratch, 0);
+  const x = footScratch[0];
+  const y = footScratch[1];
+  const z = footScratch[2];
+  if (!bodyPose) return [x, y, z];
+  const r = rotationOf(bodyPose);
+  return [
+    r[0] * x + r[1] * y + r[2] * z + bodyPose.x,
+    r[3] * x + r[4] * y + r[5] * z + bodyPose.y,
+    r[6] * x + r[7] * y + r[8] * z + bodyPose.z,
+  ];
+}

@@ -1,0 +1,123 @@
+// The closed-form leg solve and its forward twin, side by side so that the
+// inverse relation can be read off line by line. Inputs are in the (possibly
+// moved) body frame, mm; outputs servo degrees. No allocation.
+//
+// Conventions (DESIGN.md, "Conventions of the math"): the leg frame sits at the
+// mount, turned by the mount yaw about z. Coxa zero points along the mount yaw,
+// positive counter-clockwise from above. In the (r, z) leg plane femur and tibia
+// turn counter-clockwise; with coxa c, femur f, tibia t:
+//   knee = (c + f·cos φf, f·sin φf),  foot = knee + t·(cos α, sin α),  α = φf − 90° + φt.
+// servoDeg = geometricDeg − zeroOffsetDeg.
+import * as angles from "./angles";
+import type { LegConstants } from "./leg-constants";
+import * as status from "./solve-status";
+
+// Module-local copies on purpose: some module loaders (vitest's, tsx's) read
+// imported bindings through getters, which doubled the time of a solve here.
+const DEG_PER_RAD = angles.DEG_PER_RAD;
+const wrapNear = angles.wrapNear;
+const COXA_AXIS_CLEARANCE_MM = status.COXA_AXIS_CLEARANCE_MM;
+const SOLVE_BEYOND_REACH = status.SOLVE_BEYOND_REACH;
+const SOLVE_INSIDE_FOLD = status.SOLVE_INSIDE_FOLD;
+const SOLVE_ON_COXA_AXIS = status.SOLVE_ON_COXA_AXIS;
+const SOLVE_NOT_FINITE = status.SOLVE_NOT_FINITE;
+const SOLVE_COXA_LIMIT = status.SOLVE_COXA_LIMIT;
+const SOLVE_FEMUR_LIMIT = status.SOLVE_FEMUR_LIMIT;
+const SOLVE_TIBIA_LIMIT = status.SOLVE_TIBIA_LIMIT;
+
+type NumberSink = { [index: number]: number };
+
+const HALF_PI = Math.PI / 2;
+// Round-off allowance when a target sits exactly at full extension or full fold.
+const REACH_TOLERANCE_MM = 1e-9;
+// Round-off allowance when a solved angle sits exactly on a joint limit.
+const LIMIT_TOLERANCE_DEG = 1e-9;
+
+/**
+ * Solves one leg for a foot at (x, y, z) in the body frame; writes servo degrees
+ * (coxa, femur, tibia) to out[offset..offset+2] and returns the SOLVE_* bits.
+ * Unreachable targets get the clamped solution: finite angles, never NaN.
+ */
+export function solveLegInto(k: LegConstants, x: number, y: number, z: number, out: NumberSink, offset: number): number {
+  // Into the leg frame: translate to the mount, turn by −yaw.
+  const dx = x - k.mountXMm;
+  const dy = y - k.mountYMm;
+  const legX = k.cosYaw * dx + k.sinYaw * dy;
+  const legY = k.cosYaw * dy - k.sinYaw * dx;
+  const legZ = z - k.mountZMm;
+  const radius = Math.sqrt(legX * legX + legY * legY);
+  // NaN fails every comparison, so this also catches NaN targets.
+  if (!(radius < Infinity && Math.abs(legZ) < Infinity)) return notFinite(k, out, offset);
+  let bits = 0;
+  if (radius < COXA_AXIS_CLEARANCE_MM) bits |= SOLVE_ON_COXA_AXIS;
+  const coxaRad = Math.atan2(legY, legX);
+
+  // Planar two-link solve with the coxa removed, by the law of cosines
+  // (Craig, Introduction to Robotics, the planar two-link arm):
+  // d² = f² + t² − 2ft·cos γ, γ the interior knee angle.
+  const u = radius - k.coxaMm;
+  const distanceSquared = u * u + legZ * legZ;
+  const distance = Math.sqrt(distanceSquared);
+  if (distance > k.reachMaxMm + REACH_TOLERANCE_MM) bits |= SOLVE_BEYOND_REACH;
+  else if (distance < k.reachMinMm - REACH_TOLERANCE_MM) bits |= SOLVE_INSIDE_FOLD;
+  let cosKnee = (k.linkSquaresSum - distanceSquared) / k.twiceFemurTibia;
+  if (cosKnee > 1) cosKnee = 1;
+  else if (cosKnee < -1) cosKnee = -1;
+  const kneeRad = Math.acos(cosKnee);
+  const sinKnee = Math.sqrt(1 - cosKnee * cosKnee);
+  // Knee-up branch: φt = γ − 90° ∈ [−90°, 90°]. The foot seen from the femur
+  // joint along the femur is (f − t·cos γ, −t·sin γ), so the femur sits that
+  // far above the line to the foot.
+  const femurRad = Math.atan2(legZ, u) + Math.atan2(k.tibiaMm * sinKnee, k.femurMm - k.tibiaMm * cosKnee);
+  const tibiaRad = kneeRad - HALF_PI;
+
+  const coxaDeg = wrapNear((coxaRad - k.coxaOffsetRad) * DEG_PER_RAD, k.coxaMidDeg);
+  const femurDeg = wrapNear((femurRad - k.femurOffsetRad) * DEG_PER_RAD, k.femurMidDeg);
+  const tibiaDeg = wrapNear((tibiaRad - k.tibiaOffsetRad) * DEG_PER_RAD, k.tibiaMidDeg);
+  out[offset] = coxaDeg;
+  out[offset + 1] = femurDeg;
+  out[offset + 2] = tibiaDeg;
+
+  return bits | limitBits(k, coxaDeg, femurDeg, tibiaDeg);
+}
+
+function limitBits(k: LegConstants, coxaDeg: number, femurDeg: number, tibiaDeg: number): number {
+  let bits = 0;
+  if (coxaDeg < k.coxaMinDeg - LIMIT_TOLERANCE_DEG || coxaDeg > k.coxaMaxDeg + LIMIT_TOLERANCE_DEG) bits |= SOLVE_COXA_LIMIT;
+  if (femurDeg < k.femurMinDeg - LIMIT_TOLERANCE_DEG || femurDeg > k.femurMaxDeg + LIMIT_TOLERANCE_DEG) bits |= SOLVE_FEMUR_LIMIT;
+  if (tibiaDeg < k.tibiaMinDeg - LIMIT_TOLERANCE_DEG || tibiaDeg > k.tibiaMaxDeg + LIMIT_TOLERANCE_DEG) bits |= SOLVE_TIBIA_LIMIT;
+  return bits;
+}
+
+// A target with NaN or infinite coordinates: the joints' geometric zero, so no NaN leaves.
+function notFinite(k: LegConstants, out: NumberSink, offset: number): number {
+  const coxaDeg = wrapNear(-k.coxaOffsetDeg, k.coxaMidDeg);
+  const femurDeg = wrapNear(-k.femurOffsetDeg, k.femurMidDeg);
+  const tibiaDeg = wrapNear(-k.tibiaOffsetDeg, k.tibiaMidDeg);
+  out[offset] = coxaDeg;
+  out[offset + 1] = femurDeg;
+  out[offset + 2] = tibiaDeg;
+  return SOLVE_NOT_FINITE | limitBits(k, coxaDeg, femurDeg, tibiaDeg);
+}
+
+/** Foot position (body frame, mm) for servo degrees, written to out[offset..offset+2]. */
+export function forwardLegInto(
+  k: LegConstants,
+  coxaServoDeg: number,
+  femurServoDeg: number,
+  tibiaServoDeg: number,
+  out: NumberSink,
+  offset: number,
+): void {
+  const coxaRad = coxaServoDeg / DEG_PER_RAD + k.coxaOffsetRad;
+  const femurRad = femurServoDeg / DEG_PER_RAD + k.femurOffsetRad;
+  const tibiaRad = tibiaServoDeg / DEG_PER_RAD + k.tibiaOffsetRad;
+  const tibiaDirectionRad = femurRad - HALF_PI + tibiaRad;
+  const radius = k.coxaMm + k.femurMm * Math.cos(femurRad) + k.tibiaMm * Math.cos(tibiaDirectionRad);
+  const height = k.femurMm * Math.sin(femurRad) + k.tibiaMm * Math.sin(tibiaDirectionRad);
+  const legX = radius * Math.cos(coxaRad);
+  const legY = radius * Math.sin(coxaRad);
+  out[offset] = k.mountXMm + k.cosYaw * legX - k.sinYaw * legY;
+  out[offset + 1] = k.mountYMm + k.sinYaw * legX + k.cosYaw * legY;
+  out[offset + 2] = k.mountZMm + height;
+}

@@ -1,0 +1,247 @@
+// The robot definition, format "gaitloom.robot/1" (DESIGN.md, "Robot definition").
+// One zod schema is the source of truth: parseRobot validates with it and
+// robotJsonSchema publishes it, so the two can never disagree.
+import { z } from "zod";
+import { describeValue, formatIssues, type DefinitionIssue } from "./issues";
+
+export const ROBOT_FORMAT = "gaitloom.robot/1";
+export const MIN_LEGS = 4;
+export const MAX_LEGS = 8;
+
+export const JOINT_NAMES = ["coxa", "femur", "tibia"] as const;
+export type JointName = (typeof JOINT_NAMES)[number];
+
+/** A point or vector in millimetres, [x, y, z]: x forward, y left, z up (REP 103). */
+export type Vec3 = [number, number, number];
+
+/** One value per joint; servo degrees unless a name says otherwise. */
+export type JointAngles = { coxa: number; femur: number; tibia: number };
+
+/**
+ * Body pose relative to the neutral body frame: translation in mm, rotation in
+ * degrees as R = Rz(yaw)·Ry(pitch)·Rx(roll) (fixed-axis roll, pitch, yaw, REP 103).
+ */
+export type BodyPose = { x: number; y: number; z: number; roll: number; pitch: number; yaw: number };
+
+const finite = z.number();
+const positiveMm = z.number().positive();
+
+// Leg ids end up as CSV headers and C identifiers in the exports.
+const LEG_ID_PATTERN = /^[A-Za-z][A-Za-z0-9_]{0,15}$/;
+
+const servoSchema = z
+  .strictObject({
+    channel: z.number().int().min(0).max(255).describe("Output channel on the servo controller; unique across the robot."),
+    reversed: z.boolean().describe("The servo turns against the joint's positive sense: pulses step the other way."),
+    centerUs: positiveMm.describe("Pulse width (µs) at servo angle 0."),
+    usPerDeg: z.number().positive().describe("Pulse width change per servo degree (µs/°), always positive; `reversed` gives the sign."),
+    minUs: positiveMm.describe("Shortest pulse the servo accepts (µs)."),
+    maxUs: positiveMm.describe("Longest pulse the servo accepts (µs)."),
+  })
+  .superRefine((servo, ctx) => {
+    if (servo.minUs >= servo.maxUs) {
+      ctx.addIssue({ code: "custom", path: ["minUs"], message: `must be below maxUs (got ${servo.minUs} ≥ ${servo.maxUs})` });
+    } else if (servo.centerUs < servo.minUs || servo.centerUs > servo.maxUs) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["centerUs"],
+        message: `must lie within minUs..maxUs (got ${servo.centerUs} outside ${servo.minUs}..${servo.maxUs})`,
+      });
+    }
+  });
+
+const jointSchema = z
+  .strictObject({
+    minDeg: z.number().min(-180).max(180).describe("Lower joint limit in servo degrees."),
+    maxDeg: z.number().min(-180).max(180).describe("Upper joint limit in servo degrees."),
+    zeroOffsetDeg: z
+      .number()
+      .min(-180)
+      .max(180)
+      .describe("Calibration: servoDeg = geometricDeg − zeroOffsetDeg."),
+    maxSpeedDegS: z.number().positive().describe("Fastest the joint may turn (°/s)."),
+    servo: servoSchema,
+  })
+  .superRefine((joint, ctx) => {
+    if (joint.minDeg >= joint.maxDeg) {
+      ctx.addIssue({ code: "custom", path: ["minDeg"], message: `must be below maxDeg (got ${joint.minDeg} ≥ ${joint.maxDeg})` });
+    }
+  });
+
+const legSchema = z.strictObject({
+  id: z
+    .string()
+    .regex(LEG_ID_PATTERN, {
+      error: (issue) => `must start with a letter and hold only letters, digits and _, 16 at most (got ${describeValue(issue.input)})`,
+    })
+    .describe("Short leg name, e.g. LF; letters, digits and _, starting with a letter."),
+  mount: z
+    .strictObject({
+      x: finite.describe("Mount point (the coxa axis) in the body frame, mm."),
+      y: finite,
+      z: finite,
+      yawDeg: z.number().min(-180).max(180).describe("Direction of the coxa's zero about z, degrees, counter-clockwise from forward."),
+    })
+    .describe("Where the leg attaches to the body and which way its coxa zero points."),
+  coxa: positiveMm.describe("Coxa length, coxa axis to femur joint, mm."),
+  femur: positiveMm.describe("Femur length, femur joint to knee joint, mm."),
+  tibia: positiveMm.describe("Tibia length, knee joint to foot tip, mm."),
+  side: z.enum(["left", "right"]).optional().describe("Overrides the side taken from the mount (y > 0 is left)."),
+  row: z.number().int().min(0).optional().describe("Front-to-back position on its side, 0 = front; overrides the order by mount x."),
+  joints: z.strictObject({ coxa: jointSchema, femur: jointSchema, tibia: jointSchema }),
+});
+
+const restAnglesSchema = z.strictObject({ coxa: finite, femur: finite, tibia: finite });
+
+const robotObjectSchema = z.strictObject({
+  format: z.literal(ROBOT_FORMAT),
+  name: z.string().trim().min(1).max(120),
+  description: z.string().max(2000).optional(),
+  body: z.strictObject({
+    massKg: z.number().positive().describe("Total mass of the robot, kg."),
+    com: z.tuple([finite, finite, finite]).describe("Centre of mass in the body frame, mm."),
+  }),
+  standHeight: positiveMm.describe("Default height of the body origin above the ground, mm."),
+  legs: z.array(legSchema),
+  rest: z
+    .record(z.string(), restAnglesSchema)
+    .optional()
+    .describe("Servo angles (degrees) per leg of the robot resting on its belly, powered down; gives every leg."),
+});
+
+export const robotSchema = robotObjectSchema
+  .superRefine((robot, ctx) => {
+    const count = robot.legs.length;
+    if (count < MIN_LEGS || count > MAX_LEGS) {
+      ctx.addIssue({ code: "custom", path: ["legs"], message: `must have ${MIN_LEGS} to ${MAX_LEGS} legs (got ${count})` });
+    }
+    const firstIndexOfId = new Map<string, number>();
+    robot.legs.forEach((leg, index) => {
+      const earlier = firstIndexOfId.get(leg.id);
+      if (earlier !== undefined) {
+        ctx.addIssue({ code: "custom", path: ["legs", index, "id"], message: `must be unique (got "${leg.id}", also legs[${earlier}])` });
+      } else {
+        firstIndexOfId.set(leg.id, index);
+      }
+    });
+    const channelOwner = new Map<number, string>();
+    robot.legs.forEach((leg, index) => {
+      for (const jointName of JOINT_NAMES) {
+        const channel = leg.joints[jointName].servo.channel;
+        const owner = channelOwner.get(channel);
+        const here = `legs[${index}].joints.${jointName}`;
+        if (owner !== undefined) {
+          ctx.addIssue({
+            code: "custom",
+            path: ["legs", index, "joints", jointName, "servo", "channel"],
+            message: `must be unique across the robot (got ${channel}, also ${owner})`,
+          });
+        } else {
+          channelOwner.set(channel, here);
+        }
+      }
+    });
+    const seatOwner = new Map<string, string>();
+    robot.legs.forEach((leg, index) => {
+      const seat = `${legSide(robot, leg)} ${legRow(robot, leg)}`;
+      const owner = seatOwner.get(seat);
+      if (owner !== undefined) {
+        ctx.addIssue({
+          code: "custom",
+          path: ["legs", index, leg.row === undefined ? "side" : "row"],
+          message: `row ${legRow(robot, leg)} on the ${legSide(robot, leg)} side is taken by ${owner}`,
+        });
+      } else {
+        seatOwner.set(seat, leg.id);
+      }
+    });
+    if (robot.rest) {
+      for (const restId of Object.keys(robot.rest)) {
+        if (!firstIndexOfId.has(restId)) {
+          ctx.addIssue({ code: "custom", path: ["rest", restId], message: `must name a leg (no leg "${restId}")` });
+        }
+      }
+      robot.legs.forEach((leg) => {
+        const angles = robot.rest?.[leg.id];
+        if (!angles) {
+          ctx.addIssue({ code: "custom", path: ["rest", leg.id], message: "is missing: the rest pose gives every leg" });
+          return;
+        }
+        for (const jointName of JOINT_NAMES) {
+          const { minDeg, maxDeg } = leg.joints[jointName];
+          const value = angles[jointName];
+          // Limits that are themselves wrong are reported on the joint already.
+          if (minDeg < maxDeg && (value < minDeg || value > maxDeg)) {
+            ctx.addIssue({
+              code: "custom",
+              path: ["rest", leg.id, jointName],
+              message: `must lie within the joint limits ${minDeg}..${maxDeg} (got ${value})`,
+            });
+          }
+        }
+      });
+    }
+  })
+  .meta({
+    title: "Gaitloom robot definition",
+    description:
+      "A legged robot for Gaitloom: millimetres and degrees, x forward, y left, z up. Servo degrees are geometric degrees minus zeroOffsetDeg.",
+  });
+
+export type Robot = z.output<typeof robotSchema>;
+export type Leg = Robot["legs"][number];
+export type Joint = Leg["joints"]["coxa"];
+export type Servo = Joint["servo"];
+export type LegSide = "left" | "right";
+
+export type { DefinitionIssue };
+export type ParseRobotResult = { ok: true; robot: Robot } | { ok: false; issues: DefinitionIssue[] };
+
+/** Validates an untrusted robot definition (already JSON-decoded). */
+export function parseRobot(json: unknown): ParseRobotResult {
+  const result = robotSchema.safeParse(json, { reportInput: true });
+  if (result.success) return { ok: true, robot: result.data };
+  return { ok: false, issues: formatIssues(result.error.issues) };
+}
+
+let generatedJsonSchema: Record<string, unknown> | undefined;
+
+/**
+ * The JSON Schema of the robot definition, generated from the zod schema
+ * (draft 2020-12). Rules across fields (unique ids and channels, minDeg < maxDeg,
+ * …) are beyond JSON Schema: parseRobot checks them.
+ */
+export function robotJsonSchema(): Record<string, unknown> {
+  generatedJsonSchema ??= z.toJSONSchema(robotSchema, { io: "input", target: "draft-2020-12" }) as Record<string, unknown>;
+  return structuredClone(generatedJsonSchema);
+}
+
+/** Finds a leg by id; throws for an id the robot does not have (a caller's bug, not user input). */
+export function findLeg(robot: Robot, legId: string): Leg {
+  for (const leg of robot.legs) if (leg.id === legId) return leg;
+  throw new RangeError(`robot "${robot.name}" has no leg "${legId}" (legs: ${robot.legs.map((leg) => leg.id).join(", ")})`);
+}
+
+/** The leg's side: its own `side`, else from the mount (y > 0 is left, y ≤ 0 right). */
+export function legSide(robot: Pick<Robot, "legs">, leg: Leg): LegSide {
+  // The robot is not needed today; it is in the signature to match legRow, which needs it.
+  void robot;
+  if (leg.side) return leg.side;
+  return leg.mount.y > 0 ? "left" : "right";
+}
+
+/**
+ * The leg's front-to-back place on its side, 0 = front: its own `row`, else its
+ * rank by mount x (larger x first) among the legs of the same side, ties in list order.
+ */
+export function legRow(robot: Pick<Robot, "legs">, leg: Leg): number {
+  if (leg.row !== undefined) return leg.row;
+  const side = legSide(robot, leg);
+  const index = robot.legs.indexOf(leg);
+  let row = 0;
+  robot.legs.forEach((other, otherIndex) => {
+    if (other === leg || legSide(robot, other) !== side) return;
+    if (other.mount.x > leg.mount.x || (other.mount.x === leg.mount.x && otherIndex < index)) row += 1;
+  });
+  return row;
+}

@@ -1,0 +1,98 @@
+// solveLeg: the public, one-call leg solve (DESIGN.md, "Core module contracts").
+// For thousands of solves use createLegSolver, which keeps the per-leg constants.
+import * as bodyPoseModule from "./body-pose";
+import * as legConstantsModule from "./leg-constants";
+import type { LegConstants } from "./leg-constants";
+import * as kernel from "./leg-kernel";
+import * as robotModule from "./robot";
+import type { BodyPose, JointAngles, JointName, Robot, Vec3 } from "./robot";
+import * as status from "./solve-status";
+
+// Module-local copies: some module loaders read imported bindings through getters (see leg-kernel.ts).
+const poseRotation = bodyPoseModule.poseRotation;
+const cachedLegConstants = legConstantsModule.cachedLegConstants;
+const solveLegInto = kernel.solveLegInto;
+const findLeg = robotModule.findLeg;
+const SOLVE_COXA_LIMIT = status.SOLVE_COXA_LIMIT;
+const SOLVE_FEMUR_LIMIT = status.SOLVE_FEMUR_LIMIT;
+const SOLVE_TIBIA_LIMIT = status.SOLVE_TIBIA_LIMIT;
+const SOLVE_UNREACHABLE = status.SOLVE_UNREACHABLE;
+
+/** A joint outside its limits, all in servo degrees. */
+export type JointLimitViolation = { joint: JointName; valueDeg: number; minDeg: number; maxDeg: number };
+
+export type LegSolution = {
+  /** False when no leg posture puts the foot there; `angles` then hold the clamped solution. */
+  reachable: boolean;
+  reason?: string;
+  /** Servo degrees. */
+  angles: JointAngles;
+  violations: JointLimitViolation[];
+};
+
+const anglesScratch = new Float64Array(3);
+const rotationScratch = new Float64Array(9);
+// The legs of one frame share a pose: its rotation is worked out once, not per leg.
+let rotationRollDeg = Number.NaN;
+let rotationPitchDeg = Number.NaN;
+let rotationYawDeg = Number.NaN;
+
+function rotationOf(pose: BodyPose): Float64Array {
+  if (pose.roll !== rotationRollDeg || pose.pitch !== rotationPitchDeg || pose.yaw !== rotationYawDeg) {
+    poseRotation(pose, rotationScratch);
+    rotationRollDeg = pose.roll;
+    rotationPitchDeg = pose.pitch;
+    rotationYawDeg = pose.yaw;
+  }
+  return rotationScratch;
+}
+
+/**
+ * Joint angles (servo degrees) that put the leg's foot at `foot` (mm, neutral
+ * body frame), the body moved by `bodyPose` if given: the target is brought
+ * into the moved body frame by Rᵀ(foot − t) first.
+ */
+export function solveLeg(robot: Robot, legId: string, foot: Vec3, bodyPose?: BodyPose): LegSolution {
+  const k = cachedLegConstants(findLeg(robot, legId));
+  let x = foot[0];
+  let y = foot[1];
+  let z = foot[2];
+  if (bodyPose) {
+    const r = rotationOf(bodyPose);
+    const px = x - bodyPose.x;
+    const py = y - bodyPose.y;
+    const pz = z - bodyPose.z;
+    x = r[0] * px + r[3] * py + r[6] * pz;
+    y = r[1] * px + r[4] * py + r[7] * pz;
+    z = r[2] * px + r[5] * py + r[8] * pz;
+  }
+  const bits = solveLegInto(k, x, y, z, anglesScratch, 0);
+  const angles = { coxa: anglesScratch[0], femur: anglesScratch[1], tibia: anglesScratch[2] };
+  const violations: JointLimitViolation[] = [];
+  if (bits & SOLVE_COXA_LIMIT) violations.push({ joint: "coxa", valueDeg: angles.coxa, minDeg: k.coxaMinDeg, maxDeg: k.coxaMaxDeg });
+  if (bits & SOLVE_FEMUR_LIMIT) violations.push({ joint: "femur", valueDeg: angles.femur, minDeg: k.femurMinDeg, maxDeg: k.femurMaxDeg });
+  if (bits & SOLVE_TIBIA_LIMIT) violations.push({ joint: "tibia", valueDeg: angles.tibia, minDeg: k.tibiaMinDeg, maxDeg: k.tibiaMaxDeg });
+  if ((bits & SOLVE_UNREACHABLE) === 0) return { reachable: true, angles, violations };
+  return { reachable: false, reason: unreachableReason(k, x, y, z, bits), angles, violations };
+}
+
+/** The human reason for an unreachable target (body-frame mm), naming the leg and the distance. */
+export function unreachableReason(k: LegConstants, x: number, y: number, z: number, bits: number): string {
+  if (bits & status.SOLVE_NOT_FINITE) return `leg ${k.id}: the target (${x}, ${y}, ${z}) is not a finite point`;
+  const radius = Math.hypot(x - k.mountXMm, y - k.mountYMm);
+  if (bits & status.SOLVE_ON_COXA_AXIS) {
+    return `leg ${k.id}: the foot is ${mm(radius)} from the coxa axis, where the coxa angle is undefined (${mm(status.COXA_AXIS_CLEARANCE_MM)} needed)`;
+  }
+  const distance = Math.hypot(radius - k.coxaMm, z - k.mountZMm);
+  if (bits & status.SOLVE_BEYOND_REACH) {
+    return `leg ${k.id}: the foot is ${mm(distance)} from the femur joint, beyond full extension (${mm(k.reachMaxMm)})`;
+  }
+  if (bits & status.SOLVE_INSIDE_FOLD) {
+    return `leg ${k.id}: the foot is ${mm(distance)} from the femur joint, inside full fold (${mm(k.reachMinMm)})`;
+  }
+  return `leg ${k.id}: reachable`;
+}
+
+function mm(value: number): string {
+  return `${value.toFixed(1)} mm`;
+}

@@ -1,0 +1,166 @@
+import { describe, expect, it } from "vitest";
+import { JOINT_NAMES, legRow, legSide, parseRobot, robotJsonSchema, type Leg } from "../../app/kinematics";
+import { demoRobotJson, loadDemoRobots } from "./support/demo-robots";
+
+// A fresh, mutable copy of the six-legged demo robot's JSON.
+const pierCrawler = () => demoRobotJson("pier-crawler") as Record<string, any>;
+
+function issuesOf(json: unknown) {
+  const parsed = parseRobot(json);
+  if (parsed.ok) throw new Error("expected the definition to be refused, it parsed");
+  return parsed.issues;
+}
+
+describe("parseRobot: every problem as { path, message }", () => {
+  it("accepts the demo robots", () => {
+    for (const name of ["pier-crawler", "quay-walker", "hull-climber"] as const) {
+      const parsed = parseRobot(demoRobotJson(name));
+      expect(parsed.ok ? [] : parsed.issues, name).toEqual([]);
+    }
+  });
+
+  const cases: [string, (robot: Record<string, any>) => unknown, { path: string; message: string }[]][] = [
+    ["minDeg not below maxDeg", (r) => ((r.legs[2].joints.femur.minDeg = 40), (r.legs[2].joints.femur.maxDeg = 30), r), [
+      { path: "legs[2].joints.femur.minDeg", message: "must be below maxDeg (got 40 ≥ 30)" },
+    ]],
+    ["too few legs", (r) => ((r.legs = r.legs.slice(0, 3)), delete r.rest, r), [{ path: "legs", message: "must have 4 to 8 legs (got 3)" }]],
+    ["a repeated leg id", (r) => ((r.legs[3].id = "LF"), delete r.rest, r), [{ path: "legs[3].id", message: 'must be unique (got "LF", also legs[0])' }]],
+    ["a repeated servo channel", (r) => ((r.legs[1].joints.tibia.servo.channel = 0), r), [
+      { path: "legs[1].joints.tibia.servo.channel", message: "must be unique across the robot (got 0, also legs[0].joints.coxa)" },
+    ]],
+    ["a rest pose for no leg", (r) => ((r.rest.XX = { coxa: 0, femur: 0, tibia: 0 }), r), [{ path: "rest.XX", message: 'must name a leg (no leg "XX")' }]],
+    ["a rest pose missing a leg", (r) => (delete r.rest.LM, r), [{ path: "rest.LM", message: "is missing: the rest pose gives every leg" }]],
+    ["a rest angle outside the limits", (r) => ((r.rest.LM.tibia = -120), r), [{ path: "rest.LM.tibia", message: "must lie within the joint limits -85..80 (got -120)" }]],
+    ["a missing field", (r) => (delete r.legs[0].femur, r), [{ path: "legs[0].femur", message: "is required" }]],
+    ["a number given as text", (r) => ((r.legs[0].coxa = "30"), r), [{ path: "legs[0].coxa", message: 'must be a number (got "30")' }]],
+    ["a zero link length", (r) => ((r.legs[0].tibia = 0), r), [{ path: "legs[0].tibia", message: "must be positive (got 0)" }]],
+    ["a misspelt field", (r) => ((r.legs[0].joints.coxa.zeroOffset = 1), r), [
+      { path: "legs[0].joints.coxa.zeroOffset", message: "is not a known field (check the spelling)" },
+    ]],
+    ["another format", (r) => ((r.format = "gaitloom.robot/2"), r), [{ path: "format", message: 'must be "gaitloom.robot/1" (got "gaitloom.robot/2")' }]],
+    ["an unknown side", (r) => ((r.legs[0].side = "up"), r), [{ path: "legs[0].side", message: 'must be one of "left", "right" (got "up")' }]],
+    ["a centre pulse outside the range", (r) => ((r.legs[0].joints.coxa.servo.centerUs = 2600), r), [
+      { path: "legs[0].joints.coxa.servo.centerUs", message: "must lie within minUs..maxUs (got 2600 outside 500..2500)" },
+    ]],
+    ["minUs not below maxUs", (r) => ((r.legs[0].joints.coxa.servo.minUs = 2600), r), [
+      { path: "legs[0].joints.coxa.servo.minUs", message: "must be below maxUs (got 2600 ≥ 2500)" },
+    ]],
+    ["a fractional channel", (r) => ((r.legs[0].joints.coxa.servo.channel = 1.5), r), [
+      { path: "legs[0].joints.coxa.servo.channel", message: "must be a whole number (got 1.5)" },
+    ]],
+    ["two legs in one row", (r) => ((r.legs[1].row = 0), r), [{ path: "legs[1].row", message: "row 0 on the left side is taken by LF" }]],
+    ["a mount yaw past a half turn", (r) => ((r.legs[0].mount.yawDeg = 200), r), [{ path: "legs[0].mount.yawDeg", message: "must be at most 180 (got 200)" }]],
+    ["a short centre of mass", (r) => ((r.body.com = [0, 0]), r), [{ path: "body.com", message: "must have at least 3 items (got 2)" }]],
+    ["not an object at all", () => "hello", [{ path: "", message: 'must be an object (got "hello")' }]],
+  ];
+  for (const [what, breakIt, expected] of cases) {
+    it(`refuses ${what}`, () => {
+      expect(issuesOf(breakIt(pierCrawler()))).toEqual(expected);
+    });
+  }
+
+  it("reports several problems at once", () => {
+    const robot = pierCrawler();
+    robot.legs[0].coxa = -1;
+    robot.legs[4].joints.femur.maxSpeedDegS = 0;
+    expect(issuesOf(robot)).toEqual([
+      { path: "legs[0].coxa", message: "must be positive (got -1)" },
+      { path: "legs[4].joints.femur.maxSpeedDegS", message: "must be positive (got 0)" },
+    ]);
+  });
+});
+
+describe("leg side and row (DESIGN.md: y > 0 is left, rows by mount x from the front)", () => {
+  it("derives them from the mounts", () => {
+    const [pier, quay, hull] = loadDemoRobots();
+    const seats = (robot: typeof pier) => Object.fromEntries(robot.legs.map((leg) => [leg.id, `${legSide(robot, leg)} ${legRow(robot, leg)}`]));
+    expect(seats(pier)).toEqual({ LF: "left 0", LM: "left 1", LR: "left 2", RF: "right 0", RM: "right 1", RR: "right 2" });
+    expect(seats(quay)).toEqual({ LF: "left 0", LR: "left 1", RF: "right 0", RR: "right 1" });
+    expect(seats(hull)).toEqual({ L1: "left 0", L2: "left 1", L3: "left 2", L4: "left 3", R1: "right 0", R2: "right 1", R3: "right 2", R4: "right 3" });
+  });
+
+  it("takes side and row from the leg when it gives them", () => {
+    const [pier] = loadDemoRobots();
+    const leg: Leg = { ...pier.legs[0], side: "right", row: 3 };
+    expect(legSide(pier, leg)).toBe("right");
+    expect(legRow(pier, leg)).toBe(3);
+  });
+
+  it("names the joints coxa, femur, tibia in that order", () => {
+    expect(JOINT_NAMES).toEqual(["coxa", "femur", "tibia"]);
+  });
+});
+
+// A small JSON Schema (draft 2020-12) checker for the keywords zod emits; the
+// schema is checked against the demo robots and a broken one.
+function schemaProblems(schema: any, value: unknown, path = ""): string[] {
+  if (schema === false) return [`${path}: not allowed`];
+  if (schema.const !== undefined && value !== schema.const) return [`${path}: not the constant`];
+  if (schema.enum && !schema.enum.includes(value)) return [`${path}: not in the enum`];
+  const type = schema.type;
+  if (type === "object") {
+    if (typeof value !== "object" || value === null || Array.isArray(value)) return [`${path}: not an object`];
+    const record = value as Record<string, unknown>;
+    const problems = (schema.required ?? []).filter((key: string) => !(key in record)).map((key: string) => `${path}.${key}: required`);
+    for (const [key, item] of Object.entries(record)) {
+      const itemSchema = schema.properties?.[key] ?? schema.additionalProperties;
+      if (itemSchema === undefined) continue;
+      problems.push(...schemaProblems(itemSchema, item, `${path}.${key}`));
+    }
+    return problems;
+  }
+  if (type === "array") {
+    if (!Array.isArray(value)) return [`${path}: not an array`];
+    const problems: string[] = [];
+    value.forEach((item, index) => {
+      const itemSchema = schema.prefixItems?.[index] ?? schema.items;
+      if (itemSchema !== undefined) problems.push(...schemaProblems(itemSchema, item, `${path}[${index}]`));
+    });
+    return problems;
+  }
+  if (type === "number" || type === "integer") {
+    if (typeof value !== "number") return [`${path}: not a number`];
+    if (type === "integer" && !Number.isInteger(value)) return [`${path}: not an integer`];
+    if (schema.exclusiveMinimum !== undefined && !(value > schema.exclusiveMinimum)) return [`${path}: too small`];
+    if (schema.minimum !== undefined && value < schema.minimum) return [`${path}: too small`];
+    if (schema.maximum !== undefined && value > schema.maximum) return [`${path}: too big`];
+    return [];
+  }
+  if (type === "string") return typeof value === "string" ? [] : [`${path}: not a string`];
+  if (type === "boolean") return typeof value === "boolean" ? [] : [`${path}: not a boolean`];
+  return [];
+}
+
+describe("robotJsonSchema: the JSON Schema generated from the zod schema (JSON Schema draft 2020-12)", () => {
+  const schema = robotJsonSchema() as any;
+
+  it("is a draft 2020-12 schema of our format, with the fixed field names", () => {
+    expect(schema.$schema).toBe("https://json-schema.org/draft/2020-12/schema");
+    expect(schema.title).toBe("Gaitloom robot definition");
+    expect(schema.properties.format.const).toBe("gaitloom.robot/1");
+    expect(schema.required).toEqual(["format", "name", "body", "standHeight", "legs"]);
+    const leg = schema.properties.legs.items;
+    expect(leg.required).toEqual(["id", "mount", "coxa", "femur", "tibia", "joints"]);
+    expect(Object.keys(leg.properties.joints.properties)).toEqual(["coxa", "femur", "tibia"]);
+    expect(Object.keys(leg.properties.joints.properties.femur.properties)).toEqual(["minDeg", "maxDeg", "zeroOffsetDeg", "maxSpeedDegS", "servo"]);
+    expect(Object.keys(leg.properties.joints.properties.femur.properties.servo.properties)).toEqual([
+      "channel",
+      "reversed",
+      "centerUs",
+      "usPerDeg",
+      "minUs",
+      "maxUs",
+    ]);
+    expect(leg.additionalProperties).toBe(false);
+    expect(JSON.parse(JSON.stringify(schema))).toEqual(schema);
+  });
+
+  it("accepts the demo robots and refuses a misspelt field", () => {
+    for (const name of ["pier-crawler", "quay-walker", "hull-climber"] as const) {
+      expect(schemaProblems(schema, demoRobotJson(name)), name).toEqual([]);
+    }
+    const robot = pierCrawler();
+    robot.legs[0].joints.coxa.zeroOffset = 1;
+    expect(schemaProblems(schema, robot)).toEqual([".legs[0].joints.coxa.zeroOffset: not allowed"]);
+  });
+});
