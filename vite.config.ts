@@ -17,6 +17,7 @@ export default defineConfig({
         resolve: { alias },
         test: {
           name: "unit",
+          env: { GAITLOOM_ENV: "test" },
           include: ["test/**/*.test.{ts,tsx}"],
           exclude: ["test/integration/**"],
           environment: "node",
@@ -26,6 +27,7 @@ export default defineConfig({
         resolve: { alias },
         test: {
           name: "integration",
+          env: { GAITLOOM_ENV: "test" },
           include: ["test/integration/**/*.test.{ts,tsx}"],
           environment: "node",
           setupFiles: ["test/support/worker-database.ts"],

@@ -7,7 +7,16 @@ import "./app.css";
 import { Links, Meta, Outlet, Scripts, ScrollRestoration, useRouteLoaderData } from "react-router";
 import type { Route } from "./+types/root";
 import { ErrorPanel } from "./components/common/ErrorPanel";
+import { crossOriginRefusal } from "./lib/origin.server";
 import { readTheme } from "./lib/theme";
+
+export const middleware: Route.MiddlewareFunction[] = [
+  async ({ request }, next) => {
+    const refusal = crossOriginRefusal(request);
+    if (refusal) throw refusal;
+    return next();
+  },
+];
 
 export async function loader({ request }: Route.LoaderArgs) {
   return { theme: readTheme(request.headers.get("Cookie")) };

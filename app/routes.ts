@@ -1,13 +1,29 @@
 import { type RouteConfig, index, layout, prefix, route } from "@react-router/dev/routes";
+import { robotApi } from "./routes/api.v1/robots/routes";
+import { robotPages } from "./routes/robots/routes";
 
 export default [
   route("healthz", "routes/healthz.ts"),
+  ...prefix("api/v1", [route("workspace", "routes/api.v1/workspace.ts"), ...robotApi]),
+  route("auth/github", "routes/auth/github.ts"),
+  route("auth/github/callback", "routes/auth/github-callback.ts"),
+  route("sign-out", "routes/auth/sign-out.ts"),
+  route("workspace", "routes/workspace-switch.ts"),
   layout("routes/shell.tsx", [
     index("routes/home.tsx"),
-    ...prefix("robots", [index("routes/robots/list.tsx")]),
+    route("sign-in", "routes/auth/sign-in.tsx"),
+    route("welcome", "routes/welcome.tsx"),
+    route("invitations/:token", "routes/invitations/accept.tsx"),
+    ...prefix("robots", robotPages),
     ...prefix("gaits", [index("routes/gaits/list.tsx")]),
     route("reviews", "routes/reviews.tsx"),
-    route("settings", "routes/settings.tsx"),
+    route("settings", "routes/settings/layout.tsx", [
+      index("routes/settings/workspace.tsx"),
+      route("members", "routes/settings/members.tsx"),
+      route("tokens", "routes/settings/tokens.tsx"),
+      route("audit", "routes/settings/audit.tsx"),
+    ]),
+    route("local/mail", "routes/local/mail.tsx"),
     route("*", "routes/not-found.tsx"),
   ]),
 ] satisfies RouteConfig;

@@ -3,6 +3,8 @@
 import { sql } from "drizzle-orm";
 import {
   bigint,
+  bigserial,
+  index,
   integer,
   jsonb,
   pgEnum,
@@ -135,6 +137,67 @@ export const gaitVersions = pgTable(
     createdAt: createdAt(),
   },
   (table) => [unique("gait_versions_gait_number").on(table.gaitId, table.number)],
+);
+
+/** A pending or used invitation; the link's token is stored only as a hash. */
+export const invitations = pgTable(
+  "invitations",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    workspaceId: uuid("workspace_id")
+      .notNull()
+      .references(() => workspaces.id, { onDelete: "cascade" }),
+    email: text("email").notNull(),
+    role: roleEnum("role").notNull(),
+    tokenHash: text("token_hash").notNull().unique(),
+    invitedById: uuid("invited_by_id").references(() => users.id),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    lastSentAt: timestamp("last_sent_at", { withTimezone: true }).notNull().defaultNow(),
+    sendCount: integer("send_count").notNull().default(1),
+    acceptedAt: timestamp("accepted_at", { withTimezone: true }),
+    acceptedById: uuid("accepted_by_id").references(() => users.id),
+    revokedAt: timestamp("revoked_at", { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (table) => [index("invitations_workspace").on(table.workspaceId), index("invitations_email").on(table.email)],
+);
+
+/** Personal API tokens for build scripts: shown once, stored as a SHA-256 hash. */
+export const apiTokens = pgTable(
+  "api_tokens",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    workspaceId: uuid("workspace_id")
+      .notNull()
+      .references(() => workspaces.id, { onDelete: "cascade" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    tokenHash: text("token_hash").notNull().unique(),
+    // The first characters, so a person can tell their tokens apart.
+    prefix: text("prefix").notNull(),
+    lastUsedAt: timestamp("last_used_at", { withTimezone: true }),
+    revokedAt: timestamp("revoked_at", { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (table) => [index("api_tokens_user").on(table.userId)],
+);
+
+/** Who did what, when: sign-ins, roles, invitations, tokens, reviews, downloads. */
+export const auditLog = pgTable(
+  "audit_log",
+  {
+    id: bigserial("id", { mode: "number" }).primaryKey(),
+    workspaceId: uuid("workspace_id").references(() => workspaces.id, { onDelete: "cascade" }),
+    actorId: uuid("actor_id").references(() => users.id, { onDelete: "set null" }),
+    action: text("action").notNull(),
+    targetType: text("target_type"),
+    targetId: text("target_id"),
+    details: jsonb("details").notNull().default(sql`'{}'::jsonb`),
+    createdAt: createdAt(),
+  },
+  (table) => [index("audit_log_workspace_time").on(table.workspaceId, table.createdAt)],
 );
 
 export type Role = (typeof roleEnum.enumValues)[number];

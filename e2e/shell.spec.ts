@@ -1,4 +1,5 @@
 import { expect, test } from "@playwright/test";
+import { signInAs } from "./support/sign-in";
 
 test("the home page renders in IBM Plex Sans served from our own origin, and nothing leaves 127.0.0.1", async ({
   page,
@@ -9,6 +10,11 @@ test("the home page renders in IBM Plex Sans served from our own origin, and not
 
   await page.goto("/");
   await expect(page.getByRole("heading", { name: "Walking motions you can ship" })).toBeVisible();
+  // Through the sign-in stand-in too: it runs on 127.0.0.1 like everything else.
+  await page.getByRole("link", { name: "Sign in to the demo" }).click();
+  await page.getByRole("button", { name: "Sign in with GitHub" }).click();
+  await page.getByRole("button", { name: /^Continue as Kenji Wu/ }).click();
+  await expect(page.getByLabel("Your account")).toBeVisible();
   await page.evaluate(() => document.fonts.ready);
 
   const fontLoaded = await page.evaluate(() => document.fonts.check('16px "IBM Plex Sans"'));
@@ -25,7 +31,7 @@ test("the home page renders in IBM Plex Sans served from our own origin, and not
 });
 
 test("the navigation reaches every section and the demo robots are listed", async ({ page }) => {
-  await page.goto("/");
+  await signInAs(page, "kenji-wu");
   const nav = page.getByRole("navigation", { name: "Sections" });
   await nav.getByRole("link", { name: /Robots/ }).click();
   await expect(page.getByRole("heading", { level: 1, name: "Robots" })).toBeVisible();

@@ -27,6 +27,7 @@ pg_recreate_database "$TEMPLATE_DB"
 export GAITLOOM_TEST_ADMIN_URL="$(pg_url postgres)"
 export GAITLOOM_TEST_TEMPLATE_DB="$TEMPLATE_DB"
 export GAITLOOM_TEST_DATABASE_URL_PREFIX="$(pg_url gaitloom_test_w)"
+services_start_fakes 3101 2625 2626
 set +e
 
 say "typecheck (react-router typegen && tsc)"
@@ -45,6 +46,7 @@ if (cd "$ROOT" && npx react-router build >"$REPORTS/build.log" 2>&1); then
   export DATABASE_URL="$(pg_url "$E2E_DB")"
   (cd "$ROOT" && npx tsx db/seed.ts >/dev/null)
   export PUBLIC_URL="http://127.0.0.1:$APP_PORT"
+  export SESSION_SECRET="test-session-secret-$RANDOM$RANDOM"
   if port_in_use "$APP_PORT"; then
     warn "port $APP_PORT is taken; set GAITLOOM_TEST_PORT to a free one"
   else

@@ -1,16 +1,20 @@
 import { Link } from "react-router";
 import type { Route } from "./+types/home";
-import { EmptyState } from "~/components/common/EmptyState";
-import { currentWorkspace } from "~/lib/workspace.server";
+import { currentMember, currentUser } from "~/lib/access.server";
+import { summarizeWorkspace } from "~/lib/workspaces.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  return { workspace: await currentWorkspace(request) };
+  const [user, member] = await Promise.all([currentUser(request), currentMember(request)]);
+  return { signedIn: Boolean(user), workspace: member ? await summarizeWorkspace(member.workspace) : null };
 }
 
 export const meta: Route.MetaFunction = () => [{ title: "Gaitloom — walking motions you can ship" }];
 
+const primary = "rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover:bg-accent-strong";
+const secondary = "rounded-md border border-line px-4 py-2 font-medium hover:bg-sunken";
+
 export default function Home({ loaderData }: Route.ComponentProps) {
-  const { workspace } = loaderData;
+  const { workspace, signedIn } = loaderData;
   return (
     <div className="mx-auto max-w-3xl py-6">
       <h1 className="text-3xl font-semibold tracking-tight">Walking motions you can ship</h1>
@@ -18,31 +22,44 @@ export default function Home({ loaderData }: Route.ComponentProps) {
         Lay out the key poses of a walk on a timeline and Gaitloom checks every frame against each leg's reach, joint
         limits, servo speed and balance. Approved versions become angle tables your firmware plays back.
       </p>
-      <div className="mt-8">
+      <section className="mt-8 rounded-lg border border-line bg-surface p-6">
         {workspace ? (
-          <section className="rounded-lg border border-line bg-surface p-6">
-            <h2 className="text-lg font-semibold">Try the demo: {workspace.name}</h2>
+          <>
+            <h2 className="text-lg font-semibold">{workspace.name}</h2>
             <p className="mt-1 text-ink-muted">
-              A harbour-inspection lab with{" "}
               <span className="numeric">{workspace.robotCount}</span> robots and{" "}
-              <span className="numeric">{workspace.gaitCount}</span> gaits in progress.
+              <span className="numeric">{workspace.gaitCount}</span> gaits.
             </p>
             <div className="mt-4 flex gap-3">
-              <Link to="/robots" className="rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover:bg-accent-strong">
-                Open the demo robots
+              <Link to="/robots" className={primary}>
+                Open the robots
               </Link>
-              <Link to="/gaits" className="rounded-md border border-line px-4 py-2 font-medium hover:bg-sunken">
+              <Link to="/gaits" className={secondary}>
                 See the gaits
               </Link>
             </div>
-          </section>
+          </>
+        ) : signedIn ? (
+          <>
+            <h2 className="text-lg font-semibold">You are not in a workspace yet</h2>
+            <p className="mt-1 text-ink-muted">Start one for your team, or accept an invitation sent to your e-mail.</p>
+            <Link to="/welcome" className={`mt-4 inline-block ${primary}`}>
+              Get started
+            </Link>
+          </>
         ) : (
-          <EmptyState title="No workspace yet">
-            Run <code className="font-mono">npm start</code> once to load the demo lab, or create a workspace after
-            signing in.
-          </EmptyState>
+          <>
+            <h2 className="text-lg font-semibold">Try the demo</h2>
+            <p className="mt-1 text-ink-muted">
+              Breakwater Robotics Lab inspects harbour walls with a six-legged crawler, a four-legged walker and an
+              eight-legged climber. Sign in as one of its people to look around.
+            </p>
+            <Link to="/sign-in" className={`mt-4 inline-block ${primary}`}>
+              Sign in to the demo
+            </Link>
+          </>
         )}
-      </div>
+      </section>
     </div>
   );
 }

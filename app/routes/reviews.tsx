@@ -1,6 +1,12 @@
 import type { Route } from "./+types/reviews";
 import { EmptyState } from "~/components/common/EmptyState";
 import { PageHeader } from "~/components/common/PageHeader";
+import { requireAccess } from "~/lib/access.server";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  await requireAccess(request, "reviews.read");
+  return null;
+}
 
 export const meta: Route.MetaFunction = () => [{ title: "Reviews · Gaitloom" }];
 

@@ -2,16 +2,26 @@
 import { Outlet, useRouteLoaderData } from "react-router";
 import type { Route } from "./+types/shell";
 import { ErrorPanel } from "~/components/common/ErrorPanel";
-import { AppShell } from "~/components/shell/AppShell";
-import { currentWorkspace } from "~/lib/workspace.server";
+import { AppShell, type ShellData } from "~/components/shell/AppShell";
+import { currentMember, currentUser, membershipsOf } from "~/lib/access.server";
+import { config } from "~/lib/config.server";
+import { summarizeWorkspace } from "~/lib/workspaces.server";
 
-export async function loader({ request }: Route.LoaderArgs) {
-  return { workspace: await currentWorkspace(request) };
+export async function loader({ request }: Route.LoaderArgs): Promise<ShellData> {
+  const [user, member] = await Promise.all([currentUser(request), currentMember(request)]);
+  const workspaces = user ? await membershipsOf(user.id) : [];
+  return {
+    user: user ? { name: user.name, login: user.login } : null,
+    role: member?.role ?? null,
+    workspace: member ? await summarizeWorkspace(member.workspace) : null,
+    workspaces: workspaces.map(({ workspace, role }) => ({ id: workspace.id, name: workspace.name, role })),
+    localMail: config().local,
+  };
 }
 
 export default function Shell({ loaderData }: Route.ComponentProps) {
   return (
-    <AppShell workspace={loaderData.workspace}>
+    <AppShell data={loaderData}>
       <Outlet />
     </AppShell>
   );
@@ -21,7 +31,7 @@ export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
   // A child page failed: the shell's own data is usually still there.
   const data = useRouteLoaderData<typeof loader>("routes/shell");
   return (
-    <AppShell workspace={data?.workspace ?? null}>
+    <AppShell data={data ?? null}>
       <div className="mx-auto max-w-2xl py-10">
         <ErrorPanel error={error} />
       </div>

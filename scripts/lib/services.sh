@@ -56,3 +56,29 @@ service_wait_port() {
   done
   die "$name did not listen on 127.0.0.1:$port within 60 s." ${log:+"Last lines of $log:" "$(tail -n 20 "$log")"}
 }
+
+# The local fakes of hosted services, and the settings that point the app at them.
+# services_start_fakes GITHUB_PORT SMTP_PORT MAIL_API_PORT
+services_start_fakes() {
+  local github_port="$1" smtp_port="$2" mail_port="$3" port
+  for port in "$github_port" "$smtp_port" "$mail_port"; do
+    port_in_use "$port" && die "Port $port on 127.0.0.1 is taken; the local fakes need it." \
+      "Stop the program using it (an earlier run?), or change GAITLOOM_FAKE_PORT_BASE."
+  done
+  export GITHUB_CLIENT_ID="gaitloom-local" GITHUB_CLIENT_SECRET="gaitloom-local-secret"
+  export GITHUB_OAUTH_URL="http://127.0.0.1:$github_port" GITHUB_API_URL="http://127.0.0.1:$github_port"
+  export SMTP_URL="smtp://127.0.0.1:$smtp_port" MAIL_INBOX_URL="http://127.0.0.1:$mail_port"
+  service_start fake-github "$LOG_DIR/fake-github.log" node_modules/.bin/tsx scripts/fakes/github.ts \
+    --port "$github_port" --client-id "$GITHUB_CLIENT_ID" --client-secret "$GITHUB_CLIENT_SECRET"
+  service_start fake-smtp "$LOG_DIR/fake-smtp.log" node_modules/.bin/tsx scripts/fakes/smtp.ts \
+    --smtp-port "$smtp_port" --api-port "$mail_port"
+  service_wait_port fake-github "$github_port" "$LOG_DIR/fake-github.log"
+  service_wait_port fake-smtp "$mail_port" "$LOG_DIR/fake-smtp.log"
+}
+
+# A session secret of this checkout's own, made once and kept in .data.
+local_session_secret() {
+  local file="$DATA_DIR/session-secret"
+  [ -s "$file" ] || { head -c 32 /dev/urandom | od -An -tx1 | tr -d ' \n' >"$file"; chmod 600 "$file"; }
+  cat "$file"
+}

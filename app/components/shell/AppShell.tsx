@@ -1,7 +1,16 @@
-import { Link, NavLink } from "react-router";
-import type { WorkspaceSummary } from "~/lib/workspace.server";
+import { Form, Link, NavLink, useLocation } from "react-router";
+import type { Role } from "~/lib/permissions";
+import { ROLE_LABELS } from "~/lib/permissions";
 import { Mark } from "./Mark";
 import { ThemeToggle } from "./ThemeToggle";
+
+export type ShellData = {
+  user: { name: string; login: string } | null;
+  role: Role | null;
+  workspace: { id: string; slug: string; name: string; robotCount: number; gaitCount: number } | null;
+  workspaces: { id: string; name: string; role: Role }[];
+  localMail: boolean;
+};
 
 const sections = [
   { to: "/robots", label: "Robots", hint: "Legs, joints and servos" },
@@ -10,7 +19,7 @@ const sections = [
   { to: "/settings", label: "Settings", hint: "Workspace and members" },
 ] as const;
 
-export function AppShell({ workspace, children }: { workspace: WorkspaceSummary | null; children: React.ReactNode }) {
+export function AppShell({ data, children }: { data: ShellData | null; children: React.ReactNode }) {
   return (
     <div className="grid min-h-screen grid-cols-[13rem_1fr] grid-rows-[3.25rem_1fr]">
       <header className="col-span-2 flex items-center gap-4 border-b border-line bg-surface px-4">
@@ -18,10 +27,15 @@ export function AppShell({ workspace, children }: { workspace: WorkspaceSummary 
           <Mark />
           <span className="text-lg">Gaitloom</span>
         </Link>
-        <WorkspaceSwitcher workspace={workspace} />
-        <div className="ml-auto flex items-center gap-2">
+        {data?.user ? <WorkspaceSwitcher data={data} /> : null}
+        <div className="ml-auto flex items-center gap-3">
+          {data?.localMail ? (
+            <Link to="/local/mail" className="text-sm text-ink-muted hover:text-ink">
+              Local inbox
+            </Link>
+          ) : null}
           <ThemeToggle />
-          <UserMenu />
+          <UserMenu data={data} />
         </div>
       </header>
       <nav aria-label="Sections" className="border-r border-line bg-surface px-3 py-4">
@@ -48,24 +62,78 @@ export function AppShell({ workspace, children }: { workspace: WorkspaceSummary 
   );
 }
 
-function WorkspaceSwitcher({ workspace }: { workspace: WorkspaceSummary | null }) {
+function WorkspaceSwitcher({ data }: { data: ShellData }) {
+  const location = useLocation();
+  if (!data.workspace) {
+    return (
+      <Link to="/welcome" className="rounded-md border border-line px-3 py-1 text-sm hover:bg-sunken">
+        Choose a workspace
+      </Link>
+    );
+  }
+  if (data.workspaces.length < 2) {
+    return (
+      <span className="rounded-md border border-line px-3 py-1 text-sm">
+        <span className="text-ink-muted">Workspace </span>
+        <span className="font-medium">{data.workspace.name}</span>
+      </span>
+    );
+  }
   return (
-    <button
-      type="button"
-      className="flex items-center gap-2 rounded-md border border-line px-3 py-1 text-sm hover:bg-sunken"
-      aria-label={workspace ? `Workspace: ${workspace.name}` : "No workspace"}
-      title="Switching workspaces comes with sign-in"
-    >
-      <span className="text-ink-muted">Workspace</span>
-      <span className="font-medium">{workspace?.name ?? "none yet"}</span>
-    </button>
+    <Form method="post" action="/workspace" className="flex items-center gap-2 text-sm">
+      <input type="hidden" name="returnTo" value={location.pathname} />
+      <label htmlFor="workspace-switch" className="text-ink-muted">
+        Workspace
+      </label>
+      <select
+        id="workspace-switch"
+        name="workspaceId"
+        defaultValue={data.workspace.id}
+        className="rounded-md border border-line bg-surface px-2 py-1"
+        onChange={(event) => event.currentTarget.form?.requestSubmit()}
+      >
+        {data.workspaces.map((workspace) => (
+          <option key={workspace.id} value={workspace.id}>
+            {workspace.name} ({ROLE_LABELS[workspace.role].toLowerCase()})
+          </option>
+        ))}
+      </select>
+      <noscript>
+        <button type="submit">Switch</button>
+      </noscript>
+    </Form>
   );
 }
 
-function UserMenu() {
+function UserMenu({ data }: { data: ShellData | null }) {
+  const location = useLocation();
+  if (!data?.user) {
+    return (
+      <Link
+        to={`/sign-in?returnTo=${encodeURIComponent(location.pathname)}`}
+        className="rounded-md bg-accent px-3 py-1 text-sm font-medium text-on-accent hover:bg-accent-strong"
+      >
+        Sign in
+      </Link>
+    );
+  }
   return (
-    <span className="rounded-md bg-sunken px-3 py-1 text-sm text-ink-muted" aria-label="Signed-in person">
-      Guest
-    </span>
+    <details className="relative">
+      <summary className="cursor-pointer list-none rounded-md px-2 py-1 text-sm hover:bg-sunken" aria-label="Your account">
+        <span className="font-medium">{data.user.name}</span>
+        {data.role ? <span className="ml-2 text-ink-muted">{ROLE_LABELS[data.role]}</span> : null}
+      </summary>
+      <div className="absolute right-0 z-20 mt-1 w-56 rounded-md border border-line bg-surface p-2 shadow-lg">
+        <p className="px-2 py-1 text-xs text-ink-muted">Signed in as @{data.user.login}</p>
+        <Link to="/settings/tokens" className="block rounded px-2 py-1 text-sm hover:bg-sunken">
+          API tokens
+        </Link>
+        <Form method="post" action="/sign-out">
+          <button type="submit" className="block w-full rounded px-2 py-1 text-left text-sm hover:bg-sunken">
+            Sign out
+          </button>
+        </Form>
+      </div>
+    </details>
   );
 }

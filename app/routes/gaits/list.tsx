@@ -2,11 +2,11 @@ import type { Route } from "./+types/list";
 import { EmptyState } from "~/components/common/EmptyState";
 import { PageHeader } from "~/components/common/PageHeader";
 import { listGaits } from "~/lib/gaits.server";
-import { currentWorkspace } from "~/lib/workspace.server";
+import { requireAccess } from "~/lib/access.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const workspace = await currentWorkspace(request);
-  return { gaits: workspace ? await listGaits(workspace.id) : [] };
+  const { workspace } = await requireAccess(request, "gaits.read");
+  return { gaits: await listGaits(workspace.id) };
 }
 
 export const meta: Route.MetaFunction = () => [{ title: "Gaits · Gaitloom" }];

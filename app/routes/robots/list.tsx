@@ -2,11 +2,11 @@ import type { Route } from "./+types/list";
 import { EmptyState } from "~/components/common/EmptyState";
 import { PageHeader } from "~/components/common/PageHeader";
 import { listRobots } from "~/lib/robots.server";
-import { currentWorkspace } from "~/lib/workspace.server";
+import { requireAccess } from "~/lib/access.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const workspace = await currentWorkspace(request);
-  return { robots: workspace ? await listRobots(workspace.id) : [] };
+  const { workspace } = await requireAccess(request, "robots.read");
+  return { robots: await listRobots(workspace.id) };
 }
 
 export const meta: Route.MetaFunction = () => [{ title: "Robots · Gaitloom" }];

@@ -1,0 +1,20 @@
+// The audit log: one row for every sign-in, role change, invitation, token
+// change and review decision. Written inside the caller's transaction when given.
+import { auditLog } from "../../db/schema";
+import type { Database } from "../../db/client";
+import { database } from "./db.server";
+
+export type AuditEntry = {
+  workspaceId: string | null;
+  actorId: string | null;
+  action: string;
+  targetType?: string;
+  targetId?: string;
+  details?: Record<string, unknown>;
+};
+
+type Writer = Pick<Database, "insert">;
+
+export async function recordAudit(entry: AuditEntry, db: Writer = database()): Promise<void> {
+  await db.insert(auditLog).values({ ...entry, details: entry.details ?? {} });
+}

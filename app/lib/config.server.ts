@@ -1,0 +1,35 @@
+// Settings from the environment, read once. `npm start` and `npm test` set the
+// local values; production sets them itself (see the README).
+export type Mode = "local" | "test" | "production";
+
+function required(name: string, fallback?: string): string {
+  const value = process.env[name] ?? fallback;
+  if (!value) throw new Error(`${name} is not set; see "Running in production" in the README.`);
+  return value;
+}
+
+export function config() {
+  const mode = (process.env.GAITLOOM_ENV ?? "production") as Mode;
+  const local = mode !== "production";
+  const publicUrl = required("PUBLIC_URL", local ? "http://127.0.0.1:3000" : undefined).replace(/\/$/, "");
+  return {
+    mode,
+    local,
+    publicUrl,
+    sessionSecret: required("SESSION_SECRET", local ? "gaitloom-local-session-secret" : undefined),
+    github: {
+      clientId: required("GITHUB_CLIENT_ID", local ? "gaitloom-local" : undefined),
+      clientSecret: required("GITHUB_CLIENT_SECRET", local ? "gaitloom-local-secret" : undefined),
+      // The real service unless pointed elsewhere (the local fake, or GitHub Enterprise).
+      oauthUrl: (process.env.GITHUB_OAUTH_URL ?? "https://github.com").replace(/\/$/, ""),
+      apiUrl: (process.env.GITHUB_API_URL ?? "https://api.github.com").replace(/\/$/, ""),
+    },
+    mail: {
+      smtpUrl: required("SMTP_URL", local ? "smtp://127.0.0.1:2525" : undefined),
+      from: process.env.MAIL_FROM ?? "Gaitloom <gaitloom@127.0.0.1>",
+      // The local fake's message list, shown in the app's inbox page (never in production).
+      inboxUrl: local ? (process.env.MAIL_INBOX_URL ?? "http://127.0.0.1:2526") : null,
+    },
+    tokenRequestsPerMinute: Number(process.env.GAITLOOM_TOKEN_REQUESTS_PER_MINUTE ?? 120),
+  };
+}

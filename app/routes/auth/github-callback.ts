@@ -1,0 +1,20 @@
+// GET /auth/github/callback: GitHub sends the person back here with a code.
+import { data, redirect } from "react-router";
+import type { Route } from "./+types/github-callback";
+import { gitHubAuthenticator } from "~/lib/auth.server";
+import { commitSession, readSession, safeReturnTo } from "~/lib/session.server";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  let user;
+  try {
+    user = await gitHubAuthenticator().authenticate("github", request);
+  } catch (error) {
+    if (error instanceof Response) throw error;
+    const reason = error instanceof Error ? error.message : String(error);
+    throw data({ message: `Sign-in with GitHub did not complete: ${reason} Try again from the sign-in page.` }, { status: 400 });
+  }
+  const session = await readSession(request);
+  const returnTo = safeReturnTo(session.get("returnTo"));
+  session.set("userId", user.id);
+  return redirect(returnTo, { headers: { "Set-Cookie": await commitSession(session) } });
+}

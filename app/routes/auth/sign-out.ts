@@ -1,0 +1,9 @@
+// POST /sign-out
+import { redirect } from "react-router";
+import type { Route } from "./+types/sign-out";
+import { destroySession, readSession } from "~/lib/session.server";
+
+export async function action({ request }: Route.ActionArgs) {
+  const session = await readSession(request);
+  return redirect("/", { headers: { "Set-Cookie": await destroySession(session) } });
+}

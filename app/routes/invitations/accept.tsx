@@ -1,0 +1,53 @@
+// /invitations/:token — the link from the invitation e-mail.
+import { Form, data, redirect } from "react-router";
+import type { Route } from "./+types/accept";
+import { requireUser } from "~/lib/access.server";
+import { ServiceError, formAction } from "~/lib/errors.server";
+import { acceptInvitation, invitationForToken } from "~/lib/invitations.server";
+import { ROLE_LABELS } from "~/lib/permissions";
+import { commitSession, readSession } from "~/lib/session.server";
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const user = await requireUser(request);
+  try {
+    return { invitation: await invitationForToken(params.token), you: { name: user.name, email: user.email } };
+  } catch (error) {
+    if (error instanceof ServiceError) throw data({ message: error.message }, { status: error.status });
+    throw error;
+  }
+}
+
+export async function action({ request, params }: Route.ActionArgs) {
+  const user = await requireUser(request);
+  return formAction(async () => {
+    const { workspaceId } = await acceptInvitation(user, { token: params.token });
+    const session = await readSession(request);
+    session.set("workspaceId", workspaceId);
+    return redirect("/", { headers: { "Set-Cookie": await commitSession(session) } });
+  });
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "Invitation · Gaitloom" }];
+
+export default function AcceptInvitation({ loaderData, actionData }: Route.ComponentProps) {
+  const { invitation, you } = loaderData;
+  return (
+    <div className="mx-auto max-w-lg py-8">
+      <h1 className="text-2xl font-semibold tracking-tight">Join {invitation.workspaceName}</h1>
+      <p className="mt-2 text-ink-muted">
+        {invitation.invitedBy ?? "Someone"} invited {invitation.email} to work in {invitation.workspaceName} as{" "}
+        <strong>{ROLE_LABELS[invitation.role].toLowerCase()}</strong>. You are signed in as {you.name} ({you.email}).
+      </p>
+      {actionData && "error" in actionData ? (
+        <p role="alert" className="mt-4 rounded-md bg-danger-soft px-4 py-2 text-danger">
+          {actionData.error}
+        </p>
+      ) : null}
+      <Form method="post" className="mt-6">
+        <button type="submit" className="rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover:bg-accent-strong">
+          Join as {ROLE_LABELS[invitation.role].toLowerCase()}
+        </button>
+      </Form>
+    </div>
+  );
+}

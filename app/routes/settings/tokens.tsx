@@ -1,0 +1,111 @@
+// /settings/tokens: personal API tokens for build scripts (owner, lead, firmware).
+import { Form, data } from "react-router";
+import { z } from "zod";
+import type { Route } from "./+types/tokens";
+import { Notice } from "~/components/common/Notice";
+import { requireAccess } from "~/lib/access.server";
+import { config } from "~/lib/config.server";
+import { formAction } from "~/lib/errors.server";
+import { createToken, listTokens, revokeToken } from "~/lib/tokens.server";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const member = await requireAccess(request, "tokens.manage");
+  return { tokens: await listTokens(member), workspace: member.workspace.name, apiUrl: `${config().publicUrl}/api/v1` };
+}
+
+const input = z.discriminatedUnion("intent", [
+  z.object({ intent: z.literal("create"), name: z.string() }),
+  z.object({ intent: z.literal("revoke"), tokenId: z.string().uuid("That is not a valid token id.") }),
+]);
+
+export async function action({ request }: Route.ActionArgs) {
+  const member = await requireAccess(request, "tokens.manage");
+  const parsed = input.safeParse(Object.fromEntries(await request.formData()));
+  if (!parsed.success) return data({ error: parsed.error.issues[0]?.message ?? "The form was incomplete." }, { status: 400 });
+  const command = parsed.data;
+  return formAction(async () => {
+    if (command.intent === "create") {
+      const { token, row } = await createToken(member, command.name);
+      return { created: { token, name: row.name } };
+    }
+    await revokeToken(member, command.tokenId);
+    return { success: "Token revoked; scripts using it now get 401." };
+  });
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "API tokens · Gaitloom" }];
+
+const when = (date: Date | string | null) => (date ? new Date(date).toISOString().slice(0, 16).replace("T", " ") : "never");
+
+export default function Tokens({ loaderData, actionData }: Route.ComponentProps) {
+  const created = actionData && "created" in actionData ? actionData.created : null;
+  return (
+    <div className="max-w-3xl space-y-6">
+      <p className="text-ink-muted">
+        A token acts with your role in {loaderData.workspace} and nowhere else. Send it as{" "}
+        <code className="font-mono">Authorization: Bearer &lt;token&gt;</code> to {loaderData.apiUrl}.
+      </p>
+      <Notice
+        error={actionData && "error" in actionData ? actionData.error : null}
+        success={actionData && "success" in actionData ? actionData.success : null}
+      />
+      {created ? (
+        <section role="status" aria-label="New token" className="rounded-lg border border-accent bg-accent-soft p-4">
+          <p className="font-medium">Token “{created.name}” created. Copy it now: it is shown only this once.</p>
+          <code data-testid="new-token" className="mt-2 block break-all rounded bg-surface px-3 py-2 font-mono text-sm">
+            {created.token}
+          </code>
+        </section>
+      ) : null}
+      <Form method="post" className="flex items-end gap-3 rounded-lg border border-line bg-surface p-6">
+        <input type="hidden" name="intent" value="create" />
+        <label className="flex-1">
+          <span className="block text-sm font-medium">Token name</span>
+          <input name="name" required maxLength={60} placeholder="e.g. firmware build server" className="mt-1 w-full rounded-md border border-line bg-surface px-3 py-2" />
+        </label>
+        <button type="submit" className="rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover:bg-accent-strong">
+          Create token
+        </button>
+      </Form>
+      {loaderData.tokens.length === 0 ? (
+        <p className="text-ink-muted">You have no tokens for this workspace yet.</p>
+      ) : (
+        <table className="w-full border-collapse rounded-lg bg-surface text-left text-sm">
+          <caption className="sr-only">Your API tokens</caption>
+          <thead className="border-b border-line text-ink-muted">
+            <tr>
+              <th className="px-4 py-2 font-medium">Name</th>
+              <th className="px-4 py-2 font-medium">Starts with</th>
+              <th className="px-4 py-2 text-right font-medium">Created</th>
+              <th className="px-4 py-2 text-right font-medium">Last used</th>
+              <th className="px-4 py-2"><span className="sr-only">State</span></th>
+            </tr>
+          </thead>
+          <tbody>
+            {loaderData.tokens.map((token) => (
+              <tr key={token.id} className="border-b border-line last:border-0">
+                <td className="px-4 py-2 font-medium">{token.name}</td>
+                <td className="px-4 py-2 font-mono">{token.prefix}…</td>
+                <td className="px-4 py-2 text-right">{when(token.createdAt)}</td>
+                <td className="px-4 py-2 text-right">{when(token.lastUsedAt)}</td>
+                <td className="px-4 py-2 text-right">
+                  {token.revokedAt ? (
+                    <span className="text-ink-muted">revoked {when(token.revokedAt)}</span>
+                  ) : (
+                    <Form method="post">
+                      <input type="hidden" name="intent" value="revoke" />
+                      <input type="hidden" name="tokenId" value={token.id} />
+                      <button type="submit" className="rounded-md border border-line px-3 py-1 text-danger hover:bg-sunken" aria-label={`Revoke ${token.name}`}>
+                        Revoke
+                      </button>
+                    </Form>
+                  )}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,95 @@
+// For a signed-in person: start a workspace, or accept an invitation sent to their e-mail.
+import { Form, data, redirect, useActionData } from "react-router";
+import { z } from "zod";
+import type { Route } from "./+types/welcome";
+import { PageHeader } from "~/components/common/PageHeader";
+import { membershipsOf, requireUser } from "~/lib/access.server";
+import { formAction } from "~/lib/errors.server";
+import { acceptInvitation, invitationsForEmail } from "~/lib/invitations.server";
+import { ROLE_LABELS } from "~/lib/permissions";
+import { commitSession, readSession } from "~/lib/session.server";
+import { createWorkspace } from "~/lib/workspaces.server";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const user = await requireUser(request);
+  const [invitations, memberships] = await Promise.all([invitationsForEmail(user.email), membershipsOf(user.id)]);
+  return { name: user.name, email: user.email, invitations, hasWorkspace: memberships.length > 0 };
+}
+
+const input = z.discriminatedUnion("intent", [
+  z.object({ intent: z.literal("create"), name: z.string() }),
+  z.object({ intent: z.literal("accept"), invitationId: z.string().uuid() }),
+]);
+
+export async function action({ request }: Route.ActionArgs) {
+  const user = await requireUser(request);
+  const parsed = input.safeParse(Object.fromEntries(await request.formData()));
+  if (!parsed.success) return data({ error: "The form was incomplete; try again." }, { status: 400 });
+  return formAction(async () => {
+    const workspaceId =
+      parsed.data.intent === "create"
+        ? (await createWorkspace(user, parsed.data.name)).id
+        : (await acceptInvitation(user, { id: parsed.data.invitationId })).workspaceId;
+    const session = await readSession(request);
+    session.set("workspaceId", workspaceId);
+    return redirect("/", { headers: { "Set-Cookie": await commitSession(session) } });
+  });
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "Welcome · Gaitloom" }];
+
+export default function Welcome({ loaderData }: Route.ComponentProps) {
+  const result = useActionData<typeof action>();
+  const error = result && "error" in result ? result.error : null;
+  return (
+    <div className="mx-auto max-w-2xl">
+      <PageHeader
+        title={`Welcome, ${loaderData.name}`}
+        lead={loaderData.hasWorkspace ? "Start another workspace or join one you were invited to." : "You are not in a workspace yet."}
+      />
+      {error ? (
+        <p role="alert" className="mb-4 rounded-md bg-danger-soft px-4 py-2 text-danger">
+          {error}
+        </p>
+      ) : null}
+      <section className="rounded-lg border border-line bg-surface p-6">
+        <h2 className="text-lg font-semibold">Invitations for {loaderData.email}</h2>
+        {loaderData.invitations.length === 0 ? (
+          <p className="mt-2 text-ink-muted">None waiting. Ask a workspace owner or lead to invite this e-mail address.</p>
+        ) : (
+          <ul className="mt-3 space-y-2">
+            {loaderData.invitations.map((invitation) => (
+              <li key={invitation.id} className="flex items-center justify-between gap-4">
+                <span>
+                  <span className="font-medium">{invitation.workspaceName}</span> as {ROLE_LABELS[invitation.role].toLowerCase()}
+                  {invitation.invitedBy ? <span className="text-ink-muted">, from {invitation.invitedBy}</span> : null}
+                </span>
+                <Form method="post">
+                  <input type="hidden" name="intent" value="accept" />
+                  <input type="hidden" name="invitationId" value={invitation.id} />
+                  <button type="submit" className="rounded-md bg-accent px-3 py-1 text-on-accent hover:bg-accent-strong">
+                    Join {invitation.workspaceName}
+                  </button>
+                </Form>
+              </li>
+            ))}
+          </ul>
+        )}
+      </section>
+      <section className="mt-6 rounded-lg border border-line bg-surface p-6">
+        <h2 className="text-lg font-semibold">Start a workspace</h2>
+        <p className="mt-1 text-ink-muted">You will be its owner and can invite your team.</p>
+        <Form method="post" className="mt-4 flex items-end gap-3">
+          <input type="hidden" name="intent" value="create" />
+          <label className="flex-1">
+            <span className="block text-sm font-medium">Workspace name</span>
+            <input name="name" required minLength={2} maxLength={80} className="mt-1 w-full rounded-md border border-line bg-surface px-3 py-2" />
+          </label>
+          <button type="submit" className="rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover:bg-accent-strong">
+            Create workspace
+          </button>
+        </Form>
+      </section>
+    </div>
+  );
+}

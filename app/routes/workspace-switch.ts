@@ -1,0 +1,21 @@
+// POST /workspace: work in another of one's workspaces.
+import { data, redirect } from "react-router";
+import { z } from "zod";
+import type { Route } from "./+types/workspace-switch";
+import { membershipsOf, requireUser } from "~/lib/access.server";
+import { commitSession, readSession, safeReturnTo } from "~/lib/session.server";
+
+const input = z.object({ workspaceId: z.string().uuid(), returnTo: z.string().optional() });
+
+export async function action({ request }: Route.ActionArgs) {
+  const user = await requireUser(request);
+  const parsed = input.safeParse(Object.fromEntries(await request.formData()));
+  if (!parsed.success) throw data({ message: "Choose a workspace from the list." }, { status: 400 });
+  const all = await membershipsOf(user.id);
+  if (!all.some((m) => m.workspace.id === parsed.data.workspaceId)) {
+    throw data({ message: "You are not a member of that workspace." }, { status: 403 });
+  }
+  const session = await readSession(request);
+  session.set("workspaceId", parsed.data.workspaceId);
+  return redirect(safeReturnTo(parsed.data.returnTo), { headers: { "Set-Cookie": await commitSession(session) } });
+}

@@ -1,0 +1,101 @@
+import { beforeAll, beforeEach, describe, expect, test } from "vitest";
+import { seedDemo } from "../../../db/seed";
+import { demoIds, type DemoIds } from "../../support/access-matrix";
+import { currentMember, type Member, requireApiAccess } from "~/lib/access.server";
+import { database } from "~/lib/db.server";
+import { resetRateLimits } from "~/lib/rate-limit.server";
+import { createToken, listTokens, revokeToken } from "~/lib/tokens.server";
+import { createWorkspace } from "~/lib/workspaces.server";
+import { loader as apiWorkspace } from "~/routes/api.v1/workspace";
+import { requestsAs } from "../../support/access-matrix";
+
+let ids: DemoIds;
+let firmware: Member;
+
+async function memberAs(role: "firmware" | "owner" | "viewer"): Promise<Member> {
+  const request = await (await requestsAs(role, ids))("GET", "/");
+  return (await currentMember(request))!;
+}
+
+const withToken = (token: string, headers: Record<string, string> = {}) =>
+  new Request("http://127.0.0.1:3000/api/v1/workspace", { headers: { Authorization: `Bearer ${token}`, ...headers } });
+
+async function errorOf(run: () => Promise<unknown>): Promise<{ status: number; body: { error: { code: string; message: string } }; headers: Headers }> {
+  try {
+    await run();
+  } catch (thrown) {
+    if (thrown instanceof Response) return { status: thrown.status, body: await thrown.json(), headers: thrown.headers };
+    throw thrown;
+  }
+  throw new Error("expected a refusal");
+}
+
+beforeAll(async () => {
+  await seedDemo(database());
+  ids = await demoIds(database());
+  firmware = await memberAs("firmware");
+});
+beforeEach(() => resetRateLimits());
+
+describe("API tokens", () => {
+  test("a new token works with the holder's role, is stored only as a hash, and shows its last use", async () => {
+    const { token, row } = await createToken(firmware, "build server");
+    expect(token).toMatch(/^gl_[A-Za-z0-9_-]{43}$/);
+    const response = (await apiWorkspace({ request: withToken(token), params: {}, context: {} } as never)) as Response;
+    expect(response.status).toBe(200);
+    expect(await response.json()).toMatchObject({ role: "firmware", via: "token", workspace: { id: ids.workspaceId } });
+    const [listed] = (await listTokens(firmware)).filter((t) => t.id === row.id);
+    expect(listed.prefix).toBe(token.slice(0, 9));
+    expect(listed.lastUsedAt).not.toBeNull();
+    const stored = await database().execute(`select token_hash from api_tokens where id = '${row.id}'`);
+    expect(JSON.stringify(stored)).not.toContain(token);
+  });
+
+  test("a revoked token is refused with 401", async () => {
+    const { token, row } = await createToken(firmware, "to revoke");
+    await revokeToken(firmware, row.id);
+    const refusal = await errorOf(() => requireApiAccess(withToken(token), "workspace.read"));
+    expect(refusal.status).toBe(401);
+    expect(refusal.body.error.code).toBe("unauthorized");
+  });
+
+  test("a token of another workspace does not reach this one", async () => {
+    const owner = await memberAs("owner");
+    const other = await createWorkspace(owner.user, "Driftwood Test Lab");
+    const { token } = await createToken({ ...owner, workspace: other, role: "owner" }, "other lab");
+    const member = await requireApiAccess(withToken(token), "workspace.read");
+    expect(member.workspace.id).toBe(other.id);
+    expect(member.workspace.id).not.toBe(ids.workspaceId);
+  });
+
+  test("a token stops working when its holder's role no longer allows tokens", async () => {
+    const viewerRequest = await (await requestsAs("viewer", ids))("GET", "/");
+    const viewer = (await currentMember(viewerRequest))!;
+    // Made while the holder was allowed, then the role changed.
+    const { token } = await createToken({ ...viewer, role: "firmware" }, "was firmware");
+    const refusal = await errorOf(() => requireApiAccess(withToken(token), "workspace.read"));
+    expect(refusal.status).toBe(401);
+  });
+
+  test("a malformed Authorization header gets a 401 that says how to send the token", async () => {
+    const refusal = await errorOf(() => requireApiAccess(new Request("http://127.0.0.1:3000/api/v1/workspace", { headers: { Authorization: "Token abc" } }), "workspace.read"));
+    expect(refusal.status).toBe(401);
+    expect(refusal.body.error.message).toContain("Bearer <token>");
+  });
+
+  test("each token has a rate limit: past it, 429 with Retry-After", async () => {
+    const { token } = await createToken(firmware, "busy script");
+    for (let i = 0; i < 120; i++) await requireApiAccess(withToken(token), "workspace.read");
+    const refusal = await errorOf(() => requireApiAccess(withToken(token), "workspace.read"));
+    expect(refusal.status).toBe(429);
+    expect(Number(refusal.headers.get("Retry-After"))).toBeGreaterThan(0);
+    expect(refusal.body.error.code).toBe("rate_limited");
+  });
+
+  test("a token acts within its role: firmware cannot approve versions", async () => {
+    const { token } = await createToken(firmware, "limited");
+    const refusal = await errorOf(() => requireApiAccess(withToken(token), "versions.decide"));
+    expect(refusal.status).toBe(403);
+    expect(refusal.body.error.message).toBe("The firmware role cannot approve or send back versions.");
+  });
+});
