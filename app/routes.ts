@@ -4,7 +4,12 @@ import { robotPages } from "./routes/robots/routes";
 
 export default [
   route("healthz", "routes/healthz.ts"),
-  ...prefix("api/v1", [route("workspace", "routes/api.v1/workspace.ts"), ...robotApi]),
+  ...prefix("api/v1", [
+    route("workspace", "routes/api.v1/workspace.ts"),
+    route("solve", "routes/api.v1/solver/solve.ts"),
+    route("ik", "routes/api.v1/solver/ik.ts"),
+    ...robotApi,
+  ]),
   route("auth/github", "routes/auth/github.ts"),
   route("auth/github/callback", "routes/auth/github-callback.ts"),
   route("sign-out", "routes/auth/sign-out.ts"),

@@ -13,6 +13,7 @@ import {
   text,
   timestamp,
   unique,
+  uniqueIndex,
   uuid,
 } from "drizzle-orm/pg-core";
 
@@ -134,9 +135,67 @@ export const gaitVersions = pgTable(
     summary: jsonb("summary").notNull().default(sql`'{}'::jsonb`),
     contentHash: text("content_hash").notNull(),
     state: versionStateEnum("state").notNull().default("committed"),
+    // The content above never changes (a trigger refuses it); the review fields below do.
+    reviewerId: uuid("reviewer_id").references(() => users.id),
+    stateChangedAt: timestamp("state_changed_at", { withTimezone: true }).notNull().defaultNow(),
     createdAt: createdAt(),
   },
-  (table) => [unique("gait_versions_gait_number").on(table.gaitId, table.number)],
+  (table) => [
+    unique("gait_versions_gait_number").on(table.gaitId, table.number),
+    // At most one released version per gait.
+    uniqueIndex("gait_versions_one_released").on(table.gaitId).where(sql`${table.state} = 'released'`),
+  ],
+);
+
+/** Every review step of a version: requests, decisions (with comments and overrides), releases. */
+export const reviewEvents = pgTable(
+  "review_events",
+  {
+    id: bigserial("id", { mode: "number" }).primaryKey(),
+    versionId: uuid("version_id")
+      .notNull()
+      .references(() => gaitVersions.id, { onDelete: "cascade" }),
+    actorId: uuid("actor_id").references(() => users.id),
+    fromState: versionStateEnum("from_state"),
+    toState: versionStateEnum("to_state").notNull(),
+    comment: text("comment").notNull().default(""),
+    // Set when the step went past a rule (own version, error flags), with the reason given.
+    overrideReason: text("override_reason"),
+    createdAt: createdAt(),
+  },
+  (table) => [index("review_events_version").on(table.versionId)],
+);
+
+/** What a release shipped, so its table can be reproduced byte for byte. */
+export const releases = pgTable("releases", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  versionId: uuid("version_id")
+    .notNull()
+    .references(() => gaitVersions.id, { onDelete: "cascade" }),
+  releasedById: uuid("released_by_id").references(() => users.id),
+  tableSha256: text("table_sha256").notNull(),
+  tableFormat: text("table_format").notNull(),
+  solverVersion: text("solver_version").notNull(),
+  exporterVersion: text("exporter_version").notNull(),
+  createdAt: createdAt(),
+});
+
+/** Per-unit calibration of a robot (trim, reversal, channel overrides), edited by firmware. */
+export const calibrationProfiles = pgTable(
+  "calibration_profiles",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    robotId: uuid("robot_id")
+      .notNull()
+      .references(() => robots.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    profile: jsonb("profile").notNull(),
+    revision: integer("revision").notNull().default(1),
+    updatedById: uuid("updated_by_id").references(() => users.id),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+    createdAt: createdAt(),
+  },
+  (table) => [unique("calibration_profiles_robot_name").on(table.robotId, table.name)],
 );
 
 /** A pending or used invitation; the link's token is stored only as a hash. */

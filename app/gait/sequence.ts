@@ -1,0 +1,186 @@
+// The gait sequence, format "gaitloom.sequence/1" (DESIGN.md, "Gait sequence").
+// One zod schema is the source of truth: parseSequence validates with it and
+// sequenceJsonSchema publishes it. Field names are fixed by DESIGN.md; the
+// additions (name, description, body key `resting`) are documented below.
+import { z } from "zod";
+import type { Robot } from "../kinematics/index";
+import { formatSequenceIssues, type SequenceIssue } from "./issues";
+import { TEMPLATE_NAMES } from "./templates/names";
+
+export const SEQUENCE_FORMAT = "gaitloom.sequence/1";
+
+/** CSS `ease`, cubic-bezier(0.25, 0.1, 0.25, 1) (W3C CSS Easing Functions Level 1): the default of a key's `ease`. */
+export const CSS_EASE: Ease = [0.25, 0.1, 0.25, 1];
+/** CSS `ease-in-out`, cubic-bezier(0.42, 0, 0.58, 1): zero speed at both ends. */
+export const CSS_EASE_IN_OUT: Ease = [0.42, 0, 0.58, 1];
+/** Step height when neither a key nor the generator gives one, mm. */
+export const DEFAULT_STEP_HEIGHT_MM = 25;
+/** Limits that keep a solve bounded (a request can not ask for millions of frames). */
+export const MAX_FRAMES = 100_000;
+export const MAX_CYCLE_MS = 600_000;
+export const MAX_FPS = 1000;
+
+const finite = z.number();
+const fraction = z.number().min(0).max(1);
+
+// x1 and x2 of a CSS cubic-bezier must lie in [0, 1] so that the curve is a function of time.
+export const easeSchema = z
+  .tuple([fraction, finite, fraction, finite])
+  .describe("Cubic-Bézier easing [x1, y1, x2, y2] as in CSS cubic-bezier(); x1 and x2 in [0, 1].");
+
+const vec3Schema = z.tuple([finite, finite, finite]);
+
+export const contactSchema = z.enum(["stance", "swing"]);
+
+const legKeySchema = z.strictObject({
+  t: fraction.describe("Time as a fraction of the cycle."),
+  contact: contactSchema.describe("Holds from this key until the next key of the track (half-open)."),
+  foot: vec3Schema
+    .optional()
+    .describe("Foot in the neutral body frame at the key's time, mm; omitted: the generator's placement."),
+  ease: easeSchema.optional().describe("Shapes the segment that leaves the key; default CSS ease."),
+  apexMm: z.number().min(0).max(1000).optional().describe("Swing height above the straight path, mm; default stepHeightMm."),
+});
+
+const legTrackSchema = z.strictObject({ keys: z.array(legKeySchema).min(1).max(10_000) });
+
+const poseSchema = z
+  .strictObject({
+    x: finite.default(0),
+    y: finite.default(0),
+    z: finite.default(0),
+    roll: finite.default(0),
+    pitch: finite.default(0),
+    yaw: finite.default(0),
+  })
+  .describe("Pose offset: translation (mm) in the heading frame, then roll, pitch, yaw (degrees), R = Rz·Ry·Rx.");
+
+export const bodyKeySchema = z.strictObject({
+  t: fraction,
+  pose: poseSchema,
+  ease: easeSchema.optional().describe("Shapes the segment that leaves the key; default CSS ease."),
+  resting: z
+    .boolean()
+    .optional()
+    .describe(
+      "The body lies on the ground from this key until the next body key (half-open), so its weight is not on the feet: support checks skip those frames. Entry and exit moves use it.",
+    ),
+});
+
+const generatorSchema = z.strictObject({
+  template: z.enum(TEMPLATE_NAMES).optional(),
+  dutyFactor: z.number().gt(0).lt(1).optional().describe("Fraction of the cycle a foot is on the ground."),
+  phase: z.record(z.string(), fraction).optional().describe("Lift-off time of each leg, fraction of the cycle."),
+  strideMm: finite.default(0).describe("Distance the body travels in one cycle, mm."),
+  directionDeg: finite.default(0).describe("Direction of travel in the body frame, degrees (0 forward, 90 left)."),
+  turnDegPerCycle: finite.default(0).describe("Turn of the body about its centre over one cycle, degrees."),
+  stepHeightMm: z.number().min(0).max(1000).default(DEFAULT_STEP_HEIGHT_MM).describe("Default swing apex, mm."),
+  bodyHeightMm: z.number().positive().optional().describe("Height of the body origin above the ground, mm; default the robot's standHeight."),
+});
+
+const sequenceObjectSchema = z.strictObject({
+  format: z.literal(SEQUENCE_FORMAT),
+  name: z.string().max(200).optional(),
+  description: z.string().max(2000).optional(),
+  cycleMs: z.number().positive().max(MAX_CYCLE_MS).describe("Duration of the cycle (or of the one-shot move), ms."),
+  fps: z.number().positive().max(MAX_FPS).describe("Frame rate, frames per second."),
+  loop: z.boolean().describe("True for a gait cycle; false for a one-shot move (frames 0..N, t = 1 at the end)."),
+  generator: generatorSchema.default({ strideMm: 0, directionDeg: 0, turnDegPerCycle: 0, stepHeightMm: DEFAULT_STEP_HEIGHT_MM }),
+  legs: z.record(z.string(), legTrackSchema),
+  body: z.strictObject({ keys: z.array(bodyKeySchema).max(10_000) }).default({ keys: [] }),
+});
+
+// Keys strictly in time order within a track; a loop's keys lie in [0, 1) since t = 1 is the next cycle's t = 0.
+function checkKeyTimes(keys: readonly { t: number }[], loop: boolean, path: (string | number)[], ctx: z.RefinementCtx): void {
+  keys.forEach((key, index) => {
+    if (loop && key.t >= 1) {
+      ctx.addIssue({ code: "custom", path: [...path, index, "t"], message: `must be below 1 in a loop, where t = 1 is t = 0 of the next cycle (got ${key.t})` });
+    }
+    if (index > 0 && key.t <= keys[index - 1].t) {
+      ctx.addIssue({
+        code: "custom",
+        path: [...path, index, "t"],
+        message: `must come after keys[${index - 1}].t (got ${key.t} ≤ ${keys[index - 1].t})`,
+      });
+    }
+  });
+}
+
+export const sequenceSchema = sequenceObjectSchema
+  .superRefine((sequence, ctx) => {
+    const frames = frameCount(sequence);
+    if (frames < 1) {
+      ctx.addIssue({ code: "custom", path: ["fps"], message: `gives no frame: cycleMs · fps / 1000 rounds to ${frames}, at least 1 needed` });
+    } else if (frames > MAX_FRAMES) {
+      ctx.addIssue({ code: "custom", path: ["fps"], message: `gives ${frames} frames (cycleMs · fps / 1000), at most ${MAX_FRAMES}` });
+    }
+    for (const [legId, track] of Object.entries(sequence.legs)) checkKeyTimes(track.keys, sequence.loop, ["legs", legId, "keys"], ctx);
+    checkKeyTimes(sequence.body.keys, sequence.loop, ["body", "keys"], ctx);
+    if (Object.keys(sequence.legs).length === 0) ctx.addIssue({ code: "custom", path: ["legs"], message: "must give at least one leg" });
+  })
+  .meta({
+    id: "gaitloom.sequence/1",
+    title: "Gaitloom gait sequence",
+    description:
+      "Key poses of every leg and of the body over one cycle (or one move): t is a fraction of the cycle, millimetres and degrees, x forward, y left, z up.",
+  });
+
+export type Sequence = z.output<typeof sequenceSchema>;
+/** What a writer may leave out (defaults filled in by parseSequence). */
+export type SequenceInput = z.input<typeof sequenceSchema>;
+export type Contact = z.output<typeof contactSchema>;
+export type LegKey = Sequence["legs"][string]["keys"][number];
+export type BodyKey = Sequence["body"]["keys"][number];
+export type BodyOffset = BodyKey["pose"];
+export type Generator = Sequence["generator"];
+export type Ease = [number, number, number, number];
+
+export type { SequenceIssue };
+export type ParseSequenceResult = { ok: true; sequence: Sequence } | { ok: false; issues: SequenceIssue[] };
+
+/** Validates an untrusted sequence (already JSON-decoded); paths like `legs.LF.keys[2].t`. */
+export function parseSequence(json: unknown): ParseSequenceResult {
+  const result = sequenceSchema.safeParse(json, { reportInput: true });
+  if (result.success) return { ok: true, sequence: result.data };
+  return { ok: false, issues: formatSequenceIssues(result.error.issues) };
+}
+
+/** The JSON Schema of the sequence, generated from the zod schema (draft 2020-12). */
+export function sequenceJsonSchema(): Record<string, unknown> {
+  return z.toJSONSchema(sequenceSchema, { io: "input", target: "draft-2020-12" }) as Record<string, unknown>;
+}
+
+/** N = round(cycleMs · fps / 1000) (DESIGN.md): a loop has frames 0..N−1, a one-shot move 0..N. */
+export function frameCount(sequence: Pick<Sequence, "cycleMs" | "fps">): number {
+  return Math.round((sequence.cycleMs * sequence.fps) / 1000);
+}
+
+/** Problems of a valid sequence against a robot: every robot leg needs a track, and no track may name another leg. */
+export function sequenceIssuesForRobot(robot: Robot, sequence: Sequence): SequenceIssue[] {
+  const issues: SequenceIssue[] = [];
+  const robotLegs = new Set(robot.legs.map((leg) => leg.id));
+  for (const leg of robot.legs) {
+    if (!sequence.legs[leg.id]) issues.push({ path: `legs.${leg.id}`, message: `is missing: robot "${robot.name}" has a leg ${leg.id}` });
+  }
+  for (const legId of Object.keys(sequence.legs)) {
+    if (!robotLegs.has(legId)) {
+      issues.push({ path: `legs.${legId}`, message: `names no leg of robot "${robot.name}" (legs: ${[...robotLegs].join(", ")})` });
+    }
+  }
+  if (sequence.generator.phase) {
+    for (const legId of Object.keys(sequence.generator.phase)) {
+      if (!robotLegs.has(legId)) issues.push({ path: `generator.phase.${legId}`, message: `names no leg of robot "${robot.name}"` });
+    }
+  }
+  return issues;
+}
+
+/** Thrown by the engine for a sequence or parameters that do not fit the robot; carries the issues. */
+export class GaitInputError extends Error {
+  readonly issues: SequenceIssue[];
+  constructor(message: string, issues: SequenceIssue[]) {
+    super(`${message}: ${issues.map((issue) => (issue.path ? `${issue.path}: ${issue.message}` : issue.message)).join("; ")}`);
+    this.name = "GaitInputError";
+    this.issues = issues;
+  }
+}

@@ -1,0 +1,471 @@
+// solveSequence (DESIGN.md, "Core module contracts"): samples the sequence at
+// its frame rate, solves every leg of every frame, runs the checks and sums
+// up. Four passes over typed arrays made once per solve, so that sampling and
+// solving allocate nothing and the result's objects are made once, in pass 3:
+//   1. sample and solve: travel, body offset, each leg's planned foot, IK;
+//   2. legs out of reach keep their last reachable angles (round the seam of
+//      a loop too), and where those angles put the foot;
+//   3. pulses, support polygon, margin, and the frame objects;
+//   4. the checks, then the summary.
+// Each pass is a function of its own: the optimiser handles small hot loops
+// far better than one long function (the bench showed nearly half the time).
+import {
+  DEG_PER_RAD,
+  JOINT_NAMES,
+  SOLVE_UNREACHABLE,
+  createLegSolver,
+  neutralStance,
+  poseRotation,
+  type BodyPose,
+  type JointAngles,
+  type Robot,
+  type Vec3,
+} from "../kinematics/index";
+import { CHECKS, type SolveState } from "./checks/index";
+import type { JointSpec } from "./checks/check";
+import { compileBodyTrack, sampleBodyPiece, type BodyPiece } from "./interpolate/body";
+import { TIME_EPSILON, compileLegTrack, pieceFraction, type LegTrackPlan } from "./interpolate/legs";
+import { swingPoint } from "./interpolate/swing";
+import { createPlanar, createTravel, headingToWorld, travelBy, worldToHeading, type Travel } from "./interpolate/travel";
+import { GaitInputError, MAX_FPS, MAX_FRAMES, sequenceIssuesForRobot, type Sequence } from "./sequence";
+import { FLAG_KINDS, type Flag, type FlagKind, type SolveOptions, type SolvedFrame, type SolvedLeg, type SolvedSequence } from "./solved";
+import { clampPulseUs, createPulseTable, rawPulseUs } from "./pulses";
+import { convexHullInto, stabilityMargin } from "./support";
+import { TEMPLATES, legLayout } from "./templates/index";
+
+export const SOLVE_DEFAULTS = {
+  marginThresholdMm: 10,
+  slipToleranceMm: 0.5,
+  clearanceMm: 20,
+  groundToleranceMm: 0.01,
+} as const;
+
+const ORIGIN: Vec3 = [0, 0, 0];
+
+function resolveFrameRate(sequence: Sequence, options: SolveOptions): number {
+  const fps = options.fps ?? sequence.fps;
+  if (!(fps > 0 && fps <= MAX_FPS)) throw new GaitInputError("cannot solve", [{ path: "fps", message: `must lie in (0, ${MAX_FPS}] (got ${fps})` }]);
+  const frames = Math.round((sequence.cycleMs * fps) / 1000);
+  if (frames < 1 || frames > MAX_FRAMES) {
+    throw new GaitInputError("cannot solve", [{ path: "fps", message: `gives ${frames} frames (cycleMs · fps / 1000), 1 to ${MAX_FRAMES} allowed` }]);
+  }
+  return fps;
+}
+
+/** What the passes share besides the checks' state. */
+type Sampling = {
+  state: SolveState;
+  cycleFrames: number;
+  travel: Travel;
+  bodyHeightMm: number;
+  plans: readonly LegTrackPlan[];
+  bodyPieces: readonly BodyPiece[];
+  /** Per frame: the heading frame's x, y, cos, sin. */
+  heading: Float64Array;
+  /** Per frame: the CoM's ground projection, world x, y. */
+  comWorld: Float64Array;
+};
+
+/**
+ * Frames, flags and summary of a parsed sequence on a robot. Frames sit at
+ * t = i/N of the cycle (N = round(cycleMs · fps / 1000)) and play at
+ * i · 1000/fps ms; a loop has frames 0..N−1, a one-shot move 0..N.
+ * Throws GaitInputError when the sequence's legs do not match the robot's.
+ */
+export function solveSequence(robot: Robot, sequence: Sequence, options: SolveOptions = {}): SolvedSequence {
+  const issues = sequenceIssuesForRobot(robot, sequence);
+  if (issues.length > 0) throw new GaitInputError(`sequence does not fit robot "${robot.name}"`, issues);
+  const sampling = prepare(robot, sequence, options);
+  sampleAndSolve(sampling);
+  keepReachableAngles(sampling);
+  const frames = buildFrames(sampling);
+  const flags = runChecks(sampling.state, options.checks);
+  return { frames, flags, summary: summarize(sampling.state, sampling.plans, flags, sequence.generator.strideMm, sequence.cycleMs) };
+}
+
+function prepare(robot: Robot, sequence: Sequence, options: SolveOptions): Sampling {
+  const fps = resolveFrameRate(sequence, options);
+  const cycleFrames = Math.round((sequence.cycleMs * fps) / 1000);
+  const loop = sequence.loop;
+  const frameCount = loop ? cycleFrames : cycleFrames + 1;
+  const generator = sequence.generator;
+  const bodyHeightMm = generator.bodyHeightMm ?? robot.standHeight;
+  const travel = createTravel(generator.strideMm, generator.directionDeg, generator.turnDegPerCycle, bodyHeightMm);
+  // Only keys without a foot need the neutral stance, and it costs a reach scan per leg.
+  const needsNeutral = Object.values(sequence.legs).some((track) => track.keys.some((key) => !key.foot));
+  const neutral = needsNeutral ? neutralStance(robot, bodyHeightMm) : null;
+  const solver = createLegSolver(robot);
+  const legIds = solver.legIds;
+  const legCount = legIds.length;
+  const plans = legIds.map((legId) =>
+    compileLegTrack(sequence.legs[legId].keys, { loop, travel, neutral: neutral?.[legId] ?? ORIGIN, defaultApexMm: generator.stepHeightMm }),
+  );
+  const template = generator.template ? TEMPLATES[generator.template] : undefined;
+
+  const joints: JointSpec[] = [];
+  for (const legId of legIds) {
+    const leg = robot.legs[solver.legIndex(legId)];
+    for (const name of JOINT_NAMES) {
+      const joint = leg.joints[name];
+      joints.push({ legId, name, joint, minDeg: joint.minDeg, maxDeg: joint.maxDeg, maxSpeedDegS: joint.maxSpeedDegS });
+    }
+  }
+  const layout = legLayout(robot);
+  const neighbours: [number, number][] = [];
+  for (const side of [layout.left, layout.right]) {
+    for (let row = 0; row + 1 < side.length; row += 1) neighbours.push([legIds.indexOf(side[row]), legIds.indexOf(side[row + 1])]);
+  }
+
+  const slots = frameCount * legCount;
+  const state: SolveState = {
+    robot,
+    solver,
+    legIds,
+    legCount,
+    frameCount,
+    loop,
+    dynamic: template?.dynamic ?? false,
+    fps,
+    options: {
+      marginThresholdMm: options.marginThresholdMm ?? SOLVE_DEFAULTS.marginThresholdMm,
+      slipToleranceMm: options.slipToleranceMm ?? SOLVE_DEFAULTS.slipToleranceMm,
+      clearanceMm: options.clearanceMm ?? SOLVE_DEFAULTS.clearanceMm,
+      groundToleranceMm: options.groundToleranceMm ?? SOLVE_DEFAULTS.groundToleranceMm,
+    },
+    joints,
+    neighbours,
+    cycleTravel: travelBy(travel, 1, createPlanar()),
+    status: new Int32Array(slots),
+    stance: new Uint8Array(slots),
+    angles: new Float64Array(slots * 3),
+    targetNeutral: new Float64Array(slots * 3),
+    targetBody: new Float64Array(slots * 3),
+    achievedWorld: new Float64Array(slots * 3),
+    pulseClamped: new Uint8Array(slots * 3),
+    offsets: new Float64Array(frameCount * 6),
+    resting: new Uint8Array(frameCount),
+    stanceCount: new Uint8Array(frameCount),
+    margin: new Float64Array(frameCount),
+  };
+  return {
+    state,
+    cycleFrames,
+    travel,
+    bodyHeightMm,
+    plans,
+    bodyPieces: compileBodyTrack(sequence.body.keys, loop),
+    heading: new Float64Array(frameCount * 4),
+    comWorld: new Float64Array(frameCount * 2),
+  };
+}
+
+// Pass 1: travel, body offset, each leg's planned foot, IK. No allocation per frame.
+function sampleAndSolve(sampling: Sampling): void {
+  const { state, travel, bodyHeightMm, plans, bodyPieces, heading, comWorld, cycleFrames } = sampling;
+  const { solver, legCount, frameCount, offsets, status, stance, angles, targetNeutral, targetBody, achievedWorld } = state;
+  const [comX, comY, comZ] = state.robot.body.com;
+  const frameTravel = createPlanar();
+  const offset: BodyPose = { x: 0, y: 0, z: 0, roll: 0, pitch: 0, yaw: 0 };
+  const rotation = new Float64Array(9);
+  const world = new Float64Array(3);
+  const piece = new Int32Array(legCount);
+  let bodyPiece = 0;
+  let lastRoll = 0;
+  let lastPitch = 0;
+  let lastYaw = 0;
+  // Targets go to the solver already in the moved body frame, so the rotation is made once a frame.
+  solver.setBodyPose(undefined);
+  for (let frame = 0; frame < frameCount; frame += 1) {
+    const time = frame / cycleFrames;
+    travelBy(travel, time, frameTravel);
+    const h = frame * 4;
+    heading[h] = frameTravel.x;
+    heading[h + 1] = frameTravel.y;
+    heading[h + 2] = frameTravel.cos;
+    heading[h + 3] = frameTravel.sin;
+    while (bodyPiece + 1 < bodyPieces.length && bodyPieces[bodyPiece + 1].from <= time + TIME_EPSILON) bodyPiece += 1;
+    sampleBodyPiece(bodyPieces[bodyPiece], time, offset);
+    state.resting[frame] = bodyPieces[bodyPiece].resting ? 1 : 0;
+    const o = frame * 6;
+    offsets[o] = offset.x;
+    offsets[o + 1] = offset.y;
+    offsets[o + 2] = offset.z;
+    offsets[o + 3] = offset.roll;
+    offsets[o + 4] = offset.pitch;
+    offsets[o + 5] = offset.yaw;
+    // Body keys are few: most frames keep the previous frame's rotation.
+    if (frame === 0 || offset.roll !== lastRoll || offset.pitch !== lastPitch || offset.yaw !== lastYaw) {
+      poseRotation(offset, rotation);
+      lastRoll = offset.roll;
+      lastPitch = offset.pitch;
+      lastYaw = offset.yaw;
+    }
+    // CoM: body frame → world, T_world←body · com, then its ground projection.
+    const cx = rotation[0] * comX + rotation[1] * comY + rotation[2] * comZ + offset.x;
+    const cy = rotation[3] * comX + rotation[4] * comY + rotation[5] * comZ + offset.y;
+    comWorld[frame * 2] = frameTravel.x + frameTravel.cos * cx - frameTravel.sin * cy;
+    comWorld[frame * 2 + 1] = frameTravel.y + frameTravel.sin * cx + frameTravel.cos * cy;
+    for (let leg = 0; leg < legCount; leg += 1) {
+      const pieces = plans[leg].pieces;
+      let index = piece[leg];
+      while (index + 1 < pieces.length && pieces[index + 1].from <= time + TIME_EPSILON) index += 1;
+      piece[leg] = index;
+      const current = pieces[index];
+      const slot = frame * legCount + leg;
+      const t = slot * 3;
+      if (current.worldFixed) {
+        world[0] = current.worldFrom[0];
+        world[1] = current.worldFrom[1];
+        world[2] = current.worldFrom[2];
+      } else {
+        swingPoint(current.worldFrom, 0, current.worldTo, 0, pieceFraction(current, time), current.easing, current.apexMm, world, 0);
+      }
+      stance[slot] = current.contact === "stance" ? 1 : 0;
+      worldToHeading(frameTravel, bodyHeightMm, world[0], world[1], world[2], targetNeutral, t);
+      // The planned foot in the moved body frame, Rᵀ(p − t), as the frame reports it.
+      const px = targetNeutral[t] - offset.x;
+      const py = targetNeutral[t + 1] - offset.y;
+      const pz = targetNeutral[t + 2] - offset.z;
+      const bx = rotation[0] * px + rotation[3] * py + rotation[6] * pz;
+      const by = rotation[1] * px + rotation[4] * py + rotation[7] * pz;
+      const bz = rotation[2] * px + rotation[5] * py + rotation[8] * pz;
+      targetBody[t] = bx;
+      targetBody[t + 1] = by;
+      targetBody[t + 2] = bz;
+      status[slot] = solver.solve(leg, bx, by, bz, angles, t);
+      achievedWorld[t] = world[0];
+      achievedWorld[t + 1] = world[1];
+      achievedWorld[t + 2] = world[2];
+    }
+  }
+}
+
+// Pass 2: a leg out of reach keeps its last reachable angles; before its first
+// reachable frame a loop looks back round the seam, while a one-shot move (or
+// a leg never in reach) keeps the solver's clamped solution, finite, never
+// NaN. Then where those angles put the foot.
+function keepReachableAngles(sampling: Sampling): void {
+  const { state, heading, bodyHeightMm } = sampling;
+  const { solver, legCount, frameCount, status, angles, offsets, achievedWorld } = state;
+  const offset: BodyPose = { x: 0, y: 0, z: 0, roll: 0, pitch: 0, yaw: 0 };
+  const frameTravel = createPlanar();
+  const world = new Float64Array(3);
+  for (let leg = 0; leg < legCount; leg += 1) {
+    let lastReachable = -1;
+    if (state.loop) {
+      for (let frame = frameCount - 1; frame >= 0; frame -= 1) {
+        if ((status[frame * legCount + leg] & SOLVE_UNREACHABLE) === 0) {
+          lastReachable = frame;
+          break;
+        }
+      }
+    }
+    for (let frame = 0; frame < frameCount; frame += 1) {
+      const slot = frame * legCount + leg;
+      if ((status[slot] & SOLVE_UNREACHABLE) === 0) {
+        lastReachable = frame;
+        continue;
+      }
+      const t = slot * 3;
+      if (lastReachable >= 0) {
+        const from = (lastReachable * legCount + leg) * 3;
+        angles[t] = angles[from];
+        angles[t + 1] = angles[from + 1];
+        angles[t + 2] = angles[from + 2];
+      }
+      const o = frame * 6;
+      offset.x = offsets[o];
+      offset.y = offsets[o + 1];
+      offset.z = offsets[o + 2];
+      offset.roll = offsets[o + 3];
+      offset.pitch = offsets[o + 4];
+      offset.yaw = offsets[o + 5];
+      // Moved body frame → neutral body frame (the solver applies the pose) → world.
+      solver.setBodyPose(offset);
+      solver.forward(leg, angles[t], angles[t + 1], angles[t + 2], world, 0);
+      const h = frame * 4;
+      frameTravel.x = heading[h];
+      frameTravel.y = heading[h + 1];
+      frameTravel.cos = heading[h + 2];
+      frameTravel.sin = heading[h + 3];
+      headingToWorld(frameTravel, bodyHeightMm, world[0], world[1], world[2], achievedWorld, t);
+    }
+  }
+  solver.setBodyPose(undefined);
+}
+
+// Pass 3: pulses, support polygon and margin, and the frame objects.
+function buildFrames(sampling: Sampling): SolvedFrame[] {
+  const { state, heading, comWorld, bodyHeightMm, travel, cycleFrames } = sampling;
+  const { legIds, legCount, frameCount, offsets, angles, status, stance, targetBody, achievedWorld, pulseClamped } = state;
+  const frames: SolvedFrame[] = new Array(frameCount);
+  const pulses = createPulseTable(state.joints.map((spec) => spec.joint));
+  const xs = new Float64Array(legCount);
+  const ys = new Float64Array(legCount);
+  const order = new Int32Array(legCount);
+  const hull = new Int32Array(legCount + 1);
+  const previousXs = new Float64Array(legCount);
+  const previousYs = new Float64Array(legCount);
+  let previousCount = -1;
+  let hullSize = 0;
+  let support: [number, number][] = [];
+  const msPerFrame = 1000 / state.fps;
+  const turnDegPerCycle = travel.turnRad * DEG_PER_RAD;
+  for (let frame = 0; frame < frameCount; frame += 1) {
+    const o = frame * 6;
+    const h = frame * 4;
+    const cos = heading[h + 2];
+    const sin = heading[h + 3];
+    const ox = offsets[o];
+    const oy = offsets[o + 1];
+    const body: BodyPose = {
+      x: heading[h] + cos * ox - sin * oy,
+      y: heading[h + 1] + sin * ox + cos * oy,
+      z: bodyHeightMm + offsets[o + 2],
+      roll: offsets[o + 3],
+      pitch: offsets[o + 4],
+      yaw: (turnDegPerCycle * frame) / cycleFrames + offsets[o + 5],
+    };
+    const legs: Record<string, SolvedLeg> = {};
+    let stanceCount = 0;
+    for (let leg = 0; leg < legCount; leg += 1) {
+      const slot = frame * legCount + leg;
+      const t = slot * 3;
+      const coxa = angles[t];
+      const femur = angles[t + 1];
+      const tibia = angles[t + 2];
+      const j = leg * 3;
+      const coxaRaw = rawPulseUs(pulses, j, coxa);
+      const femurRaw = rawPulseUs(pulses, j + 1, femur);
+      const tibiaRaw = rawPulseUs(pulses, j + 2, tibia);
+      const coxaUs = clampPulseUs(pulses, j, coxaRaw);
+      const femurUs = clampPulseUs(pulses, j + 1, femurRaw);
+      const tibiaUs = clampPulseUs(pulses, j + 2, tibiaRaw);
+      pulseClamped[t] = coxaUs !== coxaRaw ? 1 : 0;
+      pulseClamped[t + 1] = femurUs !== femurRaw ? 1 : 0;
+      pulseClamped[t + 2] = tibiaUs !== tibiaRaw ? 1 : 0;
+      const inStance = stance[slot] === 1;
+      if (inStance) {
+        xs[stanceCount] = achievedWorld[t];
+        ys[stanceCount] = achievedWorld[t + 1];
+        stanceCount += 1;
+      }
+      legs[legIds[leg]] = {
+        contact: inStance ? "stance" : "swing",
+        foot: [targetBody[t], targetBody[t + 1], targetBody[t + 2]],
+        reachable: (status[slot] & SOLVE_UNREACHABLE) === 0,
+        angles: { coxa, femur, tibia },
+        pulses: { coxa: coxaUs, femur: femurUs, tibia: tibiaUs },
+      };
+    }
+    const comX = comWorld[frame * 2];
+    const comY = comWorld[frame * 2 + 1];
+    state.stanceCount[frame] = stanceCount;
+    // Feet fixed in the world keep their polygon: frames with the very same
+    // stance feet share one support list (the result is read-only).
+    let sameFeet = frame > 0 && stanceCount === previousCount;
+    for (let i = 0; sameFeet && i < stanceCount; i += 1) sameFeet = xs[i] === previousXs[i] && ys[i] === previousYs[i];
+    if (!sameFeet) {
+      hullSize = convexHullInto(xs, ys, stanceCount, order, hull);
+      support = new Array(hullSize);
+      for (let i = 0; i < hullSize; i += 1) support[i] = [xs[hull[i]], ys[hull[i]]];
+      previousCount = stanceCount;
+      previousXs.set(xs);
+      previousYs.set(ys);
+    }
+    const margin = stanceCount >= 3 ? stabilityMargin(xs, ys, hull, hullSize, comX, comY) : Number.NaN;
+    state.margin[frame] = margin;
+    frames[frame] = {
+      index: frame,
+      timeMs: frame * msPerFrame,
+      body,
+      legs,
+      support,
+      com: [comX, comY],
+      marginMm: Number.isNaN(margin) ? null : margin,
+    };
+  }
+  return frames;
+}
+
+// Pass 4: every enabled check, each over all frames; flags in frame order,
+// and within a frame in the order of the check list.
+function runChecks(state: SolveState, kinds: readonly FlagKind[] | undefined): Flag[] {
+  const enabled = kinds ? new Set<FlagKind>(kinds) : null;
+  const checks = enabled ? CHECKS.filter((check) => enabled.has(check.kind)) : CHECKS;
+  const context = { state };
+  const flags: Flag[] = [];
+  for (const check of checks) for (const flag of check.run(context)) flags.push(flag);
+  // Array.prototype.sort is stable: equal frames keep the check order.
+  return flags.sort((a, b) => a.frame - b.frame);
+}
+
+function summarize(
+  state: SolveState,
+  plans: readonly { dutyFactor: number }[],
+  flags: readonly Flag[],
+  strideMm: number,
+  cycleMs: number,
+): SolvedSequence["summary"] {
+  const flagsByKind: Partial<Record<FlagKind, number>> = {};
+  let errors = 0;
+  for (const flag of flags) {
+    flagsByKind[flag.kind] = (flagsByKind[flag.kind] ?? 0) + 1;
+    if (flag.severity === "error") errors += 1;
+  }
+  // Keep FLAG_KINDS order in the object, so summaries print alike.
+  const ordered: Partial<Record<FlagKind, number>> = {};
+  for (const kind of FLAG_KINDS) if (flagsByKind[kind] !== undefined) ordered[kind] = flagsByKind[kind];
+
+  let worstMarginMm: number | null = null;
+  let worstMarginFrame: number | null = null;
+  for (let frame = 0; frame < state.frameCount; frame += 1) {
+    const margin = state.margin[frame];
+    if (state.resting[frame] || Number.isNaN(margin)) continue;
+    if (worstMarginMm === null || margin < worstMarginMm) {
+      worstMarginMm = margin;
+      worstMarginFrame = frame;
+    }
+  }
+
+  const { legCount, fps } = state;
+  const peaks = new Float64Array(legCount * 3);
+  for (let frame = 1; frame < state.frameCount; frame += 1) {
+    const here = frame * legCount * 3;
+    const before = here - legCount * 3;
+    for (let i = 0; i < legCount * 3; i += 1) {
+      const speed = Math.abs(state.angles[here + i] - state.angles[before + i]) * fps;
+      if (speed > peaks[i]) peaks[i] = speed;
+    }
+  }
+  const peakSpeedDegS: Record<string, JointAngles> = {};
+  const dutyFactor: Record<string, number> = {};
+  let speedHeadroom: number | null = null;
+  state.legIds.forEach((legId, leg) => {
+    peakSpeedDegS[legId] = { coxa: peaks[leg * 3], femur: peaks[leg * 3 + 1], tibia: peaks[leg * 3 + 2] };
+    // Rounded to 1e-9: sums of key times carry round-off (0.6666666666669999).
+    dutyFactor[legId] = Math.round(plans[leg].dutyFactor * 1e9) / 1e9;
+    for (let j = 0; j < 3; j += 1) {
+      const peak = peaks[leg * 3 + j];
+      if (peak <= 0) continue;
+      const headroom = state.joints[leg * 3 + j].maxSpeedDegS / peak;
+      if (speedHeadroom === null || headroom < speedHeadroom) speedHeadroom = headroom;
+    }
+  });
+
+  return {
+    frames: state.frameCount,
+    fps,
+    flagsByKind: ordered,
+    errors,
+    warnings: flags.length - errors,
+    worstMarginMm,
+    worstMarginFrame,
+    peakSpeedDegS,
+    dutyFactor,
+    strideMm,
+    bodySpeedMmS: strideMm / (cycleMs / 1000),
+    speedHeadroom,
+    dynamic: state.dynamic,
+  };
+}

@@ -1,0 +1,51 @@
+// Round trips of POST /api/v1/solve on loopback against a running app:
+// p50 and p95 at 1 and at 20 concurrent clients, and the response size.
+import { readFileSync } from "node:fs";
+import { generateGait } from "../../app/gait";
+import { parseRobot } from "../../app/kinematics";
+
+const REQUESTS_PER_CLIENT = { 1: 60, 20: 15 } as const;
+
+function percentile(sorted: number[], p: number): number {
+  return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
+}
+
+export async function benchSolveApi(baseUrl: string, token: string): Promise<void> {
+  const robotJson = JSON.parse(readFileSync(new URL("../../db/demo/robots/pier-crawler.json", import.meta.url), "utf8"));
+  const parsed = parseRobot(robotJson);
+  if (!parsed.ok) throw new Error("demo robot invalid");
+  // 1 000 frames: a 20 s cycle at 50 frames per second.
+  const sequence = generateGait(parsed.robot, { template: "tripod", cycleMs: 20_000, fps: 50, strideMm: 40 });
+  const body = JSON.stringify({ robot: robotJson, sequence });
+  const call = async () => {
+    const started = performance.now();
+    const response = await fetch(`${baseUrl}/api/v1/solve`, {
+      method: "POST",
+      headers: { Authorization: `Bearer ${token}`, "Content-Type": "application/json", "Accept-Encoding": "identity" },
+      body,
+    });
+    const text = await response.text();
+    if (response.status !== 200) throw new Error(`solve answered ${response.status}: ${text.slice(0, 200)}`);
+    return { ms: performance.now() - started, bytes: Buffer.byteLength(text) };
+  };
+  for (let i = 0; i < 5; i++) await call(); // warm-up
+  for (const clients of [1, 20] as const) {
+    const times: number[] = [];
+    let bytes = 0;
+    await Promise.all(
+      Array.from({ length: clients }, async () => {
+        for (let i = 0; i < REQUESTS_PER_CLIENT[clients]; i++) {
+          const result = await call();
+          times.push(result.ms);
+          bytes = result.bytes;
+        }
+      }),
+    );
+    times.sort((a, b) => a - b);
+    console.log(
+      `POST /api/v1/solve, 6 legs, 1 000 frames, ${clients} client${clients === 1 ? "" : "s"}: ` +
+        `p50 ${percentile(times, 50).toFixed(1)} ms, p95 ${percentile(times, 95).toFixed(1)} ms over ${times.length} requests; ` +
+        `response ${(bytes / 1024).toFixed(0)} KiB`,
+    );
+  }
+}

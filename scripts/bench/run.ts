@@ -1,0 +1,19 @@
+// npm run bench: every benchmark, printed as figures. The HTTP ones run when
+// scripts/bench.sh has started the app (GAITLOOM_BENCH_URL and _TOKEN set).
+import { benchGait } from "./gait";
+import { benchKinematics } from "./kinematics";
+import { benchSolveApi } from "./http";
+
+console.log(`Gaitloom benchmarks on ${process.version}, ${new Date().toISOString()}\n`);
+console.log("== kinematics");
+await benchKinematics();
+console.log("\n== gait engine");
+await benchGait();
+const url = process.env.GAITLOOM_BENCH_URL;
+const token = process.env.GAITLOOM_BENCH_TOKEN;
+if (url && token) {
+  console.log("\n== HTTP on loopback");
+  await benchSolveApi(url, token);
+} else {
+  console.log("\n(HTTP benchmarks skipped: run them through `npm run bench`, which starts the app.)");
+}

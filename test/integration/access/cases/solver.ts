@@ -1,0 +1,34 @@
+// Access cases for the solver API.
+import { readFileSync } from "node:fs";
+import { type RouteCase, act, load } from "../../../support/access-matrix";
+import * as solve from "~/routes/api.v1/solver/solve";
+import * as ik from "~/routes/api.v1/solver/ik";
+import { generateGait } from "~/gait";
+import { neutralStance, parseRobot } from "~/kinematics";
+
+const robotJson = JSON.parse(readFileSync(new URL("../../../../db/demo/robots/pier-crawler.json", import.meta.url), "utf8"));
+const robot = (() => {
+  const parsed = parseRobot(robotJson);
+  if (!parsed.ok) throw new Error("demo robot invalid");
+  return parsed.robot;
+})();
+const sequence = generateGait(robot, { template: "tripod", cycleMs: 1000, fps: 25, strideMm: 40 });
+
+export const cases: RouteCase[] = [
+  {
+    name: "POST /api/v1/solve",
+    route: "routes/api.v1/solver/solve.ts",
+    kind: "action",
+    needs: "solver.use",
+    run: (req) => req("POST", "/api/v1/solve", { json: { robot: robotJson, sequence } }).then((r) => act(solve, r)),
+  },
+  { name: "GET /api/v1/solve (asks for POST)", route: "routes/api.v1/solver/solve.ts", kind: "loader", needs: "public", allowedStatus: 400, run: () => Promise.resolve(solve.loader()) },
+  {
+    name: "POST /api/v1/ik",
+    route: "routes/api.v1/solver/ik.ts",
+    kind: "action",
+    needs: "solver.use",
+    run: (req) => req("POST", "/api/v1/ik", { json: { robot: robotJson, feet: neutralStance(robot) } }).then((r) => act(ik, r)),
+  },
+  { name: "GET /api/v1/ik (asks for POST)", route: "routes/api.v1/solver/ik.ts", kind: "loader", needs: "public", allowedStatus: 400, run: () => Promise.resolve(ik.loader()) },
+];

@@ -1,0 +1,116 @@
+import { readFileSync } from "node:fs";
+import { beforeAll, describe, expect, test } from "vitest";
+import { seedDemo } from "../../../db/seed";
+import { act, demoIds, requestsAs, type DemoIds } from "../../support/access-matrix";
+import { database } from "~/lib/db.server";
+import { generateGait } from "~/gait";
+import { neutralStance, parseRobot, type Robot } from "~/kinematics";
+import * as solve from "~/routes/api.v1/solver/solve";
+import * as ik from "~/routes/api.v1/solver/ik";
+
+const robotJson = JSON.parse(readFileSync(new URL("../../../db/demo/robots/pier-crawler.json", import.meta.url), "utf8"));
+const robot = (parseRobot(robotJson) as { ok: true; robot: Robot }).robot;
+
+let ids: DemoIds;
+beforeAll(async () => {
+  await seedDemo(database());
+  ids = await demoIds(database());
+});
+
+async function post(route: typeof solve | typeof ik, path: string, body: BodyInit | object, role: "animator" | "signed-out" = "animator") {
+  const make = await requestsAs(role, ids);
+  const request =
+    typeof body === "string"
+      ? new Request(new URL(path, "http://127.0.0.1:3000"), { method: "POST", body, headers: (await make("POST", path)).headers })
+      : await make("POST", path, { json: body });
+  try {
+    return (await act(route, request)) as Response;
+  } catch (thrown) {
+    if (thrown instanceof Response) return thrown;
+    throw thrown;
+  }
+}
+
+describe("POST /api/v1/solve", () => {
+  test("solves a tripod for the demo hexapod: frames, flags and summary as DESIGN.md lays them out", async () => {
+    const sequence = generateGait(robot, { template: "tripod", cycleMs: 1200, fps: 50, strideMm: 40 });
+    const response = await post(solve, "/api/v1/solve", { robot: robotJson, sequence });
+    expect(response.status).toBe(200);
+    const body = await response.json();
+    expect(body.frames).toHaveLength(60);
+    expect(Object.keys(body.frames[0].legs).sort()).toEqual(["LF", "LM", "LR", "RF", "RM", "RR"]);
+    expect(body.frames[0]).toMatchObject({ index: 0, timeMs: 0 });
+    expect(body.summary).toMatchObject({ frames: 60, strideMm: 40 });
+    expect(JSON.stringify(body)).not.toContain("null,null"); // no NaN turned null in angle arrays
+  });
+
+  test("signed out: 401 JSON error", async () => {
+    const response = await post(solve, "/api/v1/solve", { robot: robotJson, sequence: {} }, "signed-out");
+    expect(response.status).toBe(401);
+    expect(await response.json()).toMatchObject({ error: { code: "unauthorized" } });
+  });
+
+  test("a body that is not JSON: 400 saying so", async () => {
+    const response = await post(solve, "/api/v1/solve", "{not json");
+    expect(response.status).toBe(400);
+    expect((await response.json()).error.message).toMatch(/not valid JSON/);
+  });
+
+  test("a body over the limit: 413 with both sizes", async () => {
+    const response = await post(solve, "/api/v1/solve", JSON.stringify({ robot: robotJson, padding: "x".repeat(2 * 1024 * 1024 + 10) }));
+    expect(response.status).toBe(413);
+    expect((await response.json()).error.message).toMatch(/limit is 2097152/);
+  });
+
+  test("an invalid robot: 422 with the path of every problem", async () => {
+    const broken = structuredClone(robotJson);
+    broken.legs[2].joints.femur.minDeg = 40;
+    broken.legs[2].joints.femur.maxDeg = 30;
+    const sequence = generateGait(robot, { template: "tripod", cycleMs: 1200, fps: 50 });
+    const response = await post(solve, "/api/v1/solve", { robot: broken, sequence });
+    expect(response.status).toBe(422);
+    const body = await response.json();
+    expect(body.error.code).toBe("invalid");
+    expect(body.error.details).toContainEqual({ path: "robot.legs[2].joints.femur.minDeg", message: "must be below maxDeg (got 40 ≥ 30)" });
+  });
+
+  test("an invalid sequence: 422 with paths under sequence.", async () => {
+    const sequence = generateGait(robot, { template: "tripod", cycleMs: 1200, fps: 50 }) as unknown as Record<string, unknown>;
+    const response = await post(solve, "/api/v1/solve", { robot: robotJson, sequence: { ...sequence, fps: -5 } });
+    expect(response.status).toBe(422);
+    const body = await response.json();
+    expect(body.error.details.some((issue: { path: string }) => issue.path === "sequence.fps")).toBe(true);
+  });
+
+  test("unknown fields are refused rather than ignored", async () => {
+    const response = await post(solve, "/api/v1/solve", { robot: robotJson, sequence: {}, extra: 1 });
+    expect(response.status).toBe(422);
+  });
+});
+
+describe("POST /api/v1/ik", () => {
+  test("the neutral stance solves within limits for every leg, with pulses", async () => {
+    const response = await post(ik, "/api/v1/ik", { robot: robotJson, feet: neutralStance(robot) });
+    expect(response.status).toBe(200);
+    const { legs } = await response.json();
+    for (const leg of robot.legs) {
+      expect(legs[leg.id].reachable, `${leg.id} reachable`).toBe(true);
+      expect(legs[leg.id].violations).toEqual([]);
+      expect(legs[leg.id].pulses.coxa).toBeGreaterThanOrEqual(leg.joints.coxa.servo.minUs);
+    }
+  });
+
+  test("a foot far out of reach is reported with a reason, never NaN", async () => {
+    const response = await post(ik, "/api/v1/ik", { robot: robotJson, feet: { LF: [900, 900, -90] } });
+    const { legs } = await response.json();
+    expect(legs.LF.reachable).toBe(false);
+    expect(legs.LF.reason).toMatch(/LF/);
+    expect(Object.values(legs.LF.angles).every((value) => Number.isFinite(value))).toBe(true);
+  });
+
+  test("a foot for a leg the robot does not have: 422 naming it", async () => {
+    const response = await post(ik, "/api/v1/ik", { robot: robotJson, feet: { XX: [0, 0, 0] } });
+    expect(response.status).toBe(422);
+    expect((await response.json()).error.details[0].path).toBe("feet.XX");
+  });
+});
