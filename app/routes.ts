@@ -1,5 +1,9 @@
 import { type RouteConfig, index, layout, prefix, route } from "@react-router/dev/routes";
+import { editorApi } from "./routes/api.v1/gaits/editor-routes";
+import { versionApi } from "./routes/api.v1/gaits/version-routes";
 import { robotApi } from "./routes/api.v1/robots/routes";
+import { editorPages } from "./routes/gaits/editor-routes";
+import { versionPages } from "./routes/gaits/version-routes";
 import { robotPages } from "./routes/robots/routes";
 
 export default [
@@ -9,6 +13,8 @@ export default [
     route("solve", "routes/api.v1/solver/solve.ts"),
     route("ik", "routes/api.v1/solver/ik.ts"),
     ...robotApi,
+    ...editorApi,
+    ...versionApi,
   ]),
   route("auth/github", "routes/auth/github.ts"),
   route("auth/github/callback", "routes/auth/github-callback.ts"),
@@ -20,7 +26,7 @@ export default [
     route("welcome", "routes/welcome.tsx"),
     route("invitations/:token", "routes/invitations/accept.tsx"),
     ...prefix("robots", robotPages),
-    ...prefix("gaits", [index("routes/gaits/list.tsx")]),
+    ...prefix("gaits", [index("routes/gaits/list.tsx"), ...editorPages, ...versionPages]),
     route("reviews", "routes/reviews.tsx"),
     route("settings", "routes/settings/layout.tsx", [
       index("routes/settings/workspace.tsx"),
