@@ -1,5 +1,6 @@
 // npm run bench: every benchmark, printed as figures. The HTTP ones run when
 // scripts/bench.sh has started the app (GAITLOOM_BENCH_URL and _TOKEN set).
+import { benchExport } from "./export";
 import { benchGait } from "./gait";
 import { benchKinematics } from "./kinematics";
 import { benchSolveApi } from "./http";
@@ -9,6 +10,8 @@ console.log("== kinematics");
 await benchKinematics();
 console.log("\n== gait engine");
 await benchGait();
+console.log("\n== firmware export");
+await benchExport();
 const url = process.env.GAITLOOM_BENCH_URL;
 const token = process.env.GAITLOOM_BENCH_TOKEN;
 if (url && token) {

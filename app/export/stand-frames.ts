@@ -1,0 +1,178 @@
+// A solved result made from servo angles given frame by frame, for tables that
+// are not walks: the robot sits on a stand with its legs free, so there is no
+// foot on the ground, no support polygon and no body travel. The frames are
+// checked for speed like any sequence — by the gait engine's own joint-limit,
+// joint-speed and pulse-range checks run over them — and the summary is
+// filled as solveSequence fills it. Support, slip and ground checks do not
+// apply to a robot on a stand and are not run.
+import {
+  CHECKS,
+  FLAG_KINDS,
+  SOLVE_DEFAULTS,
+  type CheckContext,
+  type Flag,
+  type FlagKind,
+  type SolveSummary,
+  type SolvedFrame,
+  type SolvedLeg,
+  type SolvedSequence,
+} from "../gait/index";
+import {
+  JOINT_NAMES,
+  NEUTRAL_POSE,
+  SOLVE_COXA_LIMIT,
+  SOLVE_FEMUR_LIMIT,
+  SOLVE_TIBIA_LIMIT,
+  angleToPulse,
+  createLegSolver,
+  type JointAngles,
+  type Robot,
+} from "../kinematics/index";
+
+type SolveState = CheckContext["state"];
+
+/** The checks of a joint's own motion: what a bench table is checked with. */
+export const STAND_CHECKS: readonly FlagKind[] = ["joint-limit", "joint-speed", "pulse-range"];
+
+const LIMIT_BITS = [SOLVE_COXA_LIMIT, SOLVE_FEMUR_LIMIT, SOLVE_TIBIA_LIMIT];
+// The leg solver's tolerance: a value on its limit is inside it.
+const LIMIT_TOLERANCE_DEG = 1e-9;
+
+/**
+ * A SolvedSequence of the robot on a stand: `angles` holds frame × leg × joint
+ * servo degrees (legs in robot.legs order, joints coxa, femur, tibia), frames
+ * played at `fps` once (not as a loop).
+ */
+export function solveStandFrames(robot: Robot, angles: Float64Array, fps: number): SolvedSequence {
+  const solver = createLegSolver(robot);
+  const legIds = solver.legIds;
+  const legCount = legIds.length;
+  const frameCount = angles.length / (legCount * 3);
+  if (!Number.isInteger(frameCount) || frameCount < 1) throw new RangeError(`angles must hold whole frames of ${legCount * 3} values (got ${angles.length})`);
+  const slots = frameCount * legCount;
+  const joints: SolveState["joints"][number][] = [];
+  for (const leg of robot.legs) {
+    for (const name of JOINT_NAMES) {
+      const joint = leg.joints[name];
+      joints.push({ legId: leg.id, name, joint, minDeg: joint.minDeg, maxDeg: joint.maxDeg, maxSpeedDegS: joint.maxSpeedDegS });
+    }
+  }
+  const status = new Int32Array(slots);
+  const pulseClamped = new Uint8Array(slots * 3);
+  const feet = new Float64Array(slots * 3);
+  const achievedWorld = new Float64Array(slots * 3);
+  const [comX, comY] = robot.body.com;
+  const frames: SolvedFrame[] = new Array(frameCount);
+  for (let frame = 0; frame < frameCount; frame += 1) {
+    const legs: Record<string, SolvedLeg> = {};
+    for (let leg = 0; leg < legCount; leg += 1) {
+      const slot = frame * legCount + leg;
+      const t = slot * 3;
+      const values: JointAngles = { coxa: angles[t], femur: angles[t + 1], tibia: angles[t + 2] };
+      const pulses: JointAngles = { coxa: 0, femur: 0, tibia: 0 };
+      for (let j = 0; j < 3; j += 1) {
+        const spec = joints[leg * 3 + j];
+        const value = angles[t + j];
+        if (value < spec.minDeg - LIMIT_TOLERANCE_DEG || value > spec.maxDeg + LIMIT_TOLERANCE_DEG) status[slot] |= LIMIT_BITS[j];
+        const pulse = angleToPulse(spec.joint, value);
+        pulseClamped[t + j] = pulse.clamped ? 1 : 0;
+        pulses[JOINT_NAMES[j]] = pulse.us;
+      }
+      solver.forward(leg, values.coxa, values.femur, values.tibia, feet, t);
+      // The body stands still at its stand height: world = body frame lifted by standHeight.
+      achievedWorld[t] = feet[t];
+      achievedWorld[t + 1] = feet[t + 1];
+      achievedWorld[t + 2] = feet[t + 2] + robot.standHeight;
+      legs[legIds[leg]] = { contact: "swing", foot: [feet[t], feet[t + 1], feet[t + 2]], reachable: true, angles: values, pulses };
+    }
+    frames[frame] = {
+      index: frame,
+      timeMs: (frame * 1000) / fps,
+      body: { ...NEUTRAL_POSE, z: robot.standHeight },
+      legs,
+      support: [],
+      com: [comX, comY],
+      marginMm: null,
+    };
+  }
+
+  const state: SolveState = {
+    robot,
+    solver,
+    legIds,
+    legCount,
+    frameCount,
+    loop: false,
+    dynamic: false,
+    fps,
+    options: { ...SOLVE_DEFAULTS },
+    joints,
+    neighbours: [],
+    cycleTravel: { x: 0, y: 0, cos: 1, sin: 0, headingRad: 0 },
+    status,
+    stance: new Uint8Array(slots),
+    angles,
+    targetNeutral: feet,
+    targetBody: feet,
+    achievedWorld,
+    pulseClamped,
+    offsets: new Float64Array(frameCount * 6),
+    resting: new Uint8Array(frameCount).fill(1),
+    stanceCount: new Uint8Array(frameCount),
+    margin: new Float64Array(frameCount).fill(Number.NaN),
+  };
+  const context: CheckContext = { state };
+  const flags: Flag[] = [];
+  for (const check of CHECKS) if (STAND_CHECKS.includes(check.kind)) for (const flag of check.run(context)) flags.push(flag);
+  // As solveSequence orders them: by frame, the check order within a frame (sort is stable).
+  flags.sort((a, b) => a.frame - b.frame);
+  return { frames, flags, summary: summarize(state, flags) };
+}
+
+function summarize(state: SolveState, flags: readonly Flag[]): SolveSummary {
+  const counts: Partial<Record<FlagKind, number>> = {};
+  let errors = 0;
+  for (const flag of flags) {
+    counts[flag.kind] = (counts[flag.kind] ?? 0) + 1;
+    if (flag.severity === "error") errors += 1;
+  }
+  const flagsByKind: Partial<Record<FlagKind, number>> = {};
+  for (const kind of FLAG_KINDS) if (counts[kind] !== undefined) flagsByKind[kind] = counts[kind];
+  const { legCount, frameCount, angles, fps, joints } = state;
+  const peaks = new Float64Array(legCount * 3);
+  for (let frame = 1; frame < frameCount; frame += 1) {
+    const here = frame * legCount * 3;
+    for (let i = 0; i < legCount * 3; i += 1) {
+      const speed = Math.abs(angles[here + i] - angles[here - legCount * 3 + i]) * fps;
+      if (speed > peaks[i]) peaks[i] = speed;
+    }
+  }
+  const peakSpeedDegS: Record<string, JointAngles> = {};
+  const dutyFactor: Record<string, number> = {};
+  let speedHeadroom: number | null = null;
+  state.legIds.forEach((legId, leg) => {
+    peakSpeedDegS[legId] = { coxa: peaks[leg * 3], femur: peaks[leg * 3 + 1], tibia: peaks[leg * 3 + 2] };
+    dutyFactor[legId] = 0;
+    for (let j = 0; j < 3; j += 1) {
+      const peak = peaks[leg * 3 + j];
+      if (peak <= 0) continue;
+      const headroom = joints[leg * 3 + j].maxSpeedDegS / peak;
+      if (speedHeadroom === null || headroom < speedHeadroom) speedHeadroom = headroom;
+    }
+  });
+  return {
+    frames: frameCount,
+    fps,
+    flagsByKind,
+    errors,
+    warnings: flags.length - errors,
+    worstMarginMm: null,
+    worstMarginFrame: null,
+    peakSpeedDegS,
+    dutyFactor,
+    strideMm: 0,
+    bodySpeedMmS: 0,
+    speedHeadroom,
+    dynamic: false,
+  };
+}
