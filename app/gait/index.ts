@@ -41,6 +41,7 @@ export {
   type SolvedSequence,
 } from "./solved";
 export { CHECKS, type Check, type CheckContext } from "./checks/index";
+export { COLUMNS_LAYOUT, toColumns, type SolveColumns } from "./columns";
 export { easingFor, type EasingFunction } from "./interpolate/easing";
 export { swingLift } from "./interpolate/swing";
 export { convexHullInto, stabilityMargin } from "./support";

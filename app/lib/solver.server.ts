@@ -1,7 +1,7 @@
 // The solver behind POST /api/v1/solve and /api/v1/ik: parse, check the
 // input fits, run the pure engine. The browser runs the same app/gait code.
 import { z } from "zod";
-import { GaitInputError, parseSequence, solveSequence, type SolveOptions, type SolvedSequence } from "../gait/index";
+import { GaitInputError, parseSequence, solveSequence, toColumns, type SolveColumns, type SolveOptions, type SolvedSequence } from "../gait/index";
 import { angleToPulse, JOINT_NAMES, parseRobot, solveLeg, type JointAngles, type Robot } from "../kinematics/index";
 import { ServiceError } from "./errors.server";
 
@@ -48,6 +48,7 @@ const solveBody = z.strictObject({
       slipToleranceMm: z.number().finite().min(0).max(1000).optional(),
       clearanceMm: z.number().finite().min(0).max(1000).optional(),
       fps: z.number().int().min(1).max(1000).optional(),
+      layout: z.enum(["frames", "columns"]).optional(),
     })
     .optional(),
 });
@@ -83,7 +84,7 @@ export function solveFeet(body: unknown): IkResult {
   return result;
 }
 
-export function solveRequest(body: unknown): SolvedSequence {
+export function solveRequest(body: unknown): SolvedSequence | SolveColumns {
   const parsed = solveBody.safeParse(body);
   if (!parsed.success) throw new InputIssues("The body must be { robot, sequence, options? }.", shapeIssues(parsed.error));
   const robot = robotFrom(parsed.data.robot);
@@ -94,8 +95,10 @@ export function solveRequest(body: unknown): SolvedSequence {
       sequence.issues.map((issue) => ({ path: issue.path ? `sequence.${issue.path}` : "sequence", message: issue.message })),
     );
   }
+  const { layout, ...options } = parsed.data.options ?? {};
   try {
-    return solveSequence(robot, sequence.sequence, parsed.data.options as SolveOptions | undefined);
+    const solved = solveSequence(robot, sequence.sequence, options as SolveOptions);
+    return layout === "columns" ? toColumns(solved) : solved;
   } catch (error) {
     if (error instanceof GaitInputError) {
       throw new InputIssues(

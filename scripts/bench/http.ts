@@ -16,12 +16,24 @@ export async function benchSolveApi(baseUrl: string, token: string): Promise<voi
   if (!parsed.ok) throw new Error("demo robot invalid");
   // 1 000 frames: a 20 s cycle at 50 frames per second.
   const sequence = generateGait(parsed.robot, { template: "tripod", cycleMs: 20_000, fps: 50, strideMm: 40 });
-  const body = JSON.stringify({ robot: robotJson, sequence });
+  for (const layout of ["frames", "columns"] as const) {
+    for (const cache of ["cold", "warm"] as const) {
+      await measure(baseUrl, token, JSON.stringify({ robot: robotJson, sequence, options: { layout } }), layout, cache);
+    }
+  }
+}
+
+async function measure(baseUrl: string, token: string, body: string, layout: string, cache: "cold" | "warm") {
   const call = async () => {
     const started = performance.now();
     const response = await fetch(`${baseUrl}/api/v1/solve`, {
       method: "POST",
-      headers: { Authorization: `Bearer ${token}`, "Content-Type": "application/json", "Accept-Encoding": "identity" },
+      headers: {
+        Authorization: `Bearer ${token}`,
+        "Content-Type": "application/json",
+        "Accept-Encoding": "identity",
+        ...(cache === "cold" ? { "Cache-Control": "no-cache" } : {}),
+      },
       body,
     });
     const text = await response.text();
@@ -43,7 +55,7 @@ export async function benchSolveApi(baseUrl: string, token: string): Promise<voi
     );
     times.sort((a, b) => a - b);
     console.log(
-      `POST /api/v1/solve, 6 legs, 1 000 frames, ${clients} client${clients === 1 ? "" : "s"}: ` +
+      `POST /api/v1/solve, 6 legs, 1 000 frames, layout ${layout}, ${cache === "cold" ? "solved every time" : "answer cached"}, ${String(clients).padStart(2)} client${clients === 1 ? " " : "s"}: ` +
         `p50 ${percentile(times, 50).toFixed(1)} ms, p95 ${percentile(times, 95).toFixed(1)} ms over ${times.length} requests; ` +
         `response ${(bytes / 1024).toFixed(0)} KiB`,
     );

@@ -44,6 +44,17 @@ describe("POST /api/v1/solve", () => {
     expect(JSON.stringify(body)).not.toContain("null,null"); // no NaN turned null in angle arrays
   });
 
+  test("the column layout carries the same solve, and a repeated request is answered from the cache", async () => {
+    const sequence = generateGait(robot, { template: "wave", cycleMs: 1200, fps: 50, strideMm: 30 });
+    const body = { robot: robotJson, sequence, options: { layout: "columns" } };
+    const first = await post(solve, "/api/v1/solve", body);
+    const second = await post(solve, "/api/v1/solve", body);
+    expect([first.headers.get("X-Solve-Cache"), second.headers.get("X-Solve-Cache")]).toEqual(["miss", "hit"]);
+    const [a, b] = [await first.json(), await second.json()];
+    expect(b).toEqual(a);
+    expect(a).toMatchObject({ layout: "gaitloom.solve-columns/1", frames: 60, legs: ["LF", "LM", "LR", "RF", "RM", "RR"] });
+  });
+
   test("signed out: 401 JSON error", async () => {
     const response = await post(solve, "/api/v1/solve", { robot: robotJson, sequence: {} }, "signed-out");
     expect(response.status).toBe(401);
