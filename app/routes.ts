@@ -1,7 +1,9 @@
 import { type RouteConfig, index, layout, prefix, route } from "@react-router/dev/routes";
+import { exportApi } from "./routes/api.v1/export/routes";
 import { editorApi } from "./routes/api.v1/gaits/editor-routes";
 import { versionApi } from "./routes/api.v1/gaits/version-routes";
 import { robotApi } from "./routes/api.v1/robots/routes";
+import { exportPages } from "./routes/export/routes";
 import { editorPages } from "./routes/gaits/editor-routes";
 import { versionPages } from "./routes/gaits/version-routes";
 import { robotPages } from "./routes/robots/routes";
@@ -15,6 +17,7 @@ export default [
     ...robotApi,
     ...editorApi,
     ...versionApi,
+    ...exportApi,
   ]),
   route("auth/github", "routes/auth/github.ts"),
   route("auth/github/callback", "routes/auth/github-callback.ts"),
@@ -28,6 +31,7 @@ export default [
     ...prefix("robots", robotPages),
     ...prefix("gaits", [index("routes/gaits/list.tsx"), ...editorPages, ...versionPages]),
     route("reviews", "routes/reviews.tsx"),
+    ...exportPages,
     route("settings", "routes/settings/layout.tsx", [
       index("routes/settings/workspace.tsx"),
       route("members", "routes/settings/members.tsx"),
