@@ -27,7 +27,7 @@ pg_recreate_database "$TEMPLATE_DB"
 export GAITLOOM_TEST_ADMIN_URL="$(pg_url postgres)"
 export GAITLOOM_TEST_TEMPLATE_DB="$TEMPLATE_DB"
 export GAITLOOM_TEST_DATABASE_URL_PREFIX="$(pg_url gaitloom_test_w)"
-services_start_fakes 3101 2625 2626
+services_start_fakes $((APP_PORT + 1)) $((APP_PORT + 2)) $((APP_PORT + 3))
 set +e
 
 say "typecheck (react-router typegen && tsc)"
