@@ -23,7 +23,7 @@ export {
   type Servo,
   type Vec3,
 } from "./robot";
-export { formatPath } from "./issues";
+export { formatIssues, formatPath } from "./issues";
 export { DEG_PER_RAD, RAD_PER_DEG, wrapNear } from "./angles";
 export { NEUTRAL_POSE, poseApply, poseRotation, poseUnapply } from "./body-pose";
 export { solveLeg, type JointLimitViolation, type LegSolution } from "./solve-leg";
