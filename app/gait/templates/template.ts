@@ -47,3 +47,15 @@ export function requireLegsPerSide(layout: LegLayout, perSide: number, templateN
   if (layout.left.length === perSide && layout.right.length === perSide) return null;
   return `${templateName} needs ${perSide * 2} legs, ${perSide} a side (this robot has ${layout.left.length} left and ${layout.right.length} right)`;
 }
+
+/**
+ * Phases of the gaits whose legs form two alternating sets (tripod, trot,
+ * alternating tetrapod): even rows of the left side with odd rows of the
+ * right lift at 0, the others half a cycle later.
+ */
+export function alternatingSetsPhase(layout: LegLayout): Record<string, number> {
+  const phase: Record<string, number> = {};
+  layout.left.forEach((legId, row) => (phase[legId] = cycleFraction(row % 2 === 0 ? 0 : 1 / 2)));
+  layout.right.forEach((legId, row) => (phase[legId] = cycleFraction(row % 2 === 0 ? 1 / 2 : 0)));
+  return phase;
+}
