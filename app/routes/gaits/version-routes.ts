@@ -1,4 +1,14 @@
 // Gait pages (version-routes), spread into app/routes.ts under the `gaits` prefix inside the shell.
-import type { RouteConfigEntry } from "@react-router/dev/routes";
+// Static segments (`compare`, the editor's `new`) outrank `:gaitId` whatever the order here.
+import { route, type RouteConfigEntry } from "@react-router/dev/routes";
 
-export const versionPages: RouteConfigEntry[] = [];
+export const versionPages: RouteConfigEntry[] = [
+  // GET gaits.read: two versions side by side (?a=<versionId>&b=<versionId>), or the picker
+  route("compare", "routes/gaits/compare.tsx"),
+  // GET gaits.read: the gait's versions (?sort=&dir=&state=&author=&q=&flags=)
+  // POST intent=commit (message, draftRevision?) versions.commit; intent=restore (versionId, draftRevision) gaits.edit
+  route(":gaitId", "routes/gaits/gait.tsx"),
+  // GET gaits.read: one version, its checks and review history
+  // POST intent=request-review versions.requestReview; approve / send-back versions.decide; release versions.release
+  route(":gaitId/versions/:number", "routes/gaits/version.tsx"),
+];

@@ -1,4 +1,7 @@
 // Gait resource routes (version-routes), spread into app/routes.ts under `api/v1` (outside the shell).
-import type { RouteConfigEntry } from "@react-router/dev/routes";
+import { route, type RouteConfigEntry } from "@react-router/dev/routes";
 
-export const versionApi: RouteConfigEntry[] = [];
+export const versionApi: RouteConfigEntry[] = [
+  // gaits.read: the gait's versions, newest first
+  route("gaits/:gaitId/versions", "routes/api.v1/gaits/versions.ts"),
+];

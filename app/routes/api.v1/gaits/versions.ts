@@ -1,0 +1,33 @@
+// GET /api/v1/gaits/:gaitId/versions: every version of a gait, newest first,
+// with its state, message, author, time, content hash and solved summary.
+import { z } from "zod";
+import type { Route } from "./+types/versions";
+import { requireApiAccess } from "~/lib/access.server";
+import { apiError } from "~/lib/api.server";
+import { getGait, listVersions } from "~/lib/versions.server";
+
+const params = z.object({ gaitId: z.guid({ error: (issue) => `gaitId must be a UUID (got ${JSON.stringify(issue.input)})` }) });
+
+export async function loader({ request, params: raw }: Route.LoaderArgs) {
+  const { workspace } = await requireApiAccess(request, "gaits.read");
+  const parsed = params.safeParse(raw);
+  if (!parsed.success) throw apiError(400, "bad_request", parsed.error.issues[0].message);
+  const gait = await getGait(workspace.id, parsed.data.gaitId);
+  if (!gait) throw apiError(404, "not_found", `No gait ${parsed.data.gaitId} in this workspace.`);
+  const versions = await listVersions(workspace.id, gait.id);
+  return Response.json({
+    gait: { id: gait.id, name: gait.name, robotId: gait.robot.id, robotName: gait.robot.name, releasedVersion: gait.releasedVersion },
+    versions: versions.map((version) => ({
+      id: version.id,
+      number: version.number,
+      state: version.state,
+      message: version.message,
+      author: version.author ? { login: version.author.login, name: version.author.name } : null,
+      createdAt: version.createdAt.toISOString(),
+      stateChangedAt: version.stateChangedAt.toISOString(),
+      robotRevision: version.robotRevision,
+      contentHash: version.contentHash,
+      summary: version.summary,
+    })),
+  });
+}

@@ -1,0 +1,167 @@
+import { data, Link, useNavigation } from "react-router";
+import { z } from "zod";
+import type { Route } from "./+types/gait";
+import { ErrorPanel } from "~/components/common/ErrorPanel";
+import { Notice } from "~/components/common/Notice";
+import { PageHeader } from "~/components/common/PageHeader";
+import { DraftPanel } from "~/components/versions/DraftPanel";
+import { VersionFilters } from "~/components/versions/VersionFilters";
+import { VersionTable } from "~/components/versions/VersionTable";
+import { parseVersionQuery } from "~/components/versions/version-query";
+import { requireAccess } from "~/lib/access.server";
+import { formAction, type FormError } from "~/lib/errors.server";
+import { can, type Action } from "~/lib/permissions";
+import { readFormWithin } from "~/lib/robots/form-body.server";
+import { commitDraft, getGait, listVersions, restoreDraft, versionAuthors } from "~/lib/versions.server";
+
+const gaitParams = z.object({ gaitId: z.guid() });
+
+const notFound = () => data({ message: "There is no gait at this address in your workspace." }, { status: 404 });
+
+const revisionField = z
+  .string()
+  .regex(/^\d{1,9}$/, { error: "draftRevision must be the draft revision the page showed" })
+  .transform(Number);
+
+const actionForm = z.discriminatedUnion("intent", [
+  z.object({
+    intent: z.literal("commit"),
+    message: z.string({ error: "Describe the version." }),
+    draftRevision: revisionField.optional(),
+  }),
+  z.object({
+    intent: z.literal("restore"),
+    versionId: z.guid({ error: "Choose the version to start the draft from." }),
+    draftRevision: revisionField,
+  }),
+]);
+
+const INTENT_PERMISSIONS: Record<z.infer<typeof actionForm>["intent"], Action> = {
+  commit: "versions.commit",
+  restore: "gaits.edit",
+};
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const { workspace, role } = await requireAccess(request, "gaits.read");
+  const parsed = gaitParams.safeParse(params);
+  if (!parsed.success) throw notFound();
+  const gait = await getGait(workspace.id, parsed.data.gaitId);
+  if (!gait) throw notFound();
+  const query = parseVersionQuery(new URL(request.url).searchParams);
+  const [versions, authors, all] = await Promise.all([
+    listVersions(workspace.id, gait.id, query),
+    versionAuthors(workspace.id, gait.id),
+    listVersions(workspace.id, gait.id),
+  ]);
+  return {
+    gait,
+    versions,
+    // For the comparison picker: every version, whatever the filter shows.
+    allVersions: all.map(({ id, number, message }) => ({ id, number, message })),
+    authors,
+    query,
+    can: { commit: can(role, "versions.commit"), edit: can(role, "gaits.edit") },
+  };
+}
+
+export type GaitActionData = { ok: true; intent: "commit" | "restore"; notice: string; version?: { id: string; number: number; contentHash: string }; draftRevision?: number } | FormError;
+
+/**
+ * POST /gaits/:gaitId
+ *   intent=commit, message, draftRevision? → the draft becomes the next version (the editor posts this too)
+ *   intent=restore, versionId, draftRevision → the draft starts over from that version
+ * Answers { ok: true, intent, notice, … } or { error, field } with the refusal's status.
+ */
+export async function action({ request, params }: Route.ActionArgs) {
+  const body = await readFormWithin(request, 16 * 1024);
+  if (!body.ok) return data<FormError>({ error: body.tooLarge ? "The form is too large." : body.message }, { status: body.tooLarge ? 413 : 400 });
+  const form = actionForm.safeParse(Object.fromEntries(body.form));
+  // The permission depends on the intent; a form without one still needs a signed-in editor to hear why.
+  const member = await requireAccess(request, form.success ? INTENT_PERMISSIONS[form.data.intent] : "gaits.edit");
+  if (!form.success) {
+    const issue = form.error.issues[0];
+    return data<FormError>({ error: issue?.message ?? "The form is not valid.", field: issue?.path.join(".") }, { status: 400 });
+  }
+  const parsed = gaitParams.safeParse(params);
+  if (!parsed.success) return data<FormError>({ error: "There is no gait at this address in your workspace." }, { status: 404 });
+  const gaitId = parsed.data.gaitId;
+  const committer = { userId: member.user.id, workspaceId: member.workspace.id };
+  return formAction(async (): Promise<GaitActionData> => {
+    if (form.data.intent === "commit") {
+      const version = await commitDraft(committer, gaitId, form.data.message, undefined, { draftRevision: form.data.draftRevision });
+      return { ok: true, intent: "commit", notice: `Committed version ${version.number}.`, version };
+    }
+    const restored = await restoreDraft(committer, gaitId, form.data.versionId, form.data.draftRevision);
+    return {
+      ok: true,
+      intent: "restore",
+      notice: `The working draft now starts from version ${restored.number} (draft revision ${restored.draftRevision}). Edit it, or commit it as it is.`,
+      draftRevision: restored.draftRevision,
+    };
+  });
+}
+
+export const meta: Route.MetaFunction = ({ loaderData }) => [{ title: `${loaderData?.gait.name ?? "Gait"} · Gaits · Gaitloom` }];
+
+export default function GaitPage({ loaderData, actionData }: Route.ComponentProps) {
+  const { gait, versions, allVersions, authors, query, can: allowed } = loaderData;
+  const navigation = useNavigation();
+  const busyIntent = navigation.state === "submitting" ? String(navigation.formData?.get("intent") ?? "") : null;
+  const result = actionData as GaitActionData | undefined;
+  const error = result && "error" in result ? result : null;
+  const success = result && "ok" in result ? result : null;
+  // A restore answers with the new draft revision; use it at once, so a commit sent before the page's data reloads is not refused as stale.
+  const draftRevision = Math.max(gait.draft.revision, success?.draftRevision ?? 0);
+  return (
+    <>
+      <PageHeader
+        title={gait.name}
+        lead={`${gait.robot.name} · ${gait.versionCount} version${gait.versionCount === 1 ? "" : "s"}${gait.releasedVersion ? ` · version ${gait.releasedVersion} released` : " · nothing released yet"}${gait.description ? ` · ${gait.description}` : ""}`}
+      >
+        <Link to={`/gaits?robot=${gait.robot.id}`} className="rounded-md border border-line bg-surface px-3 py-1.5 text-sm font-medium hover:bg-sunken">
+          Gaits of {gait.robot.name}
+        </Link>
+        {allowed.edit ? (
+          <Link to={`/gaits/${gait.id}/edit`} className="rounded-md bg-accent px-3 py-1.5 text-sm font-medium text-on-accent hover:bg-accent-strong">
+            Edit the draft
+          </Link>
+        ) : null}
+      </PageHeader>
+      <Notice error={error && error.field !== "message" ? error.error : null} success={success?.notice} />
+      <DraftPanel
+        gait={gait}
+        draftRevision={draftRevision}
+        canCommit={allowed.commit}
+        committing={busyIntent === "commit"}
+        messageError={error?.field === "message" ? error.error : null}
+        // A successful commit clears the message box.
+        resetKey={success?.intent === "commit" ? success.version?.id : undefined}
+      />
+      <section className="mt-8 space-y-3" aria-labelledby="versions-heading">
+        <div className="flex flex-wrap items-end justify-between gap-3">
+          <h2 id="versions-heading" className="text-lg font-semibold">
+            Versions
+          </h2>
+          <VersionFilters query={query} authors={authors} />
+        </div>
+        <VersionTable
+          gaitId={gait.id}
+          rows={versions}
+          allVersions={allVersions}
+          query={query}
+          canRestore={allowed.edit}
+          draftRevision={draftRevision}
+          restoring={busyIntent === "restore" ? String(navigation.formData?.get("versionId")) : null}
+        />
+      </section>
+    </>
+  );
+}
+
+export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
+  return (
+    <div className="mx-auto max-w-2xl py-10">
+      <ErrorPanel error={error} />
+    </div>
+  );
+}

@@ -1,0 +1,219 @@
+import { data, Form, Link, useNavigation } from "react-router";
+import { z } from "zod";
+import type { Route } from "./+types/version";
+import { ErrorPanel } from "~/components/common/ErrorPanel";
+import { Notice } from "~/components/common/Notice";
+import { PageHeader } from "~/components/common/PageHeader";
+import { FlagGroupsTable } from "~/components/versions/FlagGroupsTable";
+import { ReviewActions } from "~/components/versions/ReviewActions";
+import { ReviewHistory } from "~/components/versions/ReviewHistory";
+import { StateBadge } from "~/components/versions/StateBadge";
+import { VersionFacts } from "~/components/versions/VersionFacts";
+import { formatTime } from "~/components/versions/format";
+import { requireAccess } from "~/lib/access.server";
+import { groupFlags } from "~/lib/compare";
+import { formAction, type FormError } from "~/lib/errors.server";
+import { can, type Action } from "~/lib/permissions";
+import { readFormWithin } from "~/lib/robots/form-body.server";
+import { approvalRules, approveVersion, releaseVersion, requestReview, reviewersFor, sendBackVersion } from "~/lib/reviews.server";
+import { getGait, getVersion, listVersions, solveVersion } from "~/lib/versions.server";
+
+const versionParams = z.object({
+  gaitId: z.guid(),
+  number: z.string().regex(/^[1-9][0-9]{0,8}$/).transform(Number),
+});
+
+const notFound = () => data({ message: "There is no such version of a gait in your workspace." }, { status: 404 });
+
+const text = z.string().optional().default("");
+
+const actionForm = z.discriminatedUnion("intent", [
+  z.object({
+    intent: z.literal("request-review"),
+    reviewerId: z.guid({ error: "Choose who should review this version." }),
+    compareWithId: z.union([z.guid(), z.literal("")]).optional().default(""),
+    comment: text,
+  }),
+  z.object({ intent: z.literal("approve"), comment: text, overrideReason: text }),
+  z.object({ intent: z.literal("send-back"), comment: text }),
+  z.object({ intent: z.literal("release"), comment: text }),
+]);
+
+type Intent = z.infer<typeof actionForm>["intent"];
+
+const INTENT_PERMISSIONS: Record<Intent, Action> = {
+  "request-review": "versions.requestReview",
+  approve: "versions.decide",
+  "send-back": "versions.decide",
+  release: "versions.release",
+};
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const { workspace, role, user } = await requireAccess(request, "gaits.read");
+  const parsed = versionParams.safeParse(params);
+  if (!parsed.success) throw notFound();
+  const [version, gait] = await Promise.all([getVersion(workspace.id, parsed.data.gaitId, parsed.data.number), getGait(workspace.id, parsed.data.gaitId)]);
+  if (!version || !gait) throw notFound();
+  const [solved, reviewers, siblings] = await Promise.all([solveVersion(version), reviewersFor(workspace.id, version.author?.id ?? null), listVersions(workspace.id, gait.id)]);
+  const others = siblings.filter((sibling) => sibling.id !== version.id).map(({ id, number, message, state }) => ({ id, number, message, state }));
+  const previous = others.filter((other) => other.number < version.number).sort((x, y) => y.number - x.number)[0] ?? null;
+  const released = others.find((other) => other.state === "released") ?? null;
+  const { sequence: _sequence, ...shown } = version;
+  return {
+    version: shown,
+    gait: { id: gait.id, name: gait.name, robot: gait.robot, draftRevision: gait.draft.revision },
+    flagGroups: groupFlags(solved.solved.flags),
+    reviewers,
+    others,
+    previousId: previous?.id ?? null,
+    releasedId: released?.id ?? null,
+    approval: approvalRules({ authorId: version.author?.id ?? null, errors: version.errors }, { userId: user.id, role }),
+    can: {
+      requestReview: can(role, "versions.requestReview"),
+      decide: can(role, "versions.decide"),
+      release: can(role, "versions.release"),
+      edit: can(role, "gaits.edit"),
+    },
+  };
+}
+
+export type VersionActionData = { ok: true; intent: Intent; notice: string } | FormError;
+
+/**
+ * POST /gaits/:gaitId/versions/:number
+ *   intent=request-review, reviewerId, compareWithId?, comment?   (versions.requestReview)
+ *   intent=approve, comment?, overrideReason?                       (versions.decide)
+ *   intent=send-back, comment                                       (versions.decide)
+ *   intent=release, comment?                                        (versions.release)
+ */
+export async function action({ request, params }: Route.ActionArgs) {
+  const body = await readFormWithin(request, 16 * 1024);
+  if (!body.ok) return data<FormError>({ error: body.tooLarge ? "The form is too large." : body.message }, { status: body.tooLarge ? 413 : 400 });
+  const form = actionForm.safeParse(Object.fromEntries(body.form));
+  const member = await requireAccess(request, form.success ? INTENT_PERMISSIONS[form.data.intent] : "versions.decide");
+  if (!form.success) {
+    const issue = form.error.issues[0];
+    return data<FormError>({ error: issue?.message ?? "The form is not valid.", field: issue?.path.join(".") }, { status: 400 });
+  }
+  const parsed = versionParams.safeParse(params);
+  if (!parsed.success) return data<FormError>({ error: "There is no such version of a gait in your workspace." }, { status: 404 });
+  const version = await getVersion(member.workspace.id, parsed.data.gaitId, parsed.data.number);
+  if (!version) return data<FormError>({ error: "There is no such version of a gait in your workspace." }, { status: 404 });
+  const mailNote = (mailed: boolean, whom: string) => (mailed ? ` ${whom} has been e-mailed.` : "");
+  return formAction(async (): Promise<VersionActionData> => {
+    const input = form.data;
+    switch (input.intent) {
+      case "request-review": {
+        const outcome = await requestReview(member, version.id, { reviewerId: input.reviewerId, comment: input.comment, compareWithId: input.compareWithId || null });
+        return { ok: true, intent: input.intent, notice: `Review requested from ${outcome.reviewer}.${mailNote(outcome.mailed, outcome.reviewer)}` };
+      }
+      case "approve": {
+        const outcome = await approveVersion(member, version.id, { comment: input.comment, overrideReason: input.overrideReason });
+        const override = outcome.override.length > 0 ? " with an override, recorded in the audit log" : "";
+        return { ok: true, intent: input.intent, notice: `Version ${version.number} approved${override}.${mailNote(outcome.mailed, "The author")}` };
+      }
+      case "send-back": {
+        const outcome = await sendBackVersion(member, version.id, { comment: input.comment });
+        return { ok: true, intent: input.intent, notice: `Version ${version.number} sent back.${mailNote(outcome.mailed, "The author")}` };
+      }
+      case "release": {
+        const outcome = await releaseVersion(member, version.id, { comment: input.comment });
+        const retired = outcome.retired ? ` Version ${outcome.retired} is now retired.` : "";
+        return { ok: true, intent: input.intent, notice: `Version ${version.number} released.${retired}${mailNote(outcome.mailed, "The author")}` };
+      }
+    }
+  });
+}
+
+export const meta: Route.MetaFunction = ({ loaderData }) => [
+  { title: loaderData ? `${loaderData.gait.name} v${loaderData.version.number} · Gaitloom` : "Gait version · Gaitloom" },
+];
+
+export default function VersionPage({ loaderData, actionData }: Route.ComponentProps) {
+  const { version, gait, flagGroups, reviewers, others, previousId, releasedId, approval, can: allowed } = loaderData;
+  const navigation = useNavigation();
+  const busy = navigation.state === "submitting" ? String(navigation.formData?.get("intent") ?? "") : null;
+  const result = actionData as VersionActionData | undefined;
+  const error = result && "error" in result ? result : null;
+  const success = result && "ok" in result ? result : null;
+  return (
+    <>
+      <PageHeader
+        title={`${gait.name} v${version.number}`}
+        lead={`${gait.robot.name} · committed ${formatTime(version.createdAt)}${version.author ? ` by ${version.author.name}` : ""}`}
+      >
+        <Link to={`/gaits/${gait.id}`} className="rounded-md border border-line bg-surface px-3 py-1.5 text-sm font-medium hover:bg-sunken">
+          All versions
+        </Link>
+        {previousId ? (
+          <Link to={`/gaits/compare?a=${previousId}&b=${version.id}`} className="rounded-md border border-line bg-surface px-3 py-1.5 text-sm font-medium hover:bg-sunken">
+            Compare with the previous version
+          </Link>
+        ) : null}
+        {releasedId ? (
+          <Link to={`/gaits/compare?a=${releasedId}&b=${version.id}`} className="rounded-md border border-line bg-surface px-3 py-1.5 text-sm font-medium hover:bg-sunken">
+            Compare with the released version
+          </Link>
+        ) : null}
+      </PageHeader>
+      <Notice success={success?.notice} />
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
+        <div className="space-y-6">
+          <section aria-labelledby="version-heading" className="rounded-lg border border-line bg-surface p-4">
+            <div className="flex items-center justify-between gap-3">
+              <h2 id="version-heading" className="text-lg font-semibold">
+                “{version.message}”
+              </h2>
+              <StateBadge state={version.state} />
+            </div>
+            <VersionFacts version={version} />
+          </section>
+          <section aria-labelledby="checks-heading" className="space-y-2">
+            <h2 id="checks-heading" className="text-lg font-semibold">
+              Checks
+            </h2>
+            <FlagGroupsTable groups={flagGroups} />
+          </section>
+          <section aria-labelledby="history-heading" className="space-y-2">
+            <h2 id="history-heading" className="text-lg font-semibold">
+              Review history
+            </h2>
+            <ReviewHistory events={version.events} />
+          </section>
+        </div>
+        <aside className="space-y-4" aria-label="Review">
+          <ReviewActions
+            version={{ id: version.id, number: version.number, state: version.state, errors: version.errors, reviewer: version.reviewer }}
+            reviewers={reviewers}
+            others={others}
+            defaultCompareWith={previousId ?? releasedId}
+            approval={approval}
+            can={allowed}
+            busy={busy}
+            error={error}
+            succeeded={success?.intent ?? null}
+          />
+          {allowed.edit ? (
+            <Form method="post" action={`/gaits/${gait.id}`} className="rounded-lg border border-line bg-surface p-4 text-sm">
+              <input type="hidden" name="intent" value="restore" />
+              <input type="hidden" name="versionId" value={version.id} />
+              <input type="hidden" name="draftRevision" value={gait.draftRevision} />
+              <p className="mb-2 text-ink-muted">Copies this version's sequence and robot revision into the working draft, to edit or commit again.</p>
+              <button type="submit" disabled={busy === "restore"} className="rounded-md border border-line bg-surface px-3 py-1.5 font-medium hover:bg-sunken disabled:opacity-60">
+                Start a new draft from v{version.number}
+              </button>
+            </Form>
+          ) : null}
+        </aside>
+      </div>
+    </>
+  );
+}
+
+export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
+  return (
+    <div className="mx-auto max-w-2xl py-10">
+      <ErrorPanel error={error} />
+    </div>
+  );
+}

@@ -1,0 +1,115 @@
+// Access cases for the gait page, versions, review steps, the comparison and the versions API.
+import { and, desc, eq } from "drizzle-orm";
+import { gaitVersions, gaits, type VersionState } from "../../../../db/schema";
+import { type DemoIds, type RouteCase, act, load } from "../../../support/access-matrix";
+import { commitDraft } from "~/lib/versions.server";
+import * as apiVersions from "~/routes/api.v1/gaits/versions";
+import * as compare from "~/routes/gaits/compare";
+import * as gaitPage from "~/routes/gaits/gait";
+import * as gaitList from "~/routes/gaits/list";
+import * as versionPage from "~/routes/gaits/version";
+
+// A gait without error flags, so approving needs no override reason.
+const GAIT = "Wave climb";
+
+type Db = Parameters<NonNullable<RouteCase["prepare"]>>[0];
+
+let counter = 0;
+const unique = (label: string) => `${label} ${Date.now().toString(36)}-${++counter}`;
+
+/** A fresh version of the gait by the animator, moved straight to `state` (reviewer: the lead). */
+async function versionIn(db: Db, ids: DemoIds, state: VersionState) {
+  const gaitId = ids.gaitIds[GAIT];
+  const version = await commitDraft({ userId: ids.userIds.animator, workspaceId: ids.workspaceId }, gaitId, unique("Matrix version"), db);
+  if (state !== "committed") await db.update(gaitVersions).set({ state, reviewerId: ids.userIds.lead }).where(eq(gaitVersions.id, version.id));
+  return { gaitId, number: String(version.number), versionId: version.id };
+}
+
+async function draftState(db: Db, ids: DemoIds) {
+  const gaitId = ids.gaitIds[GAIT];
+  const [gait] = await db.select({ draftRevision: gaits.draftRevision }).from(gaits).where(eq(gaits.id, gaitId));
+  const [first] = await db.select({ id: gaitVersions.id }).from(gaitVersions).where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.number, 1)));
+  return { gaitId, draftRevision: String(gait.draftRevision), versionId: first.id };
+}
+
+async function twoVersions(db: Db, ids: DemoIds) {
+  const rows = await db.select({ id: gaitVersions.id }).from(gaitVersions).where(eq(gaitVersions.gaitId, ids.gaitIds[GAIT])).orderBy(desc(gaitVersions.number)).limit(2);
+  return { a: rows[1].id, b: rows[0].id };
+}
+
+const versionStep = (intent: string, state: VersionState, fields: (ids: DemoIds) => Record<string, string> = () => ({})) =>
+  ({
+    route: "routes/gaits/version.tsx",
+    kind: "action",
+    prepare: (db, ids) => versionIn(db, ids, state),
+    run: (req, ids, { gaitId, number }) =>
+      req("POST", `/gaits/${gaitId}/versions/${number}`, { form: { intent, ...fields(ids) } }).then((r) => act(versionPage, r, { gaitId, number })),
+  }) satisfies Partial<RouteCase>;
+
+export const cases: RouteCase[] = [
+  {
+    name: "GET /gaits?robot=:robotId (one robot's gaits)",
+    route: "routes/gaits/list.tsx",
+    kind: "loader",
+    needs: "gaits.read",
+    run: (req, ids) => req("GET", `/gaits?robot=${ids.robotIds["Hull climber"]}`).then((r) => load(gaitList, r)),
+  },
+  {
+    name: "GET /gaits/:gaitId (versions, sorted and filtered)",
+    route: "routes/gaits/gait.tsx",
+    kind: "loader",
+    needs: "gaits.read",
+    run: (req, ids) => req("GET", `/gaits/${ids.gaitIds[GAIT]}?sort=margin&dir=asc&flags=clean`).then((r) => load(gaitPage, r, { gaitId: ids.gaitIds[GAIT] })),
+  },
+  {
+    name: "POST /gaits/:gaitId (commit the draft)",
+    route: "routes/gaits/gait.tsx",
+    kind: "action",
+    needs: "versions.commit",
+    run: (req, ids) =>
+      req("POST", `/gaits/${ids.gaitIds[GAIT]}`, { form: { intent: "commit", message: unique("Matrix commit") } }).then((r) => act(gaitPage, r, { gaitId: ids.gaitIds[GAIT] })),
+  },
+  {
+    name: "POST /gaits/:gaitId (start a new draft from a version)",
+    route: "routes/gaits/gait.tsx",
+    kind: "action",
+    needs: "gaits.edit",
+    prepare: draftState,
+    run: (req, _ids, { gaitId, versionId, draftRevision }) =>
+      req("POST", `/gaits/${gaitId}`, { form: { intent: "restore", versionId, draftRevision } }).then((r) => act(gaitPage, r, { gaitId })),
+  },
+  {
+    name: "GET /gaits/:gaitId/versions/:number",
+    route: "routes/gaits/version.tsx",
+    kind: "loader",
+    needs: "gaits.read",
+    run: (req, ids) => req("GET", `/gaits/${ids.gaitIds[GAIT]}/versions/1`).then((r) => load(versionPage, r, { gaitId: ids.gaitIds[GAIT], number: "1" })),
+  },
+  {
+    name: "POST /gaits/:gaitId/versions/:number (request review)",
+    needs: "versions.requestReview",
+    ...versionStep("request-review", "committed", (ids) => ({ reviewerId: ids.userIds.lead, comment: "Please look" })),
+  },
+  { name: "POST /gaits/:gaitId/versions/:number (approve)", needs: "versions.decide", ...versionStep("approve", "in-review") },
+  {
+    name: "POST /gaits/:gaitId/versions/:number (send back)",
+    needs: "versions.decide",
+    ...versionStep("send-back", "in-review", () => ({ comment: "Lift the rear legs higher" })),
+  },
+  { name: "POST /gaits/:gaitId/versions/:number (release)", needs: "versions.release", ...versionStep("release", "approved") },
+  {
+    name: "GET /gaits/compare?a=&b=",
+    route: "routes/gaits/compare.tsx",
+    kind: "loader",
+    needs: "gaits.read",
+    prepare: twoVersions,
+    run: (req, _ids, { a, b }) => req("GET", `/gaits/compare?a=${a}&b=${b}`).then((r) => load(compare, r)),
+  },
+  {
+    name: "GET /api/v1/gaits/:gaitId/versions",
+    route: "routes/api.v1/gaits/versions.ts",
+    kind: "loader",
+    needs: "gaits.read",
+    run: (req, ids) => req("GET", `/api/v1/gaits/${ids.gaitIds[GAIT]}/versions`).then((r) => load(apiVersions, r, { gaitId: ids.gaitIds[GAIT] })),
+  },
+];
