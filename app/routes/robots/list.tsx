@@ -1,21 +1,70 @@
+import { data, Link, redirect, useSearchParams } from "react-router";
 import type { Route } from "./+types/list";
 import { EmptyState } from "~/components/common/EmptyState";
 import { PageHeader } from "~/components/common/PageHeader";
-import { listRobots } from "~/lib/robots.server";
+import { AddRobotPanel, type AddPanel } from "~/components/robots/AddRobotPanels";
 import { requireAccess } from "~/lib/access.server";
+import { can } from "~/lib/permissions";
+import { addRobot, ADD_BODY_LIMIT_BYTES } from "~/lib/robots/add-robot.server";
+import { formatBytes } from "~/lib/robots/files";
+import { readFormWithin } from "~/lib/robots/form-body.server";
+import type { AddResult } from "~/lib/robots/results";
+import { listRobots } from "~/lib/robots.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const { workspace } = await requireAccess(request, "robots.read");
-  return { robots: await listRobots(workspace.id) };
+  const { workspace, role } = await requireAccess(request, "robots.read");
+  return { robots: await listRobots(workspace.id), canEdit: can(role, "robots.edit") };
+}
+
+export async function action({ request }: Route.ActionArgs) {
+  const member = await requireAccess(request, "robots.edit");
+  const body = await readFormWithin(request, ADD_BODY_LIMIT_BYTES);
+  if (!body.ok) {
+    const message = body.tooLarge
+      ? `The upload is ${formatBytes(body.bytes)}: a robot definition may be up to 256 KB and a URDF file up to 1 MB. Nothing was saved.`
+      : body.message;
+    return data<AddResult>({ ok: false, intent: null, message }, { status: body.tooLarge ? 413 : 400 });
+  }
+  const answer = await addRobot(body.form, member);
+  if ("redirectTo" in answer) throw redirect(answer.redirectTo);
+  return data<AddResult>(answer.result, { status: answer.status });
 }
 
 export const meta: Route.MetaFunction = () => [{ title: "Robots · Gaitloom" }];
 
-export default function RobotList({ loaderData }: Route.ComponentProps) {
-  const { robots } = loaderData;
+const PANELS: { panel: AddPanel; label: string }[] = [
+  { panel: "new", label: "New robot" },
+  { panel: "upload", label: "Upload definition" },
+  { panel: "urdf", label: "Import URDF" },
+];
+
+const panelOf = (value: string | null): AddPanel | null => (value === "new" || value === "upload" || value === "urdf" ? value : null);
+
+export default function RobotList({ loaderData, actionData }: Route.ComponentProps) {
+  const { robots, canEdit } = loaderData;
+  const [searchParams] = useSearchParams();
+  const open = panelOf(searchParams.get("add"));
   return (
     <>
-      <PageHeader title="Robots" lead="Each robot's legs, joint limits and servo wiring. Every save is kept as a revision." />
+      <PageHeader title="Robots" lead="Each robot's legs, joint limits and servo wiring. Every save is kept as a revision.">
+        {canEdit
+          ? PANELS.map(({ panel, label }) => (
+              <Link
+                key={panel}
+                to={open === panel ? "." : `?add=${panel}`}
+                aria-current={open === panel ? "true" : undefined}
+                className={`rounded-md border px-3 py-1.5 text-sm font-medium ${
+                  open === panel ? "border-accent bg-accent-soft text-accent-strong" : "border-line bg-surface hover:bg-sunken"
+                }`}
+              >
+                {label}
+              </Link>
+            ))
+          : null}
+      </PageHeader>
+      {canEdit && open ? (
+        <AddRobotPanel panel={open} robots={robots} result={actionData ?? null} />
+      ) : null}
       {robots.length === 0 ? (
         <EmptyState title="No robots yet">Add a robot by uploading its definition or importing a URDF file.</EmptyState>
       ) : (
@@ -31,7 +80,11 @@ export default function RobotList({ loaderData }: Route.ComponentProps) {
           <tbody>
             {robots.map((robot) => (
               <tr key={robot.id} className="border-b border-line last:border-0">
-                <td className="px-4 py-2 font-medium">{robot.name}</td>
+                <td className="px-4 py-2 font-medium">
+                  <Link to={`/robots/${robot.id}`} className="text-accent underline-offset-4 hover:underline">
+                    {robot.name}
+                  </Link>
+                </td>
                 <td className="px-4 py-2 text-right">{robot.legCount}</td>
                 <td className="px-4 py-2 text-right">{robot.latestRevision}</td>
                 <td className="px-4 py-2 text-right">{new Date(robot.updatedAt).toISOString().slice(0, 10)}</td>

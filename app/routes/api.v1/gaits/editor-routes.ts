@@ -1,4 +1,7 @@
 // Gait resource routes (editor-routes), spread into app/routes.ts under `api/v1` (outside the shell).
-import type { RouteConfigEntry } from "@react-router/dev/routes";
+import { route, type RouteConfigEntry } from "@react-router/dev/routes";
 
-export const editorApi: RouteConfigEntry[] = [];
+export const editorApi: RouteConfigEntry[] = [
+  // GET gaits.read: the working draft; PUT gaits.edit: save it with { sequence, baseRevision }
+  route("gaits/:gaitId/draft", "routes/api.v1/gaits/draft.ts"),
+];

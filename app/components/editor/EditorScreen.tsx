@@ -1,0 +1,96 @@
+// The gait editor on one screen, arranged for the job: the Timeline (gait
+// diagram) and the Robot view side by side get the most room, Playback and
+// Checks under the Timeline, then Key details, Joint plots and the template
+// parameters along the bottom.
+import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
+import { useCallback, useRef, useState } from "react";
+import type { Sequence } from "~/gait";
+import type { Robot } from "~/kinematics";
+import { EditorStoreProvider, useEditor } from "~/stores/editor-context";
+import { JointPlots } from "../joint-plots/JointPlots";
+import { KeyDetails } from "../key-details/KeyDetails";
+import { Timeline } from "../timeline/Timeline";
+import { ChecksList } from "./ChecksList";
+import { ConflictBanner, RestoreOffer } from "./DraftBanners";
+import { EditorHeader } from "./EditorHeader";
+import { GeneratorPanel } from "./GeneratorPanel";
+import { HelpDialog } from "./HelpDialog";
+import { PlaybackBar } from "./PlaybackBar";
+import { RobotViewPanel } from "./RobotViewPanel";
+import { useAutosave } from "./use-autosave";
+import { usePlayback } from "./use-playback";
+import { useServerReference } from "./use-server-reference";
+import { useShortcuts } from "./use-shortcuts";
+
+export type EditorScreenProps = {
+  gait: { id: string; name: string; robotId: string; robotName: string };
+  robot: Robot;
+  sequence: Sequence;
+  revision: number;
+  updatedAt: string;
+  robotRevision: number;
+  newestRobotRevision: number;
+  canEdit: boolean;
+  canCommit: boolean;
+};
+
+export function EditorScreen(props: EditorScreenProps) {
+  const [queryClient] = useState(() => new QueryClient());
+  return (
+    <QueryClientProvider client={queryClient}>
+      <EditorStoreProvider init={{ robot: props.robot, sequence: props.sequence, revision: props.revision, readOnly: !props.canEdit }}>
+        <EditorLayout {...props} />
+      </EditorStoreProvider>
+    </QueryClientProvider>
+  );
+}
+
+function Announcer() {
+  const notice = useEditor((state) => state.notice);
+  return (
+    <p role="status" aria-live="polite" data-testid="editor-notice" className={`min-h-5 text-sm ${notice?.tone === "error" ? "text-danger" : "text-ink-muted"}`}>
+      {notice ? (
+        <span key={notice.id}>
+          {notice.tone === "error" ? <span aria-hidden>▲ </span> : null}
+          {notice.text}
+        </span>
+      ) : null}
+    </p>
+  );
+}
+
+function EditorLayout(props: EditorScreenProps) {
+  const help = useRef<HTMLDialogElement>(null);
+  const openHelp = useCallback(() => help.current?.showModal(), []);
+  useShortcuts(openHelp);
+  usePlayback();
+  useAutosave(props.gait.id);
+  const reference = useServerReference(props.gait.id);
+  return (
+    <div className="space-y-3" data-testid="gait-editor">
+      <EditorHeader gait={props.gait} robotRevision={props.robotRevision} newestRobotRevision={props.newestRobotRevision} canCommit={props.canCommit} onHelp={openHelp} />
+      {props.canEdit ? null : (
+        <p className="rounded-md bg-sunken px-3 py-2 text-sm">
+          <span aria-hidden>ⓘ </span>You can look at every frame and its checks; your role cannot change gaits.
+        </p>
+      )}
+      <ConflictBanner gaitId={props.gait.id} gaitName={props.gait.name} robotRevision={props.robotRevision} />
+      <RestoreOffer gaitId={props.gait.id} serverSequence={props.sequence} serverUpdatedAt={props.updatedAt} />
+      <Announcer />
+      <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_24rem]">
+        <div className="min-w-0 space-y-3">
+          <Timeline />
+          <PlaybackBar />
+          <ChecksList reference={reference} />
+        </div>
+        <RobotViewPanel />
+      </div>
+      <div className="grid gap-3 lg:grid-cols-2 2xl:grid-cols-3">
+        <KeyDetails />
+        <JointPlots />
+        <GeneratorPanel />
+      </div>
+      <HelpDialog ref={help} />
+    </div>
+  );
+}

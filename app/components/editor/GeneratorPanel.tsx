@@ -1,0 +1,119 @@
+// The template and its parameters. Changing one regenerates the keys at once,
+// or after a confirmation when the keys hold hand edits that would be lost
+// (regenerating is one undo step either way). Body keys are kept.
+import { useMemo, useRef, useState } from "react";
+import type { GaitParams, TemplateName } from "~/gait";
+import { NumberField } from "~/components/key-details/NumberField";
+import { hasHandEdits } from "~/lib/editor/hand-edits";
+import { paramsOfSequence, suitableTemplates } from "~/lib/editor/templates";
+import { useEditor, useEditorStore } from "~/stores/editor-context";
+
+type NumberParam = "cycleMs" | "fps" | "strideMm" | "stepHeightMm" | "directionDeg" | "turnDegPerCycle" | "bodyHeightMm" | "dutyFactor";
+
+const FIELDS: { name: NumberParam; label: string; unit?: string; min?: number; max?: number; optional?: boolean; digits?: number }[] = [
+  { name: "cycleMs", label: "Cycle time", unit: "ms", min: 1, max: 600_000, digits: 0 },
+  { name: "fps", label: "Frame rate", unit: "frames/s", min: 1, max: 1000, digits: 0 },
+  { name: "strideMm", label: "Stride", unit: "mm" },
+  { name: "stepHeightMm", label: "Step height", unit: "mm", min: 0, max: 1000 },
+  { name: "directionDeg", label: "Direction", unit: "°" },
+  { name: "turnDegPerCycle", label: "Turn per cycle", unit: "°" },
+  { name: "bodyHeightMm", label: "Body height", unit: "mm", min: 1, optional: true },
+  { name: "dutyFactor", label: "Duty factor", min: 0.01, max: 0.99, optional: true, digits: 3 },
+];
+
+export function GeneratorPanel() {
+  const store = useEditorStore();
+  const robot = useEditor((state) => state.robot);
+  const sequence = useEditor((state) => state.sequence);
+  const readOnly = useEditor((state) => state.readOnly);
+  const templates = useMemo(() => suitableTemplates(robot), [robot]);
+  const current = useMemo(() => paramsOfSequence(sequence), [sequence]);
+  const [pending, setPending] = useState<GaitParams | null>(null);
+  // Kept keys put the typed value back: the fields start again from the sequence.
+  const [fieldsKey, setFieldsKey] = useState(0);
+  const confirm = useRef<HTMLDialogElement>(null);
+  const params: GaitParams = current ?? { template: templates[0]?.name ?? "wave", cycleMs: sequence.cycleMs, fps: sequence.fps };
+
+  const change = (next: GaitParams) => {
+    if (readOnly) return;
+    if (hasHandEdits(robot, sequence)) {
+      setPending(next);
+      confirm.current?.showModal();
+      return;
+    }
+    store.getState().regenerate(next);
+  };
+
+  return (
+    <section aria-labelledby="generator-title" className="rounded-lg border border-line bg-surface">
+      <header className="border-b border-line px-3 py-2">
+        <h2 id="generator-title" className="font-semibold">
+          Template and parameters
+        </h2>
+      </header>
+      <div className="grid gap-3 p-3">
+        <label className="flex flex-col text-xs text-ink-muted">
+          Template
+          <select
+            disabled={readOnly}
+            value={current ? params.template : ""}
+            onChange={(event) => change({ ...params, template: event.currentTarget.value as TemplateName, dutyFactor: undefined })}
+            className="rounded border border-line bg-surface px-1 py-1 text-sm text-ink"
+          >
+            {current ? null : <option value="">(none: hand-made keys)</option>}
+            {templates.map((template) => (
+              <option key={template.name} value={template.name}>
+                {template.label}
+              </option>
+            ))}
+          </select>
+        </label>
+        <div key={fieldsKey} className="grid grid-cols-2 gap-2 sm:grid-cols-4 lg:grid-cols-2 2xl:grid-cols-4">
+          {FIELDS.map((field) => (
+            <NumberField
+              key={field.name}
+              label={field.label}
+              unit={field.unit}
+              value={params[field.name] as number | undefined}
+              placeholder={field.name === "bodyHeightMm" ? String(robot.standHeight) : field.name === "dutyFactor" ? "template's" : undefined}
+              optional={field.optional}
+              digits={field.digits ?? 1}
+              min={field.min}
+              max={field.max}
+              disabled={readOnly}
+              width="w-24"
+              onCommit={(value) => change({ ...params, [field.name]: value })}
+            />
+          ))}
+        </div>
+        <p className="text-xs text-ink-muted">A change writes new keys from the template; hand edits are asked about first, and Undo brings them back.</p>
+      </div>
+      <dialog ref={confirm} aria-labelledby="regenerate-title" className="m-auto w-[28rem] max-w-[95vw] rounded-lg border border-line bg-surface p-5 text-ink shadow-xl backdrop:bg-ink/40" onClose={() => {
+          setPending(null);
+          setFieldsKey((value) => value + 1);
+        }}>
+        <h2 id="regenerate-title" className="text-lg font-semibold">
+          Replace the hand-edited keys?
+        </h2>
+        <p className="mt-2 text-sm">
+          The keys differ from what the {params.template} template writes. Regenerating with the new parameters replaces every leg key (body keys stay). You can undo it.
+        </p>
+        <form method="dialog" className="mt-4 flex justify-end gap-2">
+          <button type="submit" value="keep" className="rounded-md border border-line px-3 py-1.5 hover:bg-sunken">
+            Keep my keys
+          </button>
+          <button
+            type="submit"
+            value="replace"
+            className="rounded-md bg-danger px-3 py-1.5 font-medium text-surface hover:opacity-90"
+            onClick={() => {
+              if (pending) store.getState().regenerate(pending);
+            }}
+          >
+            Replace them
+          </button>
+        </form>
+      </dialog>
+    </section>
+  );
+}

@@ -1,0 +1,6 @@
+// The robot views, shared by the robot page and the gait editor.
+export { RobotViews, groundRings, type RobotViewsProps } from "./RobotViews";
+export { TopView, type TopViewProps } from "./TopView";
+export { SideView, type SideViewProps } from "./SideView";
+export { legPoints, legPostures, type LegPoints, type LegPosture } from "./leg-postures";
+export { legBackground, legFill, legStroke } from "./leg-colours";

@@ -1,0 +1,51 @@
+// Route parameters and form fields of the robot routes, checked with zod.
+import { z } from "zod";
+import { STARTER_LEG_COUNTS } from "./starter";
+
+export const robotParams = z.object({
+  robotId: z.guid({ error: (issue) => `robotId must be a UUID (got ${JSON.stringify(issue.input)})` }),
+});
+
+export const revisionParams = robotParams.extend({
+  number: z
+    .string()
+    .regex(/^[1-9][0-9]{0,8}$/, { error: (issue) => `the revision number must be a whole number from 1 (got ${JSON.stringify(issue.input)})` })
+    .transform(Number),
+});
+
+export const saveForm = z.object({
+  intent: z.literal("save", { error: (issue) => `intent must be "save" (got ${JSON.stringify(issue.input ?? null)})` }),
+  baseRevision: z
+    .string({ error: "baseRevision is required: the revision the edits started from" })
+    .regex(/^[1-9][0-9]{0,8}$/, { error: (issue) => `baseRevision must be a revision number (got ${JSON.stringify(issue.input)})` })
+    .transform(Number),
+  definition: z.string({ error: "definition is required: the robot definition as JSON" }).min(1, "definition must not be empty"),
+  message: z.string().max(500, "message must be at most 500 characters").optional().default(""),
+});
+
+export const robotName = z.string().trim().min(1, "give the robot a name").max(120, "the name must be at most 120 characters");
+
+export const createForm = z.object({
+  intent: z.literal("create"),
+  name: robotName,
+  source: z.union(
+    [
+      z.templateLiteral(["starter-", z.enum(STARTER_LEG_COUNTS.map(String) as ["4", "6", "8"])]),
+      z.templateLiteral(["robot-", z.guid()]),
+    ],
+    { error: "choose what the new robot starts from" },
+  ),
+});
+
+export const optionalName = z
+  .string()
+  .trim()
+  .max(120, "the name must be at most 120 characters")
+  .optional()
+  .transform((value) => (value ? value : undefined));
+
+/** The first problem of a failed zod parse, as one sentence. */
+export function firstProblem(error: z.ZodError): string {
+  const issue = error.issues[0];
+  return issue ? issue.message : "the request is not valid";
+}

@@ -1,0 +1,57 @@
+// GET /api/v1/gaits/:gaitId/draft → the working draft and its revision.
+// PUT /api/v1/gaits/:gaitId/draft { sequence, baseRevision } → { revision, updatedAt };
+// 409 when someone saved since baseRevision, 422 with issues when the sequence
+// is invalid or does not fit the robot. Nothing is saved on either refusal.
+import { z } from "zod";
+import type { Route } from "./+types/draft";
+import { requireApiAccess } from "~/lib/access.server";
+import { apiError, readJsonBody } from "~/lib/api.server";
+import { DRAFT_BODY_LIMIT_BYTES, DraftConflict, DraftInvalid, readDraft, saveDraft, type DraftContext } from "~/lib/drafts.server";
+import { apiAction } from "~/lib/errors.server";
+
+const gaitParams = z.object({ gaitId: z.guid({ error: (issue) => `gaitId must be a UUID (got ${JSON.stringify(issue.input)})` }) });
+
+function gaitIdOf(params: unknown): string {
+  const parsed = gaitParams.safeParse(params);
+  if (!parsed.success) throw apiError(400, "bad_request", parsed.error.issues[0].message);
+  return parsed.data.gaitId;
+}
+
+export const draftJson = (draft: DraftContext) => ({
+  gaitId: draft.gaitId,
+  name: draft.gait.name,
+  revision: draft.revision,
+  updatedAt: draft.updatedAt,
+  updatedBy: draft.updatedBy,
+  robot: { id: draft.gait.robotId, name: draft.gait.robotName, revision: draft.robotRevision.number, newestRevision: draft.newestRobotRevision.number },
+  sequence: draft.sequence,
+});
+
+const noStore = { "Cache-Control": "no-store" };
+
+/** Refusals with details (the conflicting revision, the sequence's issues) keep them; other refusals as usual. */
+function draftAction(run: () => Promise<Response>) {
+  return apiAction(async () => {
+    try {
+      return await run();
+    } catch (error) {
+      if (error instanceof DraftConflict) return apiError(409, "conflict", error.message, error.details);
+      if (error instanceof DraftInvalid) return apiError(422, "invalid", error.message, error.issues);
+      throw error;
+    }
+  });
+}
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const { workspace } = await requireApiAccess(request, "gaits.read");
+  const gaitId = gaitIdOf(params);
+  return draftAction(async () => Response.json(draftJson(await readDraft(workspace.id, gaitId)), { headers: noStore }));
+}
+
+export async function action({ request, params }: Route.ActionArgs) {
+  if (request.method !== "PUT") return apiError(400, "bad_request", "Use PUT with a JSON body { sequence, baseRevision }.");
+  const { user, workspace } = await requireApiAccess(request, "gaits.edit");
+  const gaitId = gaitIdOf(params);
+  const body = await readJsonBody(request, DRAFT_BODY_LIMIT_BYTES);
+  return draftAction(async () => Response.json(await saveDraft({ userId: user.id, workspaceId: workspace.id }, gaitId, body), { headers: noStore }));
+}

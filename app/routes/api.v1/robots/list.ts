@@ -1,0 +1,19 @@
+// GET /api/v1/robots: the workspace's robots with their newest revision.
+import type { Route } from "./+types/list";
+import { requireApiAccess } from "~/lib/access.server";
+import { listRobots } from "~/lib/robots.server";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const { workspace } = await requireApiAccess(request, "robots.read");
+  const robots = await listRobots(workspace.id);
+  return Response.json({
+    robots: robots.map((robot) => ({
+      id: robot.id,
+      name: robot.name,
+      legCount: robot.legCount,
+      latestRevision: robot.latestRevision,
+      updatedAt: robot.updatedAt.toISOString(),
+      url: `/api/v1/robots/${robot.id}`,
+    })),
+  });
+}

@@ -1,0 +1,28 @@
+// GET /api/v1/robots/:robotId: the newest definition and the list of revisions.
+import type { Route } from "./+types/robot";
+import { apiError } from "~/lib/api.server";
+import { requireApiAccess } from "~/lib/access.server";
+import { robotParams } from "~/lib/robots/params";
+import { getRobot, type RevisionSummary } from "~/lib/robots.server";
+
+export const revisionJson = (revision: RevisionSummary) => ({
+  number: revision.number,
+  message: revision.message,
+  author: revision.author,
+  createdAt: revision.createdAt.toISOString(),
+});
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const { workspace } = await requireApiAccess(request, "robots.read");
+  const parsed = robotParams.safeParse(params);
+  if (!parsed.success) throw apiError(400, "bad_request", parsed.error.issues[0].message);
+  const robot = await getRobot(workspace.id, parsed.data.robotId);
+  if (!robot) throw apiError(404, "not_found", `No robot ${parsed.data.robotId} in this workspace.`);
+  return Response.json({
+    id: robot.id,
+    name: robot.name,
+    createdAt: robot.createdAt.toISOString(),
+    latest: { ...revisionJson(robot.latest), definition: robot.latest.definition },
+    revisions: robot.revisions.map(revisionJson),
+  });
+}

@@ -1,0 +1,263 @@
+// /export: a gait version's angle table for firmware — choose the version
+// (the released one by default), format, units, rate and calibration profile;
+// preview the rows; download it; copy the command for the build script.
+import { Form, Link, useNavigation, useSubmit } from "react-router";
+import type { Route } from "./+types/page";
+import { ErrorPanel } from "~/components/common/ErrorPanel";
+import { EmptyState } from "~/components/common/EmptyState";
+import { PageHeader } from "~/components/common/PageHeader";
+import { CopyCommand } from "~/components/export/CopyCommand";
+import { SafetyNotice } from "~/components/export/SafetyNotice";
+import { TableFacts } from "~/components/export/TableFacts";
+import { TablePreview } from "~/components/export/TablePreview";
+import { requireAccess } from "~/lib/access.server";
+import { config } from "~/lib/config.server";
+import { listGaits } from "~/lib/gaits.server";
+import { can } from "~/lib/permissions";
+import { exportPageData } from "./page-data.server";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const member = await requireAccess(request, "tables.download");
+  const gaits = await listGaits(member.workspace.id);
+  const page = await exportPageData(member.workspace.id, new URL(request.url).searchParams, config().publicUrl, gaits);
+  return { ...page, canCalibrate: can(member.role, "robots.calibrate") };
+}
+
+export const meta: Route.MetaFunction = () => [{ title: "Export an angle table · Gaitloom" }];
+
+const STATE_WORDS: Record<string, string> = {
+  committed: "committed",
+  "in-review": "in review",
+  "sent-back": "sent back",
+  approved: "approved",
+  released: "released",
+  retired: "retired",
+};
+
+const field = "mt-1 w-full rounded-md border border-line bg-surface px-3 py-2";
+const label = "block text-sm font-medium";
+
+export default function ExportPage({ loaderData }: Route.ComponentProps) {
+  const { gaits, gait, version, versions, profiles, query, problem, table, download, release, sequence } = loaderData;
+  const submit = useSubmit();
+  const navigation = useNavigation();
+  const busy = navigation.state === "loading" && navigation.location?.pathname === "/export";
+  if (!gait) {
+    return (
+      <>
+        <PageHeader title="Export an angle table" />
+        <EmptyState title="No committed versions yet">Commit a version of a gait first; its table can then be exported here.</EmptyState>
+      </>
+    );
+  }
+  const onChange = (event: React.FormEvent<HTMLFormElement>) => {
+    const target = event.target as HTMLInputElement | HTMLSelectElement;
+    // Text fields wait for Enter or the button; choices show their table at once.
+    if (target.tagName !== "SELECT") return;
+    const form = new FormData(event.currentTarget);
+    // Another gait starts from its own released version, without the old gait's profile.
+    const dropped = target.name === "gait" ? ["version", "profile"] : [];
+    const search = new URLSearchParams();
+    for (const [key, value] of form) if (typeof value === "string" && value !== "" && !dropped.includes(key)) search.set(key, value);
+    submit(search, { method: "get", replace: true, preventScrollReset: true });
+  };
+  return (
+    <>
+      <PageHeader title="Export an angle table" lead="Per-frame joint angles in servo-channel order, for the firmware to play back.">
+        <Link to="/export/bring-up" className="rounded-md border border-line px-3 py-2 text-sm hover:bg-sunken">
+          Bring-up tables
+        </Link>
+        <Link to="/api-docs" className="rounded-md border border-line px-3 py-2 text-sm hover:bg-sunken">
+          API
+        </Link>
+      </PageHeader>
+      <SafetyNotice />
+      <Form method="get" onChange={onChange} className="grid grid-cols-2 gap-4 rounded-lg border border-line bg-surface p-5 lg:grid-cols-4" aria-label="Table options">
+        <div className="col-span-2">
+          <label htmlFor="export-gait" className={label}>
+            Gait
+          </label>
+          <select id="export-gait" name="gait" defaultValue={gait.id} key={`gait-${gait.id}`} className={field}>
+            {gaits.map((entry) => (
+              <option key={entry.id} value={entry.id}>
+                {entry.name} — {entry.robotName}
+                {entry.releasedVersion !== null ? ` (released v${entry.releasedVersion})` : ""}
+              </option>
+            ))}
+          </select>
+        </div>
+        <div className="col-span-2">
+          <label htmlFor="export-version" className={label}>
+            Version
+          </label>
+          <select id="export-version" name="version" defaultValue={String(version)} key={`version-${gait.id}-${version}`} className={field}>
+            {gait.releasedVersion !== null ? <option value="released">Released (currently v{gait.releasedVersion}) — for build scripts</option> : null}
+            {versions.map((entry) => (
+              <option key={entry.number} value={entry.number}>
+                v{entry.number} · {STATE_WORDS[entry.state]} · {entry.errors} errors, {entry.warnings} warnings — {entry.message}
+              </option>
+            ))}
+          </select>
+        </div>
+        <div>
+          <label htmlFor="export-format" className={label}>
+            Format
+          </label>
+          <select id="export-format" name="format" defaultValue={query.format} key={`format-${query.format}`} className={field}>
+            <option value="csv">CSV</option>
+            <option value="json">JSON (with metadata)</option>
+            <option value="c">C header</option>
+          </select>
+        </div>
+        <div>
+          <label htmlFor="export-units" className={label}>
+            Units
+          </label>
+          <select id="export-units" name="units" defaultValue={query.units} key={`units-${query.units}`} className={field}>
+            <option value="deg">Degrees (0.1°)</option>
+            <option value="rad">Radians (0.0001 rad)</option>
+            <option value="us">Pulse widths (µs)</option>
+          </select>
+        </div>
+        <div>
+          <label htmlFor="export-rate" className={label}>
+            Rate (frames/s)
+          </label>
+          <input
+            id="export-rate"
+            name="rate"
+            type="number"
+            min="0.1"
+            max="1000"
+            step="any"
+            defaultValue={query.rate ?? ""}
+            placeholder={sequence ? `${sequence.fps} (its own)` : ""}
+            aria-describedby="rate-help"
+            aria-invalid={problem?.parameter === "rate" || undefined}
+            className={`${field} text-right`}
+          />
+          <p id="rate-help" className="mt-1 text-xs text-ink-muted">
+            Another rate solves the gait again; nothing is interpolated.
+          </p>
+        </div>
+        <div>
+          <label htmlFor="export-profile" className={label}>
+            Calibration profile
+          </label>
+          <select
+            id="export-profile"
+            name="profile"
+            defaultValue={query.profile ?? ""}
+            key={`profile-${gait.id}-${query.profile}`}
+            className={field}
+            aria-invalid={problem?.parameter === "profile" || undefined}
+          >
+            <option value="">None — the robot definition</option>
+            {profiles.map((entry) => (
+              <option key={entry.name} value={entry.name}>
+                {entry.name} (revision {entry.revision})
+              </option>
+            ))}
+          </select>
+          <Link to={`/export/calibration/${gait.robotId}`} className="mt-1 block text-xs text-accent underline underline-offset-2">
+            {loaderData.canCalibrate ? "Edit" : "See"} the calibration profiles of {gait.robotName}
+          </Link>
+        </div>
+        <div className={`col-span-2 lg:col-span-3 ${problem?.needsOverride ? "rounded-md bg-danger-soft p-2" : ""}`}>
+          <label htmlFor="export-override" className={label}>
+            Override reason
+          </label>
+          <input
+            id="export-override"
+            name="override"
+            type="text"
+            maxLength={1000}
+            defaultValue={query.override ?? ""}
+            autoFocus={problem?.needsOverride}
+            aria-invalid={problem?.needsOverride || undefined}
+            aria-describedby="override-help"
+            placeholder="e.g. bench test with the legs free, the support flags do not apply"
+            className={field}
+          />
+          <p id="override-help" className="mt-1 text-xs text-ink-muted">
+            Only for a version with error flags or clamped pulses; written into the table's header and the audit log.
+          </p>
+        </div>
+        <div className="flex items-end">
+          <button type="submit" className="w-full rounded-md border border-line px-4 py-2 font-medium hover:bg-sunken">
+            {busy ? "Making the table…" : "Show the table"}
+          </button>
+        </div>
+      </Form>
+
+      {problem ? (
+        <div role="alert" className="mt-4 rounded-md border border-danger bg-danger-soft px-4 py-3 text-danger">
+          <p className="flex gap-2 font-medium">
+            <span aria-hidden="true">✕</span>
+            {problem.message}
+          </p>
+          {problem.issues.length > 0 && !problem.needsOverride ? (
+            <ul className="mt-1 list-disc pl-8 text-sm">
+              {problem.issues.slice(0, 10).map((issue) => (
+                <li key={`${issue.path}:${issue.message}`}>
+                  <code className="font-mono">{issue.path}</code>: {issue.message}
+                </li>
+              ))}
+            </ul>
+          ) : null}
+        </div>
+      ) : null}
+
+      {table && download ? (
+        <div className="mt-6 grid gap-6 xl:grid-cols-[minmax(0,1fr)_24rem]">
+          <section aria-labelledby="preview-heading" className={`min-w-0 ${busy ? "opacity-60" : ""}`}>
+            <div className="mb-2 flex items-center justify-between gap-3">
+              <h2 id="preview-heading" className="text-lg font-semibold">
+                Preview
+              </h2>
+              <a
+                href={download.path}
+                download={download.fileName}
+                className="rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover:bg-accent-strong"
+              >
+                Download {download.fileName}
+              </a>
+            </div>
+            <TablePreview preview={table.preview} />
+          </section>
+          <aside className="space-y-4">
+            <section aria-labelledby="facts-heading" className="rounded-lg border border-line bg-surface p-4">
+              <h2 id="facts-heading" className="mb-2 font-semibold">
+                In the table's header
+              </h2>
+              <TableFacts facts={table.facts} />
+            </section>
+            {release ? (
+              <section aria-labelledby="release-heading" className="rounded-lg border border-line bg-surface p-4 text-sm">
+                <h2 id="release-heading" className="mb-1 font-semibold">
+                  Release record
+                </h2>
+                <p>
+                  Released table <code className="font-mono text-xs break-all">{release.tableSha256}</code>, made with exporter {release.exporterVersion} and solver{" "}
+                  {release.solverVersion} from <code className="font-mono text-xs">{release.tableFormat}</code>.
+                </p>
+                {release.matches === true ? <p className="mt-1 text-ok">✓ This table is the released one, byte for byte.</p> : null}
+                {release.matches === false ? <p className="mt-1 text-danger">✕ This table differs from the released one: the exporter or solver changed since.</p> : null}
+                {release.matches === null ? (
+                  <a href={release.path} className="mt-1 inline-block text-accent underline underline-offset-2">
+                    Download the released table as recorded
+                  </a>
+                ) : null}
+              </section>
+            ) : null}
+            <CopyCommand command={download.command} />
+          </aside>
+        </div>
+      ) : null}
+    </>
+  );
+}
+
+export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
+  return <ErrorPanel error={error} />;
+}

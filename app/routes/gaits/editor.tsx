@@ -1,0 +1,92 @@
+// /gaits/:gaitId/edit: the gait editor on the working draft. Everyone who may
+// read gaits sees it (read-only without gaits.edit); saving goes through
+// PUT /api/v1/gaits/:gaitId/draft, committing posts to /gaits/:gaitId.
+import { data } from "react-router";
+import { z } from "zod";
+import type { Route } from "./+types/editor";
+import { ErrorPanel } from "~/components/common/ErrorPanel";
+import { EditorScreen } from "~/components/editor/EditorScreen";
+import { requireAccess } from "~/lib/access.server";
+import { DraftInvalid, moveDraftToNewestRobot, readDraft } from "~/lib/drafts.server";
+import { ServiceError, formAction, type FormError } from "~/lib/errors.server";
+import { can } from "~/lib/permissions";
+
+const gaitParams = z.object({ gaitId: z.guid({ error: "There is no gait at this address." }) });
+
+function gaitIdOf(params: unknown): string {
+  const parsed = gaitParams.safeParse(params);
+  if (!parsed.success) throw data({ message: parsed.error.issues[0].message }, { status: 404 });
+  return parsed.data.gaitId;
+}
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const { workspace, role } = await requireAccess(request, "gaits.read");
+  const gaitId = gaitIdOf(params);
+  try {
+    const draft = await readDraft(workspace.id, gaitId);
+    return {
+      gait: draft.gait,
+      robot: draft.robot,
+      sequence: draft.sequence,
+      revision: draft.revision,
+      updatedAt: draft.updatedAt,
+      updatedBy: draft.updatedBy,
+      robotRevision: draft.robotRevision,
+      newestRobotRevision: draft.newestRobotRevision,
+      can: { edit: can(role, "gaits.edit"), commit: can(role, "versions.commit") },
+    };
+  } catch (error) {
+    if (error instanceof ServiceError) throw data({ message: error.message }, { status: error.status });
+    throw error;
+  }
+}
+
+const moveForm = z.object({
+  intent: z.literal("move-to-newest-robot", { error: "Unknown request." }),
+  baseRevision: z.coerce.number({ error: "baseRevision must be the draft revision" }).int().min(0),
+});
+
+export async function action({ request, params }: Route.ActionArgs) {
+  const { user, workspace } = await requireAccess(request, "gaits.edit");
+  const gaitId = gaitIdOf(params);
+  const parsed = moveForm.safeParse(Object.fromEntries(await request.formData()));
+  if (!parsed.success) return data<FormError>({ error: parsed.error.issues[0].message }, { status: 400 });
+  return formAction(async () => {
+    try {
+      const moved = await moveDraftToNewestRobot({ userId: user.id, workspaceId: workspace.id }, gaitId, parsed.data.baseRevision);
+      return { ok: true as const, ...moved };
+    } catch (error) {
+      if (error instanceof DraftInvalid) return data<FormError>({ error: error.message }, { status: 422 });
+      throw error;
+    }
+  });
+}
+
+export const meta: Route.MetaFunction = ({ data: loaded }) => [{ title: `${loaded?.gait.name ?? "Gait"} · Editor · Gaitloom` }];
+
+export default function GaitEditor({ loaderData }: Route.ComponentProps) {
+  const { gait, robot, sequence, revision, updatedAt, robotRevision, newestRobotRevision, can: allowed } = loaderData;
+  return (
+    // A new robot revision is a new robot: the editor starts afresh on it.
+    <EditorScreen
+      key={robotRevision.id}
+      gait={gait}
+      robot={robot}
+      sequence={sequence}
+      revision={revision}
+      updatedAt={updatedAt}
+      robotRevision={robotRevision.number}
+      newestRobotRevision={newestRobotRevision.number}
+      canEdit={allowed.edit}
+      canCommit={allowed.commit}
+    />
+  );
+}
+
+export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
+  return (
+    <div className="mx-auto max-w-2xl py-10">
+      <ErrorPanel error={error} />
+    </div>
+  );
+}

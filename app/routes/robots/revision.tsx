@@ -1,0 +1,104 @@
+import { data, Form, Link, redirect, useNavigation } from "react-router";
+import type { Route } from "./+types/revision";
+import { ErrorPanel } from "~/components/common/ErrorPanel";
+import { PageHeader } from "~/components/common/PageHeader";
+import { formatTime, RevisionHistory } from "~/components/robots/RevisionHistory";
+import { RobotEditor } from "~/components/robots/RobotEditor";
+import { requireAccess } from "~/lib/access.server";
+import { can } from "~/lib/permissions";
+import { readFormWithin } from "~/lib/robots/form-body.server";
+import { revisionParams } from "~/lib/robots/params";
+import type { SaveResult } from "~/lib/robots/results";
+import { restoreAnswer } from "~/lib/robots/save-robot.server";
+import { getRevision, getRobot } from "~/lib/robots.server";
+
+const notFound = () => data({ message: "There is no such robot revision in your workspace." }, { status: 404 });
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const { workspace, role } = await requireAccess(request, "robots.read");
+  const parsed = revisionParams.safeParse(params);
+  if (!parsed.success) throw notFound();
+  const [found, robot] = await Promise.all([
+    getRevision(workspace.id, parsed.data.robotId, parsed.data.number),
+    getRobot(workspace.id, parsed.data.robotId),
+  ]);
+  if (!found || !robot) throw notFound();
+  return { robot: found.robot, revision: found.revision, latestNumber: found.latestNumber, revisions: robot.revisions, canRestore: can(role, "robots.calibrate") };
+}
+
+export async function action({ request, params }: Route.ActionArgs) {
+  const member = await requireAccess(request, "robots.calibrate");
+  const parsed = revisionParams.safeParse(params);
+  if (!parsed.success) return data<SaveResult>({ ok: false, code: "not-found", message: "There is no such robot revision in your workspace." }, { status: 404 });
+  const body = await readFormWithin(request, 16 * 1024);
+  if (!body.ok) return data<SaveResult>({ ok: false, code: body.tooLarge ? "too-large" : "bad-request", message: body.tooLarge ? "The request is too large." : body.message }, { status: body.tooLarge ? 413 : 400 });
+  if (body.form.get("intent") !== "restore") {
+    return data<SaveResult>({ ok: false, code: "bad-request", message: `Unknown intent ${JSON.stringify(body.form.get("intent"))}: expected "restore".` }, { status: 400 });
+  }
+  const answer = await restoreAnswer(body.form, { member, robotId: parsed.data.robotId, number: parsed.data.number });
+  if (answer.result.ok) throw redirect(`/robots/${parsed.data.robotId}`);
+  return data<SaveResult>(answer.result, { status: answer.status });
+}
+
+export const meta: Route.MetaFunction = ({ loaderData }) => [
+  { title: loaderData ? `${loaderData.robot.name}, revision ${loaderData.revision.number} · Gaitloom` : "Robot revision · Gaitloom" },
+];
+
+export default function RevisionPage({ loaderData, actionData }: Route.ComponentProps) {
+  const { robot, revision, latestNumber, revisions, canRestore } = loaderData;
+  const navigation = useNavigation();
+  const restoring = navigation.state === "submitting" && navigation.formData?.get("intent") === "restore";
+  const newest = revision.number === latestNumber;
+  return (
+    <>
+      <PageHeader
+        title={`${robot.name}, revision ${revision.number}`}
+        lead={`Saved ${formatTime(revision.createdAt)}${revision.author ? ` by ${revision.author.name}` : ""}: ${revision.message || "(no message)"}`}
+      >
+        <Link to={`/robots/${robot.id}`} className="rounded-md border border-line bg-surface px-3 py-1.5 text-sm font-medium hover:bg-sunken">
+          Back to the robot
+        </Link>
+        <a
+          href={`/robots/${robot.id}/revisions/${revision.number}/download`}
+          download
+          className="rounded-md border border-line bg-surface px-3 py-1.5 text-sm font-medium hover:bg-sunken"
+        >
+          Download JSON
+        </a>
+      </PageHeader>
+      <div className="mb-4 flex flex-wrap items-center gap-3 rounded-lg border border-line bg-sunken px-4 py-3 text-sm">
+        <span>{newest ? "This is the newest revision." : `An old revision, read only. The newest is revision ${latestNumber}.`}</span>
+        {canRestore && !newest ? (
+          <Form method="post">
+            <input type="hidden" name="intent" value="restore" />
+            <input type="hidden" name="baseRevision" value={latestNumber} />
+            <button type="submit" disabled={restoring} className="rounded-md bg-accent px-3 py-1 font-medium text-on-accent hover:bg-accent-strong disabled:opacity-50">
+              {restoring ? "Restoring…" : `Restore as revision ${latestNumber + 1}`}
+            </button>
+          </Form>
+        ) : null}
+      </div>
+      {actionData && !actionData.ok ? (
+        <p role="alert" className="mb-4 rounded-md border border-danger bg-danger-soft p-3 text-sm text-danger">
+          <span aria-hidden>⚠ </span>
+          {actionData.message}
+        </p>
+      ) : null}
+      <RobotEditor key={revision.number} robotId={robot.id} initial={revision.definition} baseRevision={latestNumber} mode="read" />
+      <section className="mt-10 space-y-2" aria-labelledby="revision-history">
+        <h2 id="revision-history" className="text-lg font-semibold">
+          Revision history
+        </h2>
+        <RevisionHistory robotId={robot.id} revisions={revisions} current={revision.number} />
+      </section>
+    </>
+  );
+}
+
+export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
+  return (
+    <div className="mx-auto max-w-2xl py-10">
+      <ErrorPanel error={error} />
+    </div>
+  );
+}

@@ -1,0 +1,81 @@
+import { data, useFetcher } from "react-router";
+import type { Route } from "./+types/robot";
+import { ErrorPanel } from "~/components/common/ErrorPanel";
+import { PageHeader } from "~/components/common/PageHeader";
+import { formatTime, RevisionHistory } from "~/components/robots/RevisionHistory";
+import { RobotEditor } from "~/components/robots/RobotEditor";
+import { requireAccess } from "~/lib/access.server";
+import { can } from "~/lib/permissions";
+import { readFormWithin } from "~/lib/robots/form-body.server";
+import { robotParams } from "~/lib/robots/params";
+import type { SaveResult } from "~/lib/robots/results";
+import { saveAnswer, SAVE_BODY_LIMIT_BYTES } from "~/lib/robots/save-robot.server";
+import { getRobot } from "~/lib/robots.server";
+
+const notFound = () => data({ message: "There is no robot at this address in your workspace." }, { status: 404 });
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const { workspace, role } = await requireAccess(request, "robots.read");
+  const parsed = robotParams.safeParse(params);
+  if (!parsed.success) throw notFound();
+  const robot = await getRobot(workspace.id, parsed.data.robotId);
+  if (!robot) throw notFound();
+  return {
+    robot,
+    mode: can(role, "robots.edit") ? ("edit" as const) : can(role, "robots.calibrate") ? ("calibrate" as const) : ("read" as const),
+  };
+}
+
+export async function action({ request, params }: Route.ActionArgs) {
+  const member = await requireAccess(request, "robots.calibrate");
+  const parsed = robotParams.safeParse(params);
+  if (!parsed.success) return data<SaveResult>({ ok: false, code: "not-found", message: "There is no robot at this address in your workspace." }, { status: 404 });
+  const body = await readFormWithin(request, SAVE_BODY_LIMIT_BYTES);
+  const answer = await saveAnswer(body, { member, robotId: parsed.data.robotId });
+  return data<SaveResult>(answer.result, { status: answer.status });
+}
+
+export const meta: Route.MetaFunction = ({ loaderData }) => [{ title: `${loaderData?.robot.name ?? "Robot"} · Robots · Gaitloom` }];
+
+export default function RobotPage({ loaderData }: Route.ComponentProps) {
+  const { robot, mode } = loaderData;
+  const latest = robot.latest;
+  const saveFetcher = useFetcher<typeof action>();
+  return (
+    <>
+      <PageHeader
+        title={robot.name}
+        lead={`Revision ${latest.number}, saved ${formatTime(latest.createdAt)}${latest.author ? ` by ${latest.author.name}` : ""}. ${latest.definition.legs.length} legs.`}
+      >
+        <a
+          href={`/robots/${robot.id}/revisions/${latest.number}/download`}
+          download
+          className="rounded-md border border-line bg-surface px-3 py-1.5 text-sm font-medium hover:bg-sunken"
+        >
+          Download JSON
+        </a>
+      </PageHeader>
+      {mode === "read" ? (
+        <p className="mb-4 rounded-lg border border-line bg-sunken px-4 py-3 text-sm text-ink-muted">
+          You can read this robot; your role cannot change it.
+        </p>
+      ) : null}
+      {/* A new revision (our save or someone else's, on reload) starts a fresh working copy. */}
+      <RobotEditor key={latest.number} robotId={robot.id} initial={latest.definition} baseRevision={latest.number} mode={mode} saveFetcher={saveFetcher} />
+      <section className="mt-10 space-y-2" aria-labelledby="revision-history">
+        <h2 id="revision-history" className="text-lg font-semibold">
+          Revision history
+        </h2>
+        <RevisionHistory robotId={robot.id} revisions={robot.revisions} current={latest.number} />
+      </section>
+    </>
+  );
+}
+
+export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
+  return (
+    <div className="mx-auto max-w-2xl py-10">
+      <ErrorPanel error={error} />
+    </div>
+  );
+}

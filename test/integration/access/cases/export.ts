@@ -1,0 +1,89 @@
+// Access cases for the export feature: angle and bench tables, calibration
+// profiles (pages and API), the export and bring-up pages, the OpenAPI
+// document, the public schemas and the API page.
+import { type RouteCase, act, load } from "../../../support/access-matrix";
+import * as benchTable from "~/routes/api.v1/export/bench-table";
+import * as calibrationProfiles from "~/routes/api.v1/export/calibration-profiles";
+import * as calibrationSchema from "~/routes/api.v1/export/calibration-schema";
+import * as openapi from "~/routes/api.v1/export/openapi";
+import * as sequenceSchema from "~/routes/api.v1/export/sequence-schema";
+import * as table from "~/routes/api.v1/export/table";
+import * as apiDocs from "~/routes/export/api-docs";
+import * as bringUp from "~/routes/export/bring-up";
+import * as calibration from "~/routes/export/calibration";
+import * as calibrationList from "~/routes/export/calibration-list";
+import * as exportPage from "~/routes/export/page";
+
+const GAIT = "Tripod cruise";
+const ROBOT = "Pier crawler";
+
+let counter = 0;
+const unique = (label: string) => `${label} ${Date.now().toString(36)}-${++counter}`;
+
+export const cases: RouteCase[] = [
+  {
+    name: "GET /api/v1/gaits/:gaitId/versions/released/table",
+    route: "routes/api.v1/export/table.ts",
+    kind: "loader",
+    needs: "tables.download",
+    run: (req, ids) =>
+      req("GET", `/api/v1/gaits/${ids.gaitIds[GAIT]}/versions/released/table?format=csv&units=us`).then((r) => load(table, r, { gaitId: ids.gaitIds[GAIT], number: "released" })),
+  },
+  {
+    name: "GET /api/v1/robots/:robotId/bench-table (sweep)",
+    route: "routes/api.v1/export/bench-table.ts",
+    kind: "loader",
+    needs: "tables.download",
+    run: (req, ids) =>
+      req("GET", `/api/v1/robots/${ids.robotIds[ROBOT]}/bench-table?kind=sweep&leg=LF&joint=femur`).then((r) => load(benchTable, r, { robotId: ids.robotIds[ROBOT] })),
+  },
+  {
+    name: "GET /api/v1/robots/:robotId/calibration-profiles",
+    route: "routes/api.v1/export/calibration-profiles.ts",
+    kind: "loader",
+    needs: "robots.read",
+    run: (req, ids) => req("GET", `/api/v1/robots/${ids.robotIds[ROBOT]}/calibration-profiles`).then((r) => load(calibrationProfiles, r, { robotId: ids.robotIds[ROBOT] })),
+  },
+  { name: "GET /api/v1/openapi.json", route: "routes/api.v1/export/openapi.ts", kind: "loader", needs: "public", run: (req) => req("GET", "/api/v1/openapi.json").then((r) => load(openapi, r)) },
+  {
+    name: "GET /api/v1/schema/sequence.json",
+    route: "routes/api.v1/export/sequence-schema.ts",
+    kind: "loader",
+    needs: "public",
+    run: (req) => req("GET", "/api/v1/schema/sequence.json").then((r) => load(sequenceSchema, r)),
+  },
+  {
+    name: "GET /api/v1/schema/calibration.json",
+    route: "routes/api.v1/export/calibration-schema.ts",
+    kind: "loader",
+    needs: "public",
+    run: (req) => req("GET", "/api/v1/schema/calibration.json").then((r) => load(calibrationSchema, r)),
+  },
+  { name: "GET /export", route: "routes/export/page.tsx", kind: "loader", needs: "tables.download", run: (req) => req("GET", "/export").then((r) => load(exportPage, r)) },
+  {
+    name: "GET /export/bring-up",
+    route: "routes/export/bring-up.tsx",
+    kind: "loader",
+    needs: "tables.download",
+    run: (req, ids) => req("GET", `/export/bring-up?robot=${ids.robotIds[ROBOT]}&kind=sweep&leg=LM&joint=tibia`).then((r) => load(bringUp, r)),
+  },
+  { name: "GET /export/calibration", route: "routes/export/calibration-list.tsx", kind: "loader", needs: "robots.read", run: (req) => req("GET", "/export/calibration").then((r) => load(calibrationList, r)) },
+  {
+    name: "GET /export/calibration/:robotId",
+    route: "routes/export/calibration.tsx",
+    kind: "loader",
+    needs: "robots.read",
+    run: (req, ids) => req("GET", `/export/calibration/${ids.robotIds[ROBOT]}?edit=new`).then((r) => load(calibration, r, { robotId: ids.robotIds[ROBOT] })),
+  },
+  {
+    name: "POST /export/calibration/:robotId (create a profile)",
+    route: "routes/export/calibration.tsx",
+    kind: "action",
+    needs: "robots.calibrate",
+    run: (req, ids) =>
+      req("POST", `/export/calibration/${ids.robotIds[ROBOT]}`, { form: { intent: "create", name: unique("SN matrix"), "joints.LF.femur.trimDeg": "1.5" } }).then((r) =>
+        act(calibration, r, { robotId: ids.robotIds[ROBOT] }),
+      ),
+  },
+  { name: "GET /api-docs", route: "routes/export/api-docs.tsx", kind: "loader", needs: "public", run: (req) => req("GET", "/api-docs").then((r) => load(apiDocs, r)) },
+];

@@ -1,0 +1,145 @@
+// The export and bring-up pages' loaders, and the bench-table API: defaults,
+// the preview rows, the download link and build-script command, the problems
+// shown (override, bad query), and the bench tables' speed checks.
+import { beforeAll, beforeEach, describe, expect, test } from "vitest";
+import { seedDemo } from "../../../db/seed";
+import { demoIds, load, requestsAs, type DemoIds } from "../../support/access-matrix";
+import { database } from "~/lib/db.server";
+import { resetRateLimits } from "~/lib/rate-limit.server";
+import * as benchTable from "~/routes/api.v1/export/bench-table";
+import * as bringUp from "~/routes/export/bring-up";
+import * as exportPage from "~/routes/export/page";
+import { answerOf, auditEntries, bearer, getTable, tokenFor } from "./support";
+
+let ids: DemoIds;
+let token: string;
+let crawler: string;
+
+beforeAll(async () => {
+  await seedDemo(database());
+  ids = await demoIds(database());
+  token = await tokenFor(ids.workspaceId, ids.userIds.firmware);
+  crawler = ids.robotIds["Pier crawler"];
+});
+beforeEach(() => resetRateLimits());
+
+async function page(module: typeof exportPage | typeof bringUp, path: string): Promise<any> {
+  const request = await requestsAs("firmware", ids);
+  return load(module, await request("GET", path));
+}
+
+describe("/export", () => {
+  test("opens on a gait with a released version, its released table, CSV in degrees", async () => {
+    const data = await page(exportPage, "/export");
+    expect(data.gait.releasedVersion).not.toBe(null);
+    expect(data.version).toBe("released");
+    expect(data.query).toMatchObject({ format: "csv", units: "deg", rate: null, profile: null, override: null });
+    expect(data.problem).toBe(null);
+    expect(data.table.preview.shownRows).toBe(data.table.facts.frameCount);
+    expect(data.download.path).toBe(`/api/v1/gaits/${data.gait.id}/versions/released/table?format=csv&units=deg`);
+    expect(data.download.command).toBe(
+      `curl -fsS -H "Authorization: Bearer $GAITLOOM_TOKEN" -o '${data.download.fileName}' 'http://127.0.0.1:3000${data.download.path}'`,
+    );
+    // Looking at the page is not a download.
+    expect((await auditEntries("table.downloaded", 1)).length).toBe(0);
+  });
+
+  test("the preview holds the file's numbers, and the download link gives that file", async () => {
+    const gaitId = ids.gaitIds["Tripod cruise"];
+    const data = await page(exportPage, `/export?gait=${gaitId}&version=2&units=us&rate=25`);
+    expect(data.table.facts).toMatchObject({ rateHz: 25, frameCount: 25, units: "us" });
+    const file = await getTable(bearer(data.download.path, token), gaitId, 2);
+    expect(file.text.split("\r\n")[1].split(",").slice(2).map(Number)).toEqual(data.table.preview.values.slice(0, data.table.facts.channelCount));
+    expect(data.table.facts.sha256).toBeTruthy();
+  });
+
+  test("a version with errors: the page asks for the override reason, then shows the table with it", async () => {
+    const gaitId = ids.gaitIds["Crawl"];
+    const refused = await page(exportPage, `/export?gait=${gaitId}&version=1`);
+    expect(refused.problem).toMatchObject({ needsOverride: true, parameter: "override" });
+    expect(refused.table).toBe(null);
+    const given = await page(exportPage, `/export?gait=${gaitId}&version=1&override=${encodeURIComponent("bench only")}`);
+    expect(given.problem).toBe(null);
+    expect(given.table.facts.overrideReason).toBe("bench only");
+    expect(given.download.path).toContain("override=bench+only");
+  });
+
+  test("a bad rate is shown as a problem naming it; empty fields are ignored", async () => {
+    const data = await page(exportPage, `/export?gait=${ids.gaitIds["Trot"]}&rate=abc&profile=&override=`);
+    expect(data.problem).toMatchObject({ parameter: "rate" });
+    const fine = await page(exportPage, `/export?gait=${ids.gaitIds["Trot"]}&rate=&profile=&override=`);
+    expect(fine.problem).toBe(null);
+    expect(fine.gait.name).toBe("Trot");
+  });
+
+  test("a gait without a released version opens at its newest", async () => {
+    const data = await page(exportPage, `/export?gait=${ids.gaitIds["Wave creep"]}`);
+    expect(data.version).toBe(2);
+  });
+});
+
+describe("bench tables", () => {
+  const get = (query: string) => answerOf(() => load(benchTable, bearer(`/api/v1/robots/${crawler}/bench-table?${query}`, token), { robotId: crawler }));
+
+  test("centre: every pulse at its servo's centerUs, held for 2 s at 50 Hz", async () => {
+    const answer = await get("kind=centre&format=json&units=us");
+    expect(answer.status).toBe(200);
+    expect(answer.headers.get("Content-Disposition")).toBe('attachment; filename="pier_crawler_centre_vbench_us_50hz.json"');
+    expect(answer.json.meta.frameCount).toBe(100);
+    for (const frame of [answer.json.frames[0], answer.json.frames[99]]) {
+      frame.values.forEach((us: number, column: number) => expect(us).toBe(answer.json.channels[column].centerUs));
+    }
+    const [entry] = await auditEntries("bench-table.downloaded", 1);
+    expect(entry.details).toMatchObject({ table: "centre", format: "json", units: "us", via: "token" });
+  });
+
+  test("a slow sweep passes its speed check; one at twice the joint's limit needs an override (joint-speed errors)", async () => {
+    const slow = await get("kind=sweep&leg=LF&joint=femur&speed=0.25&format=json");
+    expect(slow.status).toBe(200);
+    expect(slow.json.meta.flags.errors).toBe(0);
+    const fast = await get("kind=sweep&leg=LF&joint=femur&speed=2&format=json");
+    expect(fast.status).toBe(409);
+    expect(fast.json.error.details.errorFlags["joint-speed"]).toBeGreaterThan(0);
+    const overridden = await get(`kind=sweep&leg=LF&joint=femur&speed=2&format=json&override=${encodeURIComponent("servo test at double speed")}`);
+    expect(overridden.status).toBe(200);
+    expect(overridden.json.meta.flags.byKind["joint-speed"]).toBeGreaterThan(0);
+  });
+
+  test("ETag and 304 as for gait tables", async () => {
+    const first = await get("kind=sweep&leg=RM&joint=tibia");
+    const again = await answerOf(() =>
+      load(benchTable, bearer(`/api/v1/robots/${crawler}/bench-table?kind=sweep&leg=RM&joint=tibia`, token, { "If-None-Match": first.headers.get("ETag")! }), { robotId: crawler }),
+    );
+    expect(again.status).toBe(304);
+  });
+
+  test.each([
+    ["kind=sweep&joint=femur", "leg"],
+    ["kind=sweep&leg=XX&joint=femur", "leg"],
+    ["kind=sweep&leg=LF", "joint"],
+    ["kind=spin", "kind"],
+    ["fps=0", "fps"],
+  ])("%s: 400 naming %s", async (query, parameter) => {
+    const answer = await get(query);
+    expect(answer.status).toBe(400);
+    expect(answer.json.error.details.parameter).toBe(parameter);
+  });
+
+  test("the bring-up page shows the sweep's checks, its speed against the limit, and the download", async () => {
+    const data = await page(bringUp, `/export/bring-up?robot=${crawler}&kind=sweep&leg=LF&joint=coxa&speed=1.5`);
+    expect(data.problem).toMatchObject({ needsOverride: true });
+    expect(data.checks.totalFlags).toBeGreaterThan(0);
+    expect(data.checks.flags[0].kind).toBe("joint-speed");
+    expect(data.checks.peakSpeedDegS).toBeGreaterThan(data.checks.limitDegS);
+    const slow = await page(bringUp, `/export/bring-up?robot=${crawler}&kind=sweep&leg=LF&joint=coxa`);
+    expect(slow.problem).toBe(null);
+    expect(slow.checks.peakSpeedDegS).toBeLessThanOrEqual(slow.checks.limitDegS * 0.25 + 1e-6);
+    expect(slow.download.path).toBe(`/api/v1/robots/${crawler}/bench-table?kind=sweep&leg=LF&joint=coxa&speed=0.25&dwell=500&fps=50&hold=stance&format=csv&units=deg`);
+  });
+
+  test("choosing a sweep without a leg starts at the first leg's coxa", async () => {
+    const data = await page(bringUp, `/export/bring-up?robot=${crawler}&kind=sweep`);
+    expect(data.query).toMatchObject({ kind: "sweep", leg: "LF", joint: "coxa" });
+    expect(data.table.facts.gait.name).toBe("Pier crawler sweep-LF-coxa");
+  });
+});

@@ -1,0 +1,71 @@
+// Importing a URDF file: the report of what was mapped and a new robot, or a
+// refusal that names the joint and saves nothing.
+import { eq } from "drizzle-orm";
+import { beforeAll, describe, expect, test } from "vitest";
+import { robots } from "../../../db/schema";
+import { seedDemo } from "../../../db/seed";
+import { act, demoIds, requestsAs, type DemoIds } from "../../support/access-matrix";
+import { importUrdf } from "~/kinematics";
+import { database } from "~/lib/db.server";
+import * as list from "~/routes/robots/list";
+import { fixture, multipart, outcome, revisionCount, revisionsOf, robotCount, uniqueName } from "./support";
+
+let ids: DemoIds;
+
+beforeAll(async () => {
+  await seedDemo(database());
+  ids = await demoIds(database());
+});
+
+async function importFile(xml: string, fields: Record<string, string> = {}) {
+  const request = await requestsAs("animator", ids);
+  return outcome(async () =>
+    act(list, await multipart(request, "/robots?index", { intent: "import-urdf", file: new File([xml], "test-crab.urdf", { type: "application/xml" }), ...fields })),
+  );
+}
+
+describe("URDF import", () => {
+  test("the test fixture imports: the report says what was mapped and the robot is created as importUrdf maps it", async () => {
+    const name = uniqueName("Imported crab");
+    const answer = await importFile(fixture("test-crab.urdf"), { name });
+    expect(answer.status).toBe(200);
+    const expected = importUrdf(fixture("test-crab.urdf"), { name });
+    if (!expected.ok) throw new Error("fixture does not import");
+    expect(answer.body).toMatchObject({ ok: true, intent: "import-urdf", name, report: expected.report });
+    expect(answer.body.report[0]).toBe('base link "base_link" is the body frame; 4 legs found');
+    const [row] = await database().select().from(robots).where(eq(robots.name, name));
+    expect(answer.body.robotId).toBe(row.id);
+    const [revision] = await revisionsOf(row.id);
+    expect(revision.definition).toEqual(expected.robot);
+    expect(revision.message).toBe("Imported from URDF test-crab.urdf");
+  });
+
+  test("without a name the URDF robot's own name is used; importing it twice is a 409 with the report kept", async () => {
+    const first = await importFile(fixture("test-crab.urdf"));
+    expect(first.status).toBe(200);
+    expect(first.body.name).toBe("test_crab");
+    const count = await robotCount();
+    const second = await importFile(fixture("test-crab.urdf"));
+    expect(second.status).toBe(409);
+    expect(second.body.report.length).toBeGreaterThan(0);
+    expect(await robotCount()).toBe(count);
+  });
+
+  test("an unsupported chain is refused naming the joint: 422, nothing saved", async () => {
+    const continuous = fixture("test-crab.urdf").replace('<joint name="fr_femur" type="revolute">', '<joint name="fr_femur" type="continuous">');
+    const [robotsBefore, revisionsBefore] = [await robotCount(), await revisionCount()];
+    const answer = await importFile(continuous, { name: uniqueName("Refused crab") });
+    expect(answer.status).toBe(422);
+    expect(answer.body).toMatchObject({ ok: false, intent: "import-urdf", message: "test-crab.urdf cannot be imported. Nothing was saved." });
+    expect(answer.body.issues).toEqual([
+      { path: 'joint.fr_femur.type', message: 'joint "fr_femur" (femur) is continuous: a leg joint must be revolute, with limits' },
+    ]);
+    expect([await robotCount(), await revisionCount()]).toEqual([robotsBefore, revisionsBefore]);
+  });
+
+  test("not XML: 422 with the parser's line and column", async () => {
+    const answer = await importFile("<robot name='x'><link name='a'></robot>", { name: uniqueName("Not XML") });
+    expect(answer.status).toBe(422);
+    expect(answer.body.issues[0].message).toMatch(/^not well-formed XML: .+ \(line \d+, column \d+\)$/);
+  });
+});
