@@ -14,12 +14,6 @@ const axePath = createRequire(import.meta.url).resolve("axe-core/axe.min.js");
 const uniqueName = (label: string) => `${label} ${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}`;
 const slugOf = (name: string) => name.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-+|-+$/g, "");
 
-// Set GAITLOOM_SCREENSHOTS to a folder to keep pictures of the robot pages for review.
-async function shot(page: Page, name: string) {
-  const folder = process.env.GAITLOOM_SCREENSHOTS;
-  if (folder) await page.screenshot({ path: `${folder}/${name}.png`, fullPage: true });
-}
-
 /** The page has hydrated: typing now goes through React. */
 async function ready(page: Page) {
   await page.waitForLoadState("networkidle");
@@ -59,7 +53,6 @@ test("create a robot by uploading JSON, edit a link length and save as revision 
   const femur = page.getByRole("textbox", { name: "LF femur length (mm)" });
   await femur.fill("-5");
   await expect(page.getByText("must be positive (got -5)").first()).toBeVisible();
-  await shot(page, "robot-invalid-field");
   await expect(page.getByRole("button", { name: "Save as revision 2" })).toBeDisabled();
   await femur.fill("88");
   await expect(page.getByRole("region", { name: "Problems" })).toHaveCount(0);
@@ -68,7 +61,6 @@ test("create a robot by uploading JSON, edit a link length and save as revision 
   await page.getByRole("button", { name: "Save as revision 2" }).click();
   await expect(page.getByText("✓ Saved as revision 2.")).toBeVisible();
   await expect(history.getByRole("row")).toHaveCount(3);
-  await shot(page, "robot-saved");
   await expect(history.getByRole("row").nth(1)).toContainText("Longer femur on LF");
   await expect(history.getByRole("row").nth(1)).toContainText("Theo Brandt");
   await expect(page.getByRole("textbox", { name: "LF femur length (mm)" })).toHaveValue("88");
@@ -100,7 +92,6 @@ test("an invalid upload lists the exact path and message, and saves nothing", as
   await expect(alert).toContainText("The definition has 1 problem. Nothing was saved.");
   await expect(alert.getByRole("listitem")).toHaveText(["legs[2].joints.femur.minDeg: must be below maxDeg (got 40 ≥ 30)"]);
   await expect(page).toHaveURL(/\/robots\?(index&)?add=upload$/);
-  await shot(page, "upload-invalid");
   await page.goto("/robots");
   await expect(page.getByRole("link", { name })).toHaveCount(0);
 });
@@ -118,7 +109,6 @@ test("import a URDF file: the report says what was mapped and the robot opens", 
   await expect(status).toContainText('base link "base_link" is the body frame; 4 legs found');
   await expect(status).toContainText("leg FL: fl_coxa → fl_femur → fl_tibia → foot \"fl_foot\"");
   await expect(status).toContainText("servo mapping not in URDF");
-  await shot(page, "urdf-report");
   await status.getByRole("link", { name }).click();
   await expect(page.getByRole("heading", { level: 1, name })).toBeVisible();
   await expect(page.getByRole("table", { name: "Revision history, newest first" })).toContainText("Imported from URDF test-crab.urdf");
@@ -145,7 +135,6 @@ test("a save from a stale base gets the conflict message and the edits stay in t
   await expect(conflict).toContainText("Revision 2 was saved by Theo Brandt");
   await expect(conflict).toContainText("while you were editing revision 1. Nothing was saved. Your edits are still in the form.");
   await expect(page.getByRole("textbox", { name: "LF coxa length (mm)" })).toHaveValue("39");
-  await shot(page, "robot-conflict");
 
   await conflict.getByRole("button", { name: "Save mine as revision 3 anyway" }).click();
   await expect(page.getByText("✓ Saved as revision 3.")).toBeVisible();
@@ -167,7 +156,6 @@ test("firmware changes calibration only: geometry is locked, a zero offset saves
   await expect(firmware.getByRole("textbox", { name: "LF femur length (mm)" })).toHaveAttribute("readonly", "");
   await expect(firmware.getByRole("button", { name: "Mirror left → right" })).toHaveCount(0);
   await firmware.getByRole("textbox", { name: "LF tibia zero offset (degrees)" }).fill("-6.5");
-  await shot(firmware, "robot-firmware");
   await firmware.getByRole("checkbox", { name: "RR femur servo reversed" }).click();
   await firmware.getByRole("button", { name: "Save as revision 2" }).click();
   await expect(firmware.getByText("✓ Saved as revision 2.")).toBeVisible();
@@ -202,9 +190,4 @@ test("a new robot from the starter template opens with its views", async ({ page
   await page.getByRole("button", { name: "Create robot" }).click();
   await expect(page.getByRole("heading", { level: 1, name })).toBeVisible();
   await expect(page.getByRole("list", { name: "Legs in the views" }).getByRole("listitem")).toHaveCount(8);
-  await shot(page, "robot-starter-8");
-  if (process.env.GAITLOOM_SCREENSHOTS) {
-    await page.getByRole("img", { name: `Top view of ${name}` }).screenshot({ path: `${process.env.GAITLOOM_SCREENSHOTS}/top-view.png` });
-    await page.getByRole("img", { name: `Side view of ${name}, from the right` }).screenshot({ path: `${process.env.GAITLOOM_SCREENSHOTS}/side-view.png` });
-  }
 });

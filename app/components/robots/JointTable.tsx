@@ -1,15 +1,17 @@
-// Every joint's limits, calibration, speed and servo mapping: one row per leg and joint.
+// Every joint's limits, calibration, speed and servo mapping: one row per leg
+// and joint. Each leg's three rows are memoised together.
+import { memo, useMemo } from "react";
 import { legBackground } from "~/components/robot-view";
 import { JOINT_NAMES } from "~/kinematics";
 import { getAt } from "~/lib/robots/paths";
-import { useEditor } from "./editor-context";
+import { rowFieldData, sliceSignature, useEditorData, type Slice } from "./editor-context";
 import { CheckboxField, NumberField } from "./fields";
 
 const th = "px-2 py-1.5 font-medium text-right";
 
 export function JointTable() {
-  const state = useEditor();
-  const legs = getAt(state.document, ["legs"]);
+  const data = useEditorData();
+  const legs = getAt(data.document, ["legs"]);
   const list = Array.isArray(legs) ? legs : [];
   return (
     <div className="overflow-x-auto rounded-lg border border-line bg-surface">
@@ -36,42 +38,52 @@ export function JointTable() {
             <th className={th}>Max µs</th>
           </tr>
         </thead>
-        <tbody>
-          {list.flatMap((leg, index) => {
-            const id = typeof leg?.id === "string" && leg.id ? leg.id : `leg ${index + 1}`;
-            return JOINT_NAMES.map((joint, jointIndex) => {
-              const base = ["legs", index, "joints", joint] as const;
-              const servo = [...base, "servo"] as const;
-              const name = `${id} ${joint}`;
-              return (
-                <tr key={`${index}-${joint}`} className={`align-top ${jointIndex === 2 ? "border-b border-line last:border-0" : ""}`}>
-                  <td className="px-2 py-1">
-                    {jointIndex === 0 ? (
-                      <span className="flex items-center gap-1.5 font-mono font-medium">
-                        <span aria-hidden className={`inline-block h-3 w-3 rounded-sm ${legBackground(index)}`} />
-                        {id}
-                      </span>
-                    ) : (
-                      <span className="sr-only">{id}</span>
-                    )}
-                  </td>
-                  <td className="px-2 py-1 text-ink-muted">{joint}</td>
-                  <td className="px-2 py-1 text-right"><NumberField path={[...base, "minDeg"]} label={`${name} minimum (servo degrees)`} width="w-14" /></td>
-                  <td className="px-2 py-1 text-right"><NumberField path={[...base, "maxDeg"]} label={`${name} maximum (servo degrees)`} width="w-14" /></td>
-                  <td className="px-2 py-1 text-right"><NumberField path={[...base, "zeroOffsetDeg"]} label={`${name} zero offset (degrees)`} width="w-16" /></td>
-                  <td className="px-2 py-1 text-right"><NumberField path={[...base, "maxSpeedDegS"]} label={`${name} maximum speed (degrees per second)`} width="w-14" /></td>
-                  <td className="border-l border-line px-2 py-1 text-right"><NumberField path={[...servo, "channel"]} label={`${name} servo channel`} width="w-12" /></td>
-                  <td className="px-2 py-1 text-center"><CheckboxField path={[...servo, "reversed"]} label={`${name} servo reversed`} /></td>
-                  <td className="px-2 py-1 text-right"><NumberField path={[...servo, "centerUs"]} label={`${name} servo centre (µs)`} /></td>
-                  <td className="px-2 py-1 text-right"><NumberField path={[...servo, "usPerDeg"]} label={`${name} servo µs per degree`} width="w-14" /></td>
-                  <td className="px-2 py-1 text-right"><NumberField path={[...servo, "minUs"]} label={`${name} servo minimum pulse (µs)`} /></td>
-                  <td className="px-2 py-1 text-right"><NumberField path={[...servo, "maxUs"]} label={`${name} servo maximum pulse (µs)`} /></td>
-                </tr>
-              );
-            });
-          })}
-        </tbody>
+        {list.map((leg, index) => (
+          <LegJoints key={index} index={index} leg={leg} signature={sliceSignature(data, `legs[${index}].joints.`)} />
+        ))}
       </table>
     </div>
   );
 }
+
+const LegJoints = memo(function LegJoints({ index, leg, signature }: { index: number; leg: { id?: unknown } | undefined; signature: string }) {
+  const slice = useMemo(() => JSON.parse(signature) as Slice, [signature]);
+  const id = typeof leg?.id === "string" && leg.id ? leg.id : `leg ${index + 1}`;
+  const legPath = ["legs", index] as const;
+  return (
+    <tbody className="border-b border-line last:border-0">
+      {JOINT_NAMES.map((joint, jointIndex) => {
+        const at = (...relative: string[]) => {
+          const path = ["joints", joint, ...relative];
+          return { path: [...legPath, ...path], data: rowFieldData(slice, leg, legPath, path) };
+        };
+        const name = `${id} ${joint}`;
+        return (
+          <tr key={joint} className="align-top">
+            <td className="px-2 py-1">
+              {jointIndex === 0 ? (
+                <span className="flex items-center gap-1.5 font-mono font-medium">
+                  <span aria-hidden className={`inline-block h-3 w-3 rounded-sm ${legBackground(index)}`} />
+                  {id}
+                </span>
+              ) : (
+                <span className="sr-only">{id}</span>
+              )}
+            </td>
+            <td className="px-2 py-1 text-ink-muted">{joint}</td>
+            <td className="px-2 py-1 text-right"><NumberField {...at("minDeg")} label={`${name} minimum (servo degrees)`} width="w-14" /></td>
+            <td className="px-2 py-1 text-right"><NumberField {...at("maxDeg")} label={`${name} maximum (servo degrees)`} width="w-14" /></td>
+            <td className="px-2 py-1 text-right"><NumberField {...at("zeroOffsetDeg")} label={`${name} zero offset (degrees)`} width="w-16" /></td>
+            <td className="px-2 py-1 text-right"><NumberField {...at("maxSpeedDegS")} label={`${name} maximum speed (degrees per second)`} width="w-14" /></td>
+            <td className="border-l border-line px-2 py-1 text-right"><NumberField {...at("servo", "channel")} label={`${name} servo channel`} width="w-12" /></td>
+            <td className="px-2 py-1 text-center"><CheckboxField {...at("servo", "reversed")} label={`${name} servo reversed`} /></td>
+            <td className="px-2 py-1 text-right"><NumberField {...at("servo", "centerUs")} label={`${name} servo centre (µs)`} /></td>
+            <td className="px-2 py-1 text-right"><NumberField {...at("servo", "usPerDeg")} label={`${name} servo µs per degree`} width="w-14" /></td>
+            <td className="px-2 py-1 text-right"><NumberField {...at("servo", "minUs")} label={`${name} servo minimum pulse (µs)`} /></td>
+            <td className="px-2 py-1 text-right"><NumberField {...at("servo", "maxUs")} label={`${name} servo maximum pulse (µs)`} /></td>
+          </tr>
+        );
+      })}
+    </tbody>
+  );
+});

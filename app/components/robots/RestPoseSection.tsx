@@ -1,16 +1,17 @@
 // The optional rest pose: servo angles of the robot lying on its belly, powered down.
 import { legBackground } from "~/components/robot-view";
 import { getAt } from "~/lib/robots/paths";
-import { isLocked, useEditor } from "./editor-context";
+import { fieldData, isLocked, useEditorActions, useEditorData } from "./editor-context";
 import { NumberField } from "./fields";
 
 export function RestPoseSection({ onToggle }: { onToggle: (on: boolean) => void }) {
-  const state = useEditor();
-  const rest = getAt(state.document, ["rest"]);
-  const legs = getAt(state.document, ["legs"]);
+  const data = useEditorData();
+  const { mode } = useEditorActions();
+  const rest = getAt(data.document, ["rest"]);
+  const legs = getAt(data.document, ["legs"]);
   const ids = (Array.isArray(legs) ? legs : []).map((leg, index) => ({ id: typeof leg?.id === "string" ? leg.id : "", index }));
   const on = rest !== undefined;
-  const locked = isLocked(state.mode, ["rest"]);
+  const locked = isLocked(mode, ["rest"]);
   return (
     <div className="space-y-3">
       <label className="flex items-center gap-2 text-sm">
@@ -48,7 +49,7 @@ export function RestPoseSection({ onToggle }: { onToggle: (on: boolean) => void 
                   </td>
                   {(["coxa", "femur", "tibia"] as const).map((joint) => (
                     <td key={joint} className="px-2 py-1 text-right">
-                      <NumberField path={["rest", id, joint]} label={`${id} rest ${joint} (servo degrees)`} />
+                      <NumberField path={["rest", id, joint]} data={fieldData(data, ["rest", id, joint])} label={`${id} rest ${joint} (servo degrees)`} />
                     </td>
                   ))}
                 </tr>

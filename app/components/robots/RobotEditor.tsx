@@ -2,7 +2,7 @@
 // side views. The working copy is checked with parseRobot on every change and
 // each problem is shown next to its field. Save sends the whole definition with
 // the revision it started from; the server makes it the next revision or says why not.
-import { useEffect, useId, useMemo, useRef, useState } from "react";
+import { useCallback, useEffect, useId, useMemo, useRef, useState } from "react";
 import { Link, type FetcherWithComponents } from "react-router";
 import { RobotViews } from "~/components/robot-view";
 import type { Robot } from "~/kinematics";
@@ -12,7 +12,7 @@ import { defaultRest } from "~/lib/robots/leg-tools";
 import { formFieldIdFor, pathText, setAt, type FieldPath } from "~/lib/robots/paths";
 import type { SaveResult } from "~/lib/robots/results";
 import { BodySection } from "./BodySection";
-import { EditorProvider, type EditorMode, type EditorState } from "./editor-context";
+import { EditorActionsProvider, EditorDataProvider, type EditorActions, type EditorData, type EditorMode } from "./editor-context";
 import { IssueSummary } from "./IssueSummary";
 import { JointTable } from "./JointTable";
 import { LegTable } from "./LegTable";
@@ -45,11 +45,9 @@ export function RobotEditor({ robotId, initial, baseRevision, mode, saveFetcher 
   const viewRobot = check.robot ?? lastValid.current;
   const dirty = useMemo(() => changedFields(initial, document).length > 0, [initial, document]);
 
-  const state = useMemo<EditorState>(
+  // Stable for the life of the form, so memoised rows re-render only for their own changes.
+  const actions = useMemo<EditorActions>(
     () => ({
-      document,
-      texts,
-      issuesByPath: check.byPath,
       mode,
       setNumber: (path: FieldPath, text: string) => {
         setTexts((current) => ({ ...current, [pathText(path)]: text }));
@@ -58,8 +56,15 @@ export function RobotEditor({ robotId, initial, baseRevision, mode, saveFetcher 
       setValue: (path: FieldPath, value: unknown) => setDocument((current) => setAt(current, path, value)),
       renameLeg: (index: number, id: string) => setDocument((current) => renameLeg(current, index, id)),
     }),
-    [document, texts, check.byPath, mode],
+    [mode],
   );
+  const data = useMemo<EditorData>(() => ({ document, texts, issuesByPath: check.byPath }), [document, texts, check.byPath]);
+
+  const removeLeg = useCallback((index: number) => {
+    setDocument((current) => removeLegAt(current, index));
+    setTexts({});
+    setToolNote("Removed a leg.");
+  }, []);
 
   const replaceAll = (next: Robot | RobotDocument, note: string | null) => {
     setDocument(structuredClone(next) as RobotDocument);
@@ -71,72 +76,74 @@ export function RobotEditor({ robotId, initial, baseRevision, mode, saveFetcher 
   const headings = { views: useId(), body: useId(), legs: useId(), joints: useId(), rest: useId() };
 
   return (
-    <EditorProvider value={state}>
-      <div className="space-y-8">
-        {mode === "calibrate" ? (
-          <p className="rounded-lg border border-line bg-accent-soft px-4 py-3 text-sm">
-            As firmware you can change each joint&apos;s zero offset and servo mapping. The other fields are locked.
-          </p>
-        ) : null}
-        {editing ? <IssueSummary issues={check.issues} fieldFor={formFieldIdFor} /> : null}
-
-        <section aria-labelledby={headings.views} className="space-y-2">
-          <h2 id={headings.views} className="text-lg font-semibold">Neutral stance</h2>
-          {check.robot || !editing ? null : (
-            <p className="text-sm text-warning">
-              <span aria-hidden>⚠ </span>The views show the last valid definition until the problems are fixed.
+    <EditorActionsProvider value={actions}>
+      <EditorDataProvider value={data}>
+        <div className="space-y-8">
+          {mode === "calibrate" ? (
+            <p className="rounded-lg border border-line bg-accent-soft px-4 py-3 text-sm">
+              As firmware you can change each joint&apos;s zero offset and servo mapping. The other fields are locked.
             </p>
-          )}
-          <RobotViews robot={viewRobot} />
-        </section>
+          ) : null}
+          {editing ? <IssueSummary issues={check.issues} fieldFor={formFieldIdFor} /> : null}
 
-        <section aria-labelledby={headings.body} className="space-y-2">
-          <h2 id={headings.body} className="text-lg font-semibold">Body</h2>
-          <BodySection />
-        </section>
+          <section aria-labelledby={headings.views} className="space-y-2">
+            <h2 id={headings.views} className="text-lg font-semibold">Neutral stance</h2>
+            {check.robot || !editing ? null : (
+              <p className="text-sm text-warning">
+                <span aria-hidden>⚠ </span>The views show the last valid definition until the problems are fixed.
+              </p>
+            )}
+            <RobotViews robot={viewRobot} />
+          </section>
 
-        <section aria-labelledby={headings.legs} className="space-y-2">
-          <h2 id={headings.legs} className="text-lg font-semibold">Legs</h2>
-          <LegTable onRemove={mode === "edit" ? (index) => replaceAll(removeLegAt(document, index), "Removed a leg.") : undefined} />
-          {mode === "edit" ? <LegTools robot={check.robot} onApply={(next, note) => replaceAll(next, note)} /> : null}
-          <p role="status" aria-live="polite" className="text-sm text-ok">
-            {toolNote}
-          </p>
-        </section>
+          <section aria-labelledby={headings.body} className="space-y-2">
+            <h2 id={headings.body} className="text-lg font-semibold">Body</h2>
+            <BodySection />
+          </section>
 
-        <section aria-labelledby={headings.joints} className="space-y-2">
-          <h2 id={headings.joints} className="text-lg font-semibold">Joints and servos</h2>
-          <p className="text-sm text-ink-muted">
-            Limits are in servo degrees; servo angle = geometric angle − zero offset. Pulse = centre ± µs/° × servo angle, the sign
-            flipped when reversed.
-          </p>
-          <JointTable />
-        </section>
+          <section aria-labelledby={headings.legs} className="space-y-2">
+            <h2 id={headings.legs} className="text-lg font-semibold">Legs</h2>
+            <LegTable onRemove={mode === "edit" ? removeLeg : undefined} />
+            {mode === "edit" ? <LegTools robot={check.robot} onApply={(next, note) => replaceAll(next, note)} /> : null}
+            <p role="status" aria-live="polite" className="text-sm text-ok">
+              {toolNote}
+            </p>
+          </section>
 
-        <section aria-labelledby={headings.rest} className="space-y-2">
-          <h2 id={headings.rest} className="text-lg font-semibold">Rest pose</h2>
-          <RestPoseSection
-            onToggle={(on) => {
-              if (!on) replaceAll(setAt(document, ["rest"], undefined), "Removed the rest pose.");
-              else if (check.robot) replaceAll({ ...check.robot, rest: defaultRest(check.robot) }, "Added a rest pose: every joint at 0° or its nearest limit.");
-              else setToolNote("Fix the problems listed above before adding a rest pose.");
-            }}
-          />
-        </section>
+          <section aria-labelledby={headings.joints} className="space-y-2">
+            <h2 id={headings.joints} className="text-lg font-semibold">Joints and servos</h2>
+            <p className="text-sm text-ink-muted">
+              Limits are in servo degrees; servo angle = geometric angle − zero offset. Pulse = centre ± µs/° × servo angle, the sign
+              flipped when reversed.
+            </p>
+            <JointTable />
+          </section>
 
-        {editing && saveFetcher ? (
-          <SaveBar
-            fetcher={saveFetcher}
-            robotId={robotId}
-            document={document}
-            baseRevision={baseRevision}
-            dirty={dirty}
-            problemCount={check.issues.length}
-            onDiscard={() => replaceAll(initial, "Changes discarded.")}
-          />
-        ) : null}
-      </div>
-    </EditorProvider>
+          <section aria-labelledby={headings.rest} className="space-y-2">
+            <h2 id={headings.rest} className="text-lg font-semibold">Rest pose</h2>
+            <RestPoseSection
+              onToggle={(on) => {
+                if (!on) replaceAll(setAt(document, ["rest"], undefined), "Removed the rest pose.");
+                else if (check.robot) replaceAll({ ...check.robot, rest: defaultRest(check.robot) }, "Added a rest pose: every joint at 0° or its nearest limit.");
+                else setToolNote("Fix the problems listed above before adding a rest pose.");
+              }}
+            />
+          </section>
+
+          {editing && saveFetcher ? (
+            <SaveBar
+              fetcher={saveFetcher}
+              robotId={robotId}
+              document={document}
+              baseRevision={baseRevision}
+              dirty={dirty}
+              problemCount={check.issues.length}
+              onDiscard={() => replaceAll(initial, "Changes discarded.")}
+            />
+          ) : null}
+        </div>
+      </EditorDataProvider>
+    </EditorActionsProvider>
   );
 }
 
@@ -175,7 +182,7 @@ function SaveBar({
   const blocked = !dirty ? "No changes to save." : problemCount > 0 ? `Fix ${problemCount === 1 ? "the problem" : `the ${problemCount} problems`} first.` : null;
 
   return (
-    <section aria-label="Save" className="sticky bottom-0 z-10 space-y-3 rounded-lg border border-line bg-surface p-4 shadow-sm">
+    <section aria-label="Save" className="sticky bottom-0 z-10 space-y-2 rounded-lg border border-line bg-surface px-4 py-3 shadow-sm">
       {stale?.latest ? (
         <div role="alert" className="rounded-md border border-warning bg-warning-soft p-3 text-sm">
           <p className="font-semibold">
@@ -222,21 +229,22 @@ function SaveBar({
           ) : null}
         </div>
       ) : null}
-      <fetcher.Form method="post" action={`/robots/${robotId}`} className="flex flex-wrap items-end gap-3">
+      <fetcher.Form method="post" action={`/robots/${robotId}`} className="flex flex-wrap items-center gap-3">
         <input type="hidden" name="intent" value="save" />
         <input type="hidden" name="baseRevision" value={baseRevision} />
         <input type="hidden" name="definition" value={definition} />
-        <label className="flex min-w-64 flex-1 flex-col gap-1 text-sm">
-          <span className="text-ink-muted">What changed (optional)</span>
-          <input
-            name="message"
-            value={message}
-            maxLength={500}
-            onChange={(event) => setMessage(event.currentTarget.value)}
-            placeholder="e.g. Measured femur lengths again"
-            className="rounded border border-line bg-surface px-2 py-1"
-          />
-        </label>
+        <p role="status" aria-live="polite" className="w-40 text-sm text-ink-muted">
+          {busy ? "Saving…" : saved ? <span className="text-ok">✓ Saved as revision {saved.number}.</span> : blocked ?? "Unsaved changes."}
+        </p>
+        <input
+          name="message"
+          aria-label="What changed (optional)"
+          value={message}
+          maxLength={500}
+          onChange={(event) => setMessage(event.currentTarget.value)}
+          placeholder="What changed (optional)"
+          className="min-w-64 flex-1 rounded border border-line bg-surface px-2 py-1"
+        />
         <button
           type="submit"
           disabled={busy || blocked !== null}
@@ -252,9 +260,6 @@ function SaveBar({
         >
           Discard changes
         </button>
-        <p role="status" aria-live="polite" className="basis-full text-sm text-ink-muted">
-          {busy ? "Saving…" : saved ? <span className="text-ok">✓ Saved as revision {saved.number}.</span> : blocked ?? "Unsaved changes."}
-        </p>
       </fetcher.Form>
     </section>
   );

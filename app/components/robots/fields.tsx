@@ -1,9 +1,9 @@
-// Inputs of the robot editor. Each reads and writes the working document at its
-// path and shows that path's validation messages right under it.
-import { getAt, fieldId, pathText, type FieldPath } from "~/lib/robots/paths";
-import { isLocked, issuesAt, useEditor } from "./editor-context";
+// Inputs of the robot editor. Each shows the value it is given and that path's
+// validation messages right under it, and writes through the editor's actions.
+import { fieldId, type FieldPath } from "~/lib/robots/paths";
+import { isLocked, useEditorActions, type FieldData } from "./editor-context";
 
-function FieldMessages({ id, messages }: { id: string; messages: string[] }) {
+function FieldMessages({ id, messages }: { id: string; messages: readonly string[] }) {
   if (messages.length === 0) return null;
   return (
     <span id={id} className="mt-0.5 block max-w-48 text-left text-xs leading-snug font-normal text-danger">
@@ -20,14 +20,22 @@ function FieldMessages({ id, messages }: { id: string; messages: string[] }) {
 const inputBase =
   "rounded border bg-surface px-1.5 py-0.5 text-sm outline-none focus-visible:border-accent read-only:border-transparent read-only:bg-transparent";
 
-export function NumberField({ path, label, width = "w-16", placeholder }: { path: FieldPath; label: string; width?: string; placeholder?: string }) {
-  const state = useEditor();
-  const key = pathText(path);
-  const value = getAt(state.document, path);
-  const text = state.texts[key] ?? (value === undefined || value === null ? "" : String(value));
-  const messages = issuesAt(state, path);
+const invalidClass = (messages: readonly string[]) => (messages.length > 0 ? "border-danger bg-danger-soft" : "border-line");
+
+function describedBy(id: string, messages: readonly string[]) {
+  return {
+    "aria-invalid": messages.length > 0 || undefined,
+    "aria-describedby": messages.length > 0 ? `${id}-issues` : undefined,
+  };
+}
+
+type FieldProps = { path: FieldPath; label: string; data: FieldData };
+
+export function NumberField({ path, label, data, width = "w-16", placeholder }: FieldProps & { width?: string; placeholder?: string }) {
+  const { mode, setNumber } = useEditorActions();
+  const { value, messages } = data;
+  const text = data.text ?? (value === undefined || value === null ? "" : String(value));
   const id = fieldId(path);
-  const locked = isLocked(state.mode, path);
   return (
     <>
       <input
@@ -37,13 +45,12 @@ export function NumberField({ path, label, width = "w-16", placeholder }: { path
         autoComplete="off"
         spellCheck={false}
         aria-label={label}
-        aria-invalid={messages.length > 0 || undefined}
-        aria-describedby={messages.length > 0 ? `${id}-issues` : undefined}
-        readOnly={locked}
+        {...describedBy(id, messages)}
+        readOnly={isLocked(mode, path)}
         placeholder={placeholder}
         value={text}
-        onChange={(event) => state.setNumber(path, event.currentTarget.value)}
-        className={`${inputBase} ${width} text-right font-mono tabular-nums ${messages.length > 0 ? "border-danger bg-danger-soft" : "border-line"}`}
+        onChange={(event) => setNumber(path, event.currentTarget.value)}
+        className={`${inputBase} ${width} text-right font-mono tabular-nums ${invalidClass(messages)}`}
       />
       <FieldMessages id={`${id}-issues`} messages={messages} />
     </>
@@ -53,31 +60,23 @@ export function NumberField({ path, label, width = "w-16", placeholder }: { path
 export function TextField({
   path,
   label,
+  data,
   width = "w-full",
   onChange,
   multiline,
-}: {
-  path: FieldPath;
-  label: string;
-  width?: string;
-  onChange?: (value: string) => void;
-  multiline?: boolean;
-}) {
-  const state = useEditor();
-  const value = getAt(state.document, path);
-  const messages = issuesAt(state, path);
+}: FieldProps & { width?: string; onChange?: (value: string) => void; multiline?: boolean }) {
+  const { mode, setValue } = useEditorActions();
+  const { value, messages } = data;
   const id = fieldId(path);
-  const locked = isLocked(state.mode, path);
   const props = {
     id,
     "aria-label": label,
-    "aria-invalid": messages.length > 0 || undefined,
-    "aria-describedby": messages.length > 0 ? `${id}-issues` : undefined,
-    readOnly: locked,
+    ...describedBy(id, messages),
+    readOnly: isLocked(mode, path),
     value: typeof value === "string" ? value : "",
-    className: `${inputBase} ${width} ${messages.length > 0 ? "border-danger bg-danger-soft" : "border-line"}`,
+    className: `${inputBase} ${width} ${invalidClass(messages)}`,
   };
-  const change = (next: string) => (onChange ? onChange(next) : state.setValue(path, next));
+  const change = (next: string) => (onChange ? onChange(next) : setValue(path, next));
   return (
     <>
       {multiline ? (
@@ -90,25 +89,23 @@ export function TextField({
   );
 }
 
-export function CheckboxField({ path, label }: { path: FieldPath; label: string }) {
-  const state = useEditor();
-  const value = getAt(state.document, path);
-  const messages = issuesAt(state, path);
+export function CheckboxField({ path, label, data }: FieldProps) {
+  const { mode, setValue } = useEditorActions();
+  const { value, messages } = data;
   const id = fieldId(path);
-  const locked = isLocked(state.mode, path);
+  const locked = isLocked(mode, path);
   return (
     <>
       <input
         id={id}
         type="checkbox"
         aria-label={label}
-        aria-invalid={messages.length > 0 || undefined}
-        aria-describedby={messages.length > 0 ? `${id}-issues` : undefined}
+        {...describedBy(id, messages)}
         checked={value === true}
         // A read-only checkbox: still focusable and announced, but it does not toggle.
         aria-readonly={locked || undefined}
         onChange={(event) => {
-          if (!locked) state.setValue(path, event.currentTarget.checked);
+          if (!locked) setValue(path, event.currentTarget.checked);
         }}
         className="h-4 w-4 accent-accent"
       />
@@ -117,23 +114,20 @@ export function CheckboxField({ path, label }: { path: FieldPath; label: string 
   );
 }
 
-export function SideField({ path, label, derived }: { path: FieldPath; label: string; derived: "left" | "right" }) {
-  const state = useEditor();
-  const value = getAt(state.document, path);
-  const messages = issuesAt(state, path);
+export function SideField({ path, label, data, derived }: FieldProps & { derived: "left" | "right" }) {
+  const { mode, setValue } = useEditorActions();
+  const { value, messages } = data;
   const id = fieldId(path);
-  const locked = isLocked(state.mode, path);
   return (
     <>
       <select
         id={id}
         aria-label={label}
-        aria-invalid={messages.length > 0 || undefined}
-        aria-describedby={messages.length > 0 ? `${id}-issues` : undefined}
-        disabled={locked}
+        {...describedBy(id, messages)}
+        disabled={isLocked(mode, path)}
         value={value === "left" || value === "right" ? value : ""}
-        onChange={(event) => state.setValue(path, event.currentTarget.value === "" ? undefined : event.currentTarget.value)}
-        className={`${inputBase} ${messages.length > 0 ? "border-danger bg-danger-soft" : "border-line"} disabled:border-transparent disabled:bg-transparent disabled:text-ink`}
+        onChange={(event) => setValue(path, event.currentTarget.value === "" ? undefined : event.currentTarget.value)}
+        className={`${inputBase} ${invalidClass(messages)} disabled:border-transparent disabled:bg-transparent disabled:text-ink`}
       >
         <option value="">{`${derived} (from y)`}</option>
         <option value="left">left</option>
