@@ -50,8 +50,12 @@ if (cd "$ROOT" && npx react-router build >"$REPORTS/build.log" 2>&1); then
   if port_in_use "$APP_PORT"; then
     warn "port $APP_PORT is taken; set GAITLOOM_TEST_PORT to a free one"
   else
+    # Serve a copy, so a build started elsewhere meanwhile cannot swap the assets under the tests.
+    # (The server finds its assets at build/client relative to its working folder.)
+    SERVE_DIR="$DATA_DIR/test-serve-$APP_PORT"
+    rm -rf "$SERVE_DIR" && mkdir -p "$SERVE_DIR" && cp -r "$ROOT/build" "$SERVE_DIR/build"
     service_start test-app "$REPORTS/app.log" env NODE_ENV=production HOST=127.0.0.1 PORT="$APP_PORT" \
-      node_modules/.bin/react-router-serve build/server/index.js
+      bash -c 'cd "$1" && exec "$2/node_modules/.bin/react-router-serve" build/server/index.js' serve "$SERVE_DIR" "$ROOT"
     ( service_wait_port test-app "$APP_PORT" "$REPORTS/app.log" ) && {
       say "browser tests (Playwright driving /usr/bin/chromium)"
       (cd "$ROOT" && GAITLOOM_E2E_URL="$PUBLIC_URL" PLAYWRIGHT_JSON_OUTPUT_NAME="$REPORTS/e2e.json" \

@@ -119,7 +119,11 @@ function UserMenu({ data }: { data: ShellData | null }) {
   }
   return (
     <details className="relative">
-      <summary className="cursor-pointer list-none rounded-md px-2 py-1 text-sm hover:bg-sunken" aria-label="Your account">
+      <summary
+        className="cursor-pointer list-none rounded-md px-2 py-1 text-sm hover:bg-sunken"
+        // The name starts with the visible text, as speech-input users say what they see.
+        aria-label={`${data.user.name}${data.role ? ` ${ROLE_LABELS[data.role]}` : ""}, your account`}
+      >
         <span className="font-medium">{data.user.name}</span>
         {data.role ? <span className="ml-2 text-ink-muted">{ROLE_LABELS[data.role]}</span> : null}
       </summary>
