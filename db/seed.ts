@@ -4,6 +4,7 @@ import { readFile } from "node:fs/promises";
 import { and, desc, eq, sql } from "drizzle-orm";
 import { generateGait } from "../app/gait/index";
 import { parseRobot } from "../app/kinematics";
+import { recordReleaseTable } from "../app/lib/tables.server";
 import { commitDraft } from "../app/lib/versions.server";
 import { createDatabase, databaseUrl, type Database } from "./client";
 import { demoGaits, demoPeople, demoRobots, demoWorkspace } from "./demo/scenario";
@@ -97,6 +98,7 @@ async function seedGait(db: Database, workspaceId: string, userIds: Map<string, 
     if (from !== "committed") {
       await db.update(gaitVersions).set({ state: from, reviewerId, stateChangedAt: new Date() }).where(eq(gaitVersions.id, committed.id));
     }
+    if (from === "released") await recordReleaseTable(db, { versionId: committed.id, releasedById: reviewerId ?? null });
   }
 }
 

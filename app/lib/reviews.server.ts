@@ -13,6 +13,7 @@ import { config } from "./config.server";
 import { database } from "./db.server";
 import { ServiceError } from "./errors.server";
 import { sendMail } from "./mail.server";
+import { recordReleaseTable } from "./tables.server";
 import { can, type Action } from "./permissions";
 import type { Person, VersionSummary } from "./versions.server";
 
@@ -352,6 +353,8 @@ export async function releaseVersion(actor: Member, versionId: string, input: { 
     }
     // Conditional: if the version left `approved` since it was read, this refuses and the retirement above rolls back.
     await moveState(tx, version, ["approved"], "released");
+    // What the release ships, kept so its table can be reproduced byte for byte.
+    await recordReleaseTable(tx, { versionId: version.id, releasedById: actor.user.id });
     await tx.insert(reviewEvents).values({ versionId: version.id, actorId: actor.user.id, fromState: "approved", toState: "released", comment });
     await recordAudit(
       {

@@ -32,7 +32,7 @@ import { GaitInputError, MAX_FPS, MAX_FRAMES, parseSequence, type Flag, type Seq
 import { JOINT_NAMES, parseRobot, type JointName, type Robot } from "../kinematics/index";
 import { apiError } from "./api.server";
 import { recordAudit } from "./audit.server";
-import { findProfileByName, listProfiles, type StoredProfile } from "./calibration.server";
+import { findProfileByName, type StoredProfile } from "./calibration.server";
 import { canonicalJson } from "./content-hash.server";
 import { database } from "./db.server";
 import { ServiceError, apiAction } from "./errors.server";

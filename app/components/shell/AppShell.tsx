@@ -1,6 +1,6 @@
 import { Form, Link, NavLink, useLocation } from "react-router";
 import type { Role } from "~/lib/permissions";
-import { ROLE_LABELS } from "~/lib/permissions";
+import { type Action, ROLE_LABELS, can } from "~/lib/permissions";
 import { Mark } from "./Mark";
 import { ThemeToggle } from "./ThemeToggle";
 
@@ -12,12 +12,13 @@ export type ShellData = {
   localMail: boolean;
 };
 
-const sections = [
+const sections: { to: string; label: string; hint: string; needs?: Action }[] = [
   { to: "/robots", label: "Robots", hint: "Legs, joints and servos" },
   { to: "/gaits", label: "Gaits", hint: "Walks, turns and moves" },
   { to: "/reviews", label: "Reviews", hint: "Versions waiting for you" },
+  { to: "/export", label: "Export", hint: "Angle tables for firmware", needs: "tables.download" },
   { to: "/settings", label: "Settings", hint: "Workspace and members" },
-] as const;
+];
 
 export function AppShell({ data, children }: { data: ShellData | null; children: React.ReactNode }) {
   return (
@@ -40,7 +41,7 @@ export function AppShell({ data, children }: { data: ShellData | null; children:
       </header>
       <nav aria-label="Sections" className="border-r border-line bg-surface px-3 py-4">
         <ul className="space-y-1">
-          {sections.map((section) => (
+          {sections.filter((section) => !section.needs || !data?.role || can(data.role, section.needs)).map((section) => (
             <li key={section.to}>
               <NavLink
                 to={section.to}
@@ -54,6 +55,11 @@ export function AppShell({ data, children }: { data: ShellData | null; children:
             </li>
           ))}
         </ul>
+        <p className="mt-6 px-3 text-xs text-ink-muted">
+          <Link to="/api-docs" className="hover:text-ink">
+            API reference
+          </Link>
+        </p>
       </nav>
       <main id="content" className="min-w-0 px-8 py-6">
         {children}

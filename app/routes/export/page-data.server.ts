@@ -8,7 +8,6 @@ import { JOINT_NAMES, parseRobot, type JointName } from "~/kinematics";
 import { listProfiles } from "~/lib/calibration.server";
 import { ServiceError } from "~/lib/errors.server";
 import {
-  RELEASE_TABLE,
   TableError,
   benchQuerySchema,
   newestRevision,
@@ -25,7 +24,6 @@ import {
   type RenderedTable,
   type TableQuery,
 } from "~/lib/tables.server";
-
 
 /** Rows a page preview carries: the windowed list scrolls through them; the file holds every frame. */
 export const PREVIEW_ROWS = 2000;
@@ -95,7 +93,7 @@ function formQuery(search: URLSearchParams, keys: readonly string[]): URLSearchP
   return kept;
 }
 
-/** A table query as the API reads it, with only what differs from nothing said (format and units always). */
+/** A query string of the given parameters, in this order, leaving out those not given. */
 function apiQueryString(query: Record<string, string | number | undefined>): string {
   const search = new URLSearchParams();
   for (const [key, value] of Object.entries(query)) if (value !== undefined && value !== "") search.set(key, String(value));
@@ -169,7 +167,6 @@ export async function exportPageData(workspaceId: string, search: URLSearchParam
     release,
   };
 }
-
 
 const BENCH_FORM_KEYS = ["robot", "kind", "leg", "joint", "speed", "dwell", "seconds", "fps", "hold", "format", "units", "profile", "override"] as const;
 
