@@ -164,7 +164,10 @@ async function conflict(db: Reader, gaitId: string, baseRevision: number): Promi
 
 export type SavedDraft = { revision: number; updatedAt: string };
 
-/** Saves the draft if nobody saved since `baseRevision`: one conditional UPDATE, so two saves can never both win. */
+/**
+ * Saves the draft if nobody saved since `baseRevision`: one conditional UPDATE, so two saves can never both win.
+ * Autosaves are not written to the audit log (they come every few seconds); commits and moves are.
+ */
 export async function saveDraft(actor: DraftActor, gaitId: string, body: unknown, db: Database = database()): Promise<SavedDraft> {
   const input = draftSaveBody.safeParse(body);
   if (!input.success) {

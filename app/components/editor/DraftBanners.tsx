@@ -1,7 +1,7 @@
 // What the editor says about the draft's safety: a stale save (someone else
 // saved first) with the two ways out that lose nothing, and unsaved changes
 // found in this browser from an earlier visit.
-import { useEffect, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { useFetcher, useRevalidator } from "react-router";
 import type { Sequence } from "~/gait";
 import { clearLocalDraft, markLocalDraftSynced, pendingLocalDraft, writeLocalDraft, type LocalDraft } from "~/lib/editor/local-draft";
@@ -90,8 +90,13 @@ export function RestoreOffer({ gaitId, serverSequence, serverUpdatedAt }: { gait
   const store = useEditorStore();
   const readOnly = useEditor((state) => state.readOnly);
   const [local, setLocal] = useState<LocalDraft | null>(null);
-  // localStorage exists only in the browser: looked at after the first render.
-  useEffect(() => setLocal(readOnly ? null : pendingLocalDraft(gaitId, serverSequence)), [gaitId, serverSequence, readOnly]);
+  // localStorage exists only in the browser: looked at once, after the first render, against the draft
+  // this editor opened with (later loader data would make this session's own unsaved edits look like leftovers).
+  const opened = useRef({ gaitId, serverSequence, readOnly });
+  useEffect(() => {
+    const { gaitId: id, serverSequence: sequence, readOnly: viewing } = opened.current;
+    setLocal(viewing ? null : pendingLocalDraft(id, sequence));
+  }, []);
   if (!local) return null;
   const newer = local.savedAt > Date.parse(serverUpdatedAt);
   return (
