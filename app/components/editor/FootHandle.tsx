@@ -3,7 +3,7 @@
 // Only keys that place the foot get a handle: during a stance the foot stays
 // where it touched down, so a lift-off key's foot follows from the stance.
 import { useRef } from "react";
-import type { ViewFrame } from "~/components/robot-view/frame";
+import type { ViewFrame } from "~/components/robot-view";
 import type { LegKey } from "~/gait";
 import { poseApply, poseUnapply, type Vec3 } from "~/kinematics";
 import { bodyOffsetAt, plannedFoot } from "~/lib/editor/body-offset";

@@ -4,7 +4,7 @@
 // to drag). Geometry comes per frame from a cache kept with the solve.
 import { useMemo } from "react";
 import { groundRings, SideView, TopView } from "~/components/robot-view";
-import { topFrame } from "~/components/robot-view/frame";
+import { topFrame } from "~/components/robot-view";
 import { SOLVE_DEFAULTS } from "~/gait";
 import { useEditor } from "~/stores/editor-context";
 import { FootHandle } from "./FootHandle";

@@ -6,12 +6,13 @@ import { PageHeader } from "~/components/common/PageHeader";
 import { StateBadge } from "~/components/versions/StateBadge";
 import { requireAccess } from "~/lib/access.server";
 import { listGaits } from "~/lib/gaits.server";
+import { can } from "~/lib/permissions";
 import { listRobots } from "~/lib/robots.server";
 
 const listQuery = z.object({ robot: z.guid().optional().catch(undefined) });
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const { workspace } = await requireAccess(request, "gaits.read");
+  const { workspace, role } = await requireAccess(request, "gaits.read");
   const { robot } = listQuery.parse({ robot: new URL(request.url).searchParams.get("robot") || undefined });
   const robots = await listRobots(workspace.id);
   const chosen = robot ? (robots.find((candidate) => candidate.id === robot) ?? null) : null;
@@ -20,13 +21,14 @@ export async function loader({ request }: Route.LoaderArgs) {
     robots: robots.map(({ id, name }) => ({ id, name })),
     robot: chosen ? { id: chosen.id, name: chosen.name } : null,
     unknownRobot: Boolean(robot && !chosen),
+    canCreate: can(role, "gaits.edit"),
   };
 }
 
 export const meta: Route.MetaFunction = ({ loaderData }) => [{ title: loaderData?.robot ? `Gaits of ${loaderData.robot.name} · Gaitloom` : "Gaits · Gaitloom" }];
 
 export default function GaitList({ loaderData }: Route.ComponentProps) {
-  const { gaits, robots, robot, unknownRobot } = loaderData;
+  const { gaits, robots, robot, unknownRobot, canCreate } = loaderData;
   return (
     <>
       <PageHeader
@@ -49,6 +51,14 @@ export default function GaitList({ loaderData }: Route.ComponentProps) {
             Show
           </button>
         </Form>
+        {canCreate ? (
+          <Link
+            to={robot ? `/gaits/new?robot=${robot.id}` : "/gaits/new"}
+            className="self-end rounded-md bg-accent px-3 py-1.5 text-sm font-medium text-on-accent hover:bg-accent-strong"
+          >
+            New gait
+          </Link>
+        ) : null}
       </PageHeader>
       {unknownRobot ? <p className="mb-4 rounded-md bg-sunken px-4 py-2 text-sm">That robot is not in this workspace; showing every robot's gaits.</p> : null}
       {gaits.length === 0 ? (
