@@ -1,6 +1,6 @@
 import { count } from "drizzle-orm";
 import { describe, expect, test } from "vitest";
-import { gaitVersions, gaits, memberships, reviewEvents, robotRevisions, robots, users, workspaces } from "../../db/schema";
+import { gaitVersions, gaits, memberships, releases, reviewEvents, robotRevisions, robots, users, workspaces } from "../../db/schema";
 import { seedDemo } from "../../db/seed";
 import { demoGaits, demoPeople, demoRobots } from "../../db/demo/scenario";
 import { database } from "~/lib/db.server";
@@ -39,6 +39,10 @@ describe("demo seed", () => {
     const released = states.filter((row) => row.state === "released");
     expect(new Set(released.map((row) => row.gaitId)).size).toBe(released.length);
     expect(released.length).toBeGreaterThan(0);
+    // Each demo release keeps the hash of the table it shipped.
+    const records = await database().select().from(releases);
+    expect(records).toHaveLength(released.length);
+    expect(records.every((record) => /^[0-9a-f]{64}$/.test(record.tableSha256))).toBe(true);
     const roles = new Set(demoPeople.map((person) => person.role));
     expect([...roles].sort()).toEqual(["animator", "firmware", "lead", "owner", "viewer"]);
   });

@@ -50,7 +50,7 @@ describe("recordReleaseTable", () => {
   });
 
   test("inside a transaction that rolls back, nothing is stored", async () => {
-    const version = await storedVersion(ids.gaitIds["Trot"], 1);
+    const version = await storedVersion(ids.gaitIds["Trot"], 2);
     await expect(
       database().transaction(async (tx) => {
         await recordReleaseTable(tx, { versionId: version.id, releasedById: ids.userIds.lead });
@@ -108,7 +108,9 @@ describe("the export page shows the release record", () => {
     expect(other.release.path).toBe(`/api/v1/gaits/${gaitId}/versions/1/table?format=csv&units=deg`);
   });
 
-  test("a gait without a record shows none", async () => {
+  test("a released version from before records were kept shows none", async () => {
+    const released = await storedVersion(ids.gaitIds["Wave climb"], 1);
+    await database().delete(releases).where(eq(releases.versionId, released.id));
     const request = await requestsAs("firmware", ids);
     const page = (await load(exportPage, await request("GET", `/export?gait=${ids.gaitIds["Wave climb"]}`))) as any;
     expect(page.version).toBe("released");
