@@ -61,3 +61,25 @@ async function measure(baseUrl: string, token: string, body: string, layout: str
     );
   }
 }
+
+/** GET of a released demo table in each format (first request solves; the rest are what build scripts see). */
+export async function benchTableApi(baseUrl: string, token: string, gaitId: string): Promise<void> {
+  for (const [format, units] of [["csv", "deg"], ["json", "rad"], ["c", "us"]] as const) {
+    const url = `${baseUrl}/api/v1/gaits/${gaitId}/versions/released/table?format=${format}&units=${units}`;
+    const times: number[] = [];
+    let bytes = 0;
+    for (let i = 0; i < 65; i++) {
+      const started = performance.now();
+      const response = await fetch(url, { headers: { Authorization: `Bearer ${token}` } });
+      const text = await response.text();
+      if (response.status !== 200) throw new Error(`table answered ${response.status}: ${text.slice(0, 200)}`);
+      if (i >= 5) times.push(performance.now() - started);
+      bytes = Buffer.byteLength(text);
+    }
+    times.sort((a, b) => a - b);
+    console.log(
+      `GET …/versions/released/table?format=${format}&units=${units} (Tripod cruise, 60 frames): ` +
+        `p50 ${percentile(times, 50).toFixed(1)} ms, p95 ${percentile(times, 95).toFixed(1)} ms over ${times.length} requests; ${(bytes / 1024).toFixed(1)} KiB`,
+    );
+  }
+}

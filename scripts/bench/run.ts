@@ -3,7 +3,10 @@
 import { benchExport } from "./export";
 import { benchGait } from "./gait";
 import { benchKinematics } from "./kinematics";
-import { benchSolveApi } from "./http";
+import { eq } from "drizzle-orm";
+import { createDatabase } from "../../db/client";
+import { gaits } from "../../db/schema";
+import { benchSolveApi, benchTableApi } from "./http";
 
 console.log(`Gaitloom benchmarks on ${process.version}, ${new Date().toISOString()}\n`);
 console.log("== kinematics");
@@ -17,6 +20,10 @@ const token = process.env.GAITLOOM_BENCH_TOKEN;
 if (url && token) {
   console.log("\n== HTTP on loopback");
   await benchSolveApi(url, token);
+  const { db, client } = createDatabase(process.env.DATABASE_URL!, { max: 1 });
+  const [gait] = await db.select({ id: gaits.id }).from(gaits).where(eq(gaits.name, "Tripod cruise"));
+  await client.end();
+  await benchTableApi(url, token, gait.id);
 } else {
   console.log("\n(HTTP benchmarks skipped: run them through `npm run bench`, which starts the app.)");
 }
