@@ -46,3 +46,23 @@ export function poseUnapply(pose: BodyPose, point: Vec3): Vec3 {
   const z = point[2] - pose.z;
   return [r[0] * x + r[3] * y + r[6] * z, r[1] * x + r[4] * y + r[7] * z, r[2] * x + r[5] * y + r[8] * z];
 }
+
+/**
+ * A rotation matrix remembered for the last roll, pitch and yaw asked for:
+ * the legs of one frame share a pose, so it is worked out once, not per leg.
+ */
+export function createPoseRotationCache(): (pose: BodyPose) => Float64Array {
+  const rotation = new Float64Array(9);
+  let rollDeg = Number.NaN;
+  let pitchDeg = Number.NaN;
+  let yawDeg = Number.NaN;
+  return (pose) => {
+    if (pose.roll !== rollDeg || pose.pitch !== pitchDeg || pose.yaw !== yawDeg) {
+      poseRotation(pose, rotation);
+      rollDeg = pose.roll;
+      pitchDeg = pose.pitch;
+      yawDeg = pose.yaw;
+    }
+    return rotation;
+  };
+}

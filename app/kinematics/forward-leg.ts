@@ -6,27 +6,12 @@ import * as robotModule from "./robot";
 import type { BodyPose, JointAngles, Robot, Vec3 } from "./robot";
 
 // Module-local copies: some module loaders read imported bindings through getters (see leg-kernel.ts).
-const poseRotation = bodyPoseModule.poseRotation;
 const cachedLegConstants = legConstantsModule.cachedLegConstants;
 const forwardLegInto = kernel.forwardLegInto;
 const findLeg = robotModule.findLeg;
 
 const footScratch = new Float64Array(3);
-const rotationScratch = new Float64Array(9);
-// The legs of one frame share a pose: its rotation is worked out once, not per leg.
-let rotationRollDeg = Number.NaN;
-let rotationPitchDeg = Number.NaN;
-let rotationYawDeg = Number.NaN;
-
-function rotationOf(pose: BodyPose): Float64Array {
-  if (pose.roll !== rotationRollDeg || pose.pitch !== rotationPitchDeg || pose.yaw !== rotationYawDeg) {
-    poseRotation(pose, rotationScratch);
-    rotationRollDeg = pose.roll;
-    rotationPitchDeg = pose.pitch;
-    rotationYawDeg = pose.yaw;
-  }
-  return rotationScratch;
-}
+const rotationOf = bodyPoseModule.createPoseRotationCache();
 
 /**
  * The foot (mm) in the neutral body frame for servo angles `angles` (degrees),

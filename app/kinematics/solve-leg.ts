@@ -9,7 +9,6 @@ import type { BodyPose, JointAngles, JointName, Robot, Vec3 } from "./robot";
 import * as status from "./solve-status";
 
 // Module-local copies: some module loaders read imported bindings through getters (see leg-kernel.ts).
-const poseRotation = bodyPoseModule.poseRotation;
 const cachedLegConstants = legConstantsModule.cachedLegConstants;
 const solveLegInto = kernel.solveLegInto;
 const findLeg = robotModule.findLeg;
@@ -31,21 +30,7 @@ export type LegSolution = {
 };
 
 const anglesScratch = new Float64Array(3);
-const rotationScratch = new Float64Array(9);
-// The legs of one frame share a pose: its rotation is worked out once, not per leg.
-let rotationRollDeg = Number.NaN;
-let rotationPitchDeg = Number.NaN;
-let rotationYawDeg = Number.NaN;
-
-function rotationOf(pose: BodyPose): Float64Array {
-  if (pose.roll !== rotationRollDeg || pose.pitch !== rotationPitchDeg || pose.yaw !== rotationYawDeg) {
-    poseRotation(pose, rotationScratch);
-    rotationRollDeg = pose.roll;
-    rotationPitchDeg = pose.pitch;
-    rotationYawDeg = pose.yaw;
-  }
-  return rotationScratch;
-}
+const rotationOf = bodyPoseModule.createPoseRotationCache();
 
 /**
  * Joint angles (servo degrees) that put the leg's foot at `foot` (mm, neutral

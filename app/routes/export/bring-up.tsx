@@ -2,6 +2,7 @@
 // its centre, or a slow sweep of one chosen joint through its range, checked
 // for speed like any gait — in any format and units, with a calibration profile.
 import { Form, Link, useNavigation, useSubmit } from "react-router";
+import { TableFormatFields, fieldClass, labelClass } from "~/components/export/TableFormatFields";
 import type { Route } from "./+types/bring-up";
 import { EmptyState } from "~/components/common/EmptyState";
 import { ErrorPanel } from "~/components/common/ErrorPanel";
@@ -23,8 +24,6 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export const meta: Route.MetaFunction = () => [{ title: "Bring-up tables · Gaitloom" }];
 
-const field = "mt-1 w-full rounded-md border border-line bg-surface px-3 py-2";
-const label = "block text-sm font-medium";
 
 export default function BringUp({ loaderData }: Route.ComponentProps) {
   const { robots, robot, legs, profiles, query, problem, table, checks, download } = loaderData;
@@ -60,10 +59,10 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
       <SafetyNotice />
       <Form method="get" onChange={onChange} aria-label="Bench table options" className="grid grid-cols-2 gap-4 rounded-lg border border-line bg-surface p-5 lg:grid-cols-4">
         <div className="col-span-2">
-          <label htmlFor="bench-robot" className={label}>
+          <label htmlFor="bench-robot" className={labelClass}>
             Robot (newest revision)
           </label>
-          <select id="bench-robot" name="robot" defaultValue={robot.id} key={`robot-${robot.id}`} className={field}>
+          <select id="bench-robot" name="robot" defaultValue={robot.id} key={`robot-${robot.id}`} className={fieldClass}>
             {robots.map((entry) => (
               <option key={entry.id} value={entry.id}>
                 {entry.name}
@@ -72,7 +71,7 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
           </select>
         </div>
         <fieldset className="col-span-2">
-          <legend className={label}>Table</legend>
+          <legend className={labelClass}>Table</legend>
           <div className="mt-2 flex gap-6">
             <label className="flex items-center gap-2">
               <input type="radio" name="kind" value="centre" defaultChecked={!sweep} key={`centre-${sweep}`} /> Centre every servo
@@ -85,10 +84,10 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
         {sweep ? (
           <>
             <div>
-              <label htmlFor="bench-leg" className={label}>
+              <label htmlFor="bench-leg" className={labelClass}>
                 Leg
               </label>
-              <select id="bench-leg" name="leg" defaultValue={query.leg ?? ""} key={`leg-${robot.id}-${query.leg}`} className={field} aria-invalid={problem?.parameter === "leg" || undefined}>
+              <select id="bench-leg" name="leg" defaultValue={query.leg ?? ""} key={`leg-${robot.id}-${query.leg}`} className={fieldClass} aria-invalid={problem?.parameter === "leg" || undefined}>
                 <option value="">Choose…</option>
                 {legs.map((entry) => (
                   <option key={entry.id} value={entry.id}>
@@ -98,10 +97,10 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
               </select>
             </div>
             <div>
-              <label htmlFor="bench-joint" className={label}>
+              <label htmlFor="bench-joint" className={labelClass}>
                 Joint
               </label>
-              <select id="bench-joint" name="joint" defaultValue={query.joint ?? ""} key={`joint-${query.joint}`} className={field} aria-invalid={problem?.parameter === "joint" || undefined}>
+              <select id="bench-joint" name="joint" defaultValue={query.joint ?? ""} key={`joint-${query.joint}`} className={fieldClass} aria-invalid={problem?.parameter === "joint" || undefined}>
                 <option value="">Choose…</option>
                 <option value="coxa">coxa</option>
                 <option value="femur">femur</option>
@@ -109,22 +108,22 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
               </select>
             </div>
             <div>
-              <label htmlFor="bench-speed" className={label}>
+              <label htmlFor="bench-speed" className={labelClass}>
                 Speed (fraction of the joint's limit)
               </label>
-              <input id="bench-speed" name="speed" type="number" step="any" min="0.01" max="10" defaultValue={query.speed} className={`${field} text-right`} />
+              <input id="bench-speed" name="speed" type="number" step="any" min="0.01" max="10" defaultValue={query.speed} className={`${fieldClass} text-right`} />
             </div>
             <div>
-              <label htmlFor="bench-dwell" className={label}>
+              <label htmlFor="bench-dwell" className={labelClass}>
                 Pause at each end (ms)
               </label>
-              <input id="bench-dwell" name="dwell" type="number" step="1" min="0" max="10000" defaultValue={query.dwell} className={`${field} text-right`} />
+              <input id="bench-dwell" name="dwell" type="number" step="1" min="0" max="10000" defaultValue={query.dwell} className={`${fieldClass} text-right`} />
             </div>
             <div>
-              <label htmlFor="bench-hold" className={label}>
+              <label htmlFor="bench-hold" className={labelClass}>
                 Other joints hold
               </label>
-              <select id="bench-hold" name="hold" defaultValue={query.hold} key={`hold-${query.hold}`} className={field}>
+              <select id="bench-hold" name="hold" defaultValue={query.hold} key={`hold-${query.hold}`} className={fieldClass}>
                 <option value="stance">the neutral stance</option>
                 <option value="centre">0 servo degrees</option>
               </select>
@@ -132,43 +131,24 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
           </>
         ) : (
           <div>
-            <label htmlFor="bench-seconds" className={label}>
+            <label htmlFor="bench-seconds" className={labelClass}>
               Hold for (s)
             </label>
-            <input id="bench-seconds" name="seconds" type="number" step="any" min="0.1" max="600" defaultValue={query.seconds} className={`${field} text-right`} />
+            <input id="bench-seconds" name="seconds" type="number" step="any" min="0.1" max="600" defaultValue={query.seconds} className={`${fieldClass} text-right`} />
           </div>
         )}
         <div>
-          <label htmlFor="bench-fps" className={label}>
+          <label htmlFor="bench-fps" className={labelClass}>
             Rate (frames/s)
           </label>
-          <input id="bench-fps" name="fps" type="number" step="any" min="1" max="1000" defaultValue={query.fps} className={`${field} text-right`} />
+          <input id="bench-fps" name="fps" type="number" step="any" min="1" max="1000" defaultValue={query.fps} className={`${fieldClass} text-right`} />
         </div>
+        <TableFormatFields idPrefix="bench" format={query.format} units={query.units} />
         <div>
-          <label htmlFor="bench-format" className={label}>
-            Format
-          </label>
-          <select id="bench-format" name="format" defaultValue={query.format} key={`format-${query.format}`} className={field}>
-            <option value="csv">CSV</option>
-            <option value="json">JSON (with metadata)</option>
-            <option value="c">C header</option>
-          </select>
-        </div>
-        <div>
-          <label htmlFor="bench-units" className={label}>
-            Units
-          </label>
-          <select id="bench-units" name="units" defaultValue={query.units} key={`units-${query.units}`} className={field}>
-            <option value="deg">Degrees (0.1°)</option>
-            <option value="rad">Radians (0.0001 rad)</option>
-            <option value="us">Pulse widths (µs)</option>
-          </select>
-        </div>
-        <div>
-          <label htmlFor="bench-profile" className={label}>
+          <label htmlFor="bench-profile" className={labelClass}>
             Calibration profile
           </label>
-          <select id="bench-profile" name="profile" defaultValue={query.profile ?? ""} key={`profile-${robot.id}-${query.profile}`} className={field}>
+          <select id="bench-profile" name="profile" defaultValue={query.profile ?? ""} key={`profile-${robot.id}-${query.profile}`} className={fieldClass}>
             <option value="">None — the robot definition</option>
             {profiles.map((entry) => (
               <option key={entry.name} value={entry.name}>
@@ -178,7 +158,7 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
           </select>
         </div>
         <div className={`col-span-2 ${problem?.needsOverride ? "rounded-md bg-danger-soft p-2" : ""}`}>
-          <label htmlFor="bench-override" className={label}>
+          <label htmlFor="bench-override" className={labelClass}>
             Override reason
           </label>
           <input
@@ -190,7 +170,7 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
             autoFocus={problem?.needsOverride}
             aria-invalid={problem?.needsOverride || undefined}
             aria-describedby="bench-override-help"
-            className={field}
+            className={fieldClass}
           />
           <p id="bench-override-help" className="mt-1 text-xs text-ink-muted">
             Only when the checks find errors; written into the table's header.

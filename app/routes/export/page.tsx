@@ -2,6 +2,7 @@
 // (the released one by default), format, units, rate and calibration profile;
 // preview the rows; download it; copy the command for the build script.
 import { Form, Link, useNavigation, useSubmit } from "react-router";
+import { TableFormatFields, fieldClass, labelClass } from "~/components/export/TableFormatFields";
 import type { Route } from "./+types/page";
 import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { EmptyState } from "~/components/common/EmptyState";
@@ -34,8 +35,6 @@ const STATE_WORDS: Record<string, string> = {
   retired: "retired",
 };
 
-const field = "mt-1 w-full rounded-md border border-line bg-surface px-3 py-2";
-const label = "block text-sm font-medium";
 
 export default function ExportPage({ loaderData }: Route.ComponentProps) {
   const { gaits, gait, version, versions, profiles, query, problem, table, download, release, sequence } = loaderData;
@@ -74,10 +73,10 @@ export default function ExportPage({ loaderData }: Route.ComponentProps) {
       <SafetyNotice />
       <Form method="get" onChange={onChange} className="grid grid-cols-2 gap-4 rounded-lg border border-line bg-surface p-5 lg:grid-cols-4" aria-label="Table options">
         <div className="col-span-2">
-          <label htmlFor="export-gait" className={label}>
+          <label htmlFor="export-gait" className={labelClass}>
             Gait
           </label>
-          <select id="export-gait" name="gait" defaultValue={gait.id} key={`gait-${gait.id}`} className={field}>
+          <select id="export-gait" name="gait" defaultValue={gait.id} key={`gait-${gait.id}`} className={fieldClass}>
             {gaits.map((entry) => (
               <option key={entry.id} value={entry.id}>
                 {entry.name} — {entry.robotName}
@@ -87,10 +86,10 @@ export default function ExportPage({ loaderData }: Route.ComponentProps) {
           </select>
         </div>
         <div className="col-span-2">
-          <label htmlFor="export-version" className={label}>
+          <label htmlFor="export-version" className={labelClass}>
             Version
           </label>
-          <select id="export-version" name="version" defaultValue={String(version)} key={`version-${gait.id}-${version}`} className={field}>
+          <select id="export-version" name="version" defaultValue={String(version)} key={`version-${gait.id}-${version}`} className={fieldClass}>
             {gait.releasedVersion !== null ? <option value="released">Released (currently v{gait.releasedVersion}) — for build scripts</option> : null}
             {versions.map((entry) => (
               <option key={entry.number} value={entry.number}>
@@ -99,28 +98,9 @@ export default function ExportPage({ loaderData }: Route.ComponentProps) {
             ))}
           </select>
         </div>
+        <TableFormatFields idPrefix="export" format={query.format} units={query.units} />
         <div>
-          <label htmlFor="export-format" className={label}>
-            Format
-          </label>
-          <select id="export-format" name="format" defaultValue={query.format} key={`format-${query.format}`} className={field}>
-            <option value="csv">CSV</option>
-            <option value="json">JSON (with metadata)</option>
-            <option value="c">C header</option>
-          </select>
-        </div>
-        <div>
-          <label htmlFor="export-units" className={label}>
-            Units
-          </label>
-          <select id="export-units" name="units" defaultValue={query.units} key={`units-${query.units}`} className={field}>
-            <option value="deg">Degrees (0.1°)</option>
-            <option value="rad">Radians (0.0001 rad)</option>
-            <option value="us">Pulse widths (µs)</option>
-          </select>
-        </div>
-        <div>
-          <label htmlFor="export-rate" className={label}>
+          <label htmlFor="export-rate" className={labelClass}>
             Rate (frames/s)
           </label>
           <input
@@ -134,14 +114,14 @@ export default function ExportPage({ loaderData }: Route.ComponentProps) {
             placeholder={sequence ? `${sequence.fps} (its own)` : ""}
             aria-describedby="rate-help"
             aria-invalid={problem?.parameter === "rate" || undefined}
-            className={`${field} text-right`}
+            className={`${fieldClass} text-right`}
           />
           <p id="rate-help" className="mt-1 text-xs text-ink-muted">
             Another rate solves the gait again; nothing is interpolated.
           </p>
         </div>
         <div>
-          <label htmlFor="export-profile" className={label}>
+          <label htmlFor="export-profile" className={labelClass}>
             Calibration profile
           </label>
           <select
@@ -149,7 +129,7 @@ export default function ExportPage({ loaderData }: Route.ComponentProps) {
             name="profile"
             defaultValue={query.profile ?? ""}
             key={`profile-${gait.id}-${query.profile}`}
-            className={field}
+            className={fieldClass}
             aria-invalid={problem?.parameter === "profile" || undefined}
           >
             <option value="">None — the robot definition</option>
@@ -164,7 +144,7 @@ export default function ExportPage({ loaderData }: Route.ComponentProps) {
           </Link>
         </div>
         <div className={`col-span-2 lg:col-span-3 ${problem?.needsOverride ? "rounded-md bg-danger-soft p-2" : ""}`}>
-          <label htmlFor="export-override" className={label}>
+          <label htmlFor="export-override" className={labelClass}>
             Override reason
           </label>
           <input
@@ -177,7 +157,7 @@ export default function ExportPage({ loaderData }: Route.ComponentProps) {
             aria-invalid={problem?.needsOverride || undefined}
             aria-describedby="override-help"
             placeholder="e.g. bench test with the legs free, the support flags do not apply"
-            className={field}
+            className={fieldClass}
           />
           <p id="override-help" className="mt-1 text-xs text-ink-muted">
             Only for a version with error flags or clamped pulses; written into the table's header and the audit log.
