@@ -59,6 +59,7 @@ export function solveStandFrames(robot: Robot, angles: Float64Array, fps: number
   }
   const status = new Int32Array(slots);
   const pulseClamped = new Uint8Array(slots * 3);
+  const pulseUs = new Float64Array(slots * 3);
   const feet = new Float64Array(slots * 3);
   const achievedWorld = new Float64Array(slots * 3);
   const [comX, comY] = robot.body.com;
@@ -76,6 +77,7 @@ export function solveStandFrames(robot: Robot, angles: Float64Array, fps: number
         if (value < spec.minDeg - LIMIT_TOLERANCE_DEG || value > spec.maxDeg + LIMIT_TOLERANCE_DEG) status[slot] |= LIMIT_BITS[j];
         const pulse = angleToPulse(spec.joint, value);
         pulseClamped[t + j] = pulse.clamped ? 1 : 0;
+        pulseUs[t + j] = pulse.us;
         pulses[JOINT_NAMES[j]] = pulse.us;
       }
       solver.forward(leg, values.coxa, values.femur, values.tibia, feet, t);
@@ -115,6 +117,7 @@ export function solveStandFrames(robot: Robot, angles: Float64Array, fps: number
     targetNeutral: feet,
     targetBody: feet,
     achievedWorld,
+    pulses: pulseUs,
     pulseClamped,
     offsets: new Float64Array(frameCount * 6),
     resting: new Uint8Array(frameCount).fill(1),

@@ -28,7 +28,7 @@ export {
 export { GAIT_DEFAULTS, gaitParamsSchema, generateGait, type GaitParams } from "./generate";
 export { MOVE_DEFAULTS, generateEntryMove, generateExitMove, type MoveOptions } from "./moves";
 export { TEMPLATES, TEMPLATE_NAMES, legLayout, type GaitTemplate, type LegLayout, type TemplateName } from "./templates/index";
-export { SOLVE_DEFAULTS, solveSequence } from "./solve";
+export { SOLVE_DEFAULTS, framesOf, runSolve, solveSequence, type SolveRun, type Support } from "./solve";
 export {
   FLAG_KINDS,
   type Flag,
@@ -41,7 +41,7 @@ export {
   type SolvedSequence,
 } from "./solved";
 export { CHECKS, type Check, type CheckContext } from "./checks/index";
-export { COLUMNS_LAYOUT, toColumns, type SolveColumns } from "./columns";
+export { COLUMNS_ENCODING, COLUMNS_LAYOUT, columnsOf, decodeColumns, encodeColumns, mapColumns, type SolveColumns } from "./columns";
 export { easingFor, type EasingFunction } from "./interpolate/easing";
 export { swingLift } from "./interpolate/swing";
 export { convexHullInto, stabilityMargin } from "./support";

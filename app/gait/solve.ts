@@ -1,12 +1,14 @@
 // solveSequence (DESIGN.md, "Core module contracts"): samples the sequence at
 // its frame rate, solves every leg of every frame, runs the checks and sums
 // up. Four passes over typed arrays made once per solve, so that sampling and
-// solving allocate nothing and the result's objects are made once, in pass 3:
+// solving allocate nothing:
 //   1. sample and solve: travel, body offset, each leg's planned foot, IK;
 //   2. legs out of reach keep their last reachable angles (round the seam of
 //      a loop too), and where those angles put the foot;
-//   3. pulses, support polygon, margin, and the frame objects;
+//   3. pulses, the body's world pose, support polygon, margin;
 //   4. the checks, then the summary.
+// The frame objects are made last, from the arrays, and only when asked for
+// (framesOf): the compact column layout and the checks never need them.
 // Each pass is a function of its own: the optimiser handles small hot loops
 // far better than one long function (the bench showed nearly half the time).
 import {
@@ -28,7 +30,7 @@ import { TIME_EPSILON, compileLegTrack, pieceFraction, type LegTrackPlan } from 
 import { swingPoint } from "./interpolate/swing";
 import { createPlanar, createTravel, headingToWorld, travelBy, worldToHeading, type Travel } from "./interpolate/travel";
 import { GaitInputError, MAX_FPS, MAX_FRAMES, sequenceIssuesForRobot, type Sequence } from "./sequence";
-import { FLAG_KINDS, type Flag, type FlagKind, type SolveOptions, type SolvedFrame, type SolvedLeg, type SolvedSequence } from "./solved";
+import { FLAG_KINDS, type Flag, type FlagKind, type SolveOptions, type SolveSummary, type SolvedFrame, type SolvedLeg, type SolvedSequence } from "./solved";
 import { clampPulseUs, createPulseTable, rawPulseUs } from "./pulses";
 import { convexHullInto, stabilityMargin } from "./support";
 import { TEMPLATES, legLayout } from "./templates/index";
@@ -52,6 +54,19 @@ function resolveFrameRate(sequence: Sequence, options: SolveOptions): number {
   return fps;
 }
 
+/** Per frame: what pass 3 works out for the result beside the checks' state. */
+export type Support = {
+  /** x, y, z, roll, pitch, yaw of the body in the world. */
+  bodyWorld: Float64Array;
+  /** The CoM's ground projection, world x, y. */
+  comWorld: Float64Array;
+  /** The distinct support polygons (world [x, y], counter-clockwise), and which one each frame has. */
+  polygons: [number, number][][];
+  polygonIndex: Int32Array;
+};
+
+export type SolveRun = { state: SolveState; support: Support; flags: Flag[]; summary: SolveSummary };
+
 /** What the passes share besides the checks' state. */
 type Sampling = {
   state: SolveState;
@@ -73,14 +88,24 @@ type Sampling = {
  * Throws GaitInputError when the sequence's legs do not match the robot's.
  */
 export function solveSequence(robot: Robot, sequence: Sequence, options: SolveOptions = {}): SolvedSequence {
+  const run = runSolve(robot, sequence, options);
+  return { frames: framesOf(run), flags: run.flags, summary: run.summary };
+}
+
+/**
+ * The solve without its frame objects: every number in the typed arrays of
+ * `state` and `support`, with the flags and summary. solveSequence builds
+ * the frames from it; the column layout reads it directly (columns.ts).
+ */
+export function runSolve(robot: Robot, sequence: Sequence, options: SolveOptions = {}): SolveRun {
   const issues = sequenceIssuesForRobot(robot, sequence);
   if (issues.length > 0) throw new GaitInputError(`sequence does not fit robot "${robot.name}"`, issues);
   const sampling = prepare(robot, sequence, options);
   sampleAndSolve(sampling);
   keepReachableAngles(sampling);
-  const frames = buildFrames(sampling);
+  const support = measureSupport(sampling);
   const flags = runChecks(sampling.state, options.checks);
-  return { frames, flags, summary: summarize(sampling.state, sampling.plans, flags, sequence.generator.strideMm, sequence.cycleMs) };
+  return { state: sampling.state, support, flags, summary: summarize(sampling.state, sampling.plans, flags, sequence.generator.strideMm, sequence.cycleMs) };
 }
 
 function prepare(robot: Robot, sequence: Sequence, options: SolveOptions): Sampling {
@@ -141,6 +166,7 @@ function prepare(robot: Robot, sequence: Sequence, options: SolveOptions): Sampl
     targetNeutral: new Float64Array(slots * 3),
     targetBody: new Float64Array(slots * 3),
     achievedWorld: new Float64Array(slots * 3),
+    pulses: new Float64Array(slots * 3),
     pulseClamped: new Uint8Array(slots * 3),
     offsets: new Float64Array(frameCount * 6),
     resting: new Uint8Array(frameCount),
@@ -294,12 +320,15 @@ function keepReachableAngles(sampling: Sampling): void {
   solver.setBodyPose(undefined);
 }
 
-// Pass 3: pulses, support polygon and margin, and the frame objects.
-function buildFrames(sampling: Sampling): SolvedFrame[] {
+// Pass 3: pulses, the body's world pose, support polygon and margin, into
+// typed arrays; each distinct support polygon is made once.
+function measureSupport(sampling: Sampling): Support {
   const { state, heading, comWorld, bodyHeightMm, travel, cycleFrames } = sampling;
-  const { legIds, legCount, frameCount, offsets, angles, status, stance, targetBody, achievedWorld, pulseClamped } = state;
-  const frames: SolvedFrame[] = new Array(frameCount);
-  const pulses = createPulseTable(state.joints.map((spec) => spec.joint));
+  const { legCount, frameCount, offsets, angles, stance, achievedWorld, pulseClamped, pulses } = state;
+  const table = createPulseTable(state.joints.map((spec) => spec.joint));
+  const bodyWorld = new Float64Array(frameCount * 6);
+  const polygons: [number, number][][] = [];
+  const polygonIndex = new Int32Array(frameCount);
   const xs = new Float64Array(legCount);
   const ys = new Float64Array(legCount);
   const order = new Int32Array(legCount);
@@ -308,80 +337,82 @@ function buildFrames(sampling: Sampling): SolvedFrame[] {
   const previousYs = new Float64Array(legCount);
   let previousCount = -1;
   let hullSize = 0;
-  let support: [number, number][] = [];
-  const msPerFrame = 1000 / state.fps;
   const turnDegPerCycle = travel.turnRad * DEG_PER_RAD;
   for (let frame = 0; frame < frameCount; frame += 1) {
     const o = frame * 6;
     const h = frame * 4;
     const cos = heading[h + 2];
     const sin = heading[h + 3];
-    const ox = offsets[o];
-    const oy = offsets[o + 1];
-    const body: BodyPose = {
-      x: heading[h] + cos * ox - sin * oy,
-      y: heading[h + 1] + sin * ox + cos * oy,
-      z: bodyHeightMm + offsets[o + 2],
-      roll: offsets[o + 3],
-      pitch: offsets[o + 4],
-      yaw: (turnDegPerCycle * frame) / cycleFrames + offsets[o + 5],
-    };
-    const legs: Record<string, SolvedLeg> = {};
+    bodyWorld[o] = heading[h] + cos * offsets[o] - sin * offsets[o + 1];
+    bodyWorld[o + 1] = heading[h + 1] + sin * offsets[o] + cos * offsets[o + 1];
+    bodyWorld[o + 2] = bodyHeightMm + offsets[o + 2];
+    bodyWorld[o + 3] = offsets[o + 3];
+    bodyWorld[o + 4] = offsets[o + 4];
+    bodyWorld[o + 5] = (turnDegPerCycle * frame) / cycleFrames + offsets[o + 5];
     let stanceCount = 0;
     for (let leg = 0; leg < legCount; leg += 1) {
       const slot = frame * legCount + leg;
       const t = slot * 3;
-      const coxa = angles[t];
-      const femur = angles[t + 1];
-      const tibia = angles[t + 2];
-      const j = leg * 3;
-      const coxaRaw = rawPulseUs(pulses, j, coxa);
-      const femurRaw = rawPulseUs(pulses, j + 1, femur);
-      const tibiaRaw = rawPulseUs(pulses, j + 2, tibia);
-      const coxaUs = clampPulseUs(pulses, j, coxaRaw);
-      const femurUs = clampPulseUs(pulses, j + 1, femurRaw);
-      const tibiaUs = clampPulseUs(pulses, j + 2, tibiaRaw);
-      pulseClamped[t] = coxaUs !== coxaRaw ? 1 : 0;
-      pulseClamped[t + 1] = femurUs !== femurRaw ? 1 : 0;
-      pulseClamped[t + 2] = tibiaUs !== tibiaRaw ? 1 : 0;
-      const inStance = stance[slot] === 1;
-      if (inStance) {
+      for (let j = 0; j < 3; j += 1) {
+        const raw = rawPulseUs(table, leg * 3 + j, angles[t + j]);
+        pulses[t + j] = clampPulseUs(table, leg * 3 + j, raw);
+        pulseClamped[t + j] = pulses[t + j] !== raw ? 1 : 0;
+      }
+      if (stance[slot] === 1) {
         xs[stanceCount] = achievedWorld[t];
         ys[stanceCount] = achievedWorld[t + 1];
         stanceCount += 1;
       }
-      legs[legIds[leg]] = {
-        contact: inStance ? "stance" : "swing",
-        foot: [targetBody[t], targetBody[t + 1], targetBody[t + 2]],
-        reachable: (status[slot] & SOLVE_UNREACHABLE) === 0,
-        angles: { coxa, femur, tibia },
-        pulses: { coxa: coxaUs, femur: femurUs, tibia: tibiaUs },
-      };
     }
-    const comX = comWorld[frame * 2];
-    const comY = comWorld[frame * 2 + 1];
     state.stanceCount[frame] = stanceCount;
     // Feet fixed in the world keep their polygon: frames with the very same
-    // stance feet share one support list (the result is read-only).
+    // stance feet share one (the result is read-only).
     let sameFeet = frame > 0 && stanceCount === previousCount;
     for (let i = 0; sameFeet && i < stanceCount; i += 1) sameFeet = xs[i] === previousXs[i] && ys[i] === previousYs[i];
     if (!sameFeet) {
       hullSize = convexHullInto(xs, ys, stanceCount, order, hull);
-      support = new Array(hullSize);
-      for (let i = 0; i < hullSize; i += 1) support[i] = [xs[hull[i]], ys[hull[i]]];
+      const polygon = new Array<[number, number]>(hullSize);
+      for (let i = 0; i < hullSize; i += 1) polygon[i] = [xs[hull[i]], ys[hull[i]]];
+      polygons.push(polygon);
       previousCount = stanceCount;
       previousXs.set(xs);
       previousYs.set(ys);
     }
-    const margin = stanceCount >= 3 ? stabilityMargin(xs, ys, hull, hullSize, comX, comY) : Number.NaN;
-    state.margin[frame] = margin;
+    polygonIndex[frame] = polygons.length - 1;
+    state.margin[frame] = stanceCount >= 3 ? stabilityMargin(xs, ys, hull, hullSize, comWorld[frame * 2], comWorld[frame * 2 + 1]) : Number.NaN;
+  }
+  return { bodyWorld, comWorld, polygons, polygonIndex };
+}
+
+/** The frame objects of DESIGN.md's result, made from a run's typed arrays. */
+export function framesOf(run: SolveRun): SolvedFrame[] {
+  const { state, support } = run;
+  const { legIds, legCount, frameCount, angles, pulses, status, stance, targetBody } = state;
+  const { bodyWorld, comWorld, polygons, polygonIndex } = support;
+  const msPerFrame = 1000 / state.fps;
+  const frames: SolvedFrame[] = new Array(frameCount);
+  for (let frame = 0; frame < frameCount; frame += 1) {
+    const o = frame * 6;
+    const legs: Record<string, SolvedLeg> = {};
+    for (let leg = 0; leg < legCount; leg += 1) {
+      const slot = frame * legCount + leg;
+      const t = slot * 3;
+      legs[legIds[leg]] = {
+        contact: stance[slot] === 1 ? "stance" : "swing",
+        foot: [targetBody[t], targetBody[t + 1], targetBody[t + 2]],
+        reachable: (status[slot] & SOLVE_UNREACHABLE) === 0,
+        angles: { coxa: angles[t], femur: angles[t + 1], tibia: angles[t + 2] },
+        pulses: { coxa: pulses[t], femur: pulses[t + 1], tibia: pulses[t + 2] },
+      };
+    }
+    const margin = state.margin[frame];
     frames[frame] = {
       index: frame,
       timeMs: frame * msPerFrame,
-      body,
+      body: { x: bodyWorld[o], y: bodyWorld[o + 1], z: bodyWorld[o + 2], roll: bodyWorld[o + 3], pitch: bodyWorld[o + 4], yaw: bodyWorld[o + 5] },
       legs,
-      support,
-      com: [comX, comY],
+      support: polygons[polygonIndex[frame]],
+      com: [comWorld[frame * 2], comWorld[frame * 2 + 1]],
       marginMm: Number.isNaN(margin) ? null : margin,
     };
   }

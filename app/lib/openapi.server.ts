@@ -7,12 +7,13 @@
 import { createHash } from "node:crypto";
 import { z } from "zod";
 import { EXPORTER_VERSION, TABLE_FORMAT, TABLE_MEDIA_TYPES, calibrationProfileJsonSchema } from "../export/index";
-import { FLAG_KINDS, sequenceJsonSchema } from "../gait/index";
+import { COLUMNS_ENCODING, COLUMNS_LAYOUT, FLAG_KINDS, sequenceJsonSchema } from "../gait/index";
 import { robotJsonSchema } from "../kinematics/index";
 import type { ApiErrorCode } from "./api.server";
 import { config } from "./config.server";
 import { draftSaveBody } from "./drafts.server";
 import { PERMISSIONS, type Action } from "./permissions";
+import { SOLVE_LAYOUTS } from "./solver.server";
 import { matchesIfNoneMatch, RELEASE_TABLE, SOLVER_VERSION, benchQuerySchema, tableQuerySchema } from "./tables.server";
 
 type Json = Record<string, unknown>;
@@ -113,6 +114,12 @@ const bodyPose = {
   description: "Body pose offset: translation in mm, roll, pitch and yaw in degrees (R = Rz(yaw)·Ry(pitch)·Rx(roll)).",
   properties: Object.fromEntries(["x", "y", "z", "roll", "pitch", "yaw"].map((key) => [key, { type: "number", default: 0 }])),
 };
+const column = { type: "string", contentEncoding: "base64", description: "One float32 (little-endian) a frame." };
+const columnsOf = (...names: string[]) => ({
+  type: "object",
+  required: names,
+  properties: Object.fromEntries(names.map((name) => [name, column])),
+});
 const person = { type: ["object", "null"], properties: { login: { type: "string" }, name: { type: "string" } } };
 
 function writtenSchemas(): Record<string, Json> {
@@ -184,7 +191,12 @@ function writtenSchemas(): Record<string, Json> {
             slipToleranceMm: { type: "number", minimum: 0, maximum: 1000 },
             clearanceMm: { type: "number", minimum: 0, maximum: 1000 },
             fps: { type: "integer", minimum: 1, maximum: 1000, description: "Solve at another frame rate than the sequence's." },
-            layout: { type: "string", enum: ["frames", "columns"], description: "columns: the compact column layout." },
+            layout: {
+              type: "string",
+              enum: [...SOLVE_LAYOUTS],
+              default: "frames",
+              description: "frames: one object a frame; columns: the compact column layout; checks: flags and summary only.",
+            },
           },
         },
       },
@@ -205,7 +217,7 @@ function writtenSchemas(): Record<string, Json> {
     },
     SolveResult: {
       type: "object",
-      description: "With options.layout \"columns\" the compact column layout instead (app/gait/columns.ts).",
+      description: "options.layout \"frames\" (the default).",
       required: ["frames", "flags", "summary"],
       properties: {
         frames: {
@@ -230,8 +242,51 @@ function writtenSchemas(): Record<string, Json> {
           },
         },
         flags: { type: "array", items: ref("Flag") },
-        summary: { type: "object", description: "frames, fps, flagsByKind, errors, warnings, worstMarginMm, peakSpeedDegS, dutyFactor, strideMm, bodySpeedMmS, …" },
+        summary: ref("SolveSummary"),
       },
+    },
+    SolveSummary: {
+      type: "object",
+      description: "frames, fps, flagsByKind, errors, warnings, worstMarginMm, peakSpeedDegS, dutyFactor, strideMm, bodySpeedMmS, …",
+    },
+    SolveColumns: {
+      type: "object",
+      description: `options.layout "columns": every per-frame quantity as one column, the base64 of ${COLUMNS_ENCODING} values (one a frame; marginMm is NaN where fewer than three feet are down).`,
+      required: ["layout", "encoding", "frames", "fps", "legs", "joints", "body", "leg", "supportPolygons", "supportIndex", "com", "marginMm", "flags", "summary"],
+      properties: {
+        layout: { const: COLUMNS_LAYOUT },
+        encoding: { const: COLUMNS_ENCODING },
+        frames: { type: "integer" },
+        fps: { type: "number" },
+        legs: { type: "array", items: { type: "string" } },
+        joints: { type: "array", items: { type: "string" } },
+        body: columnsOf("x", "y", "z", "roll", "pitch", "yaw"),
+        leg: {
+          type: "object",
+          additionalProperties: {
+            type: "object",
+            properties: {
+              contact: { type: "string", description: "One character a frame: s stance, w swing." },
+              foot: columnsOf("x", "y", "z"),
+              unreachableFrames: { type: "array", items: { type: "integer" } },
+              angles: columnsOf("coxa", "femur", "tibia"),
+              pulses: columnsOf("coxa", "femur", "tibia"),
+            },
+          },
+        },
+        supportPolygons: { type: "array", items: { type: "array", items: { type: "number" } }, description: "Distinct polygons as flat [x0, y0, x1, y1, …]." },
+        supportIndex: { type: "array", items: { type: "integer" }, description: "Per frame, which of supportPolygons." },
+        com: columnsOf("x", "y"),
+        marginMm: column,
+        flags: { type: "array", items: ref("Flag") },
+        summary: ref("SolveSummary"),
+      },
+    },
+    SolveChecks: {
+      type: "object",
+      description: "options.layout \"checks\": the flags and summary without the frames.",
+      required: ["flags", "summary"],
+      properties: { flags: { type: "array", items: ref("Flag") }, summary: ref("SolveSummary") },
     },
     RobotList: {
       type: "object",
@@ -416,7 +471,10 @@ function buildDocument(publicUrl: string): OpenApiDocument {
         description: "Every frame's foot positions, joint angles and pulses, the flags of every check, and a summary. Bodies up to 2 MiB; recent answers are cached (send `Cache-Control: no-cache` for a fresh solve).",
         tags: ["Solver"],
         requestBody: { required: true, content: json(ref("SolveRequest")) },
-        responses: { "200": { description: "The solved sequence.", content: json(ref("SolveResult")) }, ...errorsFor(400, ...AUTH, 413, 422) },
+        responses: {
+          "200": { description: "The solved sequence in the layout asked for.", content: json({ oneOf: [ref("SolveResult"), ref("SolveColumns"), ref("SolveChecks")] }) },
+          ...errorsFor(400, ...AUTH, 413, 422),
+        },
         "x-permission": permission("solver.use"),
       },
     },

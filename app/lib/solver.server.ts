@@ -1,11 +1,14 @@
 // The solver behind POST /api/v1/solve and /api/v1/ik: parse, check the
 // input fits, run the pure engine. The browser runs the same app/gait code.
 import { z } from "zod";
-import { GaitInputError, parseSequence, solveSequence, toColumns, type SolveColumns, type SolveOptions, type SolvedSequence } from "../gait/index";
+import { columnsOf, encodeColumns, framesOf, GaitInputError, parseSequence, runSolve, type SolveOptions } from "../gait/index";
 import { angleToPulse, JOINT_NAMES, parseRobot, solveLeg, type JointAngles, type Robot } from "../kinematics/index";
 import { ServiceError } from "./errors.server";
 
 export const SOLVE_BODY_LIMIT_BYTES = 2 * 1024 * 1024;
+
+/** frames: DESIGN.md's layout; columns: the compact one (app/gait/columns.ts); checks: flags and summary only (the editor's reference). */
+export const SOLVE_LAYOUTS = ["frames", "columns", "checks"] as const;
 
 export class InputIssues extends ServiceError {
   constructor(
@@ -48,7 +51,7 @@ const solveBody = z.strictObject({
       slipToleranceMm: z.number().finite().min(0).max(1000).optional(),
       clearanceMm: z.number().finite().min(0).max(1000).optional(),
       fps: z.number().int().min(1).max(1000).optional(),
-      layout: z.enum(["frames", "columns"]).optional(),
+      layout: z.enum(SOLVE_LAYOUTS).optional(),
     })
     .optional(),
 });
@@ -84,7 +87,11 @@ export function solveFeet(body: unknown): IkResult {
   return result;
 }
 
-export function solveRequest(body: unknown): SolvedSequence | SolveColumns {
+const utf8 = new TextEncoder();
+const base64 = (bytes: Uint8Array) => Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString("base64");
+
+/** The answer to POST /api/v1/solve as the UTF-8 bytes of its JSON, in the layout the options ask for. */
+export function solveRequest(body: unknown): Uint8Array<ArrayBuffer> {
   const parsed = solveBody.safeParse(body);
   if (!parsed.success) throw new InputIssues("The body must be { robot, sequence, options? }.", shapeIssues(parsed.error));
   const robot = robotFrom(parsed.data.robot);
@@ -95,10 +102,10 @@ export function solveRequest(body: unknown): SolvedSequence | SolveColumns {
       sequence.issues.map((issue) => ({ path: issue.path ? `sequence.${issue.path}` : "sequence", message: issue.message })),
     );
   }
-  const { layout, ...options } = parsed.data.options ?? {};
+  const { layout = "frames", ...options } = parsed.data.options ?? {};
+  let run;
   try {
-    const solved = solveSequence(robot, sequence.sequence, options as SolveOptions);
-    return layout === "columns" ? toColumns(solved) : solved;
+    run = runSolve(robot, sequence.sequence, options as SolveOptions);
   } catch (error) {
     if (error instanceof GaitInputError) {
       throw new InputIssues(
@@ -108,4 +115,8 @@ export function solveRequest(body: unknown): SolvedSequence | SolveColumns {
     }
     throw error;
   }
+  const { flags, summary } = run;
+  const answer =
+    layout === "columns" ? encodeColumns(columnsOf(run), base64) : layout === "checks" ? { flags, summary } : { frames: framesOf(run), flags, summary };
+  return utf8.encode(JSON.stringify(answer));
 }

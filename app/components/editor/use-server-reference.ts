@@ -16,7 +16,7 @@ async function solveOnServer(robot: unknown, sequence: Sequence, version: number
   const response = await fetch("/api/v1/solve", {
     method: "POST",
     headers: { "Content-Type": "application/json", Accept: "application/json" },
-    body: JSON.stringify({ robot, sequence }),
+    body: JSON.stringify({ robot, sequence, options: { layout: "checks" } }),
     signal,
   });
   const body = await response.json().catch(() => null);

@@ -47,6 +47,8 @@ export type SolveState = {
   targetBody: Float64Array;
   /** Where the foot is with the angles in the table, world mm. */
   achievedWorld: Float64Array;
+  /** Pulse widths (µs), clamped to the servo's range. */
+  pulses: Float64Array;
   pulseClamped: Uint8Array;
   // Per frame.
   /** x, y, z, roll, pitch, yaw of the body pose offset (neutral body frame). */

@@ -3,7 +3,7 @@ import { beforeAll, describe, expect, test } from "vitest";
 import { seedDemo } from "../../../db/seed";
 import { act, demoIds, requestsAs, type DemoIds } from "../../support/access-matrix";
 import { database } from "~/lib/db.server";
-import { generateGait } from "~/gait";
+import { COLUMNS_LAYOUT, decodeColumns, generateGait } from "~/gait";
 import { neutralStance, parseRobot, type Robot } from "~/kinematics";
 import * as solve from "~/routes/api.v1/solver/solve";
 import * as ik from "~/routes/api.v1/solver/ik";
@@ -52,7 +52,30 @@ describe("POST /api/v1/solve", () => {
     expect([first.headers.get("X-Solve-Cache"), second.headers.get("X-Solve-Cache")]).toEqual(["miss", "hit"]);
     const [a, b] = [await first.json(), await second.json()];
     expect(b).toEqual(a);
-    expect(a).toMatchObject({ layout: "gaitloom.solve-columns/1", frames: 60, legs: ["LF", "LM", "LR", "RF", "RM", "RR"] });
+    expect(a).toMatchObject({ layout: COLUMNS_LAYOUT, frames: 60, legs: ["LF", "LM", "LR", "RF", "RM", "RR"] });
+    // The same numbers as the frame layout, to float32.
+    const frames = await (await post(solve, "/api/v1/solve", { robot: robotJson, sequence })).json();
+    const columns = decodeColumns(a);
+    frames.frames.forEach((frame: { legs: Record<string, { angles: { coxa: number } }> }, i: number) =>
+      expect(columns.leg.RM.angles.coxa[i]).toBe(Math.fround(frame.legs.RM.angles.coxa)),
+    );
+    expect(a.flags).toEqual(frames.flags);
+  });
+
+  test("the checks layout answers flags and summary only, the same as the full solve's", async () => {
+    const sequence = generateGait(robot, { template: "tripod", cycleMs: 1200, fps: 50, strideMm: 400 });
+    const full = await (await post(solve, "/api/v1/solve", { robot: robotJson, sequence })).json();
+    const checks = await (await post(solve, "/api/v1/solve", { robot: robotJson, sequence, options: { layout: "checks" } })).json();
+    expect(Object.keys(checks).sort()).toEqual(["flags", "summary"]);
+    expect(checks.flags.length).toBeGreaterThan(0);
+    expect(checks).toEqual({ flags: full.flags, summary: full.summary });
+  });
+
+  test("an unknown layout: 422 naming options.layout", async () => {
+    const sequence = generateGait(robot, { template: "tripod", cycleMs: 1200, fps: 50 });
+    const response = await post(solve, "/api/v1/solve", { robot: robotJson, sequence, options: { layout: "rows" } });
+    expect(response.status).toBe(422);
+    expect((await response.json()).error.details[0].path).toBe("options.layout");
   });
 
   test("signed out: 401 JSON error", async () => {

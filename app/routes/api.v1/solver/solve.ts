@@ -1,5 +1,6 @@
-// POST /api/v1/solve — { robot, sequence, options? } → { frames, flags, summary },
-// or with options.layout "columns" the compact column layout (app/gait/columns.ts).
+// POST /api/v1/solve — { robot, sequence, options? } → { frames, flags, summary };
+// options.layout "columns" gives the compact column layout (app/gait/columns.ts),
+// "checks" only flags and summary.
 import type { Route } from "./+types/solve";
 import { requireApiAccess } from "~/lib/access.server";
 import { apiError, parseJsonText, readBodyText } from "~/lib/api.server";
@@ -17,7 +18,7 @@ export async function action({ request }: Route.ActionArgs) {
   const hit = answer !== undefined;
   if (answer === undefined) {
     try {
-      answer = JSON.stringify(solveRequest(parseJsonText(text)));
+      answer = solveRequest(parseJsonText(text));
     } catch (error) {
       if (error instanceof InputIssues) return apiError(422, "invalid", error.message, error.issues);
       throw error;
