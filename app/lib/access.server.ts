@@ -1,10 +1,11 @@
 // Who is asking, in which workspace, with which role — and may they? Every
 // loader, action and API route goes through requireAccess or requireApiAccess.
 import { createHash } from "node:crypto";
-import { and, asc, eq, isNull } from "drizzle-orm";
+import { and, asc, eq, isNull, sql } from "drizzle-orm";
 import { data, redirect } from "react-router";
 import { apiTokens, memberships, users, workspaces, type Role } from "../../db/schema";
 import { apiError } from "./api.server";
+import type { Database } from "../../db/client";
 import { database } from "./db.server";
 import { type Action, can, refusal } from "./permissions";
 import { checkRateLimit } from "./rate-limit.server";
@@ -95,16 +96,26 @@ export async function requireApiAccess(request: Request, action: Action): Promis
   return { ...member, tokenId: null };
 }
 
-async function memberForToken(token: string): Promise<ApiMember | null> {
-  const db = database();
-  const [row] = await db
+// Every API call looks its token up: built once per pool as a prepared statement.
+const tokenLookups = new WeakMap<Database, ReturnType<typeof prepareTokenLookup>>();
+
+function prepareTokenLookup(db: Database) {
+  return db
     .select({ token: apiTokens, user: users, workspace: workspaces, role: memberships.role })
     .from(apiTokens)
     .innerJoin(users, eq(users.id, apiTokens.userId))
     .innerJoin(workspaces, eq(workspaces.id, apiTokens.workspaceId))
     // The token acts with the holder's current role; a removed member's tokens stop working.
     .innerJoin(memberships, and(eq(memberships.userId, apiTokens.userId), eq(memberships.workspaceId, apiTokens.workspaceId)))
-    .where(and(eq(apiTokens.tokenHash, hashToken(token)), isNull(apiTokens.revokedAt)));
+    .where(and(eq(apiTokens.tokenHash, sql.placeholder("tokenHash")), isNull(apiTokens.revokedAt)))
+    .prepare("member_for_token");
+}
+
+async function memberForToken(token: string): Promise<ApiMember | null> {
+  const db = database();
+  let lookup = tokenLookups.get(db);
+  if (!lookup) tokenLookups.set(db, (lookup = prepareTokenLookup(db)));
+  const [row] = await lookup.execute({ tokenHash: hashToken(token) });
   if (!row || !can(row.role, "tokens.manage")) return null;
   // Last-used time to the minute is enough, and saves a write per request.
   const now = new Date();
