@@ -2,7 +2,7 @@
 // scrub move A and B together. "Same phase" plays both through their cycles
 // at A's pace, so the same moment of each gait lines up; "Real time" plays
 // each at its own cycle time, as the robot would.
-import { useEffect, useMemo, useRef, useState } from "react";
+import { startTransition, useEffect, useMemo, useRef, useState } from "react";
 import { RobotViews } from "~/components/robot-view";
 import type { Robot } from "~/kinematics";
 import { frameAt, syncedFractions, type Playback, type SyncMode } from "~/lib/compare";
@@ -46,7 +46,9 @@ export function ComparePlayback({ a, b, onFraction }: { a: PlaybackSide; b: Play
     const tick = (now: number) => {
       if (last.current !== null) {
         const elapsed = (now - last.current) * speed;
-        setTimeMs((current) => (current + elapsed) % (cycleA * cycleB));
+        // A transition, like the router's navigations: an urgent update every
+        // animation frame would keep interrupting the next page's render.
+        startTransition(() => setTimeMs((current) => (current + elapsed) % (cycleA * cycleB)));
       }
       last.current = now;
       handle = requestAnimationFrame(tick);
