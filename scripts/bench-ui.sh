@@ -31,7 +31,7 @@ rm -rf "$APP_DIR" && mkdir -p "$APP_DIR" && cp -r "$ROOT/build" "$APP_DIR/build"
 services_start_fakes "$FAKE_BASE" "$((FAKE_BASE + 1))" "$((FAKE_BASE + 2))"
 export PUBLIC_URL="http://127.0.0.1:$APP_PORT" SESSION_SECRET="bench-ui-$RANDOM$RANDOM"
 service_start bench-ui-app "$LOG_DIR/bench-ui-app.log" env -C "$APP_DIR" NODE_ENV=production HOST=127.0.0.1 PORT="$APP_PORT" \
-  "$ROOT/node_modules/.bin/react-router-serve" build/server/index.js
+  node "$ROOT/server.js" build/server/index.js
 service_wait_port bench-ui-app "$APP_PORT" "$LOG_DIR/bench-ui-app.log"
 BENCH_RC=0
 (cd "$ROOT" && GAITLOOM_BENCH_URL="$PUBLIC_URL" npx tsx scripts/bench/ui.ts) || BENCH_RC=$?

@@ -55,7 +55,7 @@ if (cd "$ROOT" && npx react-router build >"$REPORTS/build.log" 2>&1); then
     SERVE_DIR="$DATA_DIR/test-serve-$APP_PORT"
     rm -rf "$SERVE_DIR" && mkdir -p "$SERVE_DIR" && cp -r "$ROOT/build" "$SERVE_DIR/build"
     service_start test-app "$REPORTS/app.log" env NODE_ENV=production HOST=127.0.0.1 PORT="$APP_PORT" \
-      bash -c 'cd "$1" && exec "$2/node_modules/.bin/react-router-serve" build/server/index.js' serve "$SERVE_DIR" "$ROOT"
+      bash -c 'cd "$1" && exec node "$2/server.js" build/server/index.js' serve "$SERVE_DIR" "$ROOT"
     ( service_wait_port test-app "$APP_PORT" "$REPORTS/app.log" ) && {
       say "browser tests (Playwright driving /usr/bin/chromium)"
       (cd "$ROOT" && GAITLOOM_E2E_URL="$PUBLIC_URL" PLAYWRIGHT_JSON_OUTPUT_NAME="$REPORTS/e2e.json" \
