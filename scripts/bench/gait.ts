@@ -1,13 +1,13 @@
 // Bench of the gait engine: the median time of solveSequence for the
 // six-legged demo robot at 1 000 frames with every check on (target ≤ 2 ms),
-// of the bare IK of the same 6 000 targets (the floor, for the ratio), and of
+// of runSolve (the same solve without building the frame objects), of the bare IK of the same 6 000 targets (the floor, for the ratio), and of
 // generateGait. Run alone with `npx tsx scripts/bench/gait.ts`, or through
 // benchGait(). Each is timed in a loop of its own; the median leaves out the
 // rounds a garbage collection lands in, the mean and p90 keep them.
 import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import { createLegSolver, parseRobot, type Robot } from "../../app/kinematics/index";
-import { generateGait, solveSequence } from "../../app/gait/index";
+import { generateGait, runSolve, solveSequence } from "../../app/gait/index";
 
 const FRAMES = 1000;
 const FPS = 50;
@@ -47,6 +47,8 @@ export async function benchGait(): Promise<void> {
   const sequence = generateGait(robot, params);
 
   const solve = time(() => solveSequence(robot, sequence).frames.length, 300, 60);
+  // The same solve without the frame objects (what the column and checks layouts of the API use).
+  const run = time(() => runSolve(robot, sequence).flags.length + 1, 300, 60);
 
   // The bare IK of the same 6 000 targets (the planned feet of the frames).
   const solver = createLegSolver(robot);
@@ -72,11 +74,12 @@ export async function benchGait(): Promise<void> {
   console.log(
     `gait: solveSequence, ${robot.name} (${legCount} legs), ${FRAMES} frames, all checks (${flags} flags): median ${ms(solve.medianMs)} (target ≤ 2 ms), p90 ${ms(solve.p90Ms)}, mean ${ms(solve.meanMs)}`,
   );
+  console.log(`gait: runSolve (the same, without the frame objects): median ${ms(run.medianMs)}, p90 ${ms(run.p90Ms)}, mean ${ms(run.meanMs)}`);
   console.log(
     `gait: bare IK of the same ${FRAMES * legCount} targets: median ${ms(ik.medianMs)}; solveSequence / IK = ${(solve.medianMs / ik.medianMs).toFixed(1)}`,
   );
   console.log(`gait: generateGait (tripod, ${legCount} legs): median ${ms(generate.medianMs)}`);
-  if (Number.isNaN(solve.sink + ik.sink + generate.sink)) console.log("(unreachable)");
+  if (Number.isNaN(solve.sink + run.sink + ik.sink + generate.sink)) console.log("(unreachable)");
 }
 
 if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {

@@ -17,13 +17,14 @@ console.log("\n== firmware export");
 await benchExport();
 const url = process.env.GAITLOOM_BENCH_URL;
 const token = process.env.GAITLOOM_BENCH_TOKEN;
+const appPid = Number(process.env.GAITLOOM_BENCH_APP_PID) || undefined;
 if (url && token) {
   console.log("\n== HTTP on loopback");
-  await benchSolveApi(url, token);
+  await benchSolveApi(url, token, appPid);
   const { db, client } = createDatabase(process.env.DATABASE_URL!, { max: 1 });
   const [gait] = await db.select({ id: gaits.id }).from(gaits).where(eq(gaits.name, "Tripod cruise"));
   await client.end();
-  await benchTableApi(url, token, gait.id);
+  await benchTableApi(url, token, gait.id, appPid);
 } else {
   console.log("\n(HTTP benchmarks skipped: run them through `npm run bench`, which starts the app.)");
 }
