@@ -18,9 +18,9 @@ export DATABASE_URL="$(pg_url gaitloom_bench)"
 export PUBLIC_URL="http://127.0.0.1:$APP_PORT" SESSION_SECRET="bench-$RANDOM$RANDOM" GAITLOOM_TOKEN_REQUESTS_PER_MINUTE=100000
 export SMTP_URL="smtp://127.0.0.1:9" # nothing is mailed during the benchmarks
 service_start bench-app "$LOG_DIR/bench-app.log" env NODE_ENV=production HOST=127.0.0.1 PORT="$APP_PORT" \
-  node_modules/.bin/react-router-serve build/server/index.js
+  node server.js build/server/index.js
 service_wait_port bench-app "$APP_PORT" "$LOG_DIR/bench-app.log"
-export GAITLOOM_BENCH_URL="$PUBLIC_URL"
+export GAITLOOM_BENCH_URL="$PUBLIC_URL" GAITLOOM_BENCH_APP_PID="$(service_pid bench-app)"
 GAITLOOM_BENCH_TOKEN="$(cd "$ROOT" && npx tsx scripts/bench/make-token.ts)"
 export GAITLOOM_BENCH_TOKEN
 (cd "$ROOT" && npx tsx scripts/bench/run.ts)
