@@ -58,9 +58,9 @@ function strided(source: Float64Array, offset: number, stride: number): Float32A
 
 /** The column layout of a solve, read straight from its typed arrays (no frame objects). */
 export function columnsOf(run: SolveRun): SolveColumns {
-  const { state, support } = run;
+  const { state, world } = run;
   const { legIds, legCount, frameCount, stance, status, angles, pulses, targetBody } = state;
-  const { bodyWorld, comWorld } = support;
+  const { bodyWorld, comWorld } = world;
   const perLeg = legCount * 3;
   const leg: SolveColumns["leg"] = {};
   legIds.forEach((legId, l) => {
@@ -96,8 +96,8 @@ export function columnsOf(run: SolveRun): SolveColumns {
       yaw: strided(bodyWorld, 5, 6),
     },
     leg,
-    supportPolygons: support.polygons.map((polygon) => polygon.flatMap(([x, y]) => [round(x), round(y)])),
-    supportIndex: Array.from(support.polygonIndex),
+    supportPolygons: world.polygons.map((polygon) => polygon.flatMap(([x, y]) => [round(x), round(y)])),
+    supportIndex: Array.from(world.polygonIndex),
     com: { x: strided(comWorld, 0, 2), y: strided(comWorld, 1, 2) },
     marginMm: Float32Array.from(state.margin),
     flags: run.flags,

@@ -54,8 +54,8 @@ function resolveFrameRate(sequence: Sequence, options: SolveOptions): number {
   return fps;
 }
 
-/** Per frame: what pass 3 works out for the result beside the checks' state. */
-export type Support = {
+/** Per frame, where pass 3 puts the body, the CoM and the support polygon in the world. */
+export type WorldTrack = {
   /** x, y, z, roll, pitch, yaw of the body in the world. */
   bodyWorld: Float64Array;
   /** The CoM's ground projection, world x, y. */
@@ -65,7 +65,7 @@ export type Support = {
   polygonIndex: Int32Array;
 };
 
-export type SolveRun = { state: SolveState; support: Support; flags: Flag[]; summary: SolveSummary };
+export type SolveRun = { state: SolveState; world: WorldTrack; flags: Flag[]; summary: SolveSummary };
 
 /** What the passes share besides the checks' state. */
 type Sampling = {
@@ -94,7 +94,7 @@ export function solveSequence(robot: Robot, sequence: Sequence, options: SolveOp
 
 /**
  * The solve without its frame objects: every number in the typed arrays of
- * `state` and `support`, with the flags and summary. solveSequence builds
+ * `state` and `world`, with the flags and summary. solveSequence builds
  * the frames from it; the column layout reads it directly (columns.ts).
  */
 export function runSolve(robot: Robot, sequence: Sequence, options: SolveOptions = {}): SolveRun {
@@ -103,9 +103,9 @@ export function runSolve(robot: Robot, sequence: Sequence, options: SolveOptions
   const sampling = prepare(robot, sequence, options);
   sampleAndSolve(sampling);
   keepReachableAngles(sampling);
-  const support = measureSupport(sampling);
+  const world = placeInWorld(sampling);
   const flags = runChecks(sampling.state, options.checks);
-  return { state: sampling.state, support, flags, summary: summarize(sampling.state, sampling.plans, flags, sequence.generator.strideMm, sequence.cycleMs) };
+  return { state: sampling.state, world, flags, summary: summarize(sampling.state, sampling.plans, flags, sequence.generator.strideMm, sequence.cycleMs) };
 }
 
 function prepare(robot: Robot, sequence: Sequence, options: SolveOptions): Sampling {
@@ -322,7 +322,7 @@ function keepReachableAngles(sampling: Sampling): void {
 
 // Pass 3: pulses, the body's world pose, support polygon and margin, into
 // typed arrays; each distinct support polygon is made once.
-function measureSupport(sampling: Sampling): Support {
+function placeInWorld(sampling: Sampling): WorldTrack {
   const { state, heading, comWorld, bodyHeightMm, travel, cycleFrames } = sampling;
   const { legCount, frameCount, offsets, angles, stance, achievedWorld, pulseClamped, pulses } = state;
   const table = createPulseTable(state.joints.map((spec) => spec.joint));
@@ -386,9 +386,9 @@ function measureSupport(sampling: Sampling): Support {
 
 /** The frame objects of DESIGN.md's result, made from a run's typed arrays. */
 export function framesOf(run: SolveRun): SolvedFrame[] {
-  const { state, support } = run;
+  const { state, world } = run;
   const { legIds, legCount, frameCount, angles, pulses, status, stance, targetBody } = state;
-  const { bodyWorld, comWorld, polygons, polygonIndex } = support;
+  const { bodyWorld, comWorld, polygons, polygonIndex } = world;
   const msPerFrame = 1000 / state.fps;
   const frames: SolvedFrame[] = new Array(frameCount);
   for (let frame = 0; frame < frameCount; frame += 1) {
