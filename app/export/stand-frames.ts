@@ -6,13 +6,11 @@
 // filled as solveSequence fills it. Support, slip and ground checks do not
 // apply to a robot on a stand and are not run.
 import {
-  CHECKS,
-  FLAG_KINDS,
   SOLVE_DEFAULTS,
+  runChecks,
+  summarize,
   type CheckContext,
-  type Flag,
   type FlagKind,
-  type SolveSummary,
   type SolvedFrame,
   type SolvedLeg,
   type SolvedSequence,
@@ -124,58 +122,8 @@ export function solveStandFrames(robot: Robot, angles: Float64Array, fps: number
     stanceCount: new Uint8Array(frameCount),
     margin: new Float64Array(frameCount).fill(Number.NaN),
   };
-  const context: CheckContext = { state };
-  const flags: Flag[] = [];
-  for (const check of CHECKS) if (STAND_CHECKS.includes(check.kind)) for (const flag of check.run(context)) flags.push(flag);
-  // As solveSequence orders them: by frame, the check order within a frame (sort is stable).
-  flags.sort((a, b) => a.frame - b.frame);
-  return { frames, flags, summary: summarize(state, flags) };
-}
-
-function summarize(state: SolveState, flags: readonly Flag[]): SolveSummary {
-  const counts: Partial<Record<FlagKind, number>> = {};
-  let errors = 0;
-  for (const flag of flags) {
-    counts[flag.kind] = (counts[flag.kind] ?? 0) + 1;
-    if (flag.severity === "error") errors += 1;
-  }
-  const flagsByKind: Partial<Record<FlagKind, number>> = {};
-  for (const kind of FLAG_KINDS) if (counts[kind] !== undefined) flagsByKind[kind] = counts[kind];
-  const { legCount, frameCount, angles, fps, joints } = state;
-  const peaks = new Float64Array(legCount * 3);
-  for (let frame = 1; frame < frameCount; frame += 1) {
-    const here = frame * legCount * 3;
-    for (let i = 0; i < legCount * 3; i += 1) {
-      const speed = Math.abs(angles[here + i] - angles[here - legCount * 3 + i]) * fps;
-      if (speed > peaks[i]) peaks[i] = speed;
-    }
-  }
-  const peakSpeedDegS: Record<string, JointAngles> = {};
-  const dutyFactor: Record<string, number> = {};
-  let speedHeadroom: number | null = null;
-  state.legIds.forEach((legId, leg) => {
-    peakSpeedDegS[legId] = { coxa: peaks[leg * 3], femur: peaks[leg * 3 + 1], tibia: peaks[leg * 3 + 2] };
-    dutyFactor[legId] = 0;
-    for (let j = 0; j < 3; j += 1) {
-      const peak = peaks[leg * 3 + j];
-      if (peak <= 0) continue;
-      const headroom = joints[leg * 3 + j].maxSpeedDegS / peak;
-      if (speedHeadroom === null || headroom < speedHeadroom) speedHeadroom = headroom;
-    }
-  });
-  return {
-    frames: frameCount,
-    fps,
-    flagsByKind,
-    errors,
-    warnings: flags.length - errors,
-    worstMarginMm: null,
-    worstMarginFrame: null,
-    peakSpeedDegS,
-    dutyFactor,
-    strideMm: 0,
-    bodySpeedMmS: 0,
-    speedHeadroom,
-    dynamic: false,
-  };
+  const flags = runChecks(state, STAND_CHECKS);
+  // No foot is ever down: no duty factor, no stride; the frames play once.
+  const stand = legIds.map(() => ({ dutyFactor: 0 }));
+  return { frames, flags, summary: summarize(state, stand, flags, 0, (frameCount * 1000) / fps) };
 }

@@ -421,7 +421,7 @@ export function framesOf(run: SolveRun): SolvedFrame[] {
 
 // Pass 4: every enabled check, each over all frames; flags in frame order,
 // and within a frame in the order of the check list.
-function runChecks(state: SolveState, kinds: readonly FlagKind[] | undefined): Flag[] {
+export function runChecks(state: SolveState, kinds: readonly FlagKind[] | undefined): Flag[] {
   const enabled = kinds ? new Set<FlagKind>(kinds) : null;
   const checks = enabled ? CHECKS.filter((check) => enabled.has(check.kind)) : CHECKS;
   const context = { state };
@@ -431,13 +431,14 @@ function runChecks(state: SolveState, kinds: readonly FlagKind[] | undefined): F
   return flags.sort((a, b) => a.frame - b.frame);
 }
 
-function summarize(
+/** The summary of a solve's state and flags; `plans` give each leg's duty factor. */
+export function summarize(
   state: SolveState,
   plans: readonly { dutyFactor: number }[],
   flags: readonly Flag[],
   strideMm: number,
   cycleMs: number,
-): SolvedSequence["summary"] {
+): SolveSummary {
   const flagsByKind: Partial<Record<FlagKind, number>> = {};
   let errors = 0;
   for (const flag of flags) {
