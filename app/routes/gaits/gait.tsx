@@ -11,7 +11,7 @@ import { parseVersionQuery } from "~/components/versions/version-query";
 import { requireAccess } from "~/lib/access.server";
 import { formAction, type FormError } from "~/lib/errors.server";
 import { can, type Action } from "~/lib/permissions";
-import { readFormWithin } from "~/lib/robots/form-body.server";
+import { readIntentForm } from "~/lib/intent-form.server";
 import { commitDraft, getGait, listVersions, restoreDraft, versionAuthors } from "~/lib/versions.server";
 
 const gaitParams = z.object({ gaitId: z.guid() });
@@ -73,25 +73,19 @@ export type GaitActionData = { ok: true; intent: "commit" | "restore"; notice: s
  * Answers { ok: true, intent, notice, … } or { error, field } with the refusal's status.
  */
 export async function action({ request, params }: Route.ActionArgs) {
-  const body = await readFormWithin(request, 16 * 1024);
-  if (!body.ok) return data<FormError>({ error: body.tooLarge ? "The form is too large." : body.message }, { status: body.tooLarge ? 413 : 400 });
-  const form = actionForm.safeParse(Object.fromEntries(body.form));
-  // The permission depends on the intent; a form without one still needs a signed-in editor to hear why.
-  const member = await requireAccess(request, form.success ? INTENT_PERMISSIONS[form.data.intent] : "gaits.edit");
-  if (!form.success) {
-    const issue = form.error.issues[0];
-    return data<FormError>({ error: issue?.message ?? "The form is not valid.", field: issue?.path.join(".") }, { status: 400 });
-  }
+  const read = await readIntentForm(request, actionForm, INTENT_PERMISSIONS, "gaits.edit");
+  if (!read.ok) return read.response;
+  const { member, form } = read;
   const parsed = gaitParams.safeParse(params);
   if (!parsed.success) return data<FormError>({ error: "There is no gait at this address in your workspace." }, { status: 404 });
   const gaitId = parsed.data.gaitId;
   const committer = { userId: member.user.id, workspaceId: member.workspace.id };
   return formAction(async (): Promise<GaitActionData> => {
-    if (form.data.intent === "commit") {
-      const version = await commitDraft(committer, gaitId, form.data.message, undefined, { draftRevision: form.data.draftRevision });
+    if (form.intent === "commit") {
+      const version = await commitDraft(committer, gaitId, form.message, undefined, { draftRevision: form.draftRevision });
       return { ok: true, intent: "commit", notice: `Committed version ${version.number}.`, version };
     }
-    const restored = await restoreDraft(committer, gaitId, form.data.versionId, form.data.draftRevision);
+    const restored = await restoreDraft(committer, gaitId, form.versionId, form.draftRevision);
     return {
       ok: true,
       intent: "restore",

@@ -14,7 +14,7 @@ import { requireAccess } from "~/lib/access.server";
 import { groupFlags } from "~/lib/compare";
 import { formAction, type FormError } from "~/lib/errors.server";
 import { can, type Action } from "~/lib/permissions";
-import { readFormWithin } from "~/lib/robots/form-body.server";
+import { readIntentForm } from "~/lib/intent-form.server";
 import { approvalRules, approveVersion, releaseVersion, requestReview, reviewersFor, sendBackVersion } from "~/lib/reviews.server";
 import { getGait, getVersion, listVersions, solveVersion } from "~/lib/versions.server";
 
@@ -87,21 +87,15 @@ export type VersionActionData = { ok: true; intent: Intent; notice: string } | F
  *   intent=release, comment?                                        (versions.release)
  */
 export async function action({ request, params }: Route.ActionArgs) {
-  const body = await readFormWithin(request, 16 * 1024);
-  if (!body.ok) return data<FormError>({ error: body.tooLarge ? "The form is too large." : body.message }, { status: body.tooLarge ? 413 : 400 });
-  const form = actionForm.safeParse(Object.fromEntries(body.form));
-  const member = await requireAccess(request, form.success ? INTENT_PERMISSIONS[form.data.intent] : "versions.decide");
-  if (!form.success) {
-    const issue = form.error.issues[0];
-    return data<FormError>({ error: issue?.message ?? "The form is not valid.", field: issue?.path.join(".") }, { status: 400 });
-  }
+  const read = await readIntentForm(request, actionForm, INTENT_PERMISSIONS, "versions.decide");
+  if (!read.ok) return read.response;
+  const { member, form: input } = read;
   const parsed = versionParams.safeParse(params);
   if (!parsed.success) return data<FormError>({ error: "There is no such version of a gait in your workspace." }, { status: 404 });
   const version = await getVersion(member.workspace.id, parsed.data.gaitId, parsed.data.number);
   if (!version) return data<FormError>({ error: "There is no such version of a gait in your workspace." }, { status: 404 });
   const mailNote = (mailed: boolean, whom: string) => (mailed ? ` ${whom} has been e-mailed.` : "");
   return formAction(async (): Promise<VersionActionData> => {
-    const input = form.data;
     switch (input.intent) {
       case "request-review": {
         const outcome = await requestReview(member, version.id, { reviewerId: input.reviewerId, comment: input.comment, compareWithId: input.compareWithId || null });
