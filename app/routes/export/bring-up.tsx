@@ -2,7 +2,7 @@
 // its centre, or a slow sweep of one chosen joint through its range, checked
 // for speed like any gait — in any format and units, with a calibration profile.
 import { Form, Link, useNavigation, useSubmit } from "react-router";
-import { TableFormatFields, fieldClass, labelClass } from "~/components/export/TableFormatFields";
+import { OverrideField, ProfileField, TableFormatFields, fieldClass, labelClass } from "~/components/export/TableFormatFields";
 import type { Route } from "./+types/bring-up";
 import { EmptyState } from "~/components/common/EmptyState";
 import { ErrorPanel } from "~/components/common/ErrorPanel";
@@ -144,38 +144,14 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
           <input id="bench-fps" name="fps" type="number" step="any" min="1" max="1000" defaultValue={query.fps} className={`${fieldClass} text-right`} />
         </div>
         <TableFormatFields idPrefix="bench" format={query.format} units={query.units} />
-        <div>
-          <label htmlFor="bench-profile" className={labelClass}>
-            Calibration profile
-          </label>
-          <select id="bench-profile" name="profile" defaultValue={query.profile ?? ""} key={`profile-${robot.id}-${query.profile}`} className={fieldClass}>
-            <option value="">None — the robot definition</option>
-            {profiles.map((entry) => (
-              <option key={entry.name} value={entry.name}>
-                {entry.name} (revision {entry.revision})
-              </option>
-            ))}
-          </select>
-        </div>
-        <div className={`col-span-2 ${problem?.needsOverride ? "rounded-md bg-danger-soft p-2" : ""}`}>
-          <label htmlFor="bench-override" className={labelClass}>
-            Override reason
-          </label>
-          <input
-            id="bench-override"
-            name="override"
-            type="text"
-            maxLength={1000}
-            defaultValue={query.override ?? ""}
-            autoFocus={problem?.needsOverride}
-            aria-invalid={problem?.needsOverride || undefined}
-            aria-describedby="bench-override-help"
-            className={fieldClass}
-          />
-          <p id="bench-override-help" className="mt-1 text-xs text-ink-muted">
-            Only when the checks find errors; written into the table's header.
-          </p>
-        </div>
+        <ProfileField idPrefix="bench" profiles={profiles} value={query.profile} resetKey={robot.id} />
+        <OverrideField
+          idPrefix="bench"
+          className="col-span-2"
+          value={query.override}
+          needed={problem?.needsOverride}
+          help="Only when the checks find errors; written into the table's header."
+        />
         <div className="flex items-end">
           <button type="submit" className="w-full rounded-md border border-line px-4 py-2 font-medium hover:bg-sunken">
             {busy ? "Making the table…" : "Show the table"}

@@ -2,7 +2,7 @@
 // (the released one by default), format, units, rate and calibration profile;
 // preview the rows; download it; copy the command for the build script.
 import { Form, Link, useNavigation, useSubmit } from "react-router";
-import { TableFormatFields, fieldClass, labelClass } from "~/components/export/TableFormatFields";
+import { OverrideField, ProfileField, TableFormatFields, fieldClass, labelClass } from "~/components/export/TableFormatFields";
 import type { Route } from "./+types/page";
 import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { EmptyState } from "~/components/common/EmptyState";
@@ -120,49 +120,19 @@ export default function ExportPage({ loaderData }: Route.ComponentProps) {
             Another rate solves the gait again; nothing is interpolated.
           </p>
         </div>
-        <div>
-          <label htmlFor="export-profile" className={labelClass}>
-            Calibration profile
-          </label>
-          <select
-            id="export-profile"
-            name="profile"
-            defaultValue={query.profile ?? ""}
-            key={`profile-${gait.id}-${query.profile}`}
-            className={fieldClass}
-            aria-invalid={problem?.parameter === "profile" || undefined}
-          >
-            <option value="">None — the robot definition</option>
-            {profiles.map((entry) => (
-              <option key={entry.name} value={entry.name}>
-                {entry.name} (revision {entry.revision})
-              </option>
-            ))}
-          </select>
+        <ProfileField idPrefix="export" profiles={profiles} value={query.profile} resetKey={gait.id} invalid={problem?.parameter === "profile"}>
           <Link to={`/export/calibration/${gait.robotId}`} className="mt-1 block text-xs text-accent underline underline-offset-2">
             {loaderData.canCalibrate ? "Edit" : "See"} the calibration profiles of {gait.robotName}
           </Link>
-        </div>
-        <div className={`col-span-2 lg:col-span-3 ${problem?.needsOverride ? "rounded-md bg-danger-soft p-2" : ""}`}>
-          <label htmlFor="export-override" className={labelClass}>
-            Override reason
-          </label>
-          <input
-            id="export-override"
-            name="override"
-            type="text"
-            maxLength={1000}
-            defaultValue={query.override ?? ""}
-            autoFocus={problem?.needsOverride}
-            aria-invalid={problem?.needsOverride || undefined}
-            aria-describedby="override-help"
-            placeholder="e.g. bench test with the legs free, the support flags do not apply"
-            className={fieldClass}
-          />
-          <p id="override-help" className="mt-1 text-xs text-ink-muted">
-            Only for a version with error flags or clamped pulses; written into the table's header and the audit log.
-          </p>
-        </div>
+        </ProfileField>
+        <OverrideField
+          idPrefix="export"
+          className="col-span-2 lg:col-span-3"
+          value={query.override}
+          needed={problem?.needsOverride}
+          placeholder="e.g. bench test with the legs free, the support flags do not apply"
+          help="Only for a version with error flags or clamped pulses; written into the table's header and the audit log."
+        />
         <div className="flex items-end">
           <button type="submit" className="w-full rounded-md border border-line px-4 py-2 font-medium hover:bg-sunken">
             {busy ? "Making the table…" : "Show the table"}
