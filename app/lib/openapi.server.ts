@@ -91,6 +91,18 @@ const etagResponses = (description: string) => ({
   "304": { description: `${description} unchanged: the If-None-Match tag matches.`, headers: { ETag: { description: "The representation's tag.", schema: { type: "string" } } } },
 });
 
+/** GET of one of the public JSON Schema documents. */
+function schemaOperation(operationId: string, summary: string, schema: string): OpenApiOperation {
+  return {
+    operationId,
+    summary,
+    tags: ["Schemas"],
+    security: PUBLIC,
+    responses: { "200": { description: "JSON Schema (draft 2020-12).", content: { "application/schema+json": { schema: ref(schema) } } }, ...etagResponses("The schema is") },
+    "x-permission": permission("public"),
+  };
+}
+
 const ifNoneMatch: OpenApiParameter = {
   name: "If-None-Match",
   in: "header",
@@ -546,37 +558,13 @@ function buildDocument(publicUrl: string): OpenApiDocument {
       },
     },
     "/api/v1/schema/robot.json": {
-      get: {
-        operationId: "getRobotSchema",
-        summary: "The robot definition's JSON Schema",
-        tags: ["Schemas"],
-        security: PUBLIC,
-        responses: { "200": { description: "JSON Schema (draft 2020-12).", content: { "application/schema+json": { schema: ref("Robot") } } }, ...etagResponses("The schema is") },
-        "x-permission": permission("public"),
-      },
+      get: schemaOperation("getRobotSchema", "The robot definition's JSON Schema", "Robot"),
     },
     "/api/v1/schema/sequence.json": {
-      get: {
-        operationId: "getSequenceSchema",
-        summary: "The gait sequence's JSON Schema",
-        tags: ["Schemas"],
-        security: PUBLIC,
-        responses: { "200": { description: "JSON Schema (draft 2020-12).", content: { "application/schema+json": { schema: ref("Sequence") } } }, ...etagResponses("The schema is") },
-        "x-permission": permission("public"),
-      },
+      get: schemaOperation("getSequenceSchema", "The gait sequence's JSON Schema", "Sequence"),
     },
     "/api/v1/schema/calibration.json": {
-      get: {
-        operationId: "getCalibrationSchema",
-        summary: "The calibration profile's JSON Schema",
-        tags: ["Schemas"],
-        security: PUBLIC,
-        responses: {
-          "200": { description: "JSON Schema (draft 2020-12).", content: { "application/schema+json": { schema: ref("CalibrationProfile") } } },
-          ...etagResponses("The schema is"),
-        },
-        "x-permission": permission("public"),
-      },
+      get: schemaOperation("getCalibrationSchema", "The calibration profile's JSON Schema", "CalibrationProfile"),
     },
     "/api/v1/gaits/{gaitId}/versions": {
       get: {
