@@ -3,8 +3,8 @@
 // applied when a table is exported. Checked with app/export's schema against
 // the robot's newest revision; every save names the revision it started from
 // (optimistic concurrency), and every change goes into the audit log.
-import { and, asc, desc, eq } from "drizzle-orm";
-import { calibrationProfiles, robotRevisions, robots, users } from "../../db/schema";
+import { and, asc, eq } from "drizzle-orm";
+import { calibrationProfiles, robots, users } from "../../db/schema";
 import type { Database } from "../../db/client";
 import {
   TableExportError,
@@ -18,6 +18,7 @@ import { JOINT_NAMES, parseRobot, type Robot } from "../kinematics/index";
 import { recordAudit } from "./audit.server";
 import { database } from "./db.server";
 import { ServiceError } from "./errors.server";
+import { newestRevisionInWorkspace } from "./robots.server";
 
 type Reader = Pick<Database, "select">;
 
@@ -53,13 +54,7 @@ export type CalibrationRobot = { id: string; name: string; revision: number; rob
 
 /** The robot (newest revision) of this workspace; 404 otherwise. */
 export async function calibrationRobot(workspaceId: string, robotId: string, db: Reader = database()): Promise<CalibrationRobot> {
-  const [row] = await db
-    .select({ id: robots.id, name: robots.name, revision: robotRevisions.number, definition: robotRevisions.definition })
-    .from(robots)
-    .innerJoin(robotRevisions, eq(robotRevisions.robotId, robots.id))
-    .where(and(eq(robots.id, robotId), eq(robots.workspaceId, workspaceId)))
-    .orderBy(desc(robotRevisions.number))
-    .limit(1);
+  const row = await newestRevisionInWorkspace(workspaceId, robotId, db);
   if (!row) throw new ServiceError(404, `No robot ${robotId} in this workspace.`);
   const parsed = parseRobot(row.definition);
   if (!parsed.ok) throw new ServiceError(409, `Robot revision ${row.revision} of ${row.name} no longer parses; fix the robot first.`);

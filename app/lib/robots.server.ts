@@ -5,6 +5,7 @@ import { and, desc, eq, ne, sql } from "drizzle-orm";
 import { robotRevisions, robots, users, type Role } from "../../db/schema";
 import { importUrdf, parseRobot, type DefinitionIssue, type Robot } from "~/kinematics";
 import { recordAudit } from "./audit.server";
+import type { Database } from "../../db/client";
 import { database } from "./db.server";
 import { can } from "./permissions";
 import { changedFields, nonCalibrationChanges, summarizeChanges, type FieldChange } from "./robots/changes";
@@ -76,6 +77,18 @@ async function robotInWorkspace(workspaceId: string, robotId: string) {
     .from(robots)
     .where(and(eq(robots.id, robotId), eq(robots.workspaceId, workspaceId)));
   return robot ?? null;
+}
+
+/** A robot of this workspace with its newest revision's definition; null when there is no such robot. */
+export async function newestRevisionInWorkspace(workspaceId: string, robotId: string, db: Pick<Database, "select"> = database()) {
+  const [row] = await db
+    .select({ id: robots.id, name: robots.name, revisionId: robotRevisions.id, revision: robotRevisions.number, definition: robotRevisions.definition })
+    .from(robots)
+    .innerJoin(robotRevisions, eq(robotRevisions.robotId, robots.id))
+    .where(and(eq(robots.id, robotId), eq(robots.workspaceId, workspaceId)))
+    .orderBy(desc(robotRevisions.number))
+    .limit(1);
+  return row ?? null;
 }
 
 /** The robot with its newest definition and every revision, newest first; null when not in this workspace. */

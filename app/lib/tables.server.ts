@@ -33,6 +33,7 @@ import { JOINT_NAMES, parseRobot, type JointName, type Robot } from "../kinemati
 import { apiError } from "./api.server";
 import { recordAudit } from "./audit.server";
 import { findProfileByName, type StoredProfile } from "./calibration.server";
+import { newestRevisionInWorkspace } from "./robots.server";
 import { canonicalJson } from "./content-hash.server";
 import { database } from "./db.server";
 import { ServiceError, apiAction } from "./errors.server";
@@ -646,21 +647,9 @@ export type PreparedBench = {
   etag: string;
 };
 
-/** The robot's newest revision, in this workspace; 404 otherwise. */
-export async function newestRevision(workspaceId: string, robotId: string, db: Reader = database()) {
-  const [row] = await db
-    .select({ id: robots.id, name: robots.name, revision: robotRevisions.number, definition: robotRevisions.definition })
-    .from(robots)
-    .innerJoin(robotRevisions, eq(robotRevisions.robotId, robots.id))
-    .where(and(eq(robots.id, robotId), eq(robots.workspaceId, workspaceId)))
-    .orderBy(desc(robotRevisions.number))
-    .limit(1);
-  if (!row) throw new TableError(404, `No robot ${robotId} in this workspace.`);
-  return row;
-}
-
 export async function prepareBenchTable(workspaceId: string, robotId: string, query: BenchQuery, db: Reader = database()): Promise<PreparedBench> {
-  const row = await newestRevision(workspaceId, robotId, db);
+  const row = await newestRevisionInWorkspace(workspaceId, robotId, db);
+  if (!row) throw new TableError(404, `No robot ${robotId} in this workspace.`);
   const parsed = parseRobot(row.definition);
   if (!parsed.ok) throw new TableError(422, `Robot revision ${row.revision} no longer parses.`);
   if (query.kind === "sweep") {

@@ -19,6 +19,8 @@ function percentile(sorted: number[], p: number): number {
   return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
 }
 
+let cpuWarned = false;
+
 /** CPU seconds a process has used so far (Linux /proc), or null where that cannot be read. */
 function processCpuS(pid: number | undefined): number | null {
   if (!pid) return null;
@@ -26,7 +28,8 @@ function processCpuS(pid: number | undefined): number | null {
     const fields = readFileSync(`/proc/${pid}/stat`, "utf8").split(") ")[1].split(" ");
     return (Number(fields[11]) + Number(fields[12])) / 100; // utime + stime, in clock ticks of 1/100 s
   } catch (error) {
-    console.warn(`(no CPU figure for the app: ${error instanceof Error ? error.message : error})`);
+    if (!cpuWarned) console.warn(`(no CPU figure for the app: ${error instanceof Error ? error.message : error})`);
+    cpuWarned = true;
     return null;
   }
 }

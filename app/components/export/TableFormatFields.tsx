@@ -1,5 +1,5 @@
 // The fields every angle-table form shares (export page, bring-up tables):
-// format and units, the calibration profile, the override reason.
+// format and units, the calibration profile, the override reason, the button.
 import type { ReactNode } from "react";
 import type { TableFormat, TableUnits } from "~/export";
 
@@ -111,6 +111,16 @@ export function OverrideField({
       <p id={`${idPrefix}-override-help`} className="mt-1 text-xs text-ink-muted">
         {help}
       </p>
+    </div>
+  );
+}
+
+export function ShowTableButton({ busy }: { busy: boolean }) {
+  return (
+    <div className="flex items-end">
+      <button type="submit" className="w-full rounded-md border border-line px-4 py-2 font-medium hover:bg-sunken">
+        {busy ? "Making the table…" : "Show the table"}
+      </button>
     </div>
   );
 }

@@ -11,6 +11,7 @@ import { recordAudit } from "../audit.server";
 import { database } from "../db.server";
 import { checkSequenceFor, type DraftActor } from "../drafts.server";
 import { ServiceError } from "../errors.server";
+import { newestRevisionInWorkspace } from "../robots.server";
 import { suitableTemplates, type TemplateChoice } from "./templates";
 
 export type RobotChoice = {
@@ -83,16 +84,10 @@ export const newGaitForm = z.object({
 export type NewGaitInput = z.output<typeof newGaitForm>;
 
 async function newestRobot(db: Database, workspaceId: string, robotId: string): Promise<{ revisionId: string; robot: Robot }> {
-  const [row] = await db
-    .select({ revisionId: robotRevisions.id, number: robotRevisions.number, definition: robotRevisions.definition })
-    .from(robotRevisions)
-    .innerJoin(robots, eq(robots.id, robotRevisions.robotId))
-    .where(and(eq(robots.id, robotId), eq(robots.workspaceId, workspaceId)))
-    .orderBy(desc(robotRevisions.number))
-    .limit(1);
+  const row = await newestRevisionInWorkspace(workspaceId, robotId, db);
   if (!row) throw new ServiceError(404, "No such robot in this workspace.", "robotId");
   const parsed = parseRobot(row.definition);
-  if (!parsed.ok) throw new ServiceError(409, `Robot revision ${row.number} does not parse; fix the robot first.`, "robotId");
+  if (!parsed.ok) throw new ServiceError(409, `Robot revision ${row.revision} does not parse; fix the robot first.`, "robotId");
   return { revisionId: row.revisionId, robot: parsed.robot };
 }
 

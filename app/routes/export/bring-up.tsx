@@ -2,7 +2,7 @@
 // its centre, or a slow sweep of one chosen joint through its range, checked
 // for speed like any gait — in any format and units, with a calibration profile.
 import { Form, Link, useNavigation, useSubmit } from "react-router";
-import { OverrideField, ProfileField, TableFormatFields, fieldClass, labelClass } from "~/components/export/TableFormatFields";
+import { OverrideField, ProfileField, ShowTableButton, TableFormatFields, fieldClass, labelClass } from "~/components/export/TableFormatFields";
 import type { Route } from "./+types/bring-up";
 import { EmptyState } from "~/components/common/EmptyState";
 import { ErrorPanel } from "~/components/common/ErrorPanel";
@@ -152,11 +152,7 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
           needed={problem?.needsOverride}
           help="Only when the checks find errors; written into the table's header."
         />
-        <div className="flex items-end">
-          <button type="submit" className="w-full rounded-md border border-line px-4 py-2 font-medium hover:bg-sunken">
-            {busy ? "Making the table…" : "Show the table"}
-          </button>
-        </div>
+        <ShowTableButton busy={busy} />
       </Form>
 
       {sweep && joint ? (

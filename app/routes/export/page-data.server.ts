@@ -7,10 +7,10 @@ import { centreTable, sweepTable, type BenchTable } from "~/export";
 import { JOINT_NAMES, parseRobot, type JointName } from "~/kinematics";
 import { listProfiles } from "~/lib/calibration.server";
 import { ServiceError } from "~/lib/errors.server";
+import { newestRevisionInWorkspace } from "~/lib/robots.server";
 import {
   TableError,
   benchQuerySchema,
-  newestRevision,
   parseQuery,
   prepareBenchTable,
   tableVersionsOf,
@@ -189,7 +189,8 @@ export async function benchPageData(workspaceId: string, search: URLSearchParams
   const base = { robots: robotChoices, problem, query: { ...benchQuery, leg: benchQuery.leg ?? null, joint: benchQuery.joint ?? null, profile: benchQuery.profile ?? null, override: benchQuery.override ?? null } };
   if (!robotChoice) return { ...base, robot: null, legs: [], profiles: [], table: null, checks: null, download: null };
 
-  const [row, profiles] = await Promise.all([newestRevision(workspaceId, robotChoice.id), listProfiles(robotChoice.id)]);
+  const [row, profiles] = await Promise.all([newestRevisionInWorkspace(workspaceId, robotChoice.id), listProfiles(robotChoice.id)]);
+  if (!row) throw new TableError(404, `No robot ${robotChoice.id} in this workspace.`);
   const parsedRobot = parseRobot(row.definition);
   const legs = parsedRobot.ok
     ? parsedRobot.robot.legs.map((leg) => ({

@@ -2,7 +2,7 @@
 // (the released one by default), format, units, rate and calibration profile;
 // preview the rows; download it; copy the command for the build script.
 import { Form, Link, useNavigation, useSubmit } from "react-router";
-import { OverrideField, ProfileField, TableFormatFields, fieldClass, labelClass } from "~/components/export/TableFormatFields";
+import { OverrideField, ProfileField, ShowTableButton, TableFormatFields, fieldClass, labelClass } from "~/components/export/TableFormatFields";
 import type { Route } from "./+types/page";
 import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { EmptyState } from "~/components/common/EmptyState";
@@ -133,11 +133,7 @@ export default function ExportPage({ loaderData }: Route.ComponentProps) {
           placeholder="e.g. bench test with the legs free, the support flags do not apply"
           help="Only for a version with error flags or clamped pulses; written into the table's header and the audit log."
         />
-        <div className="flex items-end">
-          <button type="submit" className="w-full rounded-md border border-line px-4 py-2 font-medium hover:bg-sunken">
-            {busy ? "Making the table…" : "Show the table"}
-          </button>
-        </div>
+        <ShowTableButton busy={busy} />
       </Form>
 
       {problem ? (
