@@ -7,8 +7,8 @@ import "./app.css";
 import { Links, Meta, Outlet, Scripts, ScrollRestoration, useRouteLoaderData } from "react-router";
 import type { Route } from "./+types/root";
 import { ErrorPanel } from "./components/common/ErrorPanel";
-import { crossOriginRefusal } from "./lib/origin.server";
-import { readTheme } from "./lib/theme";
+import { crossOriginRefusal } from "./platform/origin.server";
+import { readTheme } from "./platform/theme";
 
 export const middleware: Route.MiddlewareFunction[] = [
   async ({ request }, next) => {

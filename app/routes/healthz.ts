@@ -1,5 +1,5 @@
 // GET /healthz: is the app up and can it reach its database?
-import { pingDatabase } from "~/lib/db.server";
+import { pingDatabase } from "~/platform/db.server";
 
 export async function loader() {
   const database = await pingDatabase();

@@ -1,7 +1,7 @@
 import { Link } from "react-router";
 import type { Route } from "./+types/home";
-import { currentMember, currentUser } from "~/lib/access.server";
-import { summarizeWorkspace } from "~/lib/workspaces.server";
+import { currentMember, currentUser } from "~/platform/access.server";
+import { summarizeWorkspace } from "~/features/accounts/workspaces.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const [user, member] = await Promise.all([currentUser(request), currentMember(request)]);

@@ -3,9 +3,9 @@ import type { Route } from "./+types/reviews";
 import { EmptyState } from "~/components/common/EmptyState";
 import { PageHeader } from "~/components/common/PageHeader";
 import { ReviewQueueList } from "~/components/versions/ReviewQueueList";
-import { requireAccess } from "~/lib/access.server";
-import { can } from "~/lib/permissions";
-import { reviewQueue } from "~/lib/reviews.server";
+import { requireAccess } from "~/platform/access.server";
+import { can } from "~/platform/permissions";
+import { reviewQueue } from "~/features/versions/review.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const member = await requireAccess(request, "reviews.read");

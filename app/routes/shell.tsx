@@ -3,9 +3,9 @@ import { Outlet, useRouteLoaderData } from "react-router";
 import type { Route } from "./+types/shell";
 import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { AppShell, type ShellData } from "~/components/shell/AppShell";
-import { currentMember, currentUser, membershipsOf } from "~/lib/access.server";
-import { config } from "~/lib/config.server";
-import { summarizeWorkspace } from "~/lib/workspaces.server";
+import { currentMember, currentUser, membershipsOf } from "~/platform/access.server";
+import { config } from "~/platform/config.server";
+import { summarizeWorkspace } from "~/features/accounts/workspaces.server";
 
 export async function loader({ request }: Route.LoaderArgs): Promise<ShellData> {
   const [user, member] = await Promise.all([currentUser(request), currentMember(request)]);

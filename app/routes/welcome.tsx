@@ -3,12 +3,12 @@ import { Form, data, redirect, useActionData } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/welcome";
 import { PageHeader } from "~/components/common/PageHeader";
-import { membershipsOf, requireUser } from "~/lib/access.server";
-import { formAction } from "~/lib/errors.server";
-import { acceptInvitation, invitationsForEmail } from "~/lib/invitations.server";
-import { ROLE_LABELS } from "~/lib/permissions";
-import { commitSession, readSession } from "~/lib/session.server";
-import { createWorkspace } from "~/lib/workspaces.server";
+import { membershipsOf, requireUser } from "~/platform/access.server";
+import { formAction } from "~/platform/errors.server";
+import { acceptInvitation, invitationsForEmail } from "~/features/accounts/invitations.server";
+import { ROLE_LABELS } from "~/platform/permissions";
+import { commitSession, readSession } from "~/platform/session.server";
+import { createWorkspace } from "~/features/accounts/workspaces.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);

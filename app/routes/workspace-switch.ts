@@ -2,8 +2,8 @@
 import { data, redirect } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/workspace-switch";
-import { membershipsOf, requireUser } from "~/lib/access.server";
-import { commitSession, readSession, safeReturnTo } from "~/lib/session.server";
+import { membershipsOf, requireUser } from "~/platform/access.server";
+import { commitSession, readSession, safeReturnTo } from "~/platform/session.server";
 
 const input = z.object({ workspaceId: z.string().uuid(), returnTo: z.string().optional() });
 

@@ -9,7 +9,7 @@
 import { createStore, type StoreApi } from "zustand/vanilla";
 import { generateGait, GaitInputError, solveSequence, type BodyKey, type BodyOffset, type GaitParams, type LegKey, type Sequence, type SolvedSequence } from "~/gait";
 import type { Robot, Vec3 } from "~/kinematics";
-import { bodyOffsetAt, plannedFoot } from "~/lib/editor/body-offset";
+import { bodyOffsetAt, plannedFoot } from "~/features/gaits/editor/body-offset";
 import {
   EditRefusal,
   addBodyKey,
@@ -24,8 +24,8 @@ import {
   updateBodyKey,
   updateLegKey,
   type KeyRef,
-} from "~/lib/editor/key-edits";
-import { cycleFramesOf, frameOfTime, placeKeyTime, solvedFramesOf } from "~/lib/editor/timing";
+} from "~/features/gaits/editor/key-edits";
+import { cycleFramesOf, frameOfTime, placeKeyTime, solvedFramesOf } from "~/features/gaits/editor/timing";
 
 export type { KeyRef };
 

@@ -3,8 +3,8 @@ import { eq } from "drizzle-orm";
 import { createDatabase, databaseUrl } from "../../db/client";
 import { demoWorkspace } from "../../db/demo/scenario";
 import { memberships, users, workspaces } from "../../db/schema";
-import { createToken } from "../../app/lib/tokens.server";
-import { closeDatabase } from "../../app/lib/db.server";
+import { createToken } from "../../app/features/accounts/tokens.server";
+import { closeDatabase } from "../../app/platform/db.server";
 
 const { db, client } = createDatabase(databaseUrl(), { max: 1 });
 const [workspace] = await db.select().from(workspaces).where(eq(workspaces.slug, demoWorkspace.slug));

@@ -3,7 +3,7 @@ import { describe, expect, test } from "vitest";
 import { gaitVersions, gaits, memberships, releases, reviewEvents, robotRevisions, robots, users, workspaces } from "../../db/schema";
 import { seedDemo } from "../../db/seed";
 import { demoGaits, demoPeople, demoRobots } from "../../db/demo/scenario";
-import { database } from "~/lib/db.server";
+import { database } from "~/platform/db.server";
 
 async function counts() {
   const db = database();

@@ -2,13 +2,13 @@
 // routes as cases in test/integration/access/cases/<feature>.ts, naming the
 // permission each needs; test/integration/access/matrix.test.ts runs every
 // case as every demo role and signed out, in-process against the test
-// database, and expects what the one permission table (app/lib/permissions.ts) says.
+// database, and expects what the one permission table (app/platform/permissions.ts) says.
 import { and, eq } from "drizzle-orm";
 import { gaits, robots, users, workspaces, type Role } from "../../db/schema";
 import { demoPeople, demoWorkspace } from "../../db/demo/scenario";
 import type { Database } from "../../db/client";
-import type { Action } from "~/lib/permissions";
-import { commitSession, sessionStorage } from "~/lib/session.server";
+import type { Action } from "~/platform/permissions";
+import { commitSession, sessionStorage } from "~/platform/session.server";
 
 export type Caller = Role | "signed-out";
 

@@ -3,7 +3,7 @@
 // workers never see each other's rows.
 import postgres from "postgres";
 import { afterAll } from "vitest";
-import { closeDatabase } from "~/lib/db.server";
+import { closeDatabase } from "~/platform/db.server";
 
 const adminUrl = process.env.GAITLOOM_TEST_ADMIN_URL;
 const template = process.env.GAITLOOM_TEST_TEMPLATE_DB;

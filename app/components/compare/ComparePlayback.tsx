@@ -5,7 +5,7 @@
 import { startTransition, useEffect, useMemo, useRef, useState } from "react";
 import { RobotViews } from "~/components/robot-view";
 import type { Robot } from "~/kinematics";
-import { frameAt, syncedFractions, type Playback, type SyncMode } from "~/lib/compare";
+import { frameAt, syncedFractions, type Playback, type SyncMode } from "~/features/compare";
 
 export type PlaybackSide = { label: string; robot: Robot; playback: Playback };
 

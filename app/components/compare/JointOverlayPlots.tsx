@@ -4,7 +4,7 @@
 import { area, line } from "d3-shape";
 import { scaleLinear } from "d3-scale";
 import { memo, useMemo, useState } from "react";
-import type { JointOverlay } from "~/lib/compare";
+import type { JointOverlay } from "~/features/compare";
 
 const WIDTH = 240;
 const HEIGHT = 96;

@@ -1,5 +1,5 @@
 // When A and B pin different revisions of the robot: which fields changed.
-import type { RobotRevisionDiff as Diff } from "~/lib/compare";
+import type { RobotRevisionDiff as Diff } from "~/features/compare";
 
 export function RobotRevisionDiff({ diff, robotName }: { diff: Diff | null; robotName: string }) {
   if (!diff) {

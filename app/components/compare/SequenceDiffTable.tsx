@@ -1,8 +1,8 @@
 // The key-by-key diff of A's and B's sequences: settings that changed, then
 // per track the keys added, removed, moved or otherwise changed. Unchanged
 // keys are folded away.
-import { describeKeyChanges, type KeyDiff, type SequenceDiff } from "~/lib/compare";
-import { describeChange } from "~/lib/robots/changes";
+import { describeKeyChanges, type KeyDiff, type SequenceDiff } from "~/features/compare";
+import { describeChange } from "~/features/robots/changes";
 
 const STATUS_LOOKS: Record<KeyDiff["status"], { mark: string; label: string; className: string }> = {
   added: { mark: "+", label: "Added", className: "bg-ok-soft text-ok" },

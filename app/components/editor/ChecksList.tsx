@@ -4,7 +4,7 @@
 // (solved at once on every edit). The timeline always draws the preview.
 import { useId, useMemo, useState } from "react";
 import type { Flag } from "~/gait";
-import { FLAG_WORDS, flagRuns, framesText, runPlace, type FlagRun } from "~/lib/editor/flag-runs";
+import { FLAG_WORDS, flagRuns, framesText, runPlace, type FlagRun } from "~/features/gaits/editor/flag-runs";
 import { useEditor, useEditorStore } from "~/stores/editor-context";
 import { SEVERITY_GLYPH } from "../timeline/FlagLane";
 import type { useServerReference } from "./use-server-reference";

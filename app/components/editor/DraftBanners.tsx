@@ -4,7 +4,7 @@
 import { useEffect, useRef, useState } from "react";
 import { useFetcher, useRevalidator } from "react-router";
 import type { Sequence } from "~/gait";
-import { clearLocalDraft, markLocalDraftSynced, pendingLocalDraft, writeLocalDraft, type LocalDraft } from "~/lib/editor/local-draft";
+import { clearLocalDraft, markLocalDraftSynced, pendingLocalDraft, writeLocalDraft, type LocalDraft } from "~/features/gaits/editor/local-draft";
 import { useEditor, useEditorStore } from "~/stores/editor-context";
 import { draftUrl } from "./use-autosave";
 

@@ -6,8 +6,8 @@ import { useRef } from "react";
 import type { ViewFrame } from "~/components/robot-view";
 import type { LegKey } from "~/gait";
 import { poseApply, poseUnapply, type Vec3 } from "~/kinematics";
-import { bodyOffsetAt, plannedFoot } from "~/lib/editor/body-offset";
-import { keyAt, keyPlacesFoot } from "~/lib/editor/key-edits";
+import { bodyOffsetAt, plannedFoot } from "~/features/gaits/editor/body-offset";
+import { keyAt, keyPlacesFoot } from "~/features/gaits/editor/key-edits";
 import { useEditor, useEditorStore } from "~/stores/editor-context";
 
 export function FootHandle({ view }: { view: ViewFrame }) {

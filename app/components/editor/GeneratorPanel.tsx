@@ -4,8 +4,8 @@
 import { useMemo, useRef, useState } from "react";
 import type { GaitParams, TemplateName } from "~/gait";
 import { NumberField } from "~/components/key-details/NumberField";
-import { hasHandEdits } from "~/lib/editor/hand-edits";
-import { paramsOfSequence, suitableTemplates } from "~/lib/editor/templates";
+import { hasHandEdits } from "~/features/gaits/editor/hand-edits";
+import { paramsOfSequence, suitableTemplates } from "~/features/gaits/editor/templates";
 import { useEditor, useEditorStore } from "~/stores/editor-context";
 
 type NumberParam = "cycleMs" | "fps" | "strideMm" | "stepHeightMm" | "directionDeg" | "turnDegPerCycle" | "bodyHeightMm" | "dutyFactor";

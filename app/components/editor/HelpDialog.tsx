@@ -1,6 +1,6 @@
 // The list of keyboard shortcuts, in a modal dialog.
 import { forwardRef } from "react";
-import { SHORTCUTS } from "~/lib/editor/shortcuts";
+import { SHORTCUTS } from "~/features/gaits/editor/shortcuts";
 
 export const HelpDialog = forwardRef<HTMLDialogElement>(function HelpDialog(_, ref) {
   return (

@@ -1,5 +1,5 @@
 // Playback: play and pause, step a frame either way, loop, and the speed.
-import { msOfFrame } from "~/lib/editor/timing";
+import { msOfFrame } from "~/features/gaits/editor/timing";
 import { useEditor, useEditorStore } from "~/stores/editor-context";
 import { PLAYBACK_RATES } from "~/stores/editor-store";
 

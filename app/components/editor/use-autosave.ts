@@ -4,7 +4,7 @@
 // A 409 stops saving until the person chooses (reload theirs, or keep mine
 // as a copy); a lost connection retries with a growing pause.
 import { useEffect } from "react";
-import { markLocalDraftSynced, writeLocalDraft } from "~/lib/editor/local-draft";
+import { markLocalDraftSynced, writeLocalDraft } from "~/features/gaits/editor/local-draft";
 import { useEditorStore } from "~/stores/editor-context";
 
 export const AUTOSAVE_DELAY_MS = 800;

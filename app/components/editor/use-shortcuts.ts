@@ -1,9 +1,9 @@
-// The editor's keyboard shortcuts (app/lib/editor/shortcuts.ts) on the whole
+// The editor's keyboard shortcuts (app/features/gaits/editor/shortcuts.ts) on the whole
 // page, except while typing in a field or when a control has already used the
 // key (a dragged key, the playhead slider, a foot handle).
 import { useEffect } from "react";
 import { legLayout } from "~/gait";
-import { shortcutFor } from "~/lib/editor/shortcuts";
+import { shortcutFor } from "~/features/gaits/editor/shortcuts";
 import { useEditorStore } from "~/stores/editor-context";
 
 const typing = (target: EventTarget | null) =>

@@ -2,7 +2,7 @@
 // with the arrow keys: 0.01, 0.1 with Shift). Time runs right, progress up.
 import { useRef } from "react";
 import type { Ease } from "~/gait";
-import { clampEase } from "~/lib/editor/ease-presets";
+import { clampEase } from "~/features/gaits/editor/ease-presets";
 
 const SIZE = 160;
 const PAD = 20;

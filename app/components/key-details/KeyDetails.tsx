@@ -3,9 +3,9 @@
 // leaves it, with a curve editor and named presets of our own.
 import { CSS_EASE, type BodyKey, type Ease, type LegKey } from "~/gait";
 import type { Vec3 } from "~/kinematics";
-import { EASE_PRESETS, presetOf } from "~/lib/editor/ease-presets";
-import { keyAt, keyPlacesFoot } from "~/lib/editor/key-edits";
-import { msOfFrame } from "~/lib/editor/timing";
+import { EASE_PRESETS, presetOf } from "~/features/gaits/editor/ease-presets";
+import { keyAt, keyPlacesFoot } from "~/features/gaits/editor/key-edits";
+import { msOfFrame } from "~/features/gaits/editor/timing";
 import { useEditor, useEditorStore } from "~/stores/editor-context";
 import type { KeyRef } from "~/stores/editor-store";
 import { BezierEditor } from "./BezierEditor";

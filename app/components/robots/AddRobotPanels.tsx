@@ -3,8 +3,8 @@
 import { useId } from "react";
 import { Form, Link, useNavigation } from "react-router";
 import type { DefinitionIssue } from "~/kinematics";
-import { STARTER_LEG_COUNTS } from "~/lib/robots/starter";
-import type { AddIntent, AddResult } from "~/lib/robots/results";
+import { STARTER_LEG_COUNTS } from "~/features/robots/starter";
+import type { AddIntent, AddResult } from "~/features/robots/results";
 
 export type AddPanel = "new" | "upload" | "urdf";
 

@@ -1,5 +1,5 @@
 // The robot as a whole: name, description, mass and centre of mass, standing height.
-import { fieldData, useEditorData } from "./editor-context";
+import { fieldData, useEditorData } from "./robot-form-context";
 import { NumberField, TextField } from "./fields";
 
 function Labelled({ label, children }: { label: string; children: React.ReactNode }) {

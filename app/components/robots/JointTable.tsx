@@ -3,8 +3,8 @@
 import { memo, useMemo } from "react";
 import { legBackground } from "~/components/robot-view";
 import { JOINT_NAMES } from "~/kinematics";
-import { getAt } from "~/lib/robots/paths";
-import { rowFieldData, sliceSignature, useEditorData, type Slice } from "./editor-context";
+import { getAt } from "~/features/robots/paths";
+import { rowFieldData, sliceSignature, useEditorData, type Slice } from "./robot-form-context";
 import { CheckboxField, NumberField } from "./fields";
 
 const th = "px-2 py-1.5 font-medium text-right";

@@ -2,8 +2,8 @@
 // Rows are memoised: typing in one leg re-renders that leg's row only.
 import { memo, useMemo } from "react";
 import { legBackground } from "~/components/robot-view";
-import { getAt } from "~/lib/robots/paths";
-import { rowFieldData, sliceSignature, useEditorActions, useEditorData, type Slice } from "./editor-context";
+import { getAt } from "~/features/robots/paths";
+import { rowFieldData, sliceSignature, useEditorActions, useEditorData, type Slice } from "./robot-form-context";
 import { NumberField, SideField, TextField } from "./fields";
 
 const th = "px-2 py-1.5 font-medium";

@@ -2,7 +2,7 @@
 // All in the browser on the working copy; nothing is saved until Save.
 import { useId, useState } from "react";
 import { legSide, MAX_LEGS, type Robot } from "~/kinematics";
-import { addLeg, copyGeometryTo, mirrorSide } from "~/lib/robots/leg-tools";
+import { addLeg, copyGeometryTo, mirrorSide } from "~/features/robots/leg-tools";
 
 const button = "rounded-md border border-line bg-surface px-3 py-1.5 text-sm font-medium hover:bg-sunken disabled:cursor-not-allowed disabled:opacity-50";
 

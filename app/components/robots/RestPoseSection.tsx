@@ -1,7 +1,7 @@
 // The optional rest pose: servo angles of the robot lying on its belly, powered down.
 import { legBackground } from "~/components/robot-view";
-import { getAt } from "~/lib/robots/paths";
-import { fieldData, isLocked, useEditorActions, useEditorData } from "./editor-context";
+import { getAt } from "~/features/robots/paths";
+import { fieldData, isLocked, useEditorActions, useEditorData } from "./robot-form-context";
 import { NumberField } from "./fields";
 
 export function RestPoseSection({ onToggle }: { onToggle: (on: boolean) => void }) {

@@ -1,7 +1,7 @@
 // Inputs of the robot editor. Each shows the value it is given and that path's
 // validation messages right under it, and writes through the editor's actions.
-import { fieldId, type FieldPath } from "~/lib/robots/paths";
-import { isLocked, useEditorActions, type FieldData } from "./editor-context";
+import { fieldId, type FieldPath } from "~/features/robots/paths";
+import { isLocked, useEditorActions, type FieldData } from "./robot-form-context";
 
 function FieldMessages({ id, messages }: { id: string; messages: readonly string[] }) {
   if (messages.length === 0) return null;

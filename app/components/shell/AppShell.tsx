@@ -1,6 +1,6 @@
 import { Form, Link, NavLink, useLocation } from "react-router";
-import type { Role } from "~/lib/permissions";
-import { type Action, ROLE_LABELS, can } from "~/lib/permissions";
+import type { Role } from "~/platform/permissions";
+import { type Action, ROLE_LABELS, can } from "~/platform/permissions";
 import { Mark } from "./Mark";
 import { ThemeToggle } from "./ThemeToggle";
 

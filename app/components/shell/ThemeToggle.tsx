@@ -1,5 +1,5 @@
 import { useEffect, useState } from "react";
-import { type Theme, themeCookie } from "~/lib/theme";
+import { type Theme, themeCookie } from "~/platform/theme";
 
 export function ThemeToggle() {
   const [theme, setTheme] = useState<Theme>("light");

@@ -2,7 +2,7 @@
 // ◆ warning), a short tag and the colour of its severity. The Checks list
 // below the timeline carries the same runs for the keyboard and screen readers.
 import { memo } from "react";
-import { FLAG_WORDS, framesText, type FlagRun } from "~/lib/editor/flag-runs";
+import { FLAG_WORDS, framesText, type FlagRun } from "~/features/gaits/editor/flag-runs";
 
 export const SEVERITY_GLYPH = { error: "▲", warning: "◆" } as const;
 

@@ -1,7 +1,7 @@
 // The key commands above the tracks: add at the playhead, duplicate, delete,
 // copy to other legs, mirror onto the other side. Each says what it acts on.
 import { useId, useState } from "react";
-import { partnerLeg } from "~/lib/editor/key-edits";
+import { partnerLeg } from "~/features/gaits/editor/key-edits";
 import { useEditor, useEditorStore } from "~/stores/editor-context";
 
 const toolButton = "rounded-md border border-line px-2 py-1 text-sm hover:bg-sunken disabled:cursor-not-allowed disabled:opacity-50";

@@ -2,7 +2,7 @@
 // the ruler to scrub, or focus it and use the arrow keys. Only the small
 // parts that show the current frame subscribe to it.
 import { memo, useEffect, useRef, useState } from "react";
-import { msOfFrame } from "~/lib/editor/timing";
+import { msOfFrame } from "~/features/gaits/editor/timing";
 import { useEditor } from "~/stores/editor-context";
 
 const STEPS = [1, 2, 5, 10, 20, 25, 50, 100, 200, 250, 500, 1000, 2000, 5000, 10_000];

@@ -16,8 +16,8 @@ import {
 import { useCallback, useEffect, useId, useMemo, useRef } from "react";
 import { legBackground } from "~/components/robot-view";
 import { legLayout } from "~/gait";
-import { keyAt } from "~/lib/editor/key-edits";
-import { FINE_STEPS_PER_FRAME } from "~/lib/editor/timing";
+import { keyAt } from "~/features/gaits/editor/key-edits";
+import { FINE_STEPS_PER_FRAME } from "~/features/gaits/editor/timing";
 import { useEditor, useEditorStore } from "~/stores/editor-context";
 import type { KeyRef } from "~/stores/editor-store";
 import { KeyTools } from "./KeyTools";

@@ -4,8 +4,8 @@
 import { memo, useCallback, useMemo } from "react";
 import { legFill } from "~/components/robot-view";
 import type { BodyKey, LegKey } from "~/gait";
-import { flagRuns } from "~/lib/editor/flag-runs";
-import { msOfFrame } from "~/lib/editor/timing";
+import { flagRuns } from "~/features/gaits/editor/flag-runs";
+import { msOfFrame } from "~/features/gaits/editor/timing";
 import { useEditor } from "~/stores/editor-context";
 import type { KeyRef } from "~/stores/editor-store";
 import { stanceRuns } from "./contact-runs";

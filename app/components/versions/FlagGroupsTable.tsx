@@ -1,6 +1,6 @@
 // A version's flags grouped by kind, leg and joint, with the frames they fall on.
-import type { FlagGroup } from "~/lib/compare";
-import { flagLabel } from "~/lib/compare";
+import type { FlagGroup } from "~/features/compare";
+import { flagLabel } from "~/features/compare";
 
 export function FlagGroupsTable({ groups, label = "Flags of this version" }: { groups: readonly FlagGroup[]; label?: string }) {
   if (groups.length === 0) {

@@ -4,7 +4,7 @@
 import { useId } from "react";
 import { Form } from "react-router";
 import type { Role, VersionState } from "../../../db/schema";
-import { ROLE_LABELS } from "~/lib/permissions";
+import { ROLE_LABELS } from "~/platform/permissions";
 import { STATE_LABELS } from "./format";
 
 export type ReviewActionsProps = {

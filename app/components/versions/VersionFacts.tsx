@@ -1,7 +1,7 @@
 // What a version is and what its solve found: the pinned robot revision, the
 // content hash, timing, travel, stability and the fastest joints.
 import type { FlagKind, SolveSummary } from "~/gait/index";
-import { flagLabel, peakJointSpeed } from "~/lib/compare";
+import { flagLabel, peakJointSpeed } from "~/features/compare";
 import { formatNumber, shortHash } from "./format";
 import { FlagCounts } from "./FlagCounts";
 

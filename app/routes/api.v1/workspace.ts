@@ -1,7 +1,7 @@
 // GET /api/v1/workspace: which workspace and role a token or session acts with
 // (build scripts call it to check their token).
 import type { Route } from "./+types/workspace";
-import { requireApiAccess } from "~/lib/access.server";
+import { requireApiAccess } from "~/platform/access.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const member = await requireApiAccess(request, "workspace.read");

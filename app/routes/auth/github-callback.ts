@@ -1,8 +1,8 @@
 // GET /auth/github/callback: GitHub sends the person back here with a code.
 import { data, redirect } from "react-router";
 import type { Route } from "./+types/github-callback";
-import { gitHubAuthenticator } from "~/lib/auth.server";
-import { commitSession, readSession, safeReturnTo } from "~/lib/session.server";
+import { gitHubAuthenticator } from "~/platform/auth.server";
+import { commitSession, readSession, safeReturnTo } from "~/platform/session.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   let user;

@@ -1,7 +1,7 @@
 // POST /auth/github: remember where to return, then off to GitHub's authorize page.
 import type { Route } from "./+types/github";
-import { gitHubAuthenticator } from "~/lib/auth.server";
-import { commitSession, readSession, safeReturnTo } from "~/lib/session.server";
+import { gitHubAuthenticator } from "~/platform/auth.server";
+import { commitSession, readSession, safeReturnTo } from "~/platform/session.server";
 
 export async function action({ request }: Route.ActionArgs) {
   const form = await request.clone().formData();

@@ -1,7 +1,7 @@
 import { Form, redirect } from "react-router";
 import type { Route } from "./+types/sign-in";
-import { currentUser } from "~/lib/access.server";
-import { safeReturnTo } from "~/lib/session.server";
+import { currentUser } from "~/platform/access.server";
+import { safeReturnTo } from "~/platform/session.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const returnTo = safeReturnTo(new URL(request.url).searchParams.get("returnTo"));

@@ -1,7 +1,7 @@
 // POST /sign-out
 import { redirect } from "react-router";
 import type { Route } from "./+types/sign-out";
-import { destroySession, readSession } from "~/lib/session.server";
+import { destroySession, readSession } from "~/platform/session.server";
 
 export async function action({ request }: Route.ActionArgs) {
   const session = await readSession(request);

@@ -3,7 +3,7 @@ import type { Route } from "./+types/api-docs";
 import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { PageHeader } from "~/components/common/PageHeader";
 import { ApiReference, type ApiDocument } from "~/components/export/api-docs/ApiReference";
-import { openApiDocument } from "~/lib/openapi.server";
+import { openApiDocument } from "~/features/api/openapi.server";
 
 export function loader(_: Route.LoaderArgs) {
   return { document: openApiDocument() as unknown as ApiDocument };

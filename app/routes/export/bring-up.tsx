@@ -11,9 +11,9 @@ import { CopyCommand } from "~/components/export/CopyCommand";
 import { SafetyNotice } from "~/components/export/SafetyNotice";
 import { TableFacts } from "~/components/export/TableFacts";
 import { TablePreview } from "~/components/export/TablePreview";
-import { requireAccess } from "~/lib/access.server";
-import { robotsWithProfiles } from "~/lib/calibration.server";
-import { config } from "~/lib/config.server";
+import { requireAccess } from "~/platform/access.server";
+import { robotsWithProfiles } from "~/features/robots/calibration.server";
+import { config } from "~/platform/config.server";
 import { benchPageData } from "./page-data.server";
 
 export async function loader({ request }: Route.LoaderArgs) {

@@ -4,8 +4,8 @@ import type { Route } from "./+types/calibration-list";
 import { EmptyState } from "~/components/common/EmptyState";
 import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { PageHeader } from "~/components/common/PageHeader";
-import { requireAccess } from "~/lib/access.server";
-import { robotsWithProfiles } from "~/lib/calibration.server";
+import { requireAccess } from "~/platform/access.server";
+import { robotsWithProfiles } from "~/features/robots/calibration.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const { workspace } = await requireAccess(request, "robots.read");

@@ -8,7 +8,7 @@ import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { Notice } from "~/components/common/Notice";
 import { PageHeader } from "~/components/common/PageHeader";
 import { ProfileEditor, type ProfileIssues } from "~/components/export/ProfileEditor";
-import { requireAccess } from "~/lib/access.server";
+import { requireAccess } from "~/platform/access.server";
 import {
   CalibrationInvalid,
   calibrationRobot,
@@ -17,9 +17,9 @@ import {
   listProfiles,
   profileFromForm,
   updateProfile,
-} from "~/lib/calibration.server";
-import { ServiceError, formAction } from "~/lib/errors.server";
-import { can } from "~/lib/permissions";
+} from "~/features/robots/calibration.server";
+import { ServiceError, formAction } from "~/platform/errors.server";
+import { can } from "~/platform/permissions";
 
 const params = z.object({ robotId: z.guid() });
 

@@ -1,13 +1,13 @@
 // What the export and bring-up pages show for their query: the choices, the
 // table's checks and first rows, the download link and the build script's
 // command. Page composition only; the tables themselves come from
-// app/lib/tables.server.ts, the same code as the download API.
+// app/features/tables/tables.server.ts, the same code as the download API.
 import { z } from "zod";
 import { centreTable, sweepTable, type BenchTable } from "~/export";
 import { JOINT_NAMES, parseRobot, type JointName } from "~/kinematics";
-import { listProfiles } from "~/lib/calibration.server";
-import { ServiceError } from "~/lib/errors.server";
-import { newestRevisionInWorkspace } from "~/lib/robots.server";
+import { listProfiles } from "~/features/robots/calibration.server";
+import { ServiceError } from "~/platform/errors.server";
+import { newestRevisionInWorkspace } from "~/features/robots/robots.server";
 import {
   TableError,
   benchQuerySchema,
@@ -23,7 +23,7 @@ import {
   type ReleaseRecord,
   type RenderedTable,
   type TableQuery,
-} from "~/lib/tables.server";
+} from "~/features/tables/tables.server";
 
 /** Rows a page preview carries: the windowed list scrolls through them; the file holds every frame. */
 export const PREVIEW_ROWS = 2000;

@@ -11,10 +11,10 @@ import { CopyCommand } from "~/components/export/CopyCommand";
 import { SafetyNotice } from "~/components/export/SafetyNotice";
 import { TableFacts } from "~/components/export/TableFacts";
 import { TablePreview } from "~/components/export/TablePreview";
-import { requireAccess } from "~/lib/access.server";
-import { config } from "~/lib/config.server";
-import { listGaits } from "~/lib/gaits.server";
-import { can } from "~/lib/permissions";
+import { requireAccess } from "~/platform/access.server";
+import { config } from "~/platform/config.server";
+import { listGaits } from "~/features/gaits/gaits.server";
+import { can } from "~/platform/permissions";
 import { exportPageData } from "./page-data.server";
 
 export async function loader({ request }: Route.LoaderArgs) {

@@ -14,9 +14,9 @@ import { SequenceDiffTable } from "~/components/compare/SequenceDiffTable";
 import { FlagGroupsTable } from "~/components/versions/FlagGroupsTable";
 import { StateBadge } from "~/components/versions/StateBadge";
 import { formatTime, shortHash } from "~/components/versions/format";
-import { requireAccess } from "~/lib/access.server";
-import { ServiceError } from "~/lib/errors.server";
-import { compareVersions, listComparableVersions, type Comparison, type ComparedVersion } from "~/lib/versions.server";
+import { requireAccess } from "~/platform/access.server";
+import { ServiceError } from "~/platform/errors.server";
+import { compareVersions, listComparableVersions, type Comparison, type ComparedVersion } from "~/features/versions/versions.server";
 
 const compareQuery = z.object({
   a: z.guid().optional().catch(undefined),

@@ -6,10 +6,10 @@ import { z } from "zod";
 import type { Route } from "./+types/editor";
 import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { EditorScreen } from "~/components/editor/EditorScreen";
-import { requireAccess } from "~/lib/access.server";
-import { DraftInvalid, moveDraftToNewestRobot, readDraft } from "~/lib/drafts.server";
-import { ServiceError, formAction, type FormError } from "~/lib/errors.server";
-import { can } from "~/lib/permissions";
+import { requireAccess } from "~/platform/access.server";
+import { DraftInvalid, moveDraftToNewestRobot, readDraft } from "~/features/gaits/drafts.server";
+import { ServiceError, formAction, type FormError } from "~/platform/errors.server";
+import { can } from "~/platform/permissions";
 
 const gaitParams = z.object({ gaitId: z.guid({ error: "There is no gait at this address." }) });
 

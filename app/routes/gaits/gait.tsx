@@ -8,11 +8,11 @@ import { DraftPanel } from "~/components/versions/DraftPanel";
 import { VersionFilters } from "~/components/versions/VersionFilters";
 import { VersionTable } from "~/components/versions/VersionTable";
 import { parseVersionQuery } from "~/components/versions/version-query";
-import { requireAccess } from "~/lib/access.server";
-import { formAction, type FormError } from "~/lib/errors.server";
-import { can, type Action } from "~/lib/permissions";
-import { readIntentForm } from "~/lib/intent-form.server";
-import { commitDraft, getGait, listVersions, restoreDraft, versionAuthors } from "~/lib/versions.server";
+import { requireAccess } from "~/platform/access.server";
+import { formAction, type FormError } from "~/platform/errors.server";
+import { can, type Action } from "~/platform/permissions";
+import { readIntentForm } from "~/platform/intent-form.server";
+import { commitDraft, getGait, listVersions, restoreDraft, versionAuthors } from "~/features/versions/versions.server";
 
 const gaitParams = z.object({ gaitId: z.guid() });
 

@@ -4,10 +4,10 @@ import type { Route } from "./+types/list";
 import { EmptyState } from "~/components/common/EmptyState";
 import { PageHeader } from "~/components/common/PageHeader";
 import { StateBadge } from "~/components/versions/StateBadge";
-import { requireAccess } from "~/lib/access.server";
-import { listGaits } from "~/lib/gaits.server";
-import { can } from "~/lib/permissions";
-import { listRobots } from "~/lib/robots.server";
+import { requireAccess } from "~/platform/access.server";
+import { listGaits } from "~/features/gaits/gaits.server";
+import { can } from "~/platform/permissions";
+import { listRobots } from "~/features/robots/robots.server";
 
 const listQuery = z.object({ robot: z.guid().optional().catch(undefined) });
 

@@ -6,10 +6,10 @@ import { Form, Link, data, redirect, useNavigation } from "react-router";
 import type { Route } from "./+types/new";
 import { Notice } from "~/components/common/Notice";
 import { PageHeader } from "~/components/common/PageHeader";
-import { requireAccess } from "~/lib/access.server";
-import { copyForm, createGait, createGaitCopy, newGaitForm, robotChoices } from "~/lib/editor/new-gait.server";
-import { DEFAULT_PARAMS } from "~/lib/editor/templates";
-import { formAction, type FormError } from "~/lib/errors.server";
+import { requireAccess } from "~/platform/access.server";
+import { copyForm, createGait, createGaitCopy, newGaitForm, robotChoices } from "~/features/gaits/new-gait.server";
+import { DEFAULT_PARAMS } from "~/features/gaits/editor/templates";
+import { formAction, type FormError } from "~/platform/errors.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const { workspace } = await requireAccess(request, "gaits.edit");

@@ -10,13 +10,13 @@ import { ReviewHistory } from "~/components/versions/ReviewHistory";
 import { StateBadge } from "~/components/versions/StateBadge";
 import { VersionFacts } from "~/components/versions/VersionFacts";
 import { formatTime } from "~/components/versions/format";
-import { requireAccess } from "~/lib/access.server";
-import { groupFlags } from "~/lib/compare";
-import { formAction, type FormError } from "~/lib/errors.server";
-import { can, type Action } from "~/lib/permissions";
-import { readIntentForm } from "~/lib/intent-form.server";
-import { approvalRules, approveVersion, releaseVersion, requestReview, reviewersFor, sendBackVersion } from "~/lib/reviews.server";
-import { getGait, getVersion, listVersions, solveVersion } from "~/lib/versions.server";
+import { requireAccess } from "~/platform/access.server";
+import { groupFlags } from "~/features/compare";
+import { formAction, type FormError } from "~/platform/errors.server";
+import { can, type Action } from "~/platform/permissions";
+import { readIntentForm } from "~/platform/intent-form.server";
+import { approvalRules, approveVersion, releaseVersion, requestReview, reviewersFor, sendBackVersion } from "~/features/versions/review.server";
+import { getGait, getVersion, listVersions, solveVersion } from "~/features/versions/versions.server";
 
 const versionParams = z.object({
   gaitId: z.guid(),

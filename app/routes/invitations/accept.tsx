@@ -1,11 +1,11 @@
 // /invitations/:token — the link from the invitation e-mail.
 import { Form, data, redirect } from "react-router";
 import type { Route } from "./+types/accept";
-import { requireUser } from "~/lib/access.server";
-import { ServiceError, formAction } from "~/lib/errors.server";
-import { acceptInvitation, invitationForToken } from "~/lib/invitations.server";
-import { ROLE_LABELS } from "~/lib/permissions";
-import { commitSession, readSession } from "~/lib/session.server";
+import { requireUser } from "~/platform/access.server";
+import { ServiceError, formAction } from "~/platform/errors.server";
+import { acceptInvitation, invitationForToken } from "~/features/accounts/invitations.server";
+import { ROLE_LABELS } from "~/platform/permissions";
+import { commitSession, readSession } from "~/platform/session.server";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const user = await requireUser(request);

@@ -2,7 +2,7 @@
 import { data } from "react-router";
 import type { Route } from "./+types/mail";
 import { PageHeader } from "~/components/common/PageHeader";
-import { localInbox } from "~/lib/mail.server";
+import { localInbox } from "~/platform/mail.server";
 
 export async function loader() {
   const messages = await localInbox();

@@ -1,10 +1,10 @@
 // A robot revision's definition as a JSON file.
 import { data } from "react-router";
 import type { Route } from "./+types/download";
-import { requireAccess } from "~/lib/access.server";
-import { definitionFileName, definitionFileText } from "~/lib/robots/files";
-import { revisionParams } from "~/lib/robots/params";
-import { getRevision } from "~/lib/robots.server";
+import { requireAccess } from "~/platform/access.server";
+import { definitionFileName, definitionFileText } from "~/features/robots/files";
+import { revisionParams } from "~/features/robots/params";
+import { getRevision } from "~/features/robots/robots.server";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const { workspace } = await requireAccess(request, "robots.read");

@@ -3,13 +3,13 @@ import type { Route } from "./+types/list";
 import { EmptyState } from "~/components/common/EmptyState";
 import { PageHeader } from "~/components/common/PageHeader";
 import { AddRobotPanel, type AddPanel } from "~/components/robots/AddRobotPanels";
-import { requireAccess } from "~/lib/access.server";
-import { can } from "~/lib/permissions";
-import { addRobot, ADD_BODY_LIMIT_BYTES } from "~/lib/robots/add-robot.server";
-import { formatBytes } from "~/lib/robots/files";
-import { readFormWithin } from "~/lib/robots/form-body.server";
-import type { AddResult } from "~/lib/robots/results";
-import { listRobots } from "~/lib/robots.server";
+import { requireAccess } from "~/platform/access.server";
+import { can } from "~/platform/permissions";
+import { addRobot, ADD_BODY_LIMIT_BYTES } from "~/features/robots/add.server";
+import { formatBytes } from "~/features/robots/files";
+import { readFormWithin } from "~/platform/body.server";
+import type { AddResult } from "~/features/robots/results";
+import { listRobots } from "~/features/robots/robots.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const { workspace, role } = await requireAccess(request, "robots.read");

@@ -3,14 +3,14 @@ import type { Route } from "./+types/revision";
 import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { PageHeader } from "~/components/common/PageHeader";
 import { formatTime, RevisionHistory } from "~/components/robots/RevisionHistory";
-import { RobotEditor } from "~/components/robots/RobotEditor";
-import { requireAccess } from "~/lib/access.server";
-import { can } from "~/lib/permissions";
-import { readFormWithin } from "~/lib/robots/form-body.server";
-import { revisionParams } from "~/lib/robots/params";
-import type { SaveResult } from "~/lib/robots/results";
-import { restoreAnswer } from "~/lib/robots/save-robot.server";
-import { getRevision, getRobot } from "~/lib/robots.server";
+import { RobotEditor } from "~/components/robots/RobotForm";
+import { requireAccess } from "~/platform/access.server";
+import { can } from "~/platform/permissions";
+import { readFormWithin } from "~/platform/body.server";
+import { revisionParams } from "~/features/robots/params";
+import type { SaveResult } from "~/features/robots/results";
+import { restoreAnswer } from "~/features/robots/save.server";
+import { getRevision, getRobot } from "~/features/robots/robots.server";
 
 const notFound = () => data({ message: "There is no such robot revision in your workspace." }, { status: 404 });
 

@@ -3,14 +3,14 @@ import type { Route } from "./+types/robot";
 import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { PageHeader } from "~/components/common/PageHeader";
 import { formatTime, RevisionHistory } from "~/components/robots/RevisionHistory";
-import { RobotEditor } from "~/components/robots/RobotEditor";
-import { requireAccess } from "~/lib/access.server";
-import { can } from "~/lib/permissions";
-import { readFormWithin } from "~/lib/robots/form-body.server";
-import { robotParams } from "~/lib/robots/params";
-import type { SaveResult } from "~/lib/robots/results";
-import { saveAnswer, SAVE_BODY_LIMIT_BYTES } from "~/lib/robots/save-robot.server";
-import { getRobot } from "~/lib/robots.server";
+import { RobotEditor } from "~/components/robots/RobotForm";
+import { requireAccess } from "~/platform/access.server";
+import { can } from "~/platform/permissions";
+import { readFormWithin } from "~/platform/body.server";
+import { robotParams } from "~/features/robots/params";
+import type { SaveResult } from "~/features/robots/results";
+import { saveAnswer, SAVE_BODY_LIMIT_BYTES } from "~/features/robots/save.server";
+import { getRobot } from "~/features/robots/robots.server";
 
 const notFound = () => data({ message: "There is no robot at this address in your workspace." }, { status: 404 });
 

@@ -1,7 +1,7 @@
 // /settings/audit: the workspace's audit log, for owners.
 import type { Route } from "./+types/audit";
-import { requireAccess } from "~/lib/access.server";
-import { listAudit } from "~/lib/members.server";
+import { requireAccess } from "~/platform/access.server";
+import { listAudit } from "~/features/accounts/members.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const member = await requireAccess(request, "audit.read");

@@ -2,8 +2,8 @@
 import { NavLink, Outlet } from "react-router";
 import type { Route } from "./+types/layout";
 import { PageHeader } from "~/components/common/PageHeader";
-import { requireAccess } from "~/lib/access.server";
-import { can } from "~/lib/permissions";
+import { requireAccess } from "~/platform/access.server";
+import { can } from "~/platform/permissions";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const { role } = await requireAccess(request, "workspace.read");

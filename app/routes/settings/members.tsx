@@ -3,11 +3,11 @@ import { Form, data, useNavigation } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/members";
 import { Notice } from "~/components/common/Notice";
-import { requireAccess } from "~/lib/access.server";
-import { formAction } from "~/lib/errors.server";
-import { invite, listInvitations, resendInvitation, revokeInvitation } from "~/lib/invitations.server";
-import { changeRole, listMembers, parseRole, removeMember } from "~/lib/members.server";
-import { type Action, ROLES, ROLE_LABELS, can, invitableRoles } from "~/lib/permissions";
+import { requireAccess } from "~/platform/access.server";
+import { formAction } from "~/platform/errors.server";
+import { invite, listInvitations, resendInvitation, revokeInvitation } from "~/features/accounts/invitations.server";
+import { changeRole, listMembers, parseRole, removeMember } from "~/features/accounts/members.server";
+import { type Action, ROLES, ROLE_LABELS, can, invitableRoles } from "~/platform/permissions";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const member = await requireAccess(request, "members.read");

@@ -3,10 +3,10 @@ import { Form, data } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/tokens";
 import { Notice } from "~/components/common/Notice";
-import { requireAccess } from "~/lib/access.server";
-import { config } from "~/lib/config.server";
-import { formAction } from "~/lib/errors.server";
-import { createToken, listTokens, revokeToken } from "~/lib/tokens.server";
+import { requireAccess } from "~/platform/access.server";
+import { config } from "~/platform/config.server";
+import { formAction } from "~/platform/errors.server";
+import { createToken, listTokens, revokeToken } from "~/features/accounts/tokens.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const member = await requireAccess(request, "tokens.manage");

@@ -2,10 +2,10 @@ import { Form, data, redirect } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/workspace";
 import { Notice } from "~/components/common/Notice";
-import { requireAccess } from "~/lib/access.server";
-import { formAction } from "~/lib/errors.server";
-import { can } from "~/lib/permissions";
-import { renameWorkspace, summarizeWorkspace } from "~/lib/workspaces.server";
+import { requireAccess } from "~/platform/access.server";
+import { formAction } from "~/platform/errors.server";
+import { can } from "~/platform/permissions";
+import { renameWorkspace, summarizeWorkspace } from "~/features/accounts/workspaces.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const { workspace, role } = await requireAccess(request, "workspace.read");

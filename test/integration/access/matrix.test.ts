@@ -6,8 +6,8 @@ import { sql } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { seedDemo } from "../../../db/seed";
 import routeConfig from "~/routes";
-import { database } from "~/lib/db.server";
-import { ROLES, can } from "~/lib/permissions";
+import { database } from "~/platform/db.server";
+import { ROLES, can } from "~/platform/permissions";
 import { type Caller, type DemoIds, type RouteCase, demoIds, requestsAs, statusOf } from "../../support/access-matrix";
 
 const caseFiles = import.meta.glob<{ cases: RouteCase[] }>("./cases/*.ts", { eager: true });

@@ -3,10 +3,10 @@ import { beforeAll, describe, expect, test } from "vitest";
 import { invitations, memberships, users } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
 import { demoIds, requestsAs, type DemoIds } from "../../support/access-matrix";
-import { currentMember, type Member, type User } from "~/lib/access.server";
-import { database } from "~/lib/db.server";
-import { ServiceError } from "~/lib/errors.server";
-import { acceptInvitation, invitationForToken, invite, resendInvitation, revokeInvitation } from "~/lib/invitations.server";
+import { currentMember, type Member, type User } from "~/platform/access.server";
+import { database } from "~/platform/db.server";
+import { ServiceError } from "~/platform/errors.server";
+import { acceptInvitation, invitationForToken, invite, resendInvitation, revokeInvitation } from "~/features/accounts/invitations.server";
 
 const MAIL_API = process.env.MAIL_INBOX_URL ?? "http://127.0.0.1:2626";
 

@@ -3,10 +3,10 @@ import { beforeAll, describe, expect, test } from "vitest";
 import { auditLog, memberships } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
 import { demoIds, requestsAs, type DemoIds } from "../../support/access-matrix";
-import { currentMember, type Member } from "~/lib/access.server";
-import { database } from "~/lib/db.server";
-import { ServiceError } from "~/lib/errors.server";
-import { changeRole, removeMember } from "~/lib/members.server";
+import { currentMember, type Member } from "~/platform/access.server";
+import { database } from "~/platform/db.server";
+import { ServiceError } from "~/platform/errors.server";
+import { changeRole, removeMember } from "~/features/accounts/members.server";
 
 let ids: DemoIds;
 let owner: Member;

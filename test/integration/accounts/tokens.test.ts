@@ -1,11 +1,11 @@
 import { beforeAll, beforeEach, describe, expect, test } from "vitest";
 import { seedDemo } from "../../../db/seed";
 import { demoIds, type DemoIds } from "../../support/access-matrix";
-import { currentMember, type Member, requireApiAccess } from "~/lib/access.server";
-import { database } from "~/lib/db.server";
-import { resetRateLimits } from "~/lib/rate-limit.server";
-import { createToken, listTokens, revokeToken } from "~/lib/tokens.server";
-import { createWorkspace } from "~/lib/workspaces.server";
+import { currentMember, type Member, requireApiAccess } from "~/platform/access.server";
+import { database } from "~/platform/db.server";
+import { resetRateLimits } from "~/platform/rate-limit.server";
+import { createToken, listTokens, revokeToken } from "~/features/accounts/tokens.server";
+import { createWorkspace } from "~/features/accounts/workspaces.server";
 import { loader as apiWorkspace } from "~/routes/api.v1/workspace";
 import { requestsAs } from "../../support/access-matrix";
 

@@ -2,7 +2,7 @@ import { readFileSync } from "node:fs";
 import { beforeAll, describe, expect, test } from "vitest";
 import { seedDemo } from "../../../db/seed";
 import { act, demoIds, requestsAs, type DemoIds } from "../../support/access-matrix";
-import { database } from "~/lib/db.server";
+import { database } from "~/platform/db.server";
 import { COLUMNS_LAYOUT, decodeColumns, generateGait } from "~/gait";
 import { neutralStance, parseRobot, type Robot } from "~/kinematics";
 import * as solve from "~/routes/api.v1/solver/solve";

@@ -10,7 +10,7 @@ import { seedDemo } from "../../../db/seed";
 import { act, demoIds, load, requestsAs, type Caller, type DemoIds } from "../../support/access-matrix";
 import { generateGait, parseSequence } from "~/gait";
 import { parseRobot } from "~/kinematics";
-import { database } from "~/lib/db.server";
+import { database } from "~/platform/db.server";
 import * as draftApi from "~/routes/api.v1/gaits/draft";
 import * as editor from "~/routes/gaits/editor";
 import { outcome } from "../robots/support";

@@ -7,7 +7,7 @@ import { auditLog, gaits, robotRevisions } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
 import { act, demoIds, load, requestsAs, type Caller, type DemoIds } from "../../support/access-matrix";
 import { parseSequence } from "~/gait";
-import { database } from "~/lib/db.server";
+import { database } from "~/platform/db.server";
 import * as newGait from "~/routes/gaits/new";
 import { outcome } from "../robots/support";
 

@@ -4,8 +4,8 @@
 import { beforeAll, beforeEach, describe, expect, test } from "vitest";
 import { seedDemo } from "../../../db/seed";
 import { demoIds, load, requestsAs, type DemoIds } from "../../support/access-matrix";
-import { database } from "~/lib/db.server";
-import { resetRateLimits } from "~/lib/rate-limit.server";
+import { database } from "~/platform/db.server";
+import { resetRateLimits } from "~/platform/rate-limit.server";
 import * as benchTable from "~/routes/api.v1/export/bench-table";
 import * as bringUp from "~/routes/export/bring-up";
 import * as exportPage from "~/routes/export/page";

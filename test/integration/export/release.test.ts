@@ -9,10 +9,10 @@ import { releases, reviewEvents } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
 import { demoIds, load, requestsAs, type DemoIds } from "../../support/access-matrix";
 import { EXPORTER_VERSION } from "~/export";
-import { database } from "~/lib/db.server";
-import { ServiceError } from "~/lib/errors.server";
-import { resetRateLimits } from "~/lib/rate-limit.server";
-import { RELEASE_TABLE, SOLVER_VERSION, recordReleaseTable } from "~/lib/tables.server";
+import { database } from "~/platform/db.server";
+import { ServiceError } from "~/platform/errors.server";
+import { resetRateLimits } from "~/platform/rate-limit.server";
+import { RELEASE_TABLE, SOLVER_VERSION, recordReleaseTable } from "~/features/tables/tables.server";
 import * as exportPage from "~/routes/export/page";
 import { bearer, getTable, sha256, storedVersion, tablePath, tokenFor } from "./support";
 

@@ -7,8 +7,8 @@ import { and, desc, eq } from "drizzle-orm";
 import { apiTokens, auditLog, gaitVersions, gaits, memberships, robotRevisions, robots, users, workspaces, type Role } from "../../../db/schema";
 import { parseSequence, type Sequence } from "~/gait";
 import { parseRobot, type Robot } from "~/kinematics";
-import { hashToken } from "~/lib/access.server";
-import { database } from "~/lib/db.server";
+import { hashToken } from "~/platform/access.server";
+import { database } from "~/platform/db.server";
 import * as tableRoute from "~/routes/api.v1/export/table";
 import { load, PUBLIC_ORIGIN } from "../../support/access-matrix";
 

@@ -7,10 +7,10 @@ import { seedDemo } from "../../../db/seed";
 import { demoIds, requestsAs, type DemoIds } from "../../support/access-matrix";
 import { EXPORTER_VERSION, TABLE_MEDIA_TYPES, buildAngleTable } from "~/export";
 import { solveSequence } from "~/gait";
-import { createProfile, updateProfile } from "~/lib/calibration.server";
-import { database } from "~/lib/db.server";
-import { resetRateLimits } from "~/lib/rate-limit.server";
-import { SOLVER_VERSION } from "~/lib/tables.server";
+import { createProfile, updateProfile } from "~/features/robots/calibration.server";
+import { database } from "~/platform/db.server";
+import { resetRateLimits } from "~/platform/rate-limit.server";
+import { SOLVER_VERSION } from "~/features/tables/tables.server";
 import { auditEntries, bearer, foreignOwnerToken, getTable, sha256, storedVersion, tablePath, tokenFor, unique } from "./support";
 
 let ids: DemoIds;

@@ -5,8 +5,8 @@ import { apiTokens, robotRevisions, robots, workspaces } from "../../../db/schem
 import { seedDemo } from "../../../db/seed";
 import { act, demoIds, load, requestsAs, type DemoIds } from "../../support/access-matrix";
 import { robotJsonSchema } from "~/kinematics";
-import { hashToken } from "~/lib/access.server";
-import { database } from "~/lib/db.server";
+import { hashToken } from "~/platform/access.server";
+import { database } from "~/platform/db.server";
 import * as apiList from "~/routes/api.v1/robots/list";
 import * as apiRevision from "~/routes/api.v1/robots/revision";
 import * as apiRobot from "~/routes/api.v1/robots/robot";

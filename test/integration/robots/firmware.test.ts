@@ -3,7 +3,7 @@
 import { beforeAll, describe, expect, test } from "vitest";
 import { seedDemo } from "../../../db/seed";
 import { act, demoIds, requestsAs, type DemoIds } from "../../support/access-matrix";
-import { database } from "~/lib/db.server";
+import { database } from "~/platform/db.server";
 import * as robotPage from "~/routes/robots/robot";
 import { outcome, revisionCount, revisionsOf } from "./support";
 

@@ -4,7 +4,7 @@ import { readFileSync } from "node:fs";
 import { asc, count, eq } from "drizzle-orm";
 import { robotRevisions, robots } from "../../../db/schema";
 import type { MakeRequest } from "../../support/access-matrix";
-import { database } from "~/lib/db.server";
+import { database } from "~/platform/db.server";
 
 export type Outcome<T = unknown> = { status: number; location?: string; headers?: Headers; body: T };
 

@@ -6,7 +6,7 @@ import { beforeAll, describe, expect, test } from "vitest";
 import { robots } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
 import { act, demoIds, load, requestsAs, type Caller, type DemoIds } from "../../support/access-matrix";
-import { database } from "~/lib/db.server";
+import { database } from "~/platform/db.server";
 import * as list from "~/routes/robots/list";
 import { demoJson, multipart, outcome, revisionCount, revisionsOf, robotCount, uniqueName } from "./support";
 

@@ -6,7 +6,7 @@ import { robots } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
 import { act, demoIds, requestsAs, type DemoIds } from "../../support/access-matrix";
 import { importUrdf } from "~/kinematics";
-import { database } from "~/lib/db.server";
+import { database } from "~/platform/db.server";
 import * as list from "~/routes/robots/list";
 import { fixture, multipart, outcome, revisionCount, revisionsOf, robotCount, uniqueName } from "./support";
 

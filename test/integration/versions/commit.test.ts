@@ -5,10 +5,10 @@ import { auditLog, gaitVersions, gaits, reviewEvents, robotRevisions } from "../
 import { requestsAs, act, type DemoIds } from "../../support/access-matrix";
 import { parseSequence, solveSequence } from "~/gait/index";
 import { parseRobot } from "~/kinematics";
-import type { Member } from "~/lib/access.server";
-import { versionContentHash } from "~/lib/content-hash.server";
-import { database } from "~/lib/db.server";
-import { commitDraft, restoreDraft } from "~/lib/versions.server";
+import type { Member } from "~/platform/access.server";
+import { versionContentHash } from "~/features/versions/content-hash.server";
+import { database } from "~/platform/db.server";
+import { commitDraft, restoreDraft } from "~/features/versions/versions.server";
 import * as gaitPage from "~/routes/gaits/gait";
 import { draftRevisionOf, memberAs, outcome, refusal, setUp, unique } from "./support";
 

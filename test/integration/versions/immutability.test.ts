@@ -4,7 +4,7 @@ import { eq, sql } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { gaitVersions } from "../../../db/schema";
 import type { DemoIds } from "../../support/access-matrix";
-import { database } from "~/lib/db.server";
+import { database } from "~/platform/db.server";
 import { memberAs, setUp, versionIn } from "./support";
 
 let ids: DemoIds;

@@ -5,9 +5,9 @@ import { beforeAll, describe, expect, test } from "vitest";
 import { auditLog, gaitVersions, reviewEvents } from "../../../db/schema";
 import { demoPeople } from "../../../db/demo/scenario";
 import { act, requestsAs, type DemoIds } from "../../support/access-matrix";
-import type { Member } from "~/lib/access.server";
-import { database } from "~/lib/db.server";
-import { approveVersion, releaseVersion, requestReview, reviewQueue, sendBackVersion } from "~/lib/reviews.server";
+import type { Member } from "~/platform/access.server";
+import { database } from "~/platform/db.server";
+import { approveVersion, releaseVersion, requestReview, reviewQueue, sendBackVersion } from "~/features/versions/review.server";
 import * as versionPage from "~/routes/gaits/version";
 import { mailsTo, memberAs, outcome, refusal, setUp, stateOf, unique, versionIn } from "./support";
 

@@ -4,10 +4,10 @@
 import { eq } from "drizzle-orm";
 import { gaitVersions, gaits, type VersionState } from "../../../db/schema";
 import { demoIds, requestsAs, type Caller, type DemoIds } from "../../support/access-matrix";
-import { currentMember, type Member } from "~/lib/access.server";
-import { database } from "~/lib/db.server";
-import { ServiceError } from "~/lib/errors.server";
-import { commitDraft } from "~/lib/versions.server";
+import { currentMember, type Member } from "~/platform/access.server";
+import { database } from "~/platform/db.server";
+import { ServiceError } from "~/platform/errors.server";
+import { commitDraft } from "~/features/versions/versions.server";
 import { seedDemo } from "../../../db/seed";
 
 export const MAIL_API = process.env.MAIL_INBOX_URL ?? "http://127.0.0.1:2626";

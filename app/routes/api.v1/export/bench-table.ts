@@ -2,7 +2,7 @@
 // Bring-up tables of the robot's newest revision, for a robot on a stand:
 // every servo at its centre, or a slow sweep of one joint checked for speed.
 import type { Route } from "./+types/bench-table";
-import { requireApiAccess } from "~/lib/access.server";
+import { requireApiAccess } from "~/platform/access.server";
 import {
   answerTableErrors,
   benchQuerySchema,
@@ -14,7 +14,7 @@ import {
   renderBenchTable,
   robotParamsSchema,
   tableHeaders,
-} from "~/lib/tables.server";
+} from "~/features/tables/tables.server";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const member = await requireApiAccess(request, "tables.download");

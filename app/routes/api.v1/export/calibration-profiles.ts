@@ -1,9 +1,9 @@
 // GET /api/v1/robots/:robotId/calibration-profiles: the robot's calibration
 // profiles (one per physical unit), for build scripts choosing `profile=`.
 import type { Route } from "./+types/calibration-profiles";
-import { requireApiAccess } from "~/lib/access.server";
-import { calibrationRobot, listProfiles } from "~/lib/calibration.server";
-import { answerTableErrors, parseParams, robotParamsSchema } from "~/lib/tables.server";
+import { requireApiAccess } from "~/platform/access.server";
+import { calibrationRobot, listProfiles } from "~/features/robots/calibration.server";
+import { answerTableErrors, parseParams, robotParamsSchema } from "~/features/tables/tables.server";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const { workspace } = await requireApiAccess(request, "robots.read");

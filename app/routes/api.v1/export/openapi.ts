@@ -1,7 +1,7 @@
 // GET /api/v1/openapi.json: the OpenAPI 3.1 description of every /api/v1 route
-// (app/lib/openapi.server.ts; a unit test keeps it in step with app/routes.ts). Public.
+// (app/features/api/openapi.server.ts; a unit test keeps it in step with app/routes.ts). Public.
 import type { Route } from "./+types/openapi";
-import { openApiPublicDocument, servePublicDocument } from "~/lib/openapi.server";
+import { openApiPublicDocument, servePublicDocument } from "~/features/api/openapi.server";
 
 export function loader({ request }: Route.LoaderArgs) {
   return servePublicDocument(request, openApiPublicDocument(), "application/json; charset=utf-8");

@@ -1,7 +1,7 @@
 // GET /api/v1/schema/sequence.json: the gait sequence's JSON Schema, generated
 // from the zod schema (sequenceJsonSchema). Public: no sign-in, cacheable.
 import type { Route } from "./+types/sequence-schema";
-import { sequenceSchemaDocument, servePublicDocument } from "~/lib/openapi.server";
+import { sequenceSchemaDocument, servePublicDocument } from "~/features/api/openapi.server";
 
 export function loader({ request }: Route.LoaderArgs) {
   return servePublicDocument(request, sequenceSchemaDocument(), "application/schema+json; charset=utf-8");

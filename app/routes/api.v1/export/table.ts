@@ -4,7 +4,7 @@
 // new solve), with a calibration profile applied; an ETag per representation
 // and 304 on If-None-Match; every download in the audit log.
 import type { Route } from "./+types/table";
-import { requireApiAccess } from "~/lib/access.server";
+import { requireApiAccess } from "~/platform/access.server";
 import {
   answerTableErrors,
   matchesIfNoneMatch,
@@ -16,7 +16,7 @@ import {
   tableHeaders,
   tableParamsSchema,
   tableQuerySchema,
-} from "~/lib/tables.server";
+} from "~/features/tables/tables.server";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const member = await requireApiAccess(request, "tables.download");

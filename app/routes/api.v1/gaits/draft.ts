@@ -4,10 +4,10 @@
 // is invalid or does not fit the robot. Nothing is saved on either refusal.
 import { z } from "zod";
 import type { Route } from "./+types/draft";
-import { requireApiAccess } from "~/lib/access.server";
-import { apiError, readJsonBody } from "~/lib/api.server";
-import { DRAFT_BODY_LIMIT_BYTES, DraftConflict, DraftInvalid, readDraft, saveDraft, type DraftContext } from "~/lib/drafts.server";
-import { apiAction } from "~/lib/errors.server";
+import { requireApiAccess } from "~/platform/access.server";
+import { apiError, readJsonBody } from "~/platform/api-errors.server";
+import { DRAFT_BODY_LIMIT_BYTES, DraftConflict, DraftInvalid, readDraft, saveDraft, type DraftContext } from "~/features/gaits/drafts.server";
+import { apiAction } from "~/platform/errors.server";
 
 const gaitParams = z.object({ gaitId: z.guid({ error: (issue) => `gaitId must be a UUID (got ${JSON.stringify(issue.input)})` }) });
 

@@ -2,9 +2,9 @@
 // with its state, message, author, time, content hash and solved summary.
 import { z } from "zod";
 import type { Route } from "./+types/versions";
-import { requireApiAccess } from "~/lib/access.server";
-import { apiError } from "~/lib/api.server";
-import { getGait, listVersions } from "~/lib/versions.server";
+import { requireApiAccess } from "~/platform/access.server";
+import { apiError } from "~/platform/api-errors.server";
+import { getGait, listVersions } from "~/features/versions/versions.server";
 
 const params = z.object({ gaitId: z.guid({ error: (issue) => `gaitId must be a UUID (got ${JSON.stringify(issue.input)})` }) });
 

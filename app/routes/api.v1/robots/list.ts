@@ -1,7 +1,7 @@
 // GET /api/v1/robots: the workspace's robots with their newest revision.
 import type { Route } from "./+types/list";
-import { requireApiAccess } from "~/lib/access.server";
-import { listRobots } from "~/lib/robots.server";
+import { requireApiAccess } from "~/platform/access.server";
+import { listRobots } from "~/features/robots/robots.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const { workspace } = await requireApiAccess(request, "robots.read");

@@ -1,9 +1,9 @@
 // GET /api/v1/robots/:robotId/revisions/:number: one revision's definition, for build scripts that pin one.
 import type { Route } from "./+types/revision";
-import { apiError } from "~/lib/api.server";
-import { requireApiAccess } from "~/lib/access.server";
-import { revisionParams } from "~/lib/robots/params";
-import { getRevision } from "~/lib/robots.server";
+import { apiError } from "~/platform/api-errors.server";
+import { requireApiAccess } from "~/platform/access.server";
+import { revisionParams } from "~/features/robots/params";
+import { getRevision } from "~/features/robots/robots.server";
 import { revisionJson } from "./robot";
 
 export async function loader({ request, params }: Route.LoaderArgs) {

@@ -1,9 +1,9 @@
 // GET /api/v1/robots/:robotId: the newest definition and the list of revisions.
 import type { Route } from "./+types/robot";
-import { apiError } from "~/lib/api.server";
-import { requireApiAccess } from "~/lib/access.server";
-import { robotParams } from "~/lib/robots/params";
-import { getRobot, type RevisionSummary } from "~/lib/robots.server";
+import { apiError } from "~/platform/api-errors.server";
+import { requireApiAccess } from "~/platform/access.server";
+import { robotParams } from "~/features/robots/params";
+import { getRobot, type RevisionSummary } from "~/features/robots/robots.server";
 
 export const revisionJson = (revision: RevisionSummary) => ({
   number: revision.number,

@@ -3,7 +3,7 @@
 import { createHash } from "node:crypto";
 import type { Route } from "./+types/schema";
 import { robotJsonSchema } from "~/kinematics";
-import { config } from "~/lib/config.server";
+import { config } from "~/platform/config.server";
 
 let cached: { body: string; etag: string } | undefined;
 

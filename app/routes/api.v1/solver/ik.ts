@@ -1,8 +1,8 @@
 // POST /api/v1/ik — { robot, feet: { LF: [x, y, z], ... }, bodyPose? } → angles per leg.
 import type { Route } from "./+types/ik";
-import { requireApiAccess } from "~/lib/access.server";
-import { apiError, readJsonBody } from "~/lib/api.server";
-import { InputIssues, solveFeet } from "~/lib/solver.server";
+import { requireApiAccess } from "~/platform/access.server";
+import { apiError, readJsonBody } from "~/platform/api-errors.server";
+import { InputIssues, solveFeet } from "~/features/solver/solve.server";
 
 const IK_BODY_LIMIT_BYTES = 256 * 1024;
 

@@ -2,10 +2,10 @@
 // options.layout "columns" gives the compact column layout (app/gait/columns.ts),
 // "checks" only flags and summary.
 import type { Route } from "./+types/solve";
-import { requireApiAccess } from "~/lib/access.server";
-import { apiError, parseJsonText, readBodyText } from "~/lib/api.server";
-import { bodyKey, cachedAnswer, rememberAnswer } from "~/lib/solve-cache.server";
-import { InputIssues, SOLVE_BODY_LIMIT_BYTES, solveRequest } from "~/lib/solver.server";
+import { requireApiAccess } from "~/platform/access.server";
+import { apiError, parseJsonText, readBodyText } from "~/platform/api-errors.server";
+import { bodyKey, cachedAnswer, rememberAnswer } from "~/features/solver/answer-cache.server";
+import { InputIssues, SOLVE_BODY_LIMIT_BYTES, solveRequest } from "~/features/solver/solve.server";
 
 export async function action({ request }: Route.ActionArgs) {
   if (request.method !== "POST") return apiError(400, "bad_request", "Use POST with a JSON body.");

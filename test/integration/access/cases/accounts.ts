@@ -2,7 +2,7 @@
 import { randomBytes } from "node:crypto";
 import { apiTokens, invitations, memberships, users } from "../../../../db/schema";
 import { type RouteCase, act, load } from "../../../support/access-matrix";
-import { hashToken } from "~/lib/access.server";
+import { hashToken } from "~/platform/access.server";
 import * as root from "~/root";
 import * as healthz from "~/routes/healthz";
 import * as shell from "~/routes/shell";

@@ -2,7 +2,7 @@
 import { and, desc, eq } from "drizzle-orm";
 import { gaitVersions, gaits, type VersionState } from "../../../../db/schema";
 import { type DemoIds, type RouteCase, act, load } from "../../../support/access-matrix";
-import { commitDraft } from "~/lib/versions.server";
+import { commitDraft } from "~/features/versions/versions.server";
 import * as apiVersions from "~/routes/api.v1/gaits/versions";
 import * as compare from "~/routes/gaits/compare";
 import * as gaitPage from "~/routes/gaits/gait";

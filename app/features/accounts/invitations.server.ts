@@ -1,0 +1,195 @@
+// Invitations by e-mail: a single-use link that expires. Only a hash of the
+// link's token is stored; resending makes a new link and retires the old one.
+import { randomBytes } from "node:crypto";
+import { and, desc, eq, gt, isNull } from "drizzle-orm";
+import { invitations, memberships, users, workspaces, type Role } from "../../../db/schema";
+import { hashToken, type Member, type User } from "../../platform/access.server";
+import { recordAudit } from "../../platform/audit.server";
+import { config } from "../../platform/config.server";
+import { database } from "../../platform/db.server";
+import { ServiceError } from "../../platform/errors.server";
+import { sendMail } from "../../platform/mail.server";
+import { invitableRoles, ROLE_LABELS } from "../../platform/permissions";
+
+export const INVITATION_DAYS = 7;
+
+export type InvitationRow = typeof invitations.$inferSelect;
+
+const EMAIL = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
+
+function newLink(): { token: string; tokenHash: string; expiresAt: Date } {
+  const token = randomBytes(24).toString("base64url");
+  return { token, tokenHash: hashToken(token), expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000) };
+}
+
+async function mailInvitation(invitation: InvitationRow, token: string, inviter: User, workspaceName: string) {
+  const link = `${config().publicUrl}/invitations/${token}`;
+  await sendMail({
+    to: invitation.email,
+    subject: `${inviter.name} invited you to ${workspaceName} on Gaitloom`,
+    text: [
+      `${inviter.name} invited you to join ${workspaceName} on Gaitloom as ${ROLE_LABELS[invitation.role].toLowerCase()}.`,
+      "",
+      `Accept the invitation: ${link}`,
+      "",
+      `The link works once and expires on ${invitation.expiresAt.toISOString().slice(0, 10)}.`,
+      "If you did not expect this, you can ignore this e-mail.",
+    ].join("\n"),
+  });
+}
+
+export async function listInvitations(workspaceId: string): Promise<(InvitationRow & { invitedBy: string | null })[]> {
+  const rows = await database()
+    .select({ invitation: invitations, invitedBy: users.name })
+    .from(invitations)
+    .leftJoin(users, eq(users.id, invitations.invitedById))
+    .where(and(eq(invitations.workspaceId, workspaceId), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)))
+    .orderBy(desc(invitations.createdAt));
+  return rows.map((row) => ({ ...row.invitation, invitedBy: row.invitedBy }));
+}
+
+export async function invite(actor: Member, email: string, role: Role): Promise<InvitationRow> {
+  const address = email.trim().toLowerCase();
+  if (!EMAIL.test(address)) throw new ServiceError(422, `"${email}" is not an e-mail address.`, "email");
+  if (!invitableRoles(actor.role).includes(role)) {
+    throw new ServiceError(403, `A ${actor.role} cannot invite someone as ${role}.`, "role");
+  }
+  const link = newLink();
+  const invitation = await database().transaction(async (tx) => {
+    const [member] = await tx
+      .select({ id: users.id })
+      .from(users)
+      .innerJoin(memberships, and(eq(memberships.userId, users.id), eq(memberships.workspaceId, actor.workspace.id)))
+      .where(eq(users.email, address));
+    if (member) throw new ServiceError(409, `${address} is already a member of this workspace.`, "email");
+    const [pending] = await tx
+      .select({ id: invitations.id })
+      .from(invitations)
+      .where(
+        and(
+          eq(invitations.workspaceId, actor.workspace.id),
+          eq(invitations.email, address),
+          isNull(invitations.acceptedAt),
+          isNull(invitations.revokedAt),
+          gt(invitations.expiresAt, new Date()),
+        ),
+      );
+    if (pending) throw new ServiceError(409, `${address} already has a pending invitation; resend it instead.`, "email");
+    const [row] = await tx
+      .insert(invitations)
+      .values({ workspaceId: actor.workspace.id, email: address, role, tokenHash: link.tokenHash, invitedById: actor.user.id, expiresAt: link.expiresAt })
+      .returning();
+    await recordAudit(
+      { workspaceId: actor.workspace.id, actorId: actor.user.id, action: "invitation.created", targetType: "invitation", targetId: row.id, details: { email: address, role } },
+      tx,
+    );
+    return row;
+  });
+  await mailInvitation(invitation, link.token, actor.user, actor.workspace.name);
+  return invitation;
+}
+
+async function pendingInvitation(actor: Member, invitationId: string): Promise<InvitationRow> {
+  const [row] = await database()
+    .select()
+    .from(invitations)
+    .where(and(eq(invitations.id, invitationId), eq(invitations.workspaceId, actor.workspace.id)));
+  if (!row) throw new ServiceError(404, "No such invitation in this workspace.");
+  if (row.acceptedAt) throw new ServiceError(409, "This invitation was already accepted.");
+  if (row.revokedAt) throw new ServiceError(409, "This invitation was revoked.");
+  if (!invitableRoles(actor.role).includes(row.role)) {
+    throw new ServiceError(403, `A ${actor.role} cannot manage an invitation for the ${row.role} role.`);
+  }
+  return row;
+}
+
+export async function resendInvitation(actor: Member, invitationId: string): Promise<void> {
+  const row = await pendingInvitation(actor, invitationId);
+  const link = newLink();
+  const [updated] = await database().transaction(async (tx) => {
+    const result = await tx
+      .update(invitations)
+      .set({ tokenHash: link.tokenHash, expiresAt: link.expiresAt, lastSentAt: new Date(), sendCount: row.sendCount + 1 })
+      .where(eq(invitations.id, row.id))
+      .returning();
+    await recordAudit({ workspaceId: actor.workspace.id, actorId: actor.user.id, action: "invitation.resent", targetType: "invitation", targetId: row.id, details: { email: row.email } }, tx);
+    return result;
+  });
+  await mailInvitation(updated, link.token, actor.user, actor.workspace.name);
+}
+
+export async function revokeInvitation(actor: Member, invitationId: string): Promise<void> {
+  const row = await pendingInvitation(actor, invitationId);
+  await database().transaction(async (tx) => {
+    await tx.update(invitations).set({ revokedAt: new Date() }).where(eq(invitations.id, row.id));
+    await recordAudit({ workspaceId: actor.workspace.id, actorId: actor.user.id, action: "invitation.revoked", targetType: "invitation", targetId: row.id, details: { email: row.email } }, tx);
+  });
+}
+
+export type InvitationView = { id: string; email: string; role: Role; workspaceId: string; workspaceName: string; invitedBy: string | null; expiresAt: Date };
+
+function checkUsable(row: InvitationRow): void {
+  if (row.revokedAt) throw new ServiceError(410, "This invitation was revoked. Ask the person who invited you for a new one.");
+  if (row.acceptedAt) throw new ServiceError(410, "This invitation link was already used.");
+  if (row.expiresAt.getTime() < Date.now()) throw new ServiceError(410, "This invitation has expired. Ask the person who invited you to resend it.");
+}
+
+export async function invitationForToken(token: string): Promise<InvitationView> {
+  const [row] = await database()
+    .select({ invitation: invitations, workspaceName: workspaces.name, invitedBy: users.name })
+    .from(invitations)
+    .innerJoin(workspaces, eq(workspaces.id, invitations.workspaceId))
+    .leftJoin(users, eq(users.id, invitations.invitedById))
+    .where(eq(invitations.tokenHash, hashToken(token)));
+  if (!row) throw new ServiceError(404, "This invitation link is not valid. It may have been resent with a new link.");
+  checkUsable(row.invitation);
+  const { id, email, role, workspaceId, expiresAt } = row.invitation;
+  return { id, email, role, workspaceId, workspaceName: row.workspaceName, invitedBy: row.invitedBy, expiresAt };
+}
+
+/** Pending invitations addressed to the person's e-mail (offered on the welcome page). */
+export async function invitationsForEmail(email: string): Promise<InvitationView[]> {
+  const rows = await database()
+    .select({ invitation: invitations, workspaceName: workspaces.name, invitedBy: users.name })
+    .from(invitations)
+    .innerJoin(workspaces, eq(workspaces.id, invitations.workspaceId))
+    .leftJoin(users, eq(users.id, invitations.invitedById))
+    .where(and(eq(invitations.email, email.toLowerCase()), isNull(invitations.acceptedAt), isNull(invitations.revokedAt), gt(invitations.expiresAt, new Date())));
+  return rows.map(({ invitation, workspaceName, invitedBy }) => ({
+    id: invitation.id,
+    email: invitation.email,
+    role: invitation.role,
+    workspaceId: invitation.workspaceId,
+    workspaceName,
+    invitedBy,
+    expiresAt: invitation.expiresAt,
+  }));
+}
+
+/**
+ * Uses an invitation: by its link's token, or by id when it is addressed to
+ * the person's own e-mail. Adds the membership once; the row lock makes a
+ * double click or two tabs accept it only once.
+ */
+export async function acceptInvitation(user: User, by: { token: string } | { id: string }): Promise<{ workspaceId: string; role: Role }> {
+  return database().transaction(async (tx) => {
+    const condition = "token" in by ? eq(invitations.tokenHash, hashToken(by.token)) : eq(invitations.id, by.id);
+    const [row] = await tx.select().from(invitations).where(condition).for("update");
+    if (!row) throw new ServiceError(404, "This invitation link is not valid. It may have been resent with a new link.");
+    if ("id" in by && row.email !== user.email.toLowerCase()) {
+      throw new ServiceError(403, "This invitation is addressed to someone else; use the link from the e-mail.");
+    }
+    checkUsable(row);
+    const [existing] = await tx
+      .select()
+      .from(memberships)
+      .where(and(eq(memberships.workspaceId, row.workspaceId), eq(memberships.userId, user.id)));
+    if (!existing) await tx.insert(memberships).values({ workspaceId: row.workspaceId, userId: user.id, role: row.role });
+    await tx.update(invitations).set({ acceptedAt: new Date(), acceptedById: user.id }).where(eq(invitations.id, row.id));
+    await recordAudit(
+      { workspaceId: row.workspaceId, actorId: user.id, action: "invitation.accepted", targetType: "invitation", targetId: row.id, details: { role: existing?.role ?? row.role, email: row.email } },
+      tx,
+    );
+    return { workspaceId: row.workspaceId, role: existing?.role ?? row.role };
+  });
+}

@@ -1,0 +1,140 @@
+// Members of a workspace: who they are, role changes and removal. A
+// workspace always keeps at least one owner.
+import { and, asc, count, desc, eq, inArray, isNull, or } from "drizzle-orm";
+import { auditLog, memberships, users, type Role } from "../../../db/schema";
+import { recordAudit } from "../../platform/audit.server";
+import { database } from "../../platform/db.server";
+import { ServiceError } from "../../platform/errors.server";
+import { ROLES } from "../../platform/permissions";
+import type { Member } from "../../platform/access.server";
+
+export type MemberRow = { userId: string; login: string; name: string; email: string; role: Role; joinedAt: Date };
+
+export async function listMembers(workspaceId: string): Promise<MemberRow[]> {
+  return database()
+    .select({
+      userId: users.id,
+      login: users.login,
+      name: users.name,
+      email: users.email,
+      role: memberships.role,
+      joinedAt: memberships.createdAt,
+    })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(eq(memberships.workspaceId, workspaceId))
+    .orderBy(asc(users.name));
+}
+
+export function parseRole(value: unknown): Role {
+  if (typeof value === "string" && (ROLES as readonly string[]).includes(value)) return value as Role;
+  throw new ServiceError(422, `Unknown role "${String(value)}"; choose one of ${ROLES.join(", ")}.`, "role");
+}
+
+type Tx = Parameters<Parameters<ReturnType<typeof database>["transaction"]>[0]>[0];
+
+async function lockedMembership(tx: Tx, workspaceId: string, userId: string) {
+  const [row] = await tx
+    .select()
+    .from(memberships)
+    .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)))
+    .for("update");
+  if (!row) throw new ServiceError(404, "That person is not a member of this workspace.");
+  return row;
+}
+
+/**
+ * Locks the owners' rows, always first and in one order, so two owners
+ * demoting each other at once queue up instead of both succeeding (or
+ * deadlocking); the second then sees only one owner left.
+ */
+async function lockOwners(tx: Tx, workspaceId: string): Promise<string[]> {
+  const owners = await tx
+    .select({ userId: memberships.userId })
+    .from(memberships)
+    .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.role, "owner")))
+    .orderBy(asc(memberships.userId))
+    .for("update");
+  return owners.map((owner) => owner.userId);
+}
+
+export async function changeRole(actor: Member, userId: string, role: Role): Promise<void> {
+  await database().transaction(async (tx) => {
+    const owners = await lockOwners(tx, actor.workspace.id);
+    const current = await lockedMembership(tx, actor.workspace.id, userId);
+    if (current.role === role) return;
+    if (current.role === "owner" && owners.filter((id) => id !== userId).length === 0) {
+      throw new ServiceError(409, "This is the workspace's only owner; make someone else an owner first.", "role");
+    }
+    await tx
+      .update(memberships)
+      .set({ role })
+      .where(and(eq(memberships.workspaceId, actor.workspace.id), eq(memberships.userId, userId)));
+    await recordAudit(
+      {
+        workspaceId: actor.workspace.id,
+        actorId: actor.user.id,
+        action: "member.role-changed",
+        targetType: "user",
+        targetId: userId,
+        details: { from: current.role, to: role },
+      },
+      tx,
+    );
+  });
+}
+
+export async function removeMember(actor: Member, userId: string): Promise<void> {
+  await database().transaction(async (tx) => {
+    const owners = await lockOwners(tx, actor.workspace.id);
+    const current = await lockedMembership(tx, actor.workspace.id, userId);
+    if (current.role === "owner" && owners.filter((id) => id !== userId).length === 0) {
+      throw new ServiceError(409, "This is the workspace's only owner and cannot be removed; make someone else an owner first.");
+    }
+    await tx.delete(memberships).where(and(eq(memberships.workspaceId, actor.workspace.id), eq(memberships.userId, userId)));
+    await recordAudit(
+      { workspaceId: actor.workspace.id, actorId: actor.user.id, action: "member.removed", targetType: "user", targetId: userId, details: { role: current.role } },
+      tx,
+    );
+  });
+}
+
+export async function ownerCount(workspaceId: string): Promise<number> {
+  const [row] = await database()
+    .select({ n: count() })
+    .from(memberships)
+    .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.role, "owner")));
+  return row.n;
+}
+
+export type AuditRow = { id: number; at: Date; action: string; actor: string | null; targetType: string | null; targetId: string | null; details: unknown };
+
+export async function listAudit(workspaceId: string, limit = 200): Promise<AuditRow[]> {
+  return database()
+    .select({
+      id: auditLog.id,
+      at: auditLog.createdAt,
+      action: auditLog.action,
+      actor: users.name,
+      targetType: auditLog.targetType,
+      targetId: auditLog.targetId,
+      details: auditLog.details,
+    })
+    .from(auditLog)
+    .leftJoin(users, eq(users.id, auditLog.actorId))
+    .where(
+      or(
+        eq(auditLog.workspaceId, workspaceId),
+        // Sign-ins belong to no workspace; show those of this workspace's members.
+        and(
+          isNull(auditLog.workspaceId),
+          inArray(
+            auditLog.actorId,
+            database().select({ id: memberships.userId }).from(memberships).where(eq(memberships.workspaceId, workspaceId)),
+          ),
+        ),
+      ),
+    )
+    .orderBy(desc(auditLog.id))
+    .limit(limit);
+}

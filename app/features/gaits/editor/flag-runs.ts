@@ -1,0 +1,73 @@
+// Flags grouped for people: the same kind on the same leg (and joint) over
+// consecutive frames is one run ("LF unreachable, frames 12–20"), which is
+// what the timeline draws and the Checks list shows.
+import type { Flag, FlagKind, Severity } from "../../../gait/index";
+
+export type FlagRun = {
+  id: string;
+  kind: FlagKind;
+  severity: Severity;
+  leg?: string;
+  joint?: Flag["joint"];
+  fromFrame: number;
+  toFrame: number;
+  count: number;
+  /** The first flag's message; the run's other frames read the same with their own numbers. */
+  message: string;
+};
+
+/** Words for each kind: a label for lists, a short tag for the timeline. */
+export const FLAG_WORDS: Record<FlagKind, { label: string; tag: string }> = {
+  unreachable: { label: "Out of reach", tag: "reach" },
+  "joint-limit": { label: "Past a joint limit", tag: "limit" },
+  "joint-speed": { label: "Joint too fast", tag: "speed" },
+  "pulse-range": { label: "Pulse out of range", tag: "pulse" },
+  "ground-penetration": { label: "Foot below the ground", tag: "ground" },
+  "foot-slip": { label: "Stance foot slips", tag: "slip" },
+  "support-count": { label: "Too few feet down", tag: "feet" },
+  "com-outside": { label: "CoM outside support", tag: "CoM" },
+  "low-margin": { label: "Low stability margin", tag: "margin" },
+  "leg-clearance": { label: "Legs too close", tag: "clear" },
+  "loop-jump": { label: "Jump at the loop seam", tag: "seam" },
+};
+
+const cache = new WeakMap<readonly Flag[], FlagRun[]>();
+
+export function flagRuns(flags: readonly Flag[]): FlagRun[] {
+  const cached = cache.get(flags);
+  if (cached) return cached;
+  const open = new Map<string, FlagRun>();
+  const runs: FlagRun[] = [];
+  for (const flag of flags) {
+    const group = `${flag.kind}|${flag.leg ?? ""}|${flag.joint ?? ""}`;
+    const run = open.get(group);
+    if (run && flag.frame <= run.toFrame + 1) {
+      if (flag.frame > run.toFrame) run.toFrame = flag.frame;
+      run.count += 1;
+      if (flag.severity === "error") run.severity = "error";
+      continue;
+    }
+    const next: FlagRun = {
+      id: `${group}|${flag.frame}`,
+      kind: flag.kind,
+      severity: flag.severity,
+      leg: flag.leg,
+      joint: flag.joint,
+      fromFrame: flag.frame,
+      toFrame: flag.frame,
+      count: 1,
+      message: flag.message,
+    };
+    open.set(group, next);
+    runs.push(next);
+  }
+  runs.sort((a, b) => a.fromFrame - b.fromFrame || (a.severity === b.severity ? 0 : a.severity === "error" ? -1 : 1));
+  cache.set(flags, runs);
+  return runs;
+}
+
+export const framesText = (run: Pick<FlagRun, "fromFrame" | "toFrame">) =>
+  run.fromFrame === run.toFrame ? `frame ${run.fromFrame}` : `frames ${run.fromFrame}–${run.toFrame}`;
+
+/** "LF femur" / "LF" / "body" — where a run belongs. */
+export const runPlace = (run: Pick<FlagRun, "leg" | "joint">) => (run.leg ? `${run.leg}${run.joint ? ` ${run.joint}` : ""}` : "body");

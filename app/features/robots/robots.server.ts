@@ -1,0 +1,366 @@
+// Robots of a workspace: lists, pages, revisions, and the writes that make new
+// revisions. Every save is a new immutable robot_revisions row, written in one
+// transaction with optimistic concurrency on the revision number it started from.
+import { and, desc, eq, ne, sql } from "drizzle-orm";
+import { robotRevisions, robots, users, type Role } from "../../../db/schema";
+import { importUrdf, parseRobot, type DefinitionIssue, type Robot } from "~/kinematics";
+import { recordAudit } from "../../platform/audit.server";
+import type { Database } from "../../../db/client";
+import { database } from "../../platform/db.server";
+import { can } from "../../platform/permissions";
+import { changedFields, nonCalibrationChanges, summarizeChanges, type FieldChange } from "./changes";
+import { starterRobot, type StarterLegCount } from "./starter";
+
+export type RobotListItem = {
+  id: string;
+  name: string;
+  legCount: number;
+  latestRevision: number;
+  updatedAt: Date;
+};
+
+export type RevisionAuthor = { login: string; name: string } | null;
+
+export type RevisionSummary = {
+  number: number;
+  message: string;
+  author: RevisionAuthor;
+  createdAt: Date;
+};
+
+export type RevisionDetail = RevisionSummary & { definition: Robot };
+
+export type RobotDetail = {
+  id: string;
+  name: string;
+  createdAt: Date;
+  latest: RevisionDetail;
+  revisions: RevisionSummary[];
+};
+
+export async function listRobots(workspaceId: string): Promise<RobotListItem[]> {
+  const rows = await database()
+    .selectDistinctOn([robots.id], {
+      id: robots.id,
+      name: robots.name,
+      latestRevision: robotRevisions.number,
+      updatedAt: robotRevisions.createdAt,
+      legCount: sql<number>`coalesce(jsonb_array_length(${robotRevisions.definition} -> 'legs'), 0)`.mapWith(Number),
+    })
+    .from(robots)
+    .innerJoin(robotRevisions, eq(robotRevisions.robotId, robots.id))
+    .where(eq(robots.workspaceId, workspaceId))
+    .orderBy(robots.id, desc(robotRevisions.number));
+  return rows.sort((a, b) => a.name.localeCompare(b.name));
+}
+
+const revisionColumns = {
+  number: robotRevisions.number,
+  message: robotRevisions.message,
+  createdAt: robotRevisions.createdAt,
+  authorLogin: users.login,
+  authorName: users.name,
+};
+
+type RevisionRow = { number: number; message: string; createdAt: Date; authorLogin: string | null; authorName: string | null };
+
+const summaryOf = (row: RevisionRow): RevisionSummary => ({
+  number: row.number,
+  message: row.message,
+  createdAt: row.createdAt,
+  author: row.authorLogin ? { login: row.authorLogin, name: row.authorName ?? row.authorLogin } : null,
+});
+
+async function robotInWorkspace(workspaceId: string, robotId: string) {
+  const [robot] = await database()
+    .select()
+    .from(robots)
+    .where(and(eq(robots.id, robotId), eq(robots.workspaceId, workspaceId)));
+  return robot ?? null;
+}
+
+/** A robot of this workspace with its newest revision's definition; null when there is no such robot. */
+export async function newestRevisionInWorkspace(workspaceId: string, robotId: string, db: Pick<Database, "select"> = database()) {
+  const [row] = await db
+    .select({ id: robots.id, name: robots.name, revisionId: robotRevisions.id, revision: robotRevisions.number, definition: robotRevisions.definition })
+    .from(robots)
+    .innerJoin(robotRevisions, eq(robotRevisions.robotId, robots.id))
+    .where(and(eq(robots.id, robotId), eq(robots.workspaceId, workspaceId)))
+    .orderBy(desc(robotRevisions.number))
+    .limit(1);
+  return row ?? null;
+}
+
+/** The robot with its newest definition and every revision, newest first; null when not in this workspace. */
+export async function getRobot(workspaceId: string, robotId: string): Promise<RobotDetail | null> {
+  const robot = await robotInWorkspace(workspaceId, robotId);
+  if (!robot) return null;
+  const rows = await database()
+    .select({ ...revisionColumns, definition: robotRevisions.definition })
+    .from(robotRevisions)
+    .leftJoin(users, eq(users.id, robotRevisions.authorId))
+    .where(eq(robotRevisions.robotId, robotId))
+    .orderBy(desc(robotRevisions.number));
+  if (rows.length === 0) return null;
+  return {
+    id: robot.id,
+    name: robot.name,
+    createdAt: robot.createdAt,
+    latest: { ...summaryOf(rows[0]), definition: rows[0].definition as Robot },
+    revisions: rows.map(summaryOf),
+  };
+}
+
+/** One revision of a robot with its definition; null when the robot or the number is not there. */
+export async function getRevision(
+  workspaceId: string,
+  robotId: string,
+  number: number,
+): Promise<{ robot: { id: string; name: string }; revision: RevisionDetail; latestNumber: number } | null> {
+  const robot = await robotInWorkspace(workspaceId, robotId);
+  if (!robot) return null;
+  const db = database();
+  const [row] = await db
+    .select({ ...revisionColumns, definition: robotRevisions.definition })
+    .from(robotRevisions)
+    .leftJoin(users, eq(users.id, robotRevisions.authorId))
+    .where(and(eq(robotRevisions.robotId, robotId), eq(robotRevisions.number, number)));
+  if (!row) return null;
+  const [latest] = await db
+    .select({ number: robotRevisions.number })
+    .from(robotRevisions)
+    .where(eq(robotRevisions.robotId, robotId))
+    .orderBy(desc(robotRevisions.number))
+    .limit(1);
+  return {
+    robot: { id: robot.id, name: robot.name },
+    revision: { ...summaryOf(row), definition: row.definition as Robot },
+    latestNumber: latest.number,
+  };
+}
+
+// ---------------------------------------------------------------------------
+// Creating robots
+
+export type CreateOutcome =
+  | { kind: "created"; robotId: string; name: string }
+  | { kind: "invalid"; issues: DefinitionIssue[] }
+  | { kind: "name-taken"; name: string }
+  | { kind: "source-missing" };
+
+type Creation = { workspaceId: string; authorId: string; message: string; source: string };
+
+export const nameTakenMessage = (name: string) =>
+  `Another robot in this workspace is already called "${name}": give this one another name.`;
+
+async function nameTaken(
+  db: Pick<ReturnType<typeof database>, "select">,
+  workspaceId: string,
+  name: string,
+  exceptRobotId?: string,
+): Promise<boolean> {
+  const rows = await db
+    .select({ id: robots.id })
+    .from(robots)
+    .where(
+      and(
+        eq(robots.workspaceId, workspaceId),
+        sql`lower(${robots.name}) = lower(${name})`,
+        exceptRobotId ? ne(robots.id, exceptRobotId) : undefined,
+      ),
+    );
+  return rows.length > 0;
+}
+
+/** Postgres unique violations arrive wrapped by drizzle; this finds the constraint name. */
+function uniqueViolation(error: unknown): string | null {
+  for (let current = error as { code?: string; constraint_name?: string; cause?: unknown } | undefined; current; ) {
+    if (current.code === "23505") return current.constraint_name ?? "";
+    current = current.cause as typeof current;
+  }
+  return null;
+}
+
+/** A new robot with `definition` (already valid) as revision 1. */
+async function insertRobot(definition: Robot, creation: Creation): Promise<CreateOutcome> {
+  try {
+    return await database().transaction(async (tx) => {
+      if (await nameTaken(tx, creation.workspaceId, definition.name)) return { kind: "name-taken", name: definition.name } as const;
+      const [robot] = await tx
+        .insert(robots)
+        .values({ workspaceId: creation.workspaceId, name: definition.name, createdById: creation.authorId })
+        .returning({ id: robots.id });
+      await tx.insert(robotRevisions).values({
+        robotId: robot.id,
+        number: 1,
+        definition,
+        message: creation.message,
+        authorId: creation.authorId,
+      });
+      await recordAudit(
+        {
+          workspaceId: creation.workspaceId,
+          actorId: creation.authorId,
+          action: "robot.create",
+          targetType: "robot",
+          targetId: robot.id,
+          details: { name: definition.name, source: creation.source },
+        },
+        tx,
+      );
+      return { kind: "created", robotId: robot.id, name: definition.name } as const;
+    });
+  } catch (error) {
+    if (uniqueViolation(error) === "robots_workspace_name") return { kind: "name-taken", name: definition.name };
+    throw error;
+  }
+}
+
+/** Validates an uploaded definition (a name given here replaces the file's) and creates the robot. */
+export async function createRobotFromDefinition(
+  json: unknown,
+  options: { workspaceId: string; authorId: string; fileName: string; name?: string },
+): Promise<CreateOutcome> {
+  const renamed =
+    options.name && json !== null && typeof json === "object" && !Array.isArray(json) ? { ...json, name: options.name } : json;
+  const parsed = parseRobot(renamed);
+  if (!parsed.ok) return { kind: "invalid", issues: parsed.issues };
+  return insertRobot(parsed.robot, {
+    workspaceId: options.workspaceId,
+    authorId: options.authorId,
+    message: `Uploaded from ${options.fileName}`,
+    source: "upload",
+  });
+}
+
+export type UrdfCreateOutcome = CreateOutcome | { kind: "refused"; issues: DefinitionIssue[] };
+
+/** Imports a URDF file and, when it maps, creates the robot; the report says what was mapped. */
+export async function createRobotFromUrdf(
+  xml: string,
+  options: { workspaceId: string; authorId: string; fileName: string; name?: string },
+): Promise<{ outcome: UrdfCreateOutcome; report: string[] }> {
+  const imported = importUrdf(xml, options.name ? { name: options.name } : {});
+  if (!imported.ok) return { outcome: { kind: "refused", issues: imported.issues }, report: [] };
+  const outcome = await insertRobot(imported.robot, {
+    workspaceId: options.workspaceId,
+    authorId: options.authorId,
+    message: `Imported from URDF ${options.fileName}`,
+    source: "urdf",
+  });
+  return { outcome, report: imported.report };
+}
+
+export type NewRobotSource = { kind: "robot"; robotId: string } | { kind: "starter"; legCount: StarterLegCount };
+
+/** A new robot from a copy of another robot's newest definition, or from the starter template. */
+export async function createRobotFrom(
+  source: NewRobotSource,
+  options: { workspaceId: string; authorId: string; name: string },
+): Promise<CreateOutcome> {
+  if (source.kind === "starter") {
+    return insertRobot(starterRobot(options.name, source.legCount), {
+      ...options,
+      message: `Started from the ${source.legCount}-leg template`,
+      source: "starter",
+    });
+  }
+  const original = await getRobot(options.workspaceId, source.robotId);
+  if (!original) return { kind: "source-missing" };
+  const parsed = parseRobot({ ...original.latest.definition, name: options.name });
+  if (!parsed.ok) return { kind: "invalid", issues: parsed.issues };
+  return insertRobot(parsed.robot, {
+    ...options,
+    message: `Copied from ${original.name}, revision ${original.latest.number}`,
+    source: "copy",
+  });
+}
+
+// ---------------------------------------------------------------------------
+// Saving a revision
+
+export type SaveOutcome =
+  | { kind: "saved"; number: number; message: string }
+  | { kind: "invalid"; issues: DefinitionIssue[] }
+  | { kind: "not-found" }
+  | { kind: "stale"; baseRevision: number; latest: RevisionSummary }
+  | { kind: "forbidden"; changes: FieldChange[] }
+  | { kind: "unchanged"; number: number }
+  | { kind: "name-taken"; name: string };
+
+export type SaveRequest = {
+  workspaceId: string;
+  robotId: string;
+  author: { id: string; role: Role };
+  baseRevision: number;
+  definition: unknown;
+  message: string;
+};
+
+/**
+ * Saves `definition` as the robot's next revision if `baseRevision` is still the
+ * newest one. A role that may only calibrate (firmware) may change zero offsets
+ * and servo mappings and nothing else, compared with the newest definition.
+ */
+export async function saveRevision(save: SaveRequest): Promise<SaveOutcome> {
+  const parsed = parseRobot(save.definition);
+  if (!parsed.ok) return { kind: "invalid", issues: parsed.issues };
+  const definition = parsed.robot;
+  try {
+    return await database().transaction(async (tx): Promise<SaveOutcome> => {
+      // The row lock makes concurrent saves of one robot take turns, so exactly
+      // one of two saves from the same base wins and the other sees it.
+      const [robot] = await tx
+        .select()
+        .from(robots)
+        .where(and(eq(robots.id, save.robotId), eq(robots.workspaceId, save.workspaceId)))
+        .for("update");
+      if (!robot) return { kind: "not-found" };
+      const [latest] = await tx
+        .select({ ...revisionColumns, definition: robotRevisions.definition })
+        .from(robotRevisions)
+        .leftJoin(users, eq(users.id, robotRevisions.authorId))
+        .where(eq(robotRevisions.robotId, robot.id))
+        .orderBy(desc(robotRevisions.number))
+        .limit(1);
+      if (!latest) return { kind: "not-found" };
+      if (latest.number !== save.baseRevision) return { kind: "stale", baseRevision: save.baseRevision, latest: summaryOf(latest) };
+
+      if (!can(save.author.role, "robots.edit")) {
+        const forbidden = nonCalibrationChanges(latest.definition, definition);
+        if (forbidden.length > 0) return { kind: "forbidden", changes: forbidden };
+      }
+      const changes = changedFields(latest.definition, definition);
+      if (changes.length === 0) return { kind: "unchanged", number: latest.number };
+      if (definition.name !== robot.name && (await nameTaken(tx, save.workspaceId, definition.name, robot.id))) {
+        return { kind: "name-taken", name: definition.name };
+      }
+
+      const number = latest.number + 1;
+      const message = save.message.trim() || summarizeChanges(changes);
+      await tx.insert(robotRevisions).values({ robotId: robot.id, number, definition, message, authorId: save.author.id });
+      if (definition.name !== robot.name) await tx.update(robots).set({ name: definition.name }).where(eq(robots.id, robot.id));
+      await recordAudit(
+        {
+          workspaceId: save.workspaceId,
+          actorId: save.author.id,
+          action: "robot.save",
+          targetType: "robot",
+          targetId: robot.id,
+          details: { revision: number, changedFields: changes.length },
+        },
+        tx,
+      );
+      return { kind: "saved", number, message };
+    });
+  } catch (error) {
+    const constraint = uniqueViolation(error);
+    if (constraint === "robots_workspace_name") return { kind: "name-taken", name: definition.name };
+    if (constraint === "robot_revisions_robot_number") {
+      // Only reachable if a writer skipped the row lock; the number it took is the newest now.
+      const current = await getRobot(save.workspaceId, save.robotId);
+      if (current) return { kind: "stale", baseRevision: save.baseRevision, latest: current.revisions[0] };
+    }
+    throw error;
+  }
+}

@@ -1,0 +1,90 @@
+// The one table of who may do what. Every loader, action and API route asks
+// it through `requireAccess` (app/platform/access.server.ts); the UI asks `can` to
+// hide what a role cannot do, and the server refuses it anyway.
+import type { Role } from "../../db/schema";
+
+export type { Role };
+
+export const ROLES = ["owner", "lead", "animator", "firmware", "viewer"] as const satisfies readonly Role[];
+
+const everyone: readonly Role[] = ROLES;
+const editors: readonly Role[] = ["owner", "lead", "animator"];
+const leads: readonly Role[] = ["owner", "lead"];
+
+export const PERMISSIONS = {
+  // Reading: every member reads everything in the workspace.
+  "workspace.read": everyone,
+  "robots.read": everyone,
+  "gaits.read": everyone,
+  "reviews.read": everyone,
+  "members.read": everyone,
+  // The workspace itself.
+  "workspace.manage": ["owner"],
+  "members.changeRole": ["owner"],
+  "members.remove": ["owner"],
+  "invitations.manage": leads,
+  "audit.read": ["owner"],
+  // API tokens act with the holder's role; only these roles may hold one.
+  "tokens.manage": ["owner", "lead", "firmware"],
+  // Robots: geometry and limits by editors; servo mapping and calibration also by firmware.
+  "robots.edit": editors,
+  "robots.calibrate": [...editors, "firmware"],
+  // Gaits and their versions.
+  "gaits.edit": editors,
+  "versions.commit": editors,
+  "versions.requestReview": editors,
+  "versions.decide": leads,
+  "versions.release": leads,
+  // Firmware output and the solver.
+  "tables.download": ["owner", "lead", "animator", "firmware"],
+  "solver.use": everyone,
+} as const satisfies Record<string, readonly Role[]>;
+
+export type Action = keyof typeof PERMISSIONS;
+
+/** How a refusal reads: "The viewer role cannot edit robots." */
+const ACTION_PHRASES: Record<Action, string> = {
+  "workspace.read": "open this workspace",
+  "robots.read": "see robots",
+  "gaits.read": "see gaits",
+  "reviews.read": "see reviews",
+  "members.read": "see the members",
+  "workspace.manage": "change the workspace settings",
+  "members.changeRole": "change members' roles",
+  "members.remove": "remove members",
+  "invitations.manage": "invite people",
+  "audit.read": "read the audit log",
+  "tokens.manage": "hold API tokens",
+  "robots.edit": "edit robots",
+  "robots.calibrate": "edit servo mapping and calibration",
+  "gaits.edit": "edit gaits",
+  "versions.commit": "commit versions",
+  "versions.requestReview": "request reviews",
+  "versions.decide": "approve or send back versions",
+  "versions.release": "release versions",
+  "tables.download": "download angle tables",
+  "solver.use": "use the solver",
+};
+
+export function refusal(role: Role, action: Action): string {
+  return `The ${role} role cannot ${ACTION_PHRASES[action]}.`;
+}
+
+export function can(role: Role | null | undefined, action: Action): boolean {
+  return role ? (PERMISSIONS[action] as readonly Role[]).includes(role) : false;
+}
+
+/** Roles a person with `role` may hand out in an invitation (a lead cannot invite an owner). */
+export function invitableRoles(role: Role): Role[] {
+  if (role === "owner") return [...ROLES];
+  if (role === "lead") return ROLES.filter((candidate) => candidate !== "owner");
+  return [];
+}
+
+export const ROLE_LABELS: Record<Role, string> = {
+  owner: "Owner",
+  lead: "Lead",
+  animator: "Animator",
+  firmware: "Firmware",
+  viewer: "Viewer",
+};

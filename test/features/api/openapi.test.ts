@@ -1,0 +1,144 @@
+// The OpenAPI document against the route table: every /api/v1 route of
+// app/routes.ts is described (with a write operation where the module has an
+// action), every reference resolves, every path parameter is declared, and the
+// generated schemas are the zod schemas' own. OpenAPI 3.1 (spec.openapis.org/oas/v3.1.0).
+import { describe, expect, test } from "vitest";
+import routeConfig from "~/routes";
+import { calibrationProfileJsonSchema } from "~/export";
+import { sequenceJsonSchema } from "~/gait";
+import { robotJsonSchema } from "~/kinematics";
+import { openApiDocument, type OpenApiOperation } from "~/features/api/openapi.server";
+import { PERMISSIONS } from "~/platform/permissions";
+
+type ConfigEntry = { path?: string; file: string; children?: ConfigEntry[] };
+
+/** Every route with its full path (the config's paths are already prefixed). */
+function routesOf(entries: ConfigEntry[], parent = ""): { path: string; file: string }[] {
+  return entries.flatMap((entry) => {
+    const path = [parent, entry.path ?? ""].filter(Boolean).join("/");
+    return [{ path, file: entry.file }, ...routesOf(entry.children ?? [], path)];
+  });
+}
+
+const apiRoutes = routesOf(routeConfig as ConfigEntry[]).filter((route) => route.path.startsWith("api/v1/"));
+const toOpenApiPath = (path: string) => `/${path.replace(/:([A-Za-z0-9_]+)/g, "{$1}")}`;
+const document = openApiDocument();
+const operations = Object.entries(document.paths).flatMap(([path, methods]) => Object.entries(methods).map(([method, operation]) => ({ path, method, operation: operation as OpenApiOperation })));
+
+describe("every /api/v1 route of app/routes.ts is in the OpenAPI document", () => {
+  test("the route table has /api/v1 routes to check", () => {
+    expect(apiRoutes.length).toBeGreaterThanOrEqual(10);
+  });
+
+  test.each(apiRoutes.map((route) => [toOpenApiPath(route.path), route.file]))("%s (%s)", async (path, file) => {
+    expect(Object.keys(document.paths), `${path} is routed to ${file} but not described in app/features/api/openapi.server.ts`).toContain(path);
+    const module = await import(/* @vite-ignore */ `../../../app/${file}`);
+    const methods = Object.keys(document.paths[path]);
+    if (typeof module.action === "function") {
+      expect(methods.some((method) => method !== "get"), `${file} has an action; describe its POST/PUT/DELETE`).toBe(true);
+    }
+    if (typeof module.loader === "function" && typeof module.action !== "function") expect(methods).toContain("get");
+  });
+
+  test("and nothing else is described", () => {
+    const routed = new Set(apiRoutes.map((route) => toOpenApiPath(route.path)));
+    const extra = Object.keys(document.paths).filter((path) => !routed.has(path));
+    expect(extra, "described but not routed").toEqual([]);
+  });
+});
+
+describe("the document holds together", () => {
+  test("OpenAPI 3.1 with JSON Schema 2020-12, a server, bearer auth and the session", () => {
+    expect(document.openapi).toBe("3.1.0");
+    expect(document.jsonSchemaDialect).toBe("https://json-schema.org/draft/2020-12/schema");
+    expect(document.servers[0].url).toBe("http://127.0.0.1:3000");
+    expect(document.components.securitySchemes).toMatchObject({ bearerToken: { type: "http", scheme: "bearer" }, sessionCookie: { type: "apiKey", in: "cookie" } });
+    expect(document.security).toEqual([{ bearerToken: [] }, { sessionCookie: [] }]);
+  });
+
+  test("operation ids are unique; every operation has a summary, a tag that exists, answers and a permission", () => {
+    const ids = operations.map(({ operation }) => operation.operationId);
+    expect(new Set(ids).size).toBe(ids.length);
+    const tags = new Set(document.tags.map((tag) => tag.name));
+    for (const { path, method, operation } of operations) {
+      const label = `${method.toUpperCase()} ${path}`;
+      expect(operation.summary, label).toBeTruthy();
+      expect(operation.tags.every((tag) => tags.has(tag)), label).toBe(true);
+      expect(Object.keys(operation.responses).some((status) => /^2/.test(status)), label).toBe(true);
+      const { action, roles } = operation["x-permission"];
+      if (action === "public") {
+        expect(operation.security, `${label} is public, so it must say security: []`).toEqual([]);
+      } else {
+        expect(roles, label).toEqual([...PERMISSIONS[action]]);
+        expect(Object.keys(operation.responses), `${label} needs a token or session: 401 and 403`).toEqual(expect.arrayContaining(["401", "403"]));
+      }
+    }
+  });
+
+  test("every path parameter is declared as a required path parameter", () => {
+    for (const { path, method, operation } of operations) {
+      const names = [...path.matchAll(/\{([^}]+)\}/g)].map((match) => match[1]);
+      const declared = (operation.parameters ?? []).filter((parameter) => parameter.in === "path");
+      expect(declared.map((parameter) => parameter.name).sort(), `${method} ${path}`).toEqual([...names].sort());
+      expect(declared.every((parameter) => parameter.required)).toBe(true);
+    }
+  });
+
+  test("every $ref points at something in the document (or inside its own schema resource)", () => {
+    const refs: { ref: string; root: unknown }[] = [];
+    const walk = (node: unknown, root: unknown) => {
+      if (Array.isArray(node)) return node.forEach((child) => walk(child, root));
+      if (!node || typeof node !== "object") return;
+      const object = node as Record<string, unknown>;
+      const scope = typeof object.$id === "string" ? object : root;
+      if (typeof object.$ref === "string") refs.push({ ref: object.$ref, root: scope });
+      for (const value of Object.values(object)) walk(value, scope);
+    };
+    walk(document, document);
+    expect(refs.length).toBeGreaterThan(20);
+    for (const { ref, root } of refs) {
+      expect(ref.startsWith("#/"), ref).toBe(true);
+      let target: unknown = root;
+      for (const part of ref.slice(2).split("/")) target = (target as Record<string, unknown> | undefined)?.[part.replaceAll("~1", "/").replaceAll("~0", "~")];
+      expect(target, `${ref} does not resolve`).toBeTruthy();
+    }
+  });
+
+  test("the error shape and all eight error statuses are there", () => {
+    const error = document.components.schemas.Error as any;
+    expect(error.properties.error.required).toEqual(["code", "message"]);
+    const statuses = new Set(operations.flatMap(({ operation }) => Object.keys(operation.responses)));
+    for (const status of ["400", "401", "403", "404", "409", "413", "422", "429"]) expect(statuses, status).toContain(status);
+  });
+});
+
+describe("schemas come from the zod schemas", () => {
+  const withoutDialect = ({ $schema: _dialect, ...rest }: Record<string, unknown>) => rest;
+
+  test.each([
+    ["Robot", robotJsonSchema(), "robot.json"],
+    ["Sequence", sequenceJsonSchema(), "sequence.json"],
+    ["CalibrationProfile", calibrationProfileJsonSchema(), "calibration.json"],
+  ])("%s is the generated JSON Schema, with the $id it is published under", (name, generated, file) => {
+    expect(document.components.schemas[name]).toEqual({ $id: `http://127.0.0.1:3000/api/v1/schema/${file}`, ...withoutDialect(generated) });
+  });
+
+  test("the table route's query parameters are tableQuerySchema's, with their defaults and limits", () => {
+    const table = document.paths["/api/v1/gaits/{gaitId}/versions/{number}/table"].get!;
+    const query = Object.fromEntries((table.parameters ?? []).filter((parameter) => parameter.in === "query").map((parameter) => [parameter.name, parameter]));
+    expect(Object.keys(query)).toEqual(["format", "units", "rate", "profile", "override"]);
+    expect(query.format.schema).toEqual({ default: "csv", type: "string", enum: ["csv", "json", "c"] });
+    expect(query.units.schema).toEqual({ default: "deg", type: "string", enum: ["deg", "rad", "us"] });
+    expect(query.rate.schema).toEqual({ type: "number", exclusiveMinimum: 0, maximum: 1000 });
+    expect(Object.values(query).every((parameter) => !parameter.required && parameter.description)).toBe(true);
+    expect(Object.keys(table.responses).sort()).toEqual(["200", "304", "400", "401", "403", "404", "409", "422", "429"]);
+    expect(Object.keys((table.responses["200"] as any).content)).toEqual(["text/csv", "application/json", "text/x-c"]);
+  });
+
+  test("the draft PUT body is draftSaveBody's, its sequence the Sequence schema", () => {
+    const body = document.paths["/api/v1/gaits/{gaitId}/draft"].put!.requestBody!.content["application/json"].schema as any;
+    expect(body.required).toEqual(["sequence", "baseRevision"]);
+    expect(body.properties.sequence).toEqual({ $ref: "#/components/schemas/Sequence" });
+    expect(body.properties.baseRevision.type).toBe("integer");
+  });
+});

@@ -1,0 +1,71 @@
+import { describe, expect, test } from "vitest";
+import { formatPath } from "~/kinematics";
+import { checkDraft, removeLegAt, renameLeg, valueFromNumberText } from "~/features/robots/form-draft";
+import { fieldId, formFieldIdFor, getAt, parsePathText, setAt } from "~/features/robots/paths";
+import { demoRobot } from "../../components/robots/helpers";
+
+describe("field paths", () => {
+  test("parsePathText reads back what formatPath writes", () => {
+    for (const path of [["legs", 2, "joints", "femur", "minDeg"], ["rest", "LF", "coxa"], ["body", "com", 1], ["rest", "1x", "coxa"], []]) {
+      expect(parsePathText(formatPath(path))).toEqual(path);
+    }
+  });
+
+  test("issues on form fields link to their input; others to nothing", () => {
+    expect(formFieldIdFor("legs[2].joints.femur.minDeg")).toBe(fieldId(["legs", 2, "joints", "femur", "minDeg"]));
+    expect(formFieldIdFor("legs[0].joints.coxa.servo.channel")).toBe("field-legs-0-joints-coxa-servo-channel");
+    expect(formFieldIdFor("rest.LF.coxa")).toBe("field-rest-LF-coxa");
+    expect(formFieldIdFor("legs")).toBeNull();
+    expect(formFieldIdFor("")).toBeNull();
+  });
+
+  test("setAt copies only along the path and removes a key given undefined", () => {
+    const document = { a: { b: [1, 2, 3] }, c: { d: 1 } };
+    const next = setAt(document, ["a", "b", 1], 9);
+    expect(next).toEqual({ a: { b: [1, 9, 3] }, c: { d: 1 } });
+    expect(next.c).toBe(document.c);
+    expect(document.a.b[1]).toBe(2);
+    expect(setAt(document, ["c", "d"], undefined)).toEqual({ a: { b: [1, 2, 3] }, c: {} });
+    expect(getAt(next, ["a", "b", 1])).toBe(9);
+    expect(getAt(next, ["x", "y"])).toBeUndefined();
+  });
+});
+
+describe("the editor's working copy", () => {
+  test("number text: numbers, a decimal comma, nothing, or the text itself", () => {
+    expect(valueFromNumberText("62")).toBe(62);
+    expect(valueFromNumberText(" -4.5 ")).toBe(-4.5);
+    expect(valueFromNumberText("1.")).toBe(1);
+    expect(valueFromNumberText("2,5")).toBe(2.5);
+    expect(valueFromNumberText("1e3")).toBe(1000);
+    expect(valueFromNumberText("")).toBeUndefined();
+    expect(valueFromNumberText("abc")).toBe("abc");
+    expect(valueFromNumberText("1.2.3")).toBe("1.2.3");
+  });
+
+  test("parseRobot's issues land at the field paths", () => {
+    const robot = demoRobot("pier-crawler.json") as unknown as Record<string, unknown>;
+    let document = setAt(robot, ["legs", 0, "femur"], -5);
+    document = setAt(document, ["legs", 1, "joints", "femur", "minDeg"], 90);
+    document = setAt(document, ["standHeight"], "abc");
+    document = setAt(document, ["body", "massKg"], undefined);
+    const check = checkDraft(document);
+    expect(check.robot).toBeNull();
+    expect(check.byPath.get("legs[0].femur")).toEqual(["must be positive (got -5)"]);
+    expect(check.byPath.get("legs[1].joints.femur.minDeg")?.[0]).toMatch(/^must be below maxDeg \(got 90 ≥ \d+\)$/);
+    expect(check.byPath.get("standHeight")).toEqual(['must be a number (got "abc")']);
+    expect(check.byPath.get("body.massKg")).toEqual(["is required"]);
+  });
+
+  test("renaming a leg carries its rest angles; removing drops them", () => {
+    const robot = demoRobot("pier-crawler.json") as unknown as Record<string, unknown>;
+    const renamed = renameLeg(robot, 0, "FL");
+    expect(getAt(renamed, ["legs", 0, "id"])).toBe("FL");
+    expect(getAt(renamed, ["rest", "FL"])).toEqual(getAt(robot, ["rest", "LF"]));
+    expect(getAt(renamed, ["rest", "LF"])).toBeUndefined();
+    expect(checkDraft(renamed).issues).toEqual([]);
+    const removed = removeLegAt(renamed, 0);
+    expect((getAt(removed, ["legs"]) as unknown[]).length).toBe(5);
+    expect(getAt(removed, ["rest", "FL"])).toBeUndefined();
+  });
+});
