@@ -13,7 +13,9 @@ if (!adminUrl || !template || !prefix) {
 }
 
 const worker = process.env.VITEST_POOL_ID ?? "0";
-const name = `gaitloom_test_w${worker}`;
+// The name is the prefix's database name plus the worker, so two runs with
+// different prefixes can share one cluster.
+const name = `${new URL(prefix).pathname.slice(1)}${worker}`;
 const admin = postgres(adminUrl, { max: 1, onnotice: () => {} });
 try {
   await admin.unsafe(`drop database if exists "${name}" with (force)`);
