@@ -31,7 +31,7 @@ describe("every /api/v1 route of app/routes.ts is in the OpenAPI document", () =
   });
 
   test.each(apiRoutes.map((route) => [toOpenApiPath(route.path), route.file]))("%s (%s)", async (path, file) => {
-    expect(Object.keys(document.paths), `${path} is routed to ${file} but not described in app/features/api/openapi.server.ts`).toContain(path);
+    expect(Object.keys(document.paths), `${path} is routed to ${file} but not described in app/features/api/operations/`).toContain(path);
     const module = await import(/* @vite-ignore */ `../../../app/${file}`);
     const methods = Object.keys(document.paths[path]);
     if (typeof module.action === "function") {

@@ -1,0 +1,43 @@
+// /api/v1/robots/{robotId}/calibration-profiles: the names a table download's `profile=` takes.
+import { AUTH, errorsFor, json, permission, person, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
+
+export function calibrationPaths(): OpenApiPaths {
+  return {
+    "/api/v1/robots/{robotId}/calibration-profiles": {
+      get: {
+        operationId: "listCalibrationProfiles",
+        summary: "The robot's calibration profiles (one per physical unit)",
+        description: "Names to give as `profile=` when downloading a table; each profile's revision goes up with every save.",
+        tags: ["Robots"],
+        parameters: [uuidPath("robotId", "The robot.")],
+        responses: { "200": { description: "The profiles by name.", content: json(ref("CalibrationProfiles")) }, ...errorsFor(400, ...AUTH, 404) },
+        "x-permission": permission("robots.read"),
+      },
+    },
+  };
+}
+
+export function calibrationSchemas(): Record<string, Json> {
+  return {
+    CalibrationProfiles: {
+      type: "object",
+      properties: {
+        robot: { type: "object", properties: { id: { type: "string" }, name: { type: "string" }, revision: { type: "integer" } } },
+        profiles: {
+          type: "array",
+          items: {
+            type: "object",
+            properties: {
+              id: { type: "string", format: "uuid" },
+              name: { type: "string" },
+              revision: { type: "integer", description: "Goes up with every save; the table header names it." },
+              updatedAt: { type: "string", format: "date-time" },
+              updatedBy: person,
+              profile: ref("CalibrationProfile"),
+            },
+          },
+        },
+      },
+    },
+  };
+}

@@ -1,0 +1,122 @@
+// The shapes of the OpenAPI document and the pieces every operations file
+// builds with: references, error answers, permissions, path parameters, ETags.
+import { z } from "zod";
+import type { ApiErrorCode } from "../../../platform/errors";
+import { PERMISSIONS, type Action } from "../../../platform/permissions";
+
+export type Json = Record<string, unknown>;
+
+export type OpenApiParameter = { name: string; in: "path" | "query" | "header"; required: boolean; description?: string; schema: Json };
+export type OpenApiResponse = { description: string; headers?: Record<string, { description: string; schema: Json }>; content?: Record<string, { schema: Json }> };
+export type OpenApiOperation = {
+  operationId: string;
+  summary: string;
+  description?: string;
+  tags: string[];
+  security?: Record<string, string[]>[];
+  parameters?: OpenApiParameter[];
+  requestBody?: { required: boolean; description?: string; content: Record<string, { schema: Json }> };
+  responses: Record<string, OpenApiResponse | { $ref: string }>;
+  /** Which permission of app/platform/permissions.ts the route checks, and the roles that hold it; "public" for none. */
+  "x-permission": { action: Action | "public"; roles: string[] };
+};
+export type OpenApiPaths = Record<string, Partial<Record<"get" | "put" | "post" | "delete", OpenApiOperation>>>;
+export type OpenApiDocument = {
+  openapi: "3.1.0";
+  jsonSchemaDialect: string;
+  info: Json;
+  servers: { url: string; description?: string }[];
+  security: Record<string, string[]>[];
+  tags: { name: string; description: string }[];
+  paths: OpenApiPaths;
+  components: { securitySchemes: Json; schemas: Record<string, Json>; responses: Record<string, OpenApiResponse> };
+};
+
+export const ref = (name: string) => ({ $ref: `#/components/schemas/${name}` });
+export const json = (schema: Json) => ({ "application/json": { schema } });
+
+/** A JSON Schema generated elsewhere, made a resource of its own ($id) so its local `#/$defs` refs resolve inside it. */
+export function embedded(schema: Json, id: string): Json {
+  const { $schema: _dialect, ...rest } = schema;
+  return { $id: id, ...rest };
+}
+
+/** A zod object's JSON Schema (input side: defaults make parameters optional) as OpenAPI query parameters. */
+export function queryParameters(schema: z.ZodType): OpenApiParameter[] {
+  const generated = z.toJSONSchema(schema, { io: "input", target: "draft-2020-12" }) as { properties?: Record<string, Json>; required?: string[] };
+  return Object.entries(generated.properties ?? {}).map(([name, property]) => {
+    const { description, ...rest } = property;
+    return { name, in: "query", required: (generated.required ?? []).includes(name), ...(typeof description === "string" ? { description } : {}), schema: rest };
+  });
+}
+
+const ERROR_CODES: ApiErrorCode[] = ["bad_request", "unauthorized", "forbidden", "not_found", "conflict", "payload_too_large", "invalid", "rate_limited"];
+
+const STATUS_RESPONSES = {
+  400: ["BadRequest", "The request is malformed: a parameter or the JSON body; `details.parameter` names a bad query parameter."],
+  401: ["Unauthorized", "No session and no bearer token, a malformed Authorization header, or an unknown or revoked token."],
+  403: ["Forbidden", "The role cannot do this (the message says which), or a cookie-carrying mutation from another origin."],
+  404: ["NotFound", "Nothing by that id in the caller's workspace (another workspace's things are not found either)."],
+  409: ["Conflict", "A conflict with the current state: a stale revision, or a table that needs an override reason."],
+  413: ["PayloadTooLarge", "The body is larger than the route's limit (the message gives both sizes)."],
+  422: ["Unprocessable", "The input is well-formed but invalid: `details` lists the issues as `{ path, message }`."],
+  429: ["TooManyRequests", "Too many requests with this token in a minute; the Retry-After header says when to try again."],
+} as const;
+
+type Status = keyof typeof STATUS_RESPONSES;
+
+export const errorsFor = (...statuses: Status[]) => Object.fromEntries(statuses.map((status) => [String(status), { $ref: `#/components/responses/${STATUS_RESPONSES[status][0]}` }]));
+
+/** The statuses every authenticated route may answer. */
+export const AUTH: Status[] = [401, 403, 429];
+
+/** The shared refusals that errorsFor refers to, each an Error body. */
+export function errorResponses(): Record<string, OpenApiResponse> {
+  const responses: Record<string, OpenApiResponse> = Object.fromEntries(
+    Object.values(STATUS_RESPONSES).map(([name, description]) => [name, { description, content: json(ref("Error")) }]),
+  );
+  responses.TooManyRequests = { ...responses.TooManyRequests, headers: { "Retry-After": { description: "Seconds until the next minute's allowance.", schema: { type: "integer" } } } };
+  return responses;
+}
+
+export function errorSchemas(): Record<string, Json> {
+  return {
+    Error: {
+      type: "object",
+      required: ["error"],
+      description: "Every refusal of /api/v1.",
+      properties: {
+        error: {
+          type: "object",
+          required: ["code", "message"],
+          properties: {
+            code: { type: "string", enum: ERROR_CODES },
+            message: { type: "string", description: "A sentence a person can act on." },
+            details: { description: "Issues `[{ path, message }]`, the bad `parameter`, or the state a conflict is with." },
+          },
+        },
+      },
+    },
+  };
+}
+
+export const PUBLIC = [] as Record<string, string[]>[];
+
+export const permission = (action: Action | "public"): OpenApiOperation["x-permission"] => ({ action, roles: action === "public" ? ["anyone"] : [...PERMISSIONS[action]] });
+
+export const uuidPath = (name: string, what: string): OpenApiParameter => ({ name, in: "path", required: true, description: what, schema: { type: "string", format: "uuid" } });
+
+export const etagResponses = (description: string) => ({
+  "304": { description: `${description} unchanged: the If-None-Match tag matches.`, headers: { ETag: { description: "The representation's tag.", schema: { type: "string" } } } },
+});
+
+export const ifNoneMatch: OpenApiParameter = {
+  name: "If-None-Match",
+  in: "header",
+  required: false,
+  description: "An ETag from an earlier answer: 304 without a body when it still matches.",
+  schema: { type: "string" },
+};
+
+/** Who wrote or saved something, as the list answers name them. */
+export const person = { type: ["object", "null"], properties: { login: { type: "string" }, name: { type: "string" } } };
