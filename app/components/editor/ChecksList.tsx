@@ -4,7 +4,8 @@
 // (solved at once on every edit). The timeline always draws the preview.
 import { useId, useMemo, useState } from "react";
 import type { Flag } from "~/gait";
-import { FLAG_WORDS, flagRuns, framesText, runPlace, type FlagRun } from "~/features/gaits/editor/flag-runs";
+import { flagRuns, framesText, runPlace, type FlagRun } from "~/features/gaits/editor/flag-runs";
+import { FLAG_LABELS } from "~/features/gaits/flag-labels";
 import { useEditor, useEditorStore } from "~/stores/editor-context";
 import { SEVERITY_GLYPH } from "../timeline/FlagLane";
 import type { useServerReference } from "./use-server-reference";
@@ -105,7 +106,7 @@ function RunItem({ run }: { run: FlagRun }) {
         </span>
         <span className="min-w-0 flex-1">
           <span className="font-medium">
-            <span className={error ? "text-danger" : "text-warning"}>{error ? "Error" : "Warning"}</span> · {FLAG_WORDS[run.kind].label} · <span className="font-mono">{runPlace(run)}</span> ·{" "}
+            <span className={error ? "text-danger" : "text-warning"}>{error ? "Error" : "Warning"}</span> · {FLAG_LABELS[run.kind]} · <span className="font-mono">{runPlace(run)}</span> ·{" "}
             <span className="numeric">{framesText(run)}</span>
           </span>
           <span className="block truncate text-xs text-ink-muted">{run.message}</span>

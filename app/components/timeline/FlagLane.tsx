@@ -2,7 +2,8 @@
 // ◆ warning), a short tag and the colour of its severity. The Checks list
 // below the timeline carries the same runs for the keyboard and screen readers.
 import { memo } from "react";
-import { FLAG_WORDS, framesText, type FlagRun } from "~/features/gaits/editor/flag-runs";
+import { framesText, type FlagRun } from "~/features/gaits/editor/flag-runs";
+import { FLAG_LABELS, FLAG_TAGS } from "~/features/gaits/flag-labels";
 
 export const SEVERITY_GLYPH = { error: "▲", warning: "◆" } as const;
 
@@ -11,12 +12,11 @@ export const FlagLane = memo(function FlagLane({ runs, cycleFrames, onJump }: { 
   return (
     <div aria-hidden className="pointer-events-none absolute inset-x-0 bottom-0 h-3.5">
       {runs.map((run) => {
-        const words = FLAG_WORDS[run.kind];
         const error = run.severity === "error";
         return (
           <span
             key={run.id}
-            title={`${words.label}, ${framesText(run)}: ${run.message}`}
+            title={`${FLAG_LABELS[run.kind]}, ${framesText(run)}: ${run.message}`}
             data-flag-kind={run.kind}
             data-from={run.fromFrame}
             data-to={run.toFrame}
@@ -27,7 +27,7 @@ export const FlagLane = memo(function FlagLane({ runs, cycleFrames, onJump }: { 
             style={{ left: `${(run.fromFrame / cycleFrames) * 100}%`, width: `${((run.toFrame - run.fromFrame + 1) / cycleFrames) * 100}%` }}
           >
             <span>{SEVERITY_GLYPH[run.severity]}</span>
-            <span>{words.tag}</span>
+            <span>{FLAG_TAGS[run.kind]}</span>
           </span>
         );
       })}

@@ -1,6 +1,6 @@
 // A version's flags grouped by kind, leg and joint, with the frames they fall on.
 import type { FlagGroup } from "~/features/compare";
-import { flagLabel } from "~/features/compare";
+import { FLAG_LABELS } from "~/features/gaits/flag-labels";
 
 export function FlagGroupsTable({ groups, label = "Flags of this version" }: { groups: readonly FlagGroup[]; label?: string }) {
   if (groups.length === 0) {
@@ -40,7 +40,7 @@ export function FlagGroupsTable({ groups, label = "Flags of this version" }: { g
                   <span aria-hidden="true">{group.severity === "error" ? "✕ " : "▲ "}</span>
                   <span className="sr-only">{group.severity}: </span>
                 </span>
-                {flagLabel(group.kind)}
+                {FLAG_LABELS[group.kind]}
               </td>
               <td className="px-3 py-2 font-mono whitespace-nowrap">{[group.leg, group.joint].filter(Boolean).join(" ") || "body"}</td>
               <td className="px-3 py-2 text-right font-mono tabular-nums">{group.count}</td>

@@ -3,6 +3,7 @@
 // is better where "better" has a direction. Pure.
 import { FLAG_KINDS, type FlagKind, type SolveSummary } from "../../gait/index";
 import { JOINT_NAMES, type JointName } from "../../kinematics/index";
+import { FLAG_LABELS } from "../gaits/flag-labels";
 
 /** What a version keeps of its solve (app/features/versions/versions.server.ts VersionSummary); older rows may lack fields. */
 export type MetricSummary = Partial<Pick<SolveSummary, "frames" | "fps" | "flagsByKind" | "errors" | "warnings" | "worstMarginMm" | "peakSpeedDegS" | "strideMm" | "bodySpeedMmS" | "speedHeadroom">> & {
@@ -65,22 +66,6 @@ function row(id: MetricId, label: string, unit: string, digits: number, a: numbe
   if (delta !== null && Math.abs(delta) > EQUAL && direction) better = (direction === "higher") === delta > 0 ? "b" : "a";
   return { id, label, unit, a: valueA, b: valueB, delta, better, digits };
 }
-
-const FLAG_LABELS: Record<FlagKind, string> = {
-  unreachable: "Unreachable feet",
-  "joint-limit": "Joint past its limit",
-  "joint-speed": "Joint too fast",
-  "pulse-range": "Pulse out of range",
-  "ground-penetration": "Foot below the ground",
-  "foot-slip": "Foot slips",
-  "support-count": "Too few feet down",
-  "com-outside": "Centre of mass outside support",
-  "low-margin": "Low stability margin",
-  "leg-clearance": "Legs too close",
-  "loop-jump": "Jump at the loop seam",
-};
-
-export const flagLabel = (kind: FlagKind) => FLAG_LABELS[kind];
 
 /**
  * One row per metric, A against B. Flag kinds appear when either side has

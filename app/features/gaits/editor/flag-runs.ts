@@ -16,21 +16,6 @@ export type FlagRun = {
   message: string;
 };
 
-/** Words for each kind: a label for lists, a short tag for the timeline. */
-export const FLAG_WORDS: Record<FlagKind, { label: string; tag: string }> = {
-  unreachable: { label: "Out of reach", tag: "reach" },
-  "joint-limit": { label: "Past a joint limit", tag: "limit" },
-  "joint-speed": { label: "Joint too fast", tag: "speed" },
-  "pulse-range": { label: "Pulse out of range", tag: "pulse" },
-  "ground-penetration": { label: "Foot below the ground", tag: "ground" },
-  "foot-slip": { label: "Stance foot slips", tag: "slip" },
-  "support-count": { label: "Too few feet down", tag: "feet" },
-  "com-outside": { label: "CoM outside support", tag: "CoM" },
-  "low-margin": { label: "Low stability margin", tag: "margin" },
-  "leg-clearance": { label: "Legs too close", tag: "clear" },
-  "loop-jump": { label: "Jump at the loop seam", tag: "seam" },
-};
-
 const cache = new WeakMap<readonly Flag[], FlagRun[]>();
 
 export function flagRuns(flags: readonly Flag[]): FlagRun[] {
