@@ -1,7 +1,7 @@
 // Choosing A and B: any two versions of one robot's gaits, grouped by robot and gait.
 import { Form } from "react-router";
 import type { VersionState } from "../../../db/schema";
-import { STATE_LABELS } from "~/components/versions/format";
+import { stateWord } from "~/features/versions/state-labels";
 
 export type PickableVersion = { id: string; number: number; message: string; state: VersionState; gaitName: string; robotName: string };
 
@@ -20,7 +20,7 @@ function Options({ versions }: { versions: readonly PickableVersion[] }) {
         <optgroup key={label} label={label}>
           {members.map((version) => (
             <option key={version.id} value={version.id}>
-              {version.gaitName} v{version.number} ({STATE_LABELS[version.state].toLowerCase()}) — {version.message}
+              {version.gaitName} v{version.number} ({stateWord(version.state)}) — {version.message}
             </option>
           ))}
         </optgroup>

@@ -1,7 +1,7 @@
 // The metrics of A and B with their change, and which side is better where
 // better has a direction; shown by word and arrow, not colour alone.
 import type { MetricRow } from "~/features/compare";
-import { formatDelta, formatNumber } from "~/components/versions/format";
+import { formatDelta, formatNumber } from "~/platform/format";
 
 export function MetricDeltaTable({ rows }: { rows: readonly MetricRow[] }) {
   return (

@@ -5,12 +5,11 @@ import { useEffect, useRef, useState } from "react";
 import { useFetcher, useRevalidator } from "react-router";
 import type { Sequence } from "~/gait";
 import { clearLocalDraft, markLocalDraftSynced, pendingLocalDraft, writeLocalDraft, type LocalDraft } from "~/features/gaits/editor/local-draft";
+import { formatLocalTime } from "~/platform/format";
 import { useEditor, useEditorStore } from "~/stores/editor-context";
 import { draftUrl } from "./use-autosave";
 
 const action = "rounded-md border border-line bg-surface px-3 py-1 text-sm font-medium hover:bg-sunken disabled:opacity-60";
-
-const clock = (iso: string | number) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
 
 export function ConflictBanner({ gaitId, gaitName, robotRevision }: { gaitId: string; gaitName: string; robotRevision: number }) {
   const store = useEditorStore();
@@ -105,8 +104,8 @@ export function RestoreOffer({ gaitId, serverSequence, serverUpdatedAt }: { gait
         Unsaved changes found in this browser
       </h2>
       <p className="mt-1 text-sm">
-        This browser kept edits from {clock(local.savedAt)} (on draft revision {local.baseRevision}) that never reached the server.{" "}
-        {newer ? "They are newer than the saved draft." : `The saved draft changed after them (${clock(serverUpdatedAt)}); restoring replaces it, and Undo brings it back.`}
+        This browser kept edits from {formatLocalTime(local.savedAt)} (on draft revision {local.baseRevision}) that never reached the server.{" "}
+        {newer ? "They are newer than the saved draft." : `The saved draft changed after them (${formatLocalTime(serverUpdatedAt)}); restoring replaces it, and Undo brings it back.`}
       </p>
       <div className="mt-2 flex gap-2">
         <button

@@ -2,7 +2,7 @@
 // commits it as the next version.
 import { useEffect, useRef } from "react";
 import { Form } from "react-router";
-import { formatTime } from "./format";
+import { formatTime } from "~/platform/format";
 
 export type DraftPanelProps = {
   gait: {

@@ -5,7 +5,7 @@ import { useId } from "react";
 import { Form } from "react-router";
 import type { Role, VersionState } from "../../../db/schema";
 import { ROLE_LABELS } from "~/platform/permissions";
-import { STATE_LABELS } from "./format";
+import { stateWord } from "~/features/versions/state-labels";
 
 export type ReviewActionsProps = {
   version: { id: string; number: number; state: VersionState; errors: number; reviewer: { name: string } | null };
@@ -47,7 +47,7 @@ export function ReviewActions({ version, reviewers, others, defaultCompareWith, 
   const canRelease = can.release && version.state === "approved";
   const heading = (
     <h2 className="text-base font-semibold">
-      Review <span className="font-normal text-ink-muted">· {STATE_LABELS[version.state].toLowerCase()}</span>
+      Review <span className="font-normal text-ink-muted">· {stateWord(version.state)}</span>
     </h2>
   );
 

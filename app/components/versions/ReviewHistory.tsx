@@ -1,7 +1,8 @@
 // Every review step of a version, oldest first: who moved it where, what they
 // wrote, and any override with its reason.
 import type { VersionState } from "../../../db/schema";
-import { formatTime, STATE_LABELS } from "./format";
+import { stateWord } from "~/features/versions/state-labels";
+import { formatTime } from "~/platform/format";
 import { StateBadge } from "./StateBadge";
 
 export type ReviewHistoryEvent = {
@@ -33,7 +34,7 @@ export function ReviewHistory({ events }: { events: readonly ReviewHistoryEvent[
             <StateBadge state={event.toState} />
             <span>
               <span className="font-medium">{event.actor?.name ?? "Someone"}</span> {VERBS[event.toState]}
-              {event.fromState && event.fromState !== "committed" && event.toState === "in-review" ? ` again (was ${STATE_LABELS[event.fromState].toLowerCase()})` : ""}
+              {event.fromState && event.fromState !== "committed" && event.toState === "in-review" ? ` again (was ${stateWord(event.fromState)})` : ""}
             </span>
             <time className="ml-auto text-xs text-ink-muted tabular-nums" dateTime={new Date(event.createdAt).toISOString()}>
               {formatTime(event.createdAt)}

@@ -4,7 +4,7 @@ import { Link } from "react-router";
 import type { VersionState } from "../../../db/schema";
 import { FlagCounts } from "./FlagCounts";
 import { StateBadge } from "./StateBadge";
-import { formatNumber, formatTime } from "./format";
+import { formatNumber, formatTime } from "~/platform/format";
 
 export type QueueListItem = {
   versionId: string;

@@ -1,6 +1,6 @@
 // A version's review state as a badge: a shape and a word, never colour alone.
 import type { VersionState } from "../../../db/schema";
-import { STATE_LABELS } from "./format";
+import { STATE_LABELS } from "~/features/versions/state-labels";
 
 const LOOKS: Record<VersionState, { mark: string; className: string }> = {
   committed: { mark: "○", className: "bg-sunken text-ink" },

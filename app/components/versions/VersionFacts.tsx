@@ -1,8 +1,9 @@
 // What a version is and what its solve found: the pinned robot revision, the
 // content hash, timing, travel, stability and the fastest joints.
 import type { FlagKind, SolveSummary } from "~/gait/index";
-import { flagLabel, peakJointSpeed } from "~/features/compare";
-import { formatNumber, shortHash } from "./format";
+import { peakJointSpeed } from "~/features/compare";
+import { FLAG_LABELS } from "~/features/gaits/flag-labels";
+import { formatNumber, shortHash } from "~/platform/format";
 import { FlagCounts } from "./FlagCounts";
 
 export type VersionFactsProps = {
@@ -58,7 +59,7 @@ export function VersionFacts({ version }: VersionFactsProps) {
         <ul className="mt-3 flex flex-wrap gap-2 text-xs" aria-label="Flags by kind">
           {kinds.map(([kind, count]) => (
             <li key={kind} className="rounded bg-sunken px-2 py-0.5">
-              {flagLabel(kind)}: <span className="font-mono tabular-nums">{count}</span>
+              {FLAG_LABELS[kind]}: <span className="font-mono tabular-nums">{count}</span>
             </li>
           ))}
         </ul>

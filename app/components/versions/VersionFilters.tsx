@@ -2,7 +2,7 @@
 import { useId } from "react";
 import { Form, Link } from "react-router";
 import { FLAG_FILTER_LABELS, FLAG_FILTERS, isFiltered, type VersionQueryValues } from "./version-query";
-import { STATE_LABELS, VERSION_STATES } from "./format";
+import { STATE_LABELS, VERSION_STATES } from "~/features/versions/state-labels";
 
 const field = "rounded-md border border-line bg-canvas px-2 py-1 text-sm";
 

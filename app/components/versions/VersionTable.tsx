@@ -5,7 +5,7 @@ import { Form, Link } from "react-router";
 import type { VersionState } from "../../../db/schema";
 import { FlagCounts } from "./FlagCounts";
 import { StateBadge } from "./StateBadge";
-import { formatNumber, formatTime } from "./format";
+import { formatNumber, formatTime } from "~/platform/format";
 import { SORT_LABELS, sortHref, type VersionQueryValues } from "./version-query";
 
 export type VersionTableRow = {

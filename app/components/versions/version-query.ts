@@ -2,7 +2,7 @@
 // Parsed with zod on the server; unknown or malformed values fall back to the
 // defaults rather than failing the page, so an old pasted link still opens.
 import { z } from "zod";
-import { VERSION_STATES } from "./format";
+import { VERSION_STATES } from "~/features/versions/state-labels";
 
 export const VERSION_SORTS = ["number", "date", "author", "state", "flags", "margin"] as const;
 export const FLAG_FILTERS = ["errors", "warnings", "clean"] as const;

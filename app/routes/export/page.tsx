@@ -15,6 +15,7 @@ import { requireAccess } from "~/platform/access.server";
 import { config } from "~/platform/config.server";
 import { listGaits } from "~/features/gaits/gaits.server";
 import { can } from "~/platform/permissions";
+import { stateWord } from "~/features/versions/state-labels";
 import { exportPageData } from "./page-data.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -25,16 +26,6 @@ export async function loader({ request }: Route.LoaderArgs) {
 }
 
 export const meta: Route.MetaFunction = () => [{ title: "Export an angle table · Gaitloom" }];
-
-const STATE_WORDS: Record<string, string> = {
-  committed: "committed",
-  "in-review": "in review",
-  "sent-back": "sent back",
-  approved: "approved",
-  released: "released",
-  retired: "retired",
-};
-
 
 export default function ExportPage({ loaderData }: Route.ComponentProps) {
   const { gaits, gait, version, versions, profiles, query, problem, table, download, release, sequence } = loaderData;
@@ -93,7 +84,7 @@ export default function ExportPage({ loaderData }: Route.ComponentProps) {
             {gait.releasedVersion !== null ? <option value="released">Released (currently v{gait.releasedVersion}) — for build scripts</option> : null}
             {versions.map((entry) => (
               <option key={entry.number} value={entry.number}>
-                v{entry.number} · {STATE_WORDS[entry.state]} · {entry.errors} errors, {entry.warnings} warnings — {entry.message}
+                v{entry.number} · {stateWord(entry.state)} · {entry.errors} errors, {entry.warnings} warnings — {entry.message}
               </option>
             ))}
           </select>

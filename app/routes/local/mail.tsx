@@ -2,6 +2,7 @@
 import { data } from "react-router";
 import type { Route } from "./+types/mail";
 import { PageHeader } from "~/components/common/PageHeader";
+import { formatTime } from "~/platform/format";
 import { localInbox } from "~/platform/mail.server";
 
 export async function loader() {
@@ -31,7 +32,7 @@ export default function LocalMail({ loaderData }: Route.ComponentProps) {
               <article aria-label={message.subject} className="rounded-lg border border-line bg-surface p-4">
                 <h2 className="font-semibold">{message.subject}</h2>
                 <p className="text-sm text-ink-muted">
-                  To {message.to.join(", ")} · {new Date(message.receivedAt).toISOString().slice(0, 19).replace("T", " ")} UTC
+                  To {message.to.join(", ")} · {formatTime(message.receivedAt, { seconds: true })}
                 </p>
                 <pre className="mt-3 whitespace-pre-wrap font-sans text-sm">
                   <Linked text={message.text} />

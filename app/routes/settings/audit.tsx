@@ -1,6 +1,7 @@
 // /settings/audit: the workspace's audit log, for owners.
 import type { Route } from "./+types/audit";
 import { requireAccess } from "~/platform/access.server";
+import { formatTime } from "~/platform/format";
 import { listAudit } from "~/features/accounts/members.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -25,7 +26,7 @@ export default function Audit({ loaderData }: Route.ComponentProps) {
       <tbody>
         {loaderData.entries.map((entry) => (
           <tr key={entry.id} className="border-b border-line align-top last:border-0">
-            <td className="whitespace-nowrap px-4 py-2">{new Date(entry.at).toISOString().slice(0, 19).replace("T", " ")}</td>
+            <td className="whitespace-nowrap px-4 py-2">{formatTime(entry.at, { seconds: true, zone: false })}</td>
             <td className="px-4 py-2">{entry.actor ?? "—"}</td>
             <td className="px-4 py-2 font-mono">{entry.action}</td>
             <td className="px-4 py-2 font-mono text-xs text-ink-muted">{JSON.stringify(entry.details)}</td>

@@ -1,4 +1,5 @@
 // /api/v1/gaits/{gaitId}/versions: a gait's committed versions.
+import { VERSION_STATES } from "../../versions/state-labels";
 import { AUTH, errorsFor, json, permission, person, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
 
 export function versionPaths(): OpenApiPaths {
@@ -38,7 +39,7 @@ export function versionSchemas(): Record<string, Json> {
             properties: {
               id: { type: "string", format: "uuid" },
               number: { type: "integer" },
-              state: { type: "string", enum: ["committed", "in-review", "sent-back", "approved", "released", "retired"] },
+              state: { type: "string", enum: [...VERSION_STATES] },
               message: { type: "string" },
               author: person,
               createdAt: { type: "string", format: "date-time" },
