@@ -4,8 +4,9 @@ import { z } from "zod";
 import type { Route } from "./+types/workspace-switch";
 import { membershipsOf, requireUser } from "~/platform/access.server";
 import { commitSession, readSession, safeReturnTo } from "~/platform/session.server";
+import { id } from "~/platform/params";
 
-const input = z.object({ workspaceId: z.string().uuid(), returnTo: z.string().optional() });
+const input = z.object({ workspaceId: id(), returnTo: z.string().optional() });
 
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireUser(request);

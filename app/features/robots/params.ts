@@ -1,24 +1,21 @@
 // Route parameters and form fields of the robot routes, checked with zod.
 import { z } from "zod";
+import { id, idParam, revisionNumber } from "../../platform/params";
 import { STARTER_LEG_COUNTS } from "./starter";
 
 export const robotParams = z.object({
-  robotId: z.guid({ error: (issue) => `robotId must be a UUID (got ${JSON.stringify(issue.input)})` }),
+  robotId: idParam("robotId"),
 });
 
 export const revisionParams = robotParams.extend({
-  number: z
-    .string()
-    .regex(/^[1-9][0-9]{0,8}$/, { error: (issue) => `the revision number must be a whole number from 1 (got ${JSON.stringify(issue.input)})` })
-    .transform(Number),
+  number: revisionNumber((issue) => `the revision number must be a whole number from 1 (got ${JSON.stringify(issue.input)})`),
 });
 
 export const saveForm = z.object({
   intent: z.literal("save", { error: (issue) => `intent must be "save" (got ${JSON.stringify(issue.input ?? null)})` }),
   baseRevision: z
     .string({ error: "baseRevision is required: the revision the edits started from" })
-    .regex(/^[1-9][0-9]{0,8}$/, { error: (issue) => `baseRevision must be a revision number (got ${JSON.stringify(issue.input)})` })
-    .transform(Number),
+    .pipe(revisionNumber((issue) => `baseRevision must be a revision number (got ${JSON.stringify(issue.input)})`)),
   definition: z.string({ error: "definition is required: the robot definition as JSON" }).min(1, "definition must not be empty"),
   message: z.string().max(500, "message must be at most 500 characters").optional().default(""),
 });
@@ -31,7 +28,7 @@ export const createForm = z.object({
   source: z.union(
     [
       z.templateLiteral(["starter-", z.enum(STARTER_LEG_COUNTS.map(String) as ["4", "6", "8"])]),
-      z.templateLiteral(["robot-", z.guid()]),
+      z.templateLiteral(["robot-", id()]),
     ],
     { error: "choose what the new robot starts from" },
   ),

@@ -7,9 +7,10 @@ import { StateBadge } from "~/components/versions/StateBadge";
 import { requireAccess } from "~/platform/access.server";
 import { listGaits } from "~/features/gaits/gaits.server";
 import { can } from "~/platform/permissions";
+import { id } from "~/platform/params";
 import { listRobots } from "~/features/robots/robots.server";
 
-const listQuery = z.object({ robot: z.guid().optional().catch(undefined) });
+const listQuery = z.object({ robot: id().optional().catch(undefined) });
 
 export async function loader({ request }: Route.LoaderArgs) {
   const { workspace, role } = await requireAccess(request, "gaits.read");
