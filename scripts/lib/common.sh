@@ -18,10 +18,11 @@ die() {
 # Is process $1 alive (not a zombie left unreaped) and, when $2 is given, named like it?
 pid_alive() {
   local pid="$1" name="${2:-}" state
-  [ -n "$pid" ] && [ -r "/proc/$pid/stat" ] || return 1
-  state="$(sed -E 's/^[0-9]+ \(.*\) ([A-Z]).*/\1/' "/proc/$pid/stat")"
-  [ "$state" != "Z" ] || return 1
-  [ -z "$name" ] || grep -q "$name" "/proc/$pid/comm"
+  [ -n "$pid" ] || return 1
+  # Read once: the process may end between a check and a read.
+  state="$(sed -E 's/^[0-9]+ \(.*\) ([A-Z]).*/\1/' "/proc/$pid/stat" 2>/dev/null)" || return 1
+  [ -n "$state" ] && [ "$state" != "Z" ] || return 1
+  [ -z "$name" ] || grep -q "$name" "/proc/$pid/comm" 2>/dev/null
 }
 
 # Is anything listening on 127.0.0.1:$1?

@@ -76,7 +76,14 @@ pg_start() {
   pg_ensure_installed
   pg_init_cluster
   if pg_is_running; then
-    say "PostgreSQL already running on 127.0.0.1:$PG_PORT"
+    # postmaster.pid's fourth line is the port the running server listens on.
+    local running_port
+    running_port="$(sed -n 4p "$PG_DATA/postmaster.pid")"
+    if [ "$running_port" != "$PG_PORT" ]; then
+      die "The cluster in $PG_DATA is already running on port $running_port, not $PG_PORT." \
+        "Stop what started it (npm start, npm test or npm run bench in this checkout), or use GAITLOOM_PG_PORT=$running_port."
+    fi
+    say "PostgreSQL already running: cluster $PG_DATA on 127.0.0.1:$PG_PORT"
   else
     pg_clear_stale_pid
     if port_in_use "$PG_PORT"; then
@@ -84,8 +91,10 @@ pg_start() {
         "Stop that program, or choose another port: GAITLOOM_PG_PORT=54330 npm start"
     fi
     require_free_disk "$PG_BASE" 100
-    say "starting PostgreSQL on 127.0.0.1:$PG_PORT"
-    if ! as_postgres "$PG_BIN/pg_ctl" -D "$PG_DATA" -l "$PG_LOG" -w -t 60 start >/dev/null 2>&1; then
+    say "starting PostgreSQL: cluster $PG_DATA on 127.0.0.1:$PG_PORT"
+    # The port is given on every start, so GAITLOOM_PG_PORT wins over the one
+    # the cluster was created with.
+    if ! as_postgres "$PG_BIN/pg_ctl" -D "$PG_DATA" -l "$PG_LOG" -o "-p $PG_PORT" -w -t 60 start >/dev/null 2>&1; then
       die "PostgreSQL did not start." "Last lines of $PG_LOG:" "$(tail -n 15 "$PG_LOG" 2>/dev/null)" \
         "Your data in $PG_DATA has not been changed."
     fi

@@ -27,7 +27,7 @@ describe("the project-local cluster honours GAITLOOM_PG_PORT", () => {
     rmSync(dataDir, { recursive: true, force: true });
   });
 
-  test("a cluster created on one port starts on another when the variable says so, and says which", () => {
+  test("a cluster created on one port starts on another when the variable says so, and says which", { timeout: 60_000 }, () => {
     const first = bash("pg_start && pg_super -c 'show port' && pg_stop", { ...env, GAITLOOM_PG_PORT: "54391" });
     expect(first.status, first.out).toBe(0);
     expect(first.out).toContain("54391");
@@ -39,9 +39,9 @@ describe("the project-local cluster honours GAITLOOM_PG_PORT", () => {
 });
 
 describe("pid_alive", () => {
-  test("says nothing on stderr when the process ends while it looks", () => {
+  test("says nothing on stderr when the process ends while it looks", { timeout: 60_000 }, () => {
     // Many short-lived processes: some end between the check and the read.
-    const run = bash("for i in $(seq 1 400); do (exit 0) & p=$!; pid_alive $p || true; done; wait", {});
+    const run = bash("for i in $(seq 1 150); do (exit 0) & p=$!; pid_alive $p || true; done; wait", {});
     expect(run.status).toBe(0);
     expect(run.out).not.toMatch(/can't read|No such file/);
   });
