@@ -4,7 +4,7 @@ import { readFile } from "node:fs/promises";
 import { and, desc, eq, sql } from "drizzle-orm";
 import { generateGait } from "../app/gait/index";
 import { parseRobot } from "../app/kinematics";
-import { recordReleaseTable } from "../app/features/tables/tables.server";
+import { recordReleaseTable } from "../app/features/tables/releases.server";
 import { commitDraft } from "../app/features/versions/versions.server";
 import { createDatabase, databaseUrl, type Database } from "./client";
 import { demoGaits, demoPeople, demoRobots, demoWorkspace } from "./demo/scenario";

@@ -45,3 +45,4 @@ export { COLUMNS_ENCODING, COLUMNS_LAYOUT, columnsOf, decodeColumns, encodeColum
 export { easingFor, type EasingFunction } from "./interpolate/easing";
 export { swingLift } from "./interpolate/swing";
 export { convexHullInto, stabilityMargin } from "./support";
+export { SOLVER_VERSION } from "./version";

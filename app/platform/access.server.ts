@@ -4,7 +4,7 @@ import { createHash } from "node:crypto";
 import { and, asc, eq, isNull, sql } from "drizzle-orm";
 import { data, redirect } from "react-router";
 import { apiTokens, memberships, users, workspaces, type Role } from "../../db/schema";
-import { apiError } from "./api-errors.server";
+import { apiError } from "./errors.server";
 import type { Database } from "../../db/client";
 import { database } from "./db.server";
 import { type Action, can, refusal } from "./permissions";

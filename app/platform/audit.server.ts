@@ -1,8 +1,7 @@
 // The audit log: one row for every sign-in, role change, invitation, token
 // change and review decision. Written inside the caller's transaction when given.
 import { auditLog } from "../../db/schema";
-import type { Database } from "../../db/client";
-import { database } from "./db.server";
+import { database, type Writer } from "./db.server";
 
 export type AuditEntry = {
   workspaceId: string | null;
@@ -12,8 +11,6 @@ export type AuditEntry = {
   targetId?: string;
   details?: Record<string, unknown>;
 };
-
-type Writer = Pick<Database, "insert">;
 
 export async function recordAudit(entry: AuditEntry, db: Writer = database()): Promise<void> {
   await db.insert(auditLog).values({ ...entry, details: entry.details ?? {} });

@@ -1,6 +1,10 @@
-// Reads a form post (urlencoded or multipart) without ever holding more than
-// `limitBytes` of it: the declared Content-Length is checked first, then the
-// stream is counted as it arrives, so a huge upload is refused early.
+// Reading request bodies within a limit: form posts (urlencoded or
+// multipart) and the JSON bodies of the API.
+import { apiError } from "./errors.server";
+
+// A form is never held beyond `limitBytes`: the declared Content-Length is
+// checked first, then the stream is counted as it arrives, so a huge upload
+// is refused early.
 
 export type LimitedForm = { ok: true; form: FormData } | { ok: false; tooLarge: true; bytes: number } | { ok: false; tooLarge: false; message: string };
 
@@ -29,4 +33,27 @@ export async function readFormWithin(request: Request, limitBytes: number): Prom
   } catch (error) {
     return { ok: false, tooLarge: false, message: `The form could not be read: ${error instanceof Error ? error.message : String(error)}` };
   }
+}
+
+/** Reads a body's text up to `limitBytes`, answering 413 with both sizes otherwise. */
+export async function readBodyText(request: Request, limitBytes: number): Promise<string> {
+  const declared = Number(request.headers.get("Content-Length") ?? "0");
+  if (declared > limitBytes) throw apiError(413, "payload_too_large", `The body is ${declared} bytes; the limit is ${limitBytes}.`);
+  const text = await request.text();
+  const size = Buffer.byteLength(text);
+  if (size > limitBytes) throw apiError(413, "payload_too_large", `The body is ${size} bytes; the limit is ${limitBytes}.`);
+  return text;
+}
+
+export function parseJsonText(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch (error) {
+    throw apiError(400, "bad_request", `The body is not valid JSON: ${error instanceof Error ? error.message : String(error)}`);
+  }
+}
+
+/** Reads a JSON body up to `limitBytes`, answering 413 or 400 with a clear message otherwise. */
+export async function readJsonBody(request: Request, limitBytes: number): Promise<unknown> {
+  return parseJsonText(await readBodyText(request, limitBytes));
 }

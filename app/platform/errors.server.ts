@@ -1,31 +1,72 @@
-// Services refuse with a ServiceError (status + a sentence a person can act
-// on); routes turn it into an inline form message or a JSON API error.
+// Services that cannot go on throw one kind of error: a status, a short
+// kebab-case code, a sentence a person can act on, and details. One adapter
+// per surface turns it into an answer, so no route catches it by hand:
+// formAction (an inline form error), apiAction (a JSON error), pageGuard
+// (the route's error page), and attempt for a page that shows a refusal
+// beside what it could load.
 import { data } from "react-router";
-import { apiError, type ApiErrorCode } from "./api-errors.server";
+import type { ApiErrorCode, DetailRecord, ErrorDetails, FormError, Issue } from "./errors";
+
+export type { ApiErrorCode, DetailRecord, ErrorDetails, FormError, Issue } from "./errors";
+
+export type ErrorStatus = 400 | 403 | 404 | 409 | 410 | 413 | 422;
+
+/** The code a refusal has when its status says all there is to say. */
+const GENERAL_CODES: Record<ErrorStatus, string> = {
+  400: "bad-request",
+  403: "forbidden",
+  404: "not-found",
+  409: "conflict",
+  410: "gone",
+  413: "too-large",
+  422: "invalid",
+};
 
 export class ServiceError extends Error {
+  /**
+   * @param code kebab-case: the status's own (`not-found`, `conflict`, `invalid` …) or a more specific one
+   *   (`revision-unparseable`, `draft-conflict`, `stale` …) when a client tells it apart.
+   */
   constructor(
-    readonly status: 400 | 403 | 404 | 409 | 410 | 413 | 422,
+    readonly status: ErrorStatus,
+    readonly code: string,
     message: string,
-    readonly field?: string,
+    readonly details?: ErrorDetails,
   ) {
     super(message);
+    this.name = "ServiceError";
+  }
+
+  /** The details as named entries; an issue list sent as the details themselves is under `issues`. */
+  get record(): DetailRecord {
+    if (this.details === undefined) return {};
+    return isIssueList(this.details) ? { issues: this.details } : this.details;
+  }
+
+  /** The form field the refusal is about, if it names one. */
+  get field(): string | undefined {
+    const { field } = this.record;
+    return typeof field === "string" ? field : undefined;
   }
 }
 
-export type FormError = { error: string; field?: string };
+const isIssueList = (details: ErrorDetails): details is readonly Issue[] => Array.isArray(details);
 
-/** Runs a form action's service call; a refusal comes back as `{ error, field }` with its status. */
-export async function formAction<T>(run: () => Promise<T>) {
-  try {
-    return await run();
-  } catch (error) {
-    if (error instanceof ServiceError) return data<FormError>({ error: error.message, field: error.field }, { status: error.status });
-    throw error;
-  }
+// ---------------------------------------------------------------------------
+// JSON
+
+/** The one JSON error shape of the API: `{ error: { code, message, details? } }`. */
+export function apiError(
+  status: 400 | 401 | 403 | 404 | 409 | 413 | 422 | 429,
+  code: ApiErrorCode,
+  message: string,
+  details?: unknown,
+  headers?: HeadersInit,
+): Response {
+  return Response.json({ error: { code, message, ...(details === undefined ? {} : { details }) } }, { status, headers });
 }
 
-const API_CODES: Record<ServiceError["status"], ApiErrorCode> = {
+const API_CODES: Record<ErrorStatus, ApiErrorCode> = {
   400: "bad_request",
   403: "forbidden",
   404: "not_found",
@@ -35,15 +76,64 @@ const API_CODES: Record<ServiceError["status"], ApiErrorCode> = {
   422: "invalid",
 };
 
-/** The same for API routes: a refusal becomes `{ error: { code, message } }`. */
+/**
+ * A refusal as the API answers it. `code` stays one of the few the API
+ * documents; a more specific code goes into `details.reason`, so clients that
+ * only know the kinds keep working.
+ */
+export function apiErrorOf(error: ServiceError): Response {
+  const specific = error.code !== GENERAL_CODES[error.status];
+  const details = specific && (error.details === undefined || !isIssueList(error.details)) ? { reason: error.code, ...error.details } : error.details;
+  return apiError(error.status === 410 ? 404 : error.status, API_CODES[error.status], error.message, details);
+}
+
+/** Runs an API route's work; a refusal becomes its JSON error. */
 export async function apiAction<T>(run: () => Promise<T>): Promise<T | Response> {
   try {
     return await run();
   } catch (error) {
-    if (error instanceof ServiceError) {
-      const status = error.status === 410 ? 404 : error.status;
-      return apiError(status, API_CODES[error.status], error.message, error.field ? { field: error.field } : undefined);
-    }
+    if (error instanceof ServiceError) return apiErrorOf(error);
+    throw error;
+  }
+}
+
+// ---------------------------------------------------------------------------
+// Forms and pages
+
+/**
+ * Runs a form action's work; a refusal comes back as `{ error, code, field?, details? }`
+ * with its status. `Details` names what the action's refusals carry, for the component.
+ */
+export async function formAction<T, Details extends ErrorDetails = ErrorDetails>(run: () => Promise<T>) {
+  try {
+    return await run();
+  } catch (error) {
+    if (!(error instanceof ServiceError)) throw error;
+    const answer: FormError<Details> = { error: error.message, code: error.code };
+    if (error.field !== undefined) answer.field = error.field;
+    if (error.details !== undefined) answer.details = error.details as Details;
+    return data(answer, { status: error.status });
+  }
+}
+
+/** Runs a page's work (a loader, or what an action needs before it can start); a refusal becomes the route's error page, with its sentence and status. */
+export async function pageGuard<T>(run: () => Promise<T>): Promise<T> {
+  try {
+    return await run();
+  } catch (error) {
+    if (error instanceof ServiceError) throw data({ message: error.message }, { status: error.status });
+    throw error;
+  }
+}
+
+export type Attempt<T> = { ok: true; value: T } | { ok: false; refusal: ServiceError };
+
+/** For a page that shows a refusal beside what it could load instead of an error page; other errors are thrown on. */
+export async function attempt<T>(run: () => T | Promise<T>): Promise<Attempt<T>> {
+  try {
+    return { ok: true, value: await run() };
+  } catch (error) {
+    if (error instanceof ServiceError) return { ok: false, refusal: error };
     throw error;
   }
 }

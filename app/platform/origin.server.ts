@@ -2,6 +2,7 @@
 // from the app's own origin. Bearer-token calls carry no cookie, so build
 // scripts need no Origin header.
 import { config } from "./config.server";
+import { apiError } from "./errors.server";
 
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
 
@@ -15,6 +16,6 @@ export function crossOriginRefusal(request: Request): Response | null {
     : "Refused: a request that carries a session cookie must name its Origin.";
   const wantsJson = new URL(request.url).pathname.startsWith("/api/");
   return wantsJson
-    ? Response.json({ error: { code: "forbidden", message } }, { status: 403 })
+    ? apiError(403, "forbidden", message)
     : new Response(message, { status: 403, headers: { "Content-Type": "text/plain; charset=utf-8" } });
 }

@@ -1,10 +1,10 @@
 // For a signed-in person: start a workspace, or accept an invitation sent to their e-mail.
-import { Form, data, redirect, useActionData } from "react-router";
+import { Form, redirect, useActionData } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/welcome";
 import { PageHeader } from "~/components/common/PageHeader";
 import { membershipsOf, requireUser } from "~/platform/access.server";
-import { formAction } from "~/platform/errors.server";
+import { formAction, ServiceError } from "~/platform/errors.server";
 import { acceptInvitation, invitationsForEmail } from "~/features/accounts/invitations.server";
 import { ROLE_LABELS } from "~/platform/permissions";
 import { commitSession, readSession } from "~/platform/session.server";
@@ -24,8 +24,8 @@ const input = z.discriminatedUnion("intent", [
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireUser(request);
   const parsed = input.safeParse(Object.fromEntries(await request.formData()));
-  if (!parsed.success) return data({ error: "The form was incomplete; try again." }, { status: 400 });
   return formAction(async () => {
+    if (!parsed.success) throw new ServiceError(400, "bad-request", "The form was incomplete; try again.");
     const workspaceId =
       parsed.data.intent === "create"
         ? (await createWorkspace(user, parsed.data.name)).id

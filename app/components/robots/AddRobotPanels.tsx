@@ -4,11 +4,11 @@ import { useId } from "react";
 import { Form, Link, useNavigation } from "react-router";
 import type { DefinitionIssue } from "~/kinematics";
 import { STARTER_LEG_COUNTS } from "~/features/robots/starter";
-import type { AddIntent, AddResult } from "~/features/robots/results";
+import type { AddResult } from "~/features/robots/results";
 
 export type AddPanel = "new" | "upload" | "urdf";
 
-const INTENT_OF: Record<AddPanel, AddIntent> = { new: "create", upload: "upload", urdf: "import-urdf" };
+const INTENT_OF: Record<AddPanel, string> = { new: "create", upload: "upload", urdf: "import-urdf" };
 
 const input = "rounded border border-line bg-surface px-2 py-1";
 const primary = "rounded-md bg-accent px-4 py-1.5 font-medium text-on-accent hover:bg-accent-strong disabled:opacity-50";
@@ -25,8 +25,6 @@ export function AddRobotPanel({
   const navigation = useNavigation();
   const busy = navigation.state === "submitting" && navigation.formData?.get("intent") === INTENT_OF[panel];
   const headingId = useId();
-  // An answer belongs to this panel if it names its intent, or names none (the body was too large to read).
-  const answer = result && (result.intent === INTENT_OF[panel] || result.intent === null) ? result : null;
   return (
     <section aria-labelledby={headingId} className="mb-6 rounded-lg border border-line bg-surface p-5">
       {panel === "new" ? (
@@ -111,13 +109,14 @@ export function AddRobotPanel({
           </Form>
         </>
       )}
-      {answer ? <AddAnswer result={answer} /> : null}
+      {/* Only the open panel can post, and opening another is a navigation, which drops the answer: any answer is this panel's. */}
+      {result ? <AddAnswer result={result} /> : null}
     </section>
   );
 }
 
 function AddAnswer({ result }: { result: AddResult }) {
-  if (result.ok) {
+  if ("ok" in result) {
     return (
       <div role="status" className="mt-4 rounded-md border border-ok bg-ok-soft p-4 text-sm">
         <p className="font-semibold text-ok">
@@ -135,10 +134,10 @@ function AddAnswer({ result }: { result: AddResult }) {
     <div role="alert" className="mt-4 rounded-md border border-danger bg-danger-soft p-4 text-sm">
       <p className="font-semibold text-danger">
         <span aria-hidden>⚠ </span>
-        {result.message}
+        {result.error}
       </p>
-      {result.issues?.length ? <IssueList issues={result.issues} /> : null}
-      {result.report?.length ? <ImportReport lines={result.report} /> : null}
+      {result.details?.issues?.length ? <IssueList issues={result.details.issues} /> : null}
+      {result.details?.report?.length ? <ImportReport lines={result.details.report} /> : null}
     </div>
   );
 }

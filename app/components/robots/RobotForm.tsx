@@ -176,22 +176,24 @@ function SaveBar({
     return () => window.removeEventListener("beforeunload", warn);
   }, [dirty]);
 
-  const stale = result && !result.ok && result.code === "stale" && result.baseRevision === baseRevision ? result : null;
-  const saved = result?.ok && result.number === baseRevision && !dirty ? result : null;
-  const failure = result && !result.ok && !stale && dirty ? result : null;
+  const refusal = result && "error" in result ? result : null;
+  const stale = refusal?.code === "stale" && refusal.details?.baseRevision === baseRevision ? refusal : null;
+  const latest = stale?.details?.latest;
+  const saved = result && "ok" in result && result.number === baseRevision && !dirty ? result : null;
+  const failure = refusal && !stale && dirty ? refusal : null;
   const blocked = !dirty ? "No changes to save." : problemCount > 0 ? `Fix ${problemCount === 1 ? "the problem" : `the ${problemCount} problems`} first.` : null;
 
   return (
     <section aria-label="Save" className="sticky bottom-0 z-10 space-y-2 rounded-lg border border-line bg-surface px-4 py-3 shadow-sm">
-      {stale?.latest ? (
+      {stale && latest ? (
         <div role="alert" className="rounded-md border border-warning bg-warning-soft p-3 text-sm">
           <p className="font-semibold">
             <span aria-hidden>⚠ </span>Not saved: someone saved this robot while you were editing.
           </p>
-          <p className="mt-1">{stale.message} Your edits are still in the form.</p>
+          <p className="mt-1">{stale.error} Your edits are still in the form.</p>
           <div className="mt-2 flex flex-wrap gap-2">
-            <Link to={`/robots/${robotId}/revisions/${stale.latest.number}`} target="_blank" className="rounded-md border border-line bg-surface px-3 py-1 font-medium hover:bg-sunken">
-              Open revision {stale.latest.number} in a new tab
+            <Link to={`/robots/${robotId}/revisions/${latest.number}`} target="_blank" className="rounded-md border border-line bg-surface px-3 py-1 font-medium hover:bg-sunken">
+              Open revision {latest.number} in a new tab
             </Link>
             <button
               type="button"
@@ -199,15 +201,15 @@ function SaveBar({
               className="rounded-md border border-line bg-surface px-3 py-1 font-medium hover:bg-sunken"
               onClick={() =>
                 fetcher.submit(
-                  { intent: "save", baseRevision: String(stale.latest!.number), definition, message },
+                  { intent: "save", baseRevision: String(latest.number), definition, message },
                   { method: "post", action: `/robots/${robotId}` },
                 )
               }
             >
-              Save mine as revision {stale.latest.number + 1} anyway
+              Save mine as revision {latest.number + 1} anyway
             </button>
             <Link to={`/robots/${robotId}`} className="rounded-md border border-line bg-surface px-3 py-1 font-medium hover:bg-sunken">
-              Drop my edits and load revision {stale.latest.number}
+              Drop my edits and load revision {latest.number}
             </Link>
           </div>
         </div>
@@ -216,11 +218,11 @@ function SaveBar({
         <div role="alert" className="rounded-md border border-danger bg-danger-soft p-3 text-sm text-danger">
           <p>
             <span aria-hidden>⚠ </span>
-            {failure.message}
+            {failure.error}
           </p>
-          {failure.issues?.length ? (
+          {failure.details?.issues?.length ? (
             <ul className="mt-1 list-inside list-disc">
-              {failure.issues.map((issue, index) => (
+              {failure.details.issues.map((issue, index) => (
                 <li key={index}>
                   <code className="font-mono">{issue.path}</code>: {issue.message}
                 </li>

@@ -50,9 +50,9 @@ export async function listInvitations(workspaceId: string): Promise<(InvitationR
 
 export async function invite(actor: Member, email: string, role: Role): Promise<InvitationRow> {
   const address = email.trim().toLowerCase();
-  if (!EMAIL.test(address)) throw new ServiceError(422, `"${email}" is not an e-mail address.`, "email");
+  if (!EMAIL.test(address)) throw new ServiceError(422, "invalid", `"${email}" is not an e-mail address.`, { field: "email" });
   if (!invitableRoles(actor.role).includes(role)) {
-    throw new ServiceError(403, `A ${actor.role} cannot invite someone as ${role}.`, "role");
+    throw new ServiceError(403, "forbidden", `A ${actor.role} cannot invite someone as ${role}.`, { field: "role" });
   }
   const link = newLink();
   const invitation = await database().transaction(async (tx) => {
@@ -61,7 +61,7 @@ export async function invite(actor: Member, email: string, role: Role): Promise<
       .from(users)
       .innerJoin(memberships, and(eq(memberships.userId, users.id), eq(memberships.workspaceId, actor.workspace.id)))
       .where(eq(users.email, address));
-    if (member) throw new ServiceError(409, `${address} is already a member of this workspace.`, "email");
+    if (member) throw new ServiceError(409, "conflict", `${address} is already a member of this workspace.`, { field: "email" });
     const [pending] = await tx
       .select({ id: invitations.id })
       .from(invitations)
@@ -74,7 +74,7 @@ export async function invite(actor: Member, email: string, role: Role): Promise<
           gt(invitations.expiresAt, new Date()),
         ),
       );
-    if (pending) throw new ServiceError(409, `${address} already has a pending invitation; resend it instead.`, "email");
+    if (pending) throw new ServiceError(409, "conflict", `${address} already has a pending invitation; resend it instead.`, { field: "email" });
     const [row] = await tx
       .insert(invitations)
       .values({ workspaceId: actor.workspace.id, email: address, role, tokenHash: link.tokenHash, invitedById: actor.user.id, expiresAt: link.expiresAt })
@@ -94,11 +94,11 @@ async function pendingInvitation(actor: Member, invitationId: string): Promise<I
     .select()
     .from(invitations)
     .where(and(eq(invitations.id, invitationId), eq(invitations.workspaceId, actor.workspace.id)));
-  if (!row) throw new ServiceError(404, "No such invitation in this workspace.");
-  if (row.acceptedAt) throw new ServiceError(409, "This invitation was already accepted.");
-  if (row.revokedAt) throw new ServiceError(409, "This invitation was revoked.");
+  if (!row) throw new ServiceError(404, "not-found", "No such invitation in this workspace.");
+  if (row.acceptedAt) throw new ServiceError(409, "conflict", "This invitation was already accepted.");
+  if (row.revokedAt) throw new ServiceError(409, "conflict", "This invitation was revoked.");
   if (!invitableRoles(actor.role).includes(row.role)) {
-    throw new ServiceError(403, `A ${actor.role} cannot manage an invitation for the ${row.role} role.`);
+    throw new ServiceError(403, "forbidden", `A ${actor.role} cannot manage an invitation for the ${row.role} role.`);
   }
   return row;
 }
@@ -129,9 +129,9 @@ export async function revokeInvitation(actor: Member, invitationId: string): Pro
 export type InvitationView = { id: string; email: string; role: Role; workspaceId: string; workspaceName: string; invitedBy: string | null; expiresAt: Date };
 
 function checkUsable(row: InvitationRow): void {
-  if (row.revokedAt) throw new ServiceError(410, "This invitation was revoked. Ask the person who invited you for a new one.");
-  if (row.acceptedAt) throw new ServiceError(410, "This invitation link was already used.");
-  if (row.expiresAt.getTime() < Date.now()) throw new ServiceError(410, "This invitation has expired. Ask the person who invited you to resend it.");
+  if (row.revokedAt) throw new ServiceError(410, "gone", "This invitation was revoked. Ask the person who invited you for a new one.");
+  if (row.acceptedAt) throw new ServiceError(410, "gone", "This invitation link was already used.");
+  if (row.expiresAt.getTime() < Date.now()) throw new ServiceError(410, "gone", "This invitation has expired. Ask the person who invited you to resend it.");
 }
 
 export async function invitationForToken(token: string): Promise<InvitationView> {
@@ -141,7 +141,7 @@ export async function invitationForToken(token: string): Promise<InvitationView>
     .innerJoin(workspaces, eq(workspaces.id, invitations.workspaceId))
     .leftJoin(users, eq(users.id, invitations.invitedById))
     .where(eq(invitations.tokenHash, hashToken(token)));
-  if (!row) throw new ServiceError(404, "This invitation link is not valid. It may have been resent with a new link.");
+  if (!row) throw new ServiceError(404, "not-found", "This invitation link is not valid. It may have been resent with a new link.");
   checkUsable(row.invitation);
   const { id, email, role, workspaceId, expiresAt } = row.invitation;
   return { id, email, role, workspaceId, workspaceName: row.workspaceName, invitedBy: row.invitedBy, expiresAt };
@@ -175,9 +175,9 @@ export async function acceptInvitation(user: User, by: { token: string } | { id:
   return database().transaction(async (tx) => {
     const condition = "token" in by ? eq(invitations.tokenHash, hashToken(by.token)) : eq(invitations.id, by.id);
     const [row] = await tx.select().from(invitations).where(condition).for("update");
-    if (!row) throw new ServiceError(404, "This invitation link is not valid. It may have been resent with a new link.");
+    if (!row) throw new ServiceError(404, "not-found", "This invitation link is not valid. It may have been resent with a new link.");
     if ("id" in by && row.email !== user.email.toLowerCase()) {
-      throw new ServiceError(403, "This invitation is addressed to someone else; use the link from the e-mail.");
+      throw new ServiceError(403, "forbidden", "This invitation is addressed to someone else; use the link from the e-mail.");
     }
     checkUsable(row);
     const [existing] = await tx

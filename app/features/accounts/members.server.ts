@@ -3,7 +3,7 @@
 import { and, asc, count, desc, eq, inArray, isNull, or } from "drizzle-orm";
 import { auditLog, memberships, users, type Role } from "../../../db/schema";
 import { recordAudit } from "../../platform/audit.server";
-import { database } from "../../platform/db.server";
+import { database, type Tx } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
 import { ROLES } from "../../platform/permissions";
 import type { Member } from "../../platform/access.server";
@@ -28,10 +28,8 @@ export async function listMembers(workspaceId: string): Promise<MemberRow[]> {
 
 export function parseRole(value: unknown): Role {
   if (typeof value === "string" && (ROLES as readonly string[]).includes(value)) return value as Role;
-  throw new ServiceError(422, `Unknown role "${String(value)}"; choose one of ${ROLES.join(", ")}.`, "role");
+  throw new ServiceError(422, "invalid", `Unknown role "${String(value)}"; choose one of ${ROLES.join(", ")}.`, { field: "role" });
 }
-
-type Tx = Parameters<Parameters<ReturnType<typeof database>["transaction"]>[0]>[0];
 
 async function lockedMembership(tx: Tx, workspaceId: string, userId: string) {
   const [row] = await tx
@@ -39,7 +37,7 @@ async function lockedMembership(tx: Tx, workspaceId: string, userId: string) {
     .from(memberships)
     .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)))
     .for("update");
-  if (!row) throw new ServiceError(404, "That person is not a member of this workspace.");
+  if (!row) throw new ServiceError(404, "not-found", "That person is not a member of this workspace.");
   return row;
 }
 
@@ -64,7 +62,7 @@ export async function changeRole(actor: Member, userId: string, role: Role): Pro
     const current = await lockedMembership(tx, actor.workspace.id, userId);
     if (current.role === role) return;
     if (current.role === "owner" && owners.filter((id) => id !== userId).length === 0) {
-      throw new ServiceError(409, "This is the workspace's only owner; make someone else an owner first.", "role");
+      throw new ServiceError(409, "conflict", "This is the workspace's only owner; make someone else an owner first.", { field: "role" });
     }
     await tx
       .update(memberships)
@@ -89,7 +87,7 @@ export async function removeMember(actor: Member, userId: string): Promise<void>
     const owners = await lockOwners(tx, actor.workspace.id);
     const current = await lockedMembership(tx, actor.workspace.id, userId);
     if (current.role === "owner" && owners.filter((id) => id !== userId).length === 0) {
-      throw new ServiceError(409, "This is the workspace's only owner and cannot be removed; make someone else an owner first.");
+      throw new ServiceError(409, "conflict", "This is the workspace's only owner and cannot be removed; make someone else an owner first.");
     }
     await tx.delete(memberships).where(and(eq(memberships.workspaceId, actor.workspace.id), eq(memberships.userId, userId)));
     await recordAudit(

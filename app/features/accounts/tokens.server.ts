@@ -26,7 +26,7 @@ export async function listTokens(member: Member): Promise<TokenRow[]> {
 
 export async function createToken(member: Member, name: string): Promise<{ token: string; row: TokenRow }> {
   const trimmed = name.trim();
-  if (trimmed.length < 1 || trimmed.length > 60) throw new ServiceError(422, "Give the token a name of 1 to 60 characters.", "name");
+  if (trimmed.length < 1 || trimmed.length > 60) throw new ServiceError(422, "invalid", "Give the token a name of 1 to 60 characters.", { field: "name" });
   const token = `gl_${randomBytes(32).toString("base64url")}`;
   return database().transaction(async (tx) => {
     const [row] = await tx
@@ -45,7 +45,7 @@ export async function revokeToken(member: Member, tokenId: string): Promise<void
       .set({ revokedAt: new Date() })
       .where(and(eq(apiTokens.id, tokenId), eq(apiTokens.userId, member.user.id), eq(apiTokens.workspaceId, member.workspace.id), isNull(apiTokens.revokedAt)))
       .returning();
-    if (!row) throw new ServiceError(404, "No active token of yours with that id.");
+    if (!row) throw new ServiceError(404, "not-found", "No active token of yours with that id.");
     await recordAudit({ workspaceId: member.workspace.id, actorId: member.user.id, action: "token.revoked", targetType: "token", targetId: row.id, details: { name: row.name } }, tx);
   });
 }

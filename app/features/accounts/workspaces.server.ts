@@ -29,7 +29,7 @@ export function slugify(name: string): string {
 /** A new workspace with its creator as owner. */
 export async function createWorkspace(user: User, name: string): Promise<Workspace> {
   const trimmed = name.trim();
-  if (trimmed.length < 2 || trimmed.length > 80) throw new ServiceError(422, "A workspace name needs 2 to 80 characters.", "name");
+  if (trimmed.length < 2 || trimmed.length > 80) throw new ServiceError(422, "invalid", "A workspace name needs 2 to 80 characters.", { field: "name" });
   const base = slugify(trimmed) || "workspace";
   return database().transaction(async (tx) => {
     let slug = base;
@@ -45,7 +45,7 @@ export async function createWorkspace(user: User, name: string): Promise<Workspa
 
 export async function renameWorkspace(actor: User, workspace: Workspace, name: string): Promise<void> {
   const trimmed = name.trim();
-  if (trimmed.length < 2 || trimmed.length > 80) throw new ServiceError(422, "A workspace name needs 2 to 80 characters.", "name");
+  if (trimmed.length < 2 || trimmed.length > 80) throw new ServiceError(422, "invalid", "A workspace name needs 2 to 80 characters.", { field: "name" });
   await database().transaction(async (tx) => {
     await tx.update(workspaces).set({ name: trimmed }).where(eq(workspaces.id, workspace.id));
     await recordAudit(

@@ -7,9 +7,10 @@ import { z } from "zod";
 import { gaitVersions, gaits, robotRevisions, robots, users } from "../../../db/schema";
 import type { Database } from "../../../db/client";
 import { parseSequence, sequenceIssuesForRobot, type Sequence, type SequenceIssue } from "../../gait/index";
-import { parseRobot, type Robot } from "../../kinematics/index";
+import type { Robot } from "../../kinematics/index";
 import { recordAudit } from "../../platform/audit.server";
-import { database } from "../../platform/db.server";
+import { database, type Reader } from "../../platform/db.server";
+import { robotOfRevision } from "../robots/revision-robot.server";
 import { starterSequence } from "./editor/starter-sequence";
 import { ServiceError } from "../../platform/errors.server";
 
@@ -37,25 +38,11 @@ export type DraftContext = Draft & {
 
 export type DraftActor = { userId: string; workspaceId: string };
 
-/** A save that started from an older revision than the stored one (HTTP 409). */
-export class DraftConflict extends ServiceError {
-  constructor(
-    message: string,
-    readonly details: { baseRevision: number; currentRevision: number; updatedAt: string; updatedBy: DraftAuthor },
-  ) {
-    super(409, message);
-  }
-}
+/** What a `draft-conflict` refusal (a save that started from an older revision than the stored one) carries. */
+export type DraftConflictDetails = { baseRevision: number; currentRevision: number; updatedAt: string; updatedBy: DraftAuthor };
 
-/** A sequence that does not parse or does not fit the robot (HTTP 422); nothing is saved. */
-export class DraftInvalid extends ServiceError {
-  constructor(
-    message: string,
-    readonly issues: SequenceIssue[],
-  ) {
-    super(422, message);
-  }
-}
+/** A sequence that does not parse or does not fit the robot: 422 with the issues as details; nothing is saved. */
+const invalidDraft = (message: string, issues: SequenceIssue[]) => new ServiceError(422, "invalid", message, issues);
 
 export const draftSaveBody = z.strictObject({
   sequence: z.unknown().refine((value) => value !== undefined, "is required: the gait sequence (gaitloom.sequence/1)"),
@@ -63,8 +50,6 @@ export const draftSaveBody = z.strictObject({
 });
 
 const utc = (date: Date) => `${date.toISOString().slice(0, 16).replace("T", " ")} UTC`;
-
-type Reader = Pick<Database, "select">;
 
 async function authorOf(db: Reader, userId: string | null): Promise<DraftAuthor> {
   if (!userId) return null;
@@ -78,21 +63,17 @@ async function gaitRow(db: Reader, workspaceId: string, gaitId: string) {
     .from(gaits)
     .innerJoin(robots, eq(robots.id, gaits.robotId))
     .where(and(eq(gaits.id, gaitId), eq(gaits.workspaceId, workspaceId)));
-  if (!row) throw new ServiceError(404, "No such gait in this workspace.");
+  if (!row) throw new ServiceError(404, "not-found", "No such gait in this workspace.");
   return row;
 }
 
 async function newestRevision(db: Reader, robotId: string) {
   const [row] = await db.select().from(robotRevisions).where(eq(robotRevisions.robotId, robotId)).orderBy(desc(robotRevisions.number)).limit(1);
-  if (!row) throw new ServiceError(409, "The gait's robot has no revision to solve with.");
+  if (!row) throw new ServiceError(409, "conflict", "The gait's robot has no revision to solve with.");
   return row;
 }
 
-function robotOf(revision: typeof robotRevisions.$inferSelect): Robot {
-  const parsed = parseRobot(revision.definition);
-  if (!parsed.ok) throw new ServiceError(409, `Robot revision ${revision.number} no longer parses; move the draft to a newer revision.`);
-  return parsed.robot;
-}
+const robotOf = (revision: typeof robotRevisions.$inferSelect): Robot => robotOfRevision(revision, { remedy: "move the draft to a newer revision" });
 
 /** The first draft of a gait without one: its newest version, else the starter template for the robot. */
 async function initialDraft(db: Reader, gait: typeof gaits.$inferSelect): Promise<{ sequence: unknown; robotRevisionId: string }> {
@@ -127,7 +108,7 @@ export async function readDraft(workspaceId: string, gaitId: string, db: Databas
   const [pinned] = await db.select().from(robotRevisions).where(eq(robotRevisions.id, gait.draftRobotRevisionId!));
   const newest = await newestRevision(db, gait.robotId);
   const parsed = parseSequence(gait.draftSequence);
-  if (!parsed.ok) throw new ServiceError(409, `The stored draft is not a valid sequence: ${parsed.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`);
+  if (!parsed.ok) throw new ServiceError(409, "conflict", `The stored draft is not a valid sequence: ${parsed.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`);
   return {
     gaitId: gait.id,
     sequence: parsed.sequence,
@@ -146,19 +127,22 @@ export function checkSequenceFor(robot: Robot, json: unknown): Sequence {
   const parsed = parseSequence(json);
   const prefix = (issues: SequenceIssue[]) => issues.map((issue) => ({ path: issue.path ? `sequence.${issue.path}` : "sequence", message: issue.message }));
   if (!parsed.ok) {
-    throw new DraftInvalid(`The sequence is invalid (${parsed.issues.length} problem${parsed.issues.length === 1 ? "" : "s"}); nothing was saved.`, prefix(parsed.issues));
+    throw invalidDraft(`The sequence is invalid (${parsed.issues.length} problem${parsed.issues.length === 1 ? "" : "s"}); nothing was saved.`, prefix(parsed.issues));
   }
   const fit = sequenceIssuesForRobot(robot, parsed.sequence);
-  if (fit.length > 0) throw new DraftInvalid(`The sequence does not fit robot "${robot.name}"; nothing was saved.`, prefix(fit));
+  if (fit.length > 0) throw invalidDraft(`The sequence does not fit robot "${robot.name}"; nothing was saved.`, prefix(fit));
   return parsed.sequence;
 }
 
 async function conflict(db: Reader, gaitId: string, baseRevision: number): Promise<never> {
   const [row] = await db.select({ revision: gaits.draftRevision, updatedAt: gaits.draftUpdatedAt, updatedById: gaits.draftUpdatedById }).from(gaits).where(eq(gaits.id, gaitId));
   const updatedBy = await authorOf(db, row.updatedById);
-  throw new DraftConflict(
+  const details: DraftConflictDetails = { baseRevision, currentRevision: row.revision, updatedAt: row.updatedAt.toISOString(), updatedBy };
+  throw new ServiceError(
+    409,
+    "draft-conflict",
     `Revision ${row.revision} of the draft was saved by ${updatedBy?.name ?? "someone"} at ${utc(row.updatedAt)} while you were editing revision ${baseRevision}. Nothing was saved.`,
-    { baseRevision, currentRevision: row.revision, updatedAt: row.updatedAt.toISOString(), updatedBy },
+    details,
   );
 }
 
@@ -171,13 +155,13 @@ export type SavedDraft = { revision: number; updatedAt: string };
 export async function saveDraft(actor: DraftActor, gaitId: string, body: unknown, db: Database = database()): Promise<SavedDraft> {
   const input = draftSaveBody.safeParse(body);
   if (!input.success) {
-    throw new DraftInvalid(
+    throw invalidDraft(
       "The body must be { sequence, baseRevision }.",
       input.error.issues.map((issue) => ({ path: issue.path.join(".") || "(body)", message: issue.message })),
     );
   }
   const { gait } = await gaitRow(db, actor.workspaceId, gaitId);
-  if (!gait.draftRobotRevisionId) throw new ServiceError(409, "Open the draft once before saving it: it is not pinned to a robot revision yet.");
+  if (!gait.draftRobotRevisionId) throw new ServiceError(409, "conflict", "Open the draft once before saving it: it is not pinned to a robot revision yet.");
   const [pinned] = await db.select().from(robotRevisions).where(eq(robotRevisions.id, gait.draftRobotRevisionId));
   const sequence = checkSequenceFor(robotOf(pinned), input.data.sequence);
   const [saved] = await db
@@ -196,12 +180,12 @@ export async function moveDraftToNewestRobot(actor: DraftActor, gaitId: string, 
   const { gait } = await gaitRow(db, actor.workspaceId, gaitId);
   const newest = await newestRevision(db, gait.robotId);
   const [pinned] = gait.draftRobotRevisionId ? await db.select().from(robotRevisions).where(eq(robotRevisions.id, gait.draftRobotRevisionId)) : [];
-  if (pinned && pinned.id === newest.id) throw new ServiceError(409, `The draft already uses robot revision ${newest.number}, the newest.`);
+  if (pinned && pinned.id === newest.id) throw new ServiceError(409, "conflict", `The draft already uses robot revision ${newest.number}, the newest.`);
   const parsed = parseSequence(gait.draftSequence);
-  if (!parsed.ok) throw new ServiceError(409, "Open the draft once before moving it: there is no stored draft yet.");
+  if (!parsed.ok) throw new ServiceError(409, "conflict", "Open the draft once before moving it: there is no stored draft yet.");
   const fit = sequenceIssuesForRobot(robotOf(newest), parsed.sequence);
   if (fit.length > 0) {
-    throw new DraftInvalid(
+    throw invalidDraft(
       `The draft does not fit robot revision ${newest.number}: ${fit.map((issue) => `${issue.path} ${issue.message}`).join("; ")}. It stays on revision ${pinned?.number ?? "?"}.`,
       fit,
     );

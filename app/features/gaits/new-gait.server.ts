@@ -8,9 +8,10 @@ import type { Database } from "../../../db/client";
 import { GaitInputError, TEMPLATE_NAMES, generateGait, type GaitParams } from "../../gait/index";
 import { parseRobot, type Robot } from "../../kinematics/index";
 import { recordAudit } from "../../platform/audit.server";
-import { database } from "../../platform/db.server";
+import { database, isUniqueViolation } from "../../platform/db.server";
 import { checkSequenceFor, type DraftActor } from "./drafts.server";
 import { ServiceError } from "../../platform/errors.server";
+import { robotOfRevision } from "../robots/revision-robot.server";
 import { newestRevisionInWorkspace } from "../robots/robots.server";
 import { suitableTemplates, type TemplateChoice } from "./editor/templates";
 
@@ -85,14 +86,12 @@ export type NewGaitInput = z.output<typeof newGaitForm>;
 
 async function newestRobot(db: Database, workspaceId: string, robotId: string): Promise<{ revisionId: string; robot: Robot }> {
   const row = await newestRevisionInWorkspace(workspaceId, robotId, db);
-  if (!row) throw new ServiceError(404, "No such robot in this workspace.", "robotId");
-  const parsed = parseRobot(row.definition);
-  if (!parsed.ok) throw new ServiceError(409, `Robot revision ${row.revision} does not parse; fix the robot first.`, "robotId");
-  return { revisionId: row.revisionId, robot: parsed.robot };
+  if (!row) throw new ServiceError(404, "not-found", "No such robot in this workspace.", { field: "robotId" });
+  const robot = robotOfRevision({ number: row.revision, definition: row.definition }, { remedy: "fix the robot first", field: "robotId" });
+  return { revisionId: row.revisionId, robot };
 }
 
-const isUniqueViolation = (error: unknown): boolean =>
-  typeof error === "object" && error !== null && ("code" in error ? error.code === "23505" : "cause" in error && isUniqueViolation(error.cause));
+const nameTaken = (name: string) => new ServiceError(409, "name-taken", `This robot already has a gait named “${name}”; choose another name.`, { field: "name" });
 
 async function insertGait(
   db: Database,
@@ -101,7 +100,7 @@ async function insertGait(
   audit: Record<string, unknown>,
 ): Promise<{ id: string }> {
   const taken = await db.select({ id: gaits.id }).from(gaits).where(and(eq(gaits.robotId, row.robotId), eq(gaits.name, row.name)));
-  if (taken.length > 0) throw new ServiceError(409, `This robot already has a gait named “${row.name}”; choose another name.`, "name");
+  if (taken.length > 0) throw nameTaken(row.name);
   try {
     return await db.transaction(async (tx) => {
       const [gait] = await tx
@@ -122,7 +121,7 @@ async function insertGait(
       return gait;
     });
   } catch (error) {
-    if (isUniqueViolation(error)) throw new ServiceError(409, `This robot already has a gait named “${row.name}”; choose another name.`, "name");
+    if (isUniqueViolation(error, "gaits_robot_name")) throw nameTaken(row.name);
     throw error;
   }
 }
@@ -148,7 +147,7 @@ export async function createGait(actor: DraftActor, input: NewGaitInput, db: Dat
   } catch (error) {
     if (error instanceof GaitInputError) {
       const first = error.issues[0];
-      throw new ServiceError(422, first ? `${first.path}: ${first.message}` : error.message, first?.path.split(".")[0]);
+      throw new ServiceError(422, "invalid", first ? `${first.path}: ${first.message}` : error.message, first ? { field: first.path.split(".")[0] } : undefined);
     }
     throw error;
   }
@@ -169,19 +168,18 @@ export const copyForm = z.object({
 /** A new gait holding someone's edits, on the same robot revision as the draft they edited. */
 export async function createGaitCopy(actor: DraftActor, input: z.output<typeof copyForm>, db: Database = database()): Promise<{ id: string }> {
   const [source] = await db.select().from(gaits).where(and(eq(gaits.id, input.sourceGaitId), eq(gaits.workspaceId, actor.workspaceId)));
-  if (!source) throw new ServiceError(404, "No such gait in this workspace.");
+  if (!source) throw new ServiceError(404, "not-found", "No such gait in this workspace.");
   const revisionId = source.draftRobotRevisionId;
-  if (!revisionId) throw new ServiceError(409, "The gait to copy has no draft.");
+  if (!revisionId) throw new ServiceError(409, "conflict", "The gait to copy has no draft.");
   const [revision] = await db.select().from(robotRevisions).where(eq(robotRevisions.id, revisionId));
-  const robot = parseRobot(revision.definition);
-  if (!robot.ok) throw new ServiceError(409, `Robot revision ${revision.number} does not parse.`);
+  const robot = robotOfRevision(revision);
   let json: unknown;
   try {
     json = JSON.parse(input.sequence);
   } catch {
-    throw new ServiceError(400, "The sequence to keep is not valid JSON.", "sequence");
+    throw new ServiceError(400, "bad-request", "The sequence to keep is not valid JSON.", { field: "sequence" });
   }
-  const sequence = checkSequenceFor(robot.robot, json);
+  const sequence = checkSequenceFor(robot, json);
   return insertGait(
     db,
     actor,

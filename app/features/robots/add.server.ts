@@ -1,86 +1,69 @@
 // The three ways to add a robot from the robot list: a new one from a copy or
 // the starter template, an uploaded definition file, or an imported URDF file.
-// Reads the posted form, calls the robot service and says what to answer.
+// Reads the posted form and calls the robot service; a refusal is a ServiceError.
 import type { Member } from "../../platform/access.server";
-import { createRobotFrom, createRobotFromDefinition, createRobotFromUrdf, nameTakenMessage, type CreateOutcome } from "./robots.server";
+import type { LimitedForm } from "../../platform/body.server";
+import { ServiceError } from "../../platform/errors.server";
+import { createRobotFrom, createRobotFromDefinition, createRobotFromUrdf } from "./robots.server";
 import { DEFINITION_LIMIT_BYTES, formatBytes, URDF_LIMIT_BYTES } from "./files";
 import { describeJsonError } from "./json-errors";
 import { createForm, firstProblem, optionalName } from "./params";
-import type { AddIntent, AddResult } from "./results";
+import type { ImportedRobot } from "./results";
 import type { StarterLegCount } from "./starter";
 
-export type AddAnswer = { redirectTo: string } | { status: 200 | 400 | 404 | 409 | 413 | 422; result: AddResult };
+/** A created robot opens at once; an imported one first shows what was mapped. */
+export type Added = { redirectTo: string } | ImportedRobot;
 
 /** The largest request body the add actions read: the URDF limit plus room for the form around it. */
 export const ADD_BODY_LIMIT_BYTES = URDF_LIMIT_BYTES + 64 * 1024;
 
-const fail = (status: 400 | 404 | 409 | 413 | 422, intent: AddIntent | null, message: string, extra: Partial<AddResult> = {}): AddAnswer => ({
-  status,
-  result: { ok: false, intent, message, ...extra } as AddResult,
-});
+const badRequest = (message: string) => new ServiceError(400, "bad-request", message);
 
-export async function addRobot(form: FormData, member: Pick<Member, "user" | "workspace">): Promise<AddAnswer> {
+export async function addRobot(body: LimitedForm, member: Pick<Member, "user" | "workspace">): Promise<Added> {
+  if (!body.ok) {
+    if (!body.tooLarge) throw badRequest(body.message);
+    throw new ServiceError(413, "too-large", `The upload is ${formatBytes(body.bytes)}: a robot definition may be up to 256 KB and a URDF file up to 1 MB. Nothing was saved.`);
+  }
+  const form = body.form;
   const intent = form.get("intent");
   const owner = { workspaceId: member.workspace.id, authorId: member.user.id };
   if (intent === "create") {
     const parsed = createForm.safeParse(Object.fromEntries(form));
-    if (!parsed.success) return fail(400, "create", `Cannot create the robot: ${firstProblem(parsed.error)}.`);
+    if (!parsed.success) throw badRequest(`Cannot create the robot: ${firstProblem(parsed.error)}.`);
     const { name, source } = parsed.data;
-    const outcome = await createRobotFrom(
+    const created = await createRobotFrom(
       source.startsWith("starter-")
         ? { kind: "starter", legCount: Number(source.slice("starter-".length)) as StarterLegCount }
         : { kind: "robot", robotId: source.slice("robot-".length) },
       { ...owner, name },
     );
-    return answerCreated(outcome, "create");
+    return { redirectTo: `/robots/${created.robotId}` };
   }
   if (intent === "upload" || intent === "import-urdf") {
     const file = form.get("file");
     const kind = intent === "upload" ? "robot definition (JSON)" : "URDF file";
     if (!file || typeof file === "string" || file.size === 0) {
-      return fail(400, intent, `Choose a ${kind} to ${intent === "upload" ? "upload" : "import"}${file && typeof file !== "string" && file.name ? `: ${file.name} is empty` : ""}.`);
+      throw badRequest(`Choose a ${kind} to ${intent === "upload" ? "upload" : "import"}${file && typeof file !== "string" && file.name ? `: ${file.name} is empty` : ""}.`);
     }
     const limit = intent === "upload" ? DEFINITION_LIMIT_BYTES : URDF_LIMIT_BYTES;
     if (file.size > limit) {
-      return fail(413, intent, `${file.name} is ${formatBytes(file.size)}; a ${kind} may be up to ${formatBytes(limit)}. Nothing was saved.`);
+      throw new ServiceError(413, "too-large", `${file.name} is ${formatBytes(file.size)}; a ${kind} may be up to ${formatBytes(limit)}. Nothing was saved.`);
     }
     const name = optionalName.safeParse(form.get("name") ?? undefined);
-    if (!name.success) return fail(400, intent, `Cannot use that name: ${firstProblem(name.error)}.`);
+    if (!name.success) throw badRequest(`Cannot use that name: ${firstProblem(name.error)}.`);
     const text = await file.text();
     if (intent === "upload") {
       let json: unknown;
       try {
         json = JSON.parse(text);
       } catch (error) {
-        return fail(400, intent, `${file.name} is not valid JSON: ${describeJsonError(error, text)}. Nothing was saved.`);
+        throw badRequest(`${file.name} is not valid JSON: ${describeJsonError(error, text)}. Nothing was saved.`);
       }
-      const outcome = await createRobotFromDefinition(json, { ...owner, fileName: file.name, name: name.data });
-      return answerCreated(outcome, intent);
+      const created = await createRobotFromDefinition(json, { ...owner, fileName: file.name, name: name.data });
+      return { redirectTo: `/robots/${created.robotId}` };
     }
-    const { outcome, report } = await createRobotFromUrdf(text, { ...owner, fileName: file.name, name: name.data });
-    if (outcome.kind === "refused") {
-      return fail(422, intent, `${file.name} cannot be imported. Nothing was saved.`, { issues: outcome.issues });
-    }
-    if (outcome.kind === "created") {
-      return { status: 200, result: { ok: true, intent, robotId: outcome.robotId, name: outcome.name, report } };
-    }
-    return answerCreated(outcome, intent, report);
+    const imported = await createRobotFromUrdf(text, { ...owner, fileName: file.name, name: name.data });
+    return { ok: true, ...imported };
   }
-  return fail(400, null, `Unknown intent ${JSON.stringify(intent)}: expected "create", "upload" or "import-urdf".`);
-}
-
-function answerCreated(outcome: CreateOutcome, intent: AddIntent, report?: string[]): AddAnswer {
-  switch (outcome.kind) {
-    case "created":
-      return { redirectTo: `/robots/${outcome.robotId}` };
-    case "invalid":
-      return fail(422, intent, `The definition has ${outcome.issues.length === 1 ? "1 problem" : `${outcome.issues.length} problems`}. Nothing was saved.`, {
-        issues: outcome.issues,
-        report,
-      });
-    case "name-taken":
-      return fail(409, intent, `${nameTakenMessage(outcome.name)} Nothing was saved.`, { report });
-    case "source-missing":
-      return fail(404, intent, "The robot to copy is not in this workspace (it may have been removed).");
-  }
+  throw badRequest(`Unknown intent ${JSON.stringify(intent)}: expected "create", "upload" or "import-urdf".`);
 }

@@ -14,13 +14,12 @@ import {
   type TableExportIssue,
   type ValidCalibrationProfile,
 } from "../../export/index";
-import { JOINT_NAMES, parseRobot, type Robot } from "../../kinematics/index";
+import { JOINT_NAMES, type Robot } from "../../kinematics/index";
 import { recordAudit } from "../../platform/audit.server";
-import { database } from "../../platform/db.server";
+import { database, isUniqueViolation, type Reader } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
+import { robotOfRevision } from "./revision-robot.server";
 import { newestRevisionInWorkspace } from "./robots.server";
-
-type Reader = Pick<Database, "select">;
 
 /** Shorter than the schema's 120, so the header's "<name> (revision N)" still fits. */
 export const PROFILE_NAME_LIMIT = 100;
@@ -35,15 +34,9 @@ export type StoredProfile = {
   updatedBy: { login: string; name: string } | null;
 };
 
-/** A profile that is not valid or does not fit the robot: the issues by path (`joints.LF.femur.trimDeg`). */
-export class CalibrationInvalid extends ServiceError {
-  constructor(
-    message: string,
-    readonly issues: TableExportIssue[],
-  ) {
-    super(422, message, issues[0]?.path);
-  }
-}
+/** A profile that is not valid or does not fit the robot: 422 with the issues by path (`joints.LF.femur.trimDeg`), the first one as the field. */
+const invalidProfile = (message: string, issues: TableExportIssue[]) =>
+  new ServiceError(422, "invalid", message, { ...(issues[0] ? { field: issues[0].path } : {}), issues });
 
 export type CalibrationActor = { userId: string; workspaceId: string };
 
@@ -55,10 +48,9 @@ export type CalibrationRobot = { id: string; name: string; revision: number; rob
 /** The robot (newest revision) of this workspace; 404 otherwise. */
 export async function calibrationRobot(workspaceId: string, robotId: string, db: Reader = database()): Promise<CalibrationRobot> {
   const row = await newestRevisionInWorkspace(workspaceId, robotId, db);
-  if (!row) throw new ServiceError(404, `No robot ${robotId} in this workspace.`);
-  const parsed = parseRobot(row.definition);
-  if (!parsed.ok) throw new ServiceError(409, `Robot revision ${row.revision} of ${row.name} no longer parses; fix the robot first.`);
-  return { id: row.id, name: row.name, revision: row.revision, robot: parsed.robot };
+  if (!row) throw new ServiceError(404, "not-found", `No robot ${robotId} in this workspace.`);
+  const robot = robotOfRevision({ number: row.revision, definition: row.definition }, { robotName: row.name, remedy: "fix the robot first" });
+  return { id: row.id, name: row.name, revision: row.revision, robot };
 }
 
 const profileColumns = {
@@ -106,7 +98,7 @@ export async function findProfileByName(robotId: string, name: string, db: Reade
 /** Validates a profile against the robot: the schema, its legs, and no two joints on one channel. */
 export function checkProfile(robot: Robot, json: unknown): ValidCalibrationProfile {
   const parsed = parseCalibrationProfile(json);
-  if (!parsed.ok) throw new CalibrationInvalid(`The profile is not valid (${plural(parsed.issues.length, "problem")}).`, parsed.issues);
+  if (!parsed.ok) throw invalidProfile(`The profile is not valid (${plural(parsed.issues.length, "problem")}).`, parsed.issues);
   const profile = parsed.profile;
   const issues: TableExportIssue[] = [];
   if (profile.name.length > PROFILE_NAME_LIMIT) issues.push({ path: "name", message: `must be at most ${PROFILE_NAME_LIMIT} characters` });
@@ -119,7 +111,7 @@ export function checkProfile(robot: Robot, json: unknown): ValidCalibrationProfi
       issues.push(...(error.issues.length ? error.issues : [{ path: "joints", message: error.message }]));
     }
   }
-  if (issues.length) throw new CalibrationInvalid(`The profile does not fit ${robot.name} (${plural(issues.length, "problem")}).`, issues);
+  if (issues.length) throw invalidProfile(`The profile does not fit ${robot.name} (${plural(issues.length, "problem")}).`, issues);
   return profile;
 }
 
@@ -171,14 +163,13 @@ async function nameTaken(db: Reader, robotId: string, name: string, exceptId?: s
   return rows.some((row) => row.id !== exceptId);
 }
 
-const takenMessage = (name: string, robot: string) => `${robot} already has a calibration profile named "${name}"; choose another name (e.g. the unit's serial number).`;
-
-const isUniqueViolation = (error: unknown) => typeof error === "object" && error !== null && "code" in error && (error as { code: unknown }).code === "23505";
+const nameTakenError = (name: string, robot: string) =>
+  new ServiceError(409, "name-taken", `${robot} already has a calibration profile named "${name}"; choose another name (e.g. the unit's serial number).`, { field: "name" });
 
 export async function createProfile(actor: CalibrationActor, robotId: string, json: unknown, db: Database = database()): Promise<StoredProfile> {
   const target = await calibrationRobot(actor.workspaceId, robotId, db);
   const profile = checkProfile(target.robot, json);
-  if (await nameTaken(db, robotId, profile.name)) throw new ServiceError(409, takenMessage(profile.name, target.name), "name");
+  if (await nameTaken(db, robotId, profile.name)) throw nameTakenError(profile.name, target.name);
   try {
     return await db.transaction(async (tx) => {
       const [row] = await tx
@@ -193,7 +184,7 @@ export async function createProfile(actor: CalibrationActor, robotId: string, js
       return storedProfile(stored);
     });
   } catch (error) {
-    if (isUniqueViolation(error)) throw new ServiceError(409, takenMessage(profile.name, target.name), "name");
+    if (isUniqueViolation(error, "calibration_profiles_robot_name")) throw nameTakenError(profile.name, target.name);
     throw error;
   }
 }
@@ -203,9 +194,10 @@ async function staleOrMissing(db: Reader, robotId: string, profileId: string, ba
     .select({ revision: calibrationProfiles.revision, name: calibrationProfiles.name })
     .from(calibrationProfiles)
     .where(and(eq(calibrationProfiles.id, profileId), eq(calibrationProfiles.robotId, robotId)));
-  if (!current) throw new ServiceError(404, "This calibration profile no longer exists; someone deleted it.");
+  if (!current) throw new ServiceError(404, "not-found", "This calibration profile no longer exists; someone deleted it.");
   throw new ServiceError(
     409,
+    "stale",
     `Profile "${current.name}" changed since you opened it (revision ${baseRevision}, now ${current.revision}); reload to see the other edits before saving yours.`,
   );
 }
@@ -221,7 +213,7 @@ export async function updateProfile(
 ): Promise<StoredProfile> {
   const target = await calibrationRobot(actor.workspaceId, robotId, db);
   const profile = checkProfile(target.robot, json);
-  if (await nameTaken(db, robotId, profile.name, profileId)) throw new ServiceError(409, takenMessage(profile.name, target.name), "name");
+  if (await nameTaken(db, robotId, profile.name, profileId)) throw nameTakenError(profile.name, target.name);
   try {
     return await db.transaction(async (tx) => {
       const updated = await tx
@@ -245,7 +237,7 @@ export async function updateProfile(
       return storedProfile(stored);
     });
   } catch (error) {
-    if (isUniqueViolation(error)) throw new ServiceError(409, takenMessage(profile.name, target.name), "name");
+    if (isUniqueViolation(error, "calibration_profiles_robot_name")) throw nameTakenError(profile.name, target.name);
     throw error;
   }
 }

@@ -1,22 +1,23 @@
 // What the robot actions answer, shared by the route modules and the components that show it.
 import type { DefinitionIssue } from "~/kinematics";
+import type { FormError } from "~/platform/errors";
 
-export type SaveFailureCode = "bad-request" | "too-large" | "invalid" | "forbidden" | "not-found" | "stale" | "unchanged" | "name-taken";
+/** A saved revision (a save or a restore). */
+export type SavedRevision = { ok: true; number: number; message: string };
 
-export type SaveResult =
-  | { ok: true; number: number; message: string }
-  | {
-      ok: false;
-      code: SaveFailureCode;
-      message: string;
-      issues?: DefinitionIssue[];
-      /** For "stale": the revision the form started from and the newest one now. */
-      baseRevision?: number;
-      latest?: { number: number; authorName: string | null; createdAt: string; message: string };
-    };
+/** What a refused save carries: the issues by path, or for `stale` the revision the form started from and the newest one now. */
+export type SaveRefusalDetails = {
+  issues?: DefinitionIssue[];
+  baseRevision?: number;
+  latest?: { number: number; authorName: string | null; createdAt: string; message: string };
+};
 
-export type AddIntent = "create" | "upload" | "import-urdf";
+export type SaveResult = SavedRevision | FormError<SaveRefusalDetails>;
 
-export type AddResult =
-  | { ok: true; intent: "import-urdf"; robotId: string; name: string; report: string[] }
-  | { ok: false; intent: AddIntent | null; message: string; issues?: DefinitionIssue[]; report?: string[] };
+/** A robot imported from URDF, with what was mapped; the other ways to add a robot open it at once. */
+export type ImportedRobot = { ok: true; robotId: string; name: string; report: string[] };
+
+/** What a refused addition carries: the issues by path, and the URDF importer's report when it got that far. */
+export type AddRefusalDetails = { issues?: DefinitionIssue[]; report?: string[] };
+
+export type AddResult = ImportedRobot | FormError<AddRefusalDetails>;

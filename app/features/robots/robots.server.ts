@@ -5,10 +5,11 @@ import { and, desc, eq, ne, sql } from "drizzle-orm";
 import { robotRevisions, robots, users, type Role } from "../../../db/schema";
 import { importUrdf, parseRobot, type DefinitionIssue, type Robot } from "~/kinematics";
 import { recordAudit } from "../../platform/audit.server";
-import type { Database } from "../../../db/client";
-import { database } from "../../platform/db.server";
-import { can } from "../../platform/permissions";
-import { changedFields, nonCalibrationChanges, summarizeChanges, type FieldChange } from "./changes";
+import { database, isUniqueViolation, type Reader } from "../../platform/db.server";
+import { ServiceError } from "../../platform/errors.server";
+import { can, ROLE_LABELS } from "../../platform/permissions";
+import { changedFields, describeChange, nonCalibrationChanges, summarizeChanges, type FieldChange } from "./changes";
+import type { SaveRefusalDetails } from "./results";
 import { starterRobot, type StarterLegCount } from "./starter";
 
 export type RobotListItem = {
@@ -80,7 +81,7 @@ async function robotInWorkspace(workspaceId: string, robotId: string) {
 }
 
 /** A robot of this workspace with its newest revision's definition; null when there is no such robot. */
-export async function newestRevisionInWorkspace(workspaceId: string, robotId: string, db: Pick<Database, "select"> = database()) {
+export async function newestRevisionInWorkspace(workspaceId: string, robotId: string, db: Reader = database()) {
   const [row] = await db
     .select({ id: robots.id, name: robots.name, revisionId: robotRevisions.id, revision: robotRevisions.number, definition: robotRevisions.definition })
     .from(robots)
@@ -140,21 +141,45 @@ export async function getRevision(
 }
 
 // ---------------------------------------------------------------------------
+// Refusals of the writes: nothing is saved on any of them
+
+const invalidDefinition = (issues: DefinitionIssue[]) =>
+  new ServiceError(422, "invalid", `The definition has ${issues.length === 1 ? "1 problem" : `${issues.length} problems`}. Nothing was saved.`, { issues });
+
+/** The URDF importer's report goes with a refusal too, so the person sees what was mapped. */
+const nameTakenError = (name: string, report?: string[]) =>
+  new ServiceError(409, "name-taken", `Another robot in this workspace is already called "${name}": give this one another name. Nothing was saved.`, report ? { report } : undefined);
+
+const timeOf = (date: Date) => `${date.toISOString().slice(0, 10)} ${date.toISOString().slice(11, 16)} UTC`;
+
+function staleError(baseRevision: number, latest: RevisionSummary): ServiceError {
+  const details: SaveRefusalDetails = {
+    baseRevision,
+    latest: { number: latest.number, authorName: latest.author?.name ?? null, createdAt: latest.createdAt.toISOString(), message: latest.message },
+  };
+  return new ServiceError(
+    409,
+    "stale",
+    `Revision ${latest.number} was saved by ${latest.author?.name ?? "someone"} at ${timeOf(latest.createdAt)} while you were editing revision ${baseRevision}. Nothing was saved.`,
+    details,
+  );
+}
+
+function calibrationOnlyError(role: Role, changes: FieldChange[]): ServiceError {
+  const [first, ...others] = changes;
+  const more = others.length === 0 ? "" : ` and ${others.length} more field${others.length === 1 ? "" : "s"} (${others.slice(0, 3).map((change) => change.path).join(", ")}${others.length > 3 ? ", …" : ""})`;
+  return new ServiceError(403, "forbidden", `${ROLE_LABELS[role]} can change only zero offsets and servo mapping; this save also changes ${describeChange(first)}${more}. Nothing was saved.`);
+}
+
+// ---------------------------------------------------------------------------
 // Creating robots
 
-export type CreateOutcome =
-  | { kind: "created"; robotId: string; name: string }
-  | { kind: "invalid"; issues: DefinitionIssue[] }
-  | { kind: "name-taken"; name: string }
-  | { kind: "source-missing" };
+export type CreatedRobot = { robotId: string; name: string };
 
-type Creation = { workspaceId: string; authorId: string; message: string; source: string };
-
-export const nameTakenMessage = (name: string) =>
-  `Another robot in this workspace is already called "${name}": give this one another name.`;
+type Creation = { workspaceId: string; authorId: string; message: string; source: string; report?: string[] };
 
 async function nameTaken(
-  db: Pick<ReturnType<typeof database>, "select">,
+  db: Reader,
   workspaceId: string,
   name: string,
   exceptRobotId?: string,
@@ -172,20 +197,11 @@ async function nameTaken(
   return rows.length > 0;
 }
 
-/** Postgres unique violations arrive wrapped by drizzle; this finds the constraint name. */
-function uniqueViolation(error: unknown): string | null {
-  for (let current = error as { code?: string; constraint_name?: string; cause?: unknown } | undefined; current; ) {
-    if (current.code === "23505") return current.constraint_name ?? "";
-    current = current.cause as typeof current;
-  }
-  return null;
-}
-
 /** A new robot with `definition` (already valid) as revision 1. */
-async function insertRobot(definition: Robot, creation: Creation): Promise<CreateOutcome> {
+async function insertRobot(definition: Robot, creation: Creation): Promise<CreatedRobot> {
   try {
     return await database().transaction(async (tx) => {
-      if (await nameTaken(tx, creation.workspaceId, definition.name)) return { kind: "name-taken", name: definition.name } as const;
+      if (await nameTaken(tx, creation.workspaceId, definition.name)) throw nameTakenError(definition.name, creation.report);
       const [robot] = await tx
         .insert(robots)
         .values({ workspaceId: creation.workspaceId, name: definition.name, createdById: creation.authorId })
@@ -208,10 +224,10 @@ async function insertRobot(definition: Robot, creation: Creation): Promise<Creat
         },
         tx,
       );
-      return { kind: "created", robotId: robot.id, name: definition.name } as const;
+      return { robotId: robot.id, name: definition.name };
     });
   } catch (error) {
-    if (uniqueViolation(error) === "robots_workspace_name") return { kind: "name-taken", name: definition.name };
+    if (isUniqueViolation(error, "robots_workspace_name")) throw nameTakenError(definition.name, creation.report);
     throw error;
   }
 }
@@ -220,11 +236,11 @@ async function insertRobot(definition: Robot, creation: Creation): Promise<Creat
 export async function createRobotFromDefinition(
   json: unknown,
   options: { workspaceId: string; authorId: string; fileName: string; name?: string },
-): Promise<CreateOutcome> {
+): Promise<CreatedRobot> {
   const renamed =
     options.name && json !== null && typeof json === "object" && !Array.isArray(json) ? { ...json, name: options.name } : json;
   const parsed = parseRobot(renamed);
-  if (!parsed.ok) return { kind: "invalid", issues: parsed.issues };
+  if (!parsed.ok) throw invalidDefinition(parsed.issues);
   return insertRobot(parsed.robot, {
     workspaceId: options.workspaceId,
     authorId: options.authorId,
@@ -233,22 +249,21 @@ export async function createRobotFromDefinition(
   });
 }
 
-export type UrdfCreateOutcome = CreateOutcome | { kind: "refused"; issues: DefinitionIssue[] };
-
 /** Imports a URDF file and, when it maps, creates the robot; the report says what was mapped. */
 export async function createRobotFromUrdf(
   xml: string,
   options: { workspaceId: string; authorId: string; fileName: string; name?: string },
-): Promise<{ outcome: UrdfCreateOutcome; report: string[] }> {
+): Promise<CreatedRobot & { report: string[] }> {
   const imported = importUrdf(xml, options.name ? { name: options.name } : {});
-  if (!imported.ok) return { outcome: { kind: "refused", issues: imported.issues }, report: [] };
-  const outcome = await insertRobot(imported.robot, {
+  if (!imported.ok) throw new ServiceError(422, "invalid", `${options.fileName} cannot be imported. Nothing was saved.`, { issues: imported.issues });
+  const created = await insertRobot(imported.robot, {
     workspaceId: options.workspaceId,
     authorId: options.authorId,
     message: `Imported from URDF ${options.fileName}`,
     source: "urdf",
+    report: imported.report,
   });
-  return { outcome, report: imported.report };
+  return { ...created, report: imported.report };
 }
 
 export type NewRobotSource = { kind: "robot"; robotId: string } | { kind: "starter"; legCount: StarterLegCount };
@@ -257,7 +272,7 @@ export type NewRobotSource = { kind: "robot"; robotId: string } | { kind: "start
 export async function createRobotFrom(
   source: NewRobotSource,
   options: { workspaceId: string; authorId: string; name: string },
-): Promise<CreateOutcome> {
+): Promise<CreatedRobot> {
   if (source.kind === "starter") {
     return insertRobot(starterRobot(options.name, source.legCount), {
       ...options,
@@ -266,9 +281,9 @@ export async function createRobotFrom(
     });
   }
   const original = await getRobot(options.workspaceId, source.robotId);
-  if (!original) return { kind: "source-missing" };
+  if (!original) throw new ServiceError(404, "not-found", "The robot to copy is not in this workspace (it may have been removed).");
   const parsed = parseRobot({ ...original.latest.definition, name: options.name });
-  if (!parsed.ok) return { kind: "invalid", issues: parsed.issues };
+  if (!parsed.ok) throw invalidDefinition(parsed.issues);
   return insertRobot(parsed.robot, {
     ...options,
     message: `Copied from ${original.name}, revision ${original.latest.number}`,
@@ -279,14 +294,7 @@ export async function createRobotFrom(
 // ---------------------------------------------------------------------------
 // Saving a revision
 
-export type SaveOutcome =
-  | { kind: "saved"; number: number; message: string }
-  | { kind: "invalid"; issues: DefinitionIssue[] }
-  | { kind: "not-found" }
-  | { kind: "stale"; baseRevision: number; latest: RevisionSummary }
-  | { kind: "forbidden"; changes: FieldChange[] }
-  | { kind: "unchanged"; number: number }
-  | { kind: "name-taken"; name: string };
+export type SavedRevision = { number: number; message: string };
 
 export type SaveRequest = {
   workspaceId: string;
@@ -302,12 +310,13 @@ export type SaveRequest = {
  * newest one. A role that may only calibrate (firmware) may change zero offsets
  * and servo mappings and nothing else, compared with the newest definition.
  */
-export async function saveRevision(save: SaveRequest): Promise<SaveOutcome> {
+export async function saveRevision(save: SaveRequest): Promise<SavedRevision> {
   const parsed = parseRobot(save.definition);
-  if (!parsed.ok) return { kind: "invalid", issues: parsed.issues };
+  if (!parsed.ok) throw invalidDefinition(parsed.issues);
   const definition = parsed.robot;
+  const notFound = () => new ServiceError(404, "not-found", "There is no robot at this address in your workspace.");
   try {
-    return await database().transaction(async (tx): Promise<SaveOutcome> => {
+    return await database().transaction(async (tx) => {
       // The row lock makes concurrent saves of one robot take turns, so exactly
       // one of two saves from the same base wins and the other sees it.
       const [robot] = await tx
@@ -315,7 +324,7 @@ export async function saveRevision(save: SaveRequest): Promise<SaveOutcome> {
         .from(robots)
         .where(and(eq(robots.id, save.robotId), eq(robots.workspaceId, save.workspaceId)))
         .for("update");
-      if (!robot) return { kind: "not-found" };
+      if (!robot) throw notFound();
       const [latest] = await tx
         .select({ ...revisionColumns, definition: robotRevisions.definition })
         .from(robotRevisions)
@@ -323,18 +332,16 @@ export async function saveRevision(save: SaveRequest): Promise<SaveOutcome> {
         .where(eq(robotRevisions.robotId, robot.id))
         .orderBy(desc(robotRevisions.number))
         .limit(1);
-      if (!latest) return { kind: "not-found" };
-      if (latest.number !== save.baseRevision) return { kind: "stale", baseRevision: save.baseRevision, latest: summaryOf(latest) };
+      if (!latest) throw notFound();
+      if (latest.number !== save.baseRevision) throw staleError(save.baseRevision, summaryOf(latest));
 
       if (!can(save.author.role, "robots.edit")) {
         const forbidden = nonCalibrationChanges(latest.definition, definition);
-        if (forbidden.length > 0) return { kind: "forbidden", changes: forbidden };
+        if (forbidden.length > 0) throw calibrationOnlyError(save.author.role, forbidden);
       }
       const changes = changedFields(latest.definition, definition);
-      if (changes.length === 0) return { kind: "unchanged", number: latest.number };
-      if (definition.name !== robot.name && (await nameTaken(tx, save.workspaceId, definition.name, robot.id))) {
-        return { kind: "name-taken", name: definition.name };
-      }
+      if (changes.length === 0) throw new ServiceError(422, "unchanged", `Nothing changed since revision ${latest.number}, so nothing was saved.`);
+      if (definition.name !== robot.name && (await nameTaken(tx, save.workspaceId, definition.name, robot.id))) throw nameTakenError(definition.name);
 
       const number = latest.number + 1;
       const message = save.message.trim() || summarizeChanges(changes);
@@ -351,15 +358,14 @@ export async function saveRevision(save: SaveRequest): Promise<SaveOutcome> {
         },
         tx,
       );
-      return { kind: "saved", number, message };
+      return { number, message };
     });
   } catch (error) {
-    const constraint = uniqueViolation(error);
-    if (constraint === "robots_workspace_name") return { kind: "name-taken", name: definition.name };
-    if (constraint === "robot_revisions_robot_number") {
+    if (isUniqueViolation(error, "robots_workspace_name")) throw nameTakenError(definition.name);
+    if (isUniqueViolation(error, "robot_revisions_robot_number")) {
       // Only reachable if a writer skipped the row lock; the number it took is the newest now.
       const current = await getRobot(save.workspaceId, save.robotId);
-      if (current) return { kind: "stale", baseRevision: save.baseRevision, latest: current.revisions[0] };
+      if (current) throw staleError(save.baseRevision, current.revisions[0]);
     }
     throw error;
   }

@@ -3,26 +3,20 @@
 import { z } from "zod";
 import { columnsOf, encodeColumns, framesOf, GaitInputError, parseSequence, runSolve, type SolveOptions } from "../../gait/index";
 import { angleToPulse, JOINT_NAMES, parseRobot, solveLeg, type JointAngles, type Robot } from "../../kinematics/index";
-import { ServiceError } from "../../platform/errors.server";
+import { ServiceError, type Issue } from "../../platform/errors.server";
 
 export const SOLVE_BODY_LIMIT_BYTES = 2 * 1024 * 1024;
 
 /** frames: DESIGN.md's layout; columns: the compact one (app/gait/columns.ts); checks: flags and summary only (the editor's reference). */
 export const SOLVE_LAYOUTS = ["frames", "columns", "checks"] as const;
 
-export class InputIssues extends ServiceError {
-  constructor(
-    message: string,
-    readonly issues: { path: string; message: string }[],
-  ) {
-    super(422, message);
-  }
-}
+/** Input that does not parse or does not fit: 422 with the issues, by path into the body, as the details. */
+const inputIssues = (message: string, issues: Issue[]) => new ServiceError(422, "invalid", message, issues);
 
 function robotFrom(json: unknown, path = "robot"): Robot {
   const parsed = parseRobot(json);
   if (!parsed.ok) {
-    throw new InputIssues(
+    throw inputIssues(
       `The robot definition is invalid (${parsed.issues.length} problem${parsed.issues.length === 1 ? "" : "s"}).`,
       parsed.issues.map((issue) => ({ path: issue.path ? `${path}.${issue.path}` : path, message: issue.message })),
     );
@@ -67,12 +61,12 @@ export type IkResult = Record<
 
 export function solveFeet(body: unknown): IkResult {
   const parsed = ikBody.safeParse(body);
-  if (!parsed.success) throw new InputIssues("The body must be { robot, feet: { LEG: [x, y, z] }, bodyPose? }.", shapeIssues(parsed.error));
+  if (!parsed.success) throw inputIssues("The body must be { robot, feet: { LEG: [x, y, z] }, bodyPose? }.", shapeIssues(parsed.error));
   const robot = robotFrom(parsed.data.robot);
   const legIds = new Set(robot.legs.map((leg) => leg.id));
   const unknown = Object.keys(parsed.data.feet).filter((id) => !legIds.has(id));
   if (unknown.length > 0) {
-    throw new InputIssues(
+    throw inputIssues(
       "Some feet name legs the robot does not have.",
       unknown.map((id) => ({ path: `feet.${id}`, message: `no leg "${id}" on this robot (legs: ${[...legIds].join(", ")})` })),
     );
@@ -93,11 +87,11 @@ const base64 = (bytes: Uint8Array) => Buffer.from(bytes.buffer, bytes.byteOffset
 /** The answer to POST /api/v1/solve as the UTF-8 bytes of its JSON, in the layout the options ask for. */
 export function solveRequest(body: unknown): Uint8Array<ArrayBuffer> {
   const parsed = solveBody.safeParse(body);
-  if (!parsed.success) throw new InputIssues("The body must be { robot, sequence, options? }.", shapeIssues(parsed.error));
+  if (!parsed.success) throw inputIssues("The body must be { robot, sequence, options? }.", shapeIssues(parsed.error));
   const robot = robotFrom(parsed.data.robot);
   const sequence = parseSequence(parsed.data.sequence);
   if (!sequence.ok) {
-    throw new InputIssues(
+    throw inputIssues(
       `The sequence is invalid (${sequence.issues.length} problem${sequence.issues.length === 1 ? "" : "s"}).`,
       sequence.issues.map((issue) => ({ path: issue.path ? `sequence.${issue.path}` : "sequence", message: issue.message })),
     );
@@ -108,7 +102,7 @@ export function solveRequest(body: unknown): Uint8Array<ArrayBuffer> {
     run = runSolve(robot, sequence.sequence, options as SolveOptions);
   } catch (error) {
     if (error instanceof GaitInputError) {
-      throw new InputIssues(
+      throw inputIssues(
         "The sequence does not fit this robot.",
         error.issues.map((issue) => ({ path: issue.path ? `sequence.${issue.path}` : "sequence", message: issue.message })),
       );

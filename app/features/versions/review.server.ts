@@ -10,17 +10,15 @@ import { gaitVersions, gaits, memberships, reviewEvents, robots, users, type Rol
 import type { Member } from "../../platform/access.server";
 import { recordAudit } from "../../platform/audit.server";
 import { config } from "../../platform/config.server";
-import { database } from "../../platform/db.server";
+import { database, type Reader, type Tx } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
 import { sendMail } from "../../platform/mail.server";
-import { recordReleaseTable } from "../tables/tables.server";
+import { recordReleaseTable } from "../tables/releases.server";
 import { can, type Action } from "../../platform/permissions";
 import type { Person, VersionSummary } from "./versions.server";
 
 export const COMMENT_LIMIT = 2000;
 export const REASON_LIMIT = 1000;
-
-type Tx = Parameters<Parameters<ReturnType<typeof database>["transaction"]>[0]>[0];
 
 const authors = alias(users, "author");
 
@@ -40,9 +38,9 @@ type LoadedVersion = {
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
-async function loadVersion(db: Tx | ReturnType<typeof database>, workspaceId: string, versionId: string): Promise<LoadedVersion> {
+async function loadVersion(db: Reader, workspaceId: string, versionId: string): Promise<LoadedVersion> {
   // Checked here so a malformed id is a 404, not an SQL error that aborts the transaction.
-  if (!UUID.test(versionId)) throw new ServiceError(404, "No such version in this workspace.");
+  if (!UUID.test(versionId)) throw new ServiceError(404, "not-found", "No such version in this workspace.");
   const [row] = await db
     .select({
       id: gaitVersions.id,
@@ -64,7 +62,7 @@ async function loadVersion(db: Tx | ReturnType<typeof database>, workspaceId: st
     .innerJoin(robots, eq(robots.id, gaits.robotId))
     .leftJoin(authors, eq(authors.id, gaitVersions.authorId))
     .where(and(eq(gaitVersions.id, versionId), eq(gaits.workspaceId, workspaceId)));
-  if (!row) throw new ServiceError(404, "No such version in this workspace.");
+  if (!row) throw new ServiceError(404, "not-found", "No such version in this workspace.");
   return {
     ...row,
     summary: (row.summary ?? {}) as Partial<VersionSummary>,
@@ -90,17 +88,17 @@ async function moveState(tx: Tx, version: LoadedVersion, from: VersionState[], t
     .returning({ id: gaitVersions.id });
   if (moved.length === 0) {
     const [now] = await tx.select({ state: gaitVersions.state }).from(gaitVersions).where(eq(gaitVersions.id, version.id));
-    throw new ServiceError(409, `Version ${version.number} is ${STATE_WORDS[now?.state ?? version.state]} now, not ${from.map((state) => STATE_WORDS[state]).join(" or ")}; reload to see what changed.`);
+    throw new ServiceError(409, "conflict", `Version ${version.number} is ${STATE_WORDS[now?.state ?? version.state]} now, not ${from.map((state) => STATE_WORDS[state]).join(" or ")}; reload to see what changed.`);
   }
 }
 
 function requirePermission(actor: Member, action: Action, phrase: string): void {
-  if (!can(actor.role, action)) throw new ServiceError(403, `The ${actor.role} role cannot ${phrase}.`);
+  if (!can(actor.role, action)) throw new ServiceError(403, "forbidden", `The ${actor.role} role cannot ${phrase}.`);
 }
 
 function cleanText(value: string | undefined | null, limit: number, field: string, what: string): string {
   const text = (value ?? "").trim();
-  if (text.length > limit) throw new ServiceError(422, `${what} must be at most ${limit} characters.`, field);
+  if (text.length > limit) throw new ServiceError(422, "invalid", `${what} must be at most ${limit} characters.`, { field });
   return text;
 }
 
@@ -191,22 +189,22 @@ export async function requestReview(
   const db = database();
   const { version, reviewer, baseline } = await db.transaction(async (tx) => {
     const version = await loadVersion(tx, actor.workspace.id, versionId);
-    if (!UUID.test(input.reviewerId)) throw new ServiceError(422, "Choose a reviewer from this workspace.", "reviewerId");
+    if (!UUID.test(input.reviewerId)) throw new ServiceError(422, "invalid", "Choose a reviewer from this workspace.", { field: "reviewerId" });
     const [reviewer] = await tx
       .select({ id: users.id, name: users.name, email: users.email, role: memberships.role })
       .from(memberships)
       .innerJoin(users, eq(users.id, memberships.userId))
       .where(and(eq(memberships.workspaceId, actor.workspace.id), eq(memberships.userId, input.reviewerId)));
-    if (!reviewer) throw new ServiceError(422, "Choose a reviewer from this workspace.", "reviewerId");
-    if (!can(reviewer.role, "versions.decide")) throw new ServiceError(422, `${reviewer.name} is ${reviewer.role} and cannot approve versions; choose a lead or an owner.`, "reviewerId");
+    if (!reviewer) throw new ServiceError(422, "invalid", "Choose a reviewer from this workspace.", { field: "reviewerId" });
+    if (!can(reviewer.role, "versions.decide")) throw new ServiceError(422, "invalid", `${reviewer.name} is ${reviewer.role} and cannot approve versions; choose a lead or an owner.`, { field: "reviewerId" });
     if (version.author?.id === reviewer.id && reviewer.role !== "owner") {
-      throw new ServiceError(422, `${reviewer.name} wrote this version and cannot approve it; choose another reviewer.`, "reviewerId");
+      throw new ServiceError(422, "invalid", `${reviewer.name} wrote this version and cannot approve it; choose another reviewer.`, { field: "reviewerId" });
     }
     let baseline: { id: string; number: number; gaitName: string } | null = null;
     if (input.compareWithId) {
       const other = await loadVersion(tx, actor.workspace.id, input.compareWithId).catch(() => null);
       if (!other || other.robotId !== version.robotId || other.id === version.id) {
-        throw new ServiceError(422, "Compare with another version of this gait or of a gait on the same robot.", "compareWithId");
+        throw new ServiceError(422, "invalid", "Compare with another version of this gait or of a gait on the same robot.", { field: "compareWithId" });
       }
       baseline = { id: other.id, number: other.number, gaitName: other.gaitName };
     }
@@ -252,14 +250,14 @@ export async function approveVersion(actor: Member, versionId: string, input: { 
   const db = database();
   const { version, needs } = await db.transaction(async (tx) => {
     const version = await loadVersion(tx, actor.workspace.id, versionId);
-    if (version.state !== "in-review") throw new ServiceError(409, `Version ${version.number} is ${STATE_WORDS[version.state]}, not in review; only a version in review can be approved.`);
+    if (version.state !== "in-review") throw new ServiceError(409, "conflict", `Version ${version.number} is ${STATE_WORDS[version.state]}, not in review; only a version in review can be approved.`);
     const rules = approvalRules({ authorId: version.author?.id ?? null, errors: version.summary.errors ?? 0 }, { userId: actor.user.id, role: actor.role });
-    if (!rules.allowed) throw new ServiceError(403, rules.refusal!);
+    if (!rules.allowed) throw new ServiceError(403, "forbidden", rules.refusal!);
     if (rules.needsReason.length > 0 && reason.length === 0) {
       const why = rules.needsReason
         .map((need) => (need === "own-version" ? "it is your own version" : `it has ${version.summary.errors} error flag(s)`))
         .join(" and ");
-      throw new ServiceError(422, `Approving needs an override reason because ${why}; the reason goes into the review history and the audit log.`, "overrideReason");
+      throw new ServiceError(422, "invalid", `Approving needs an override reason because ${why}; the reason goes into the review history and the audit log.`, { field: "overrideReason" });
     }
     await moveState(tx, version, ["in-review"], "approved");
     const overrideReason = rules.needsReason.length > 0 ? reason : null;
@@ -294,7 +292,7 @@ export async function approveVersion(actor: Member, versionId: string, input: { 
 export async function sendBackVersion(actor: Member, versionId: string, input: { comment: string }): Promise<StepOutcome> {
   requirePermission(actor, "versions.decide", "send versions back");
   const comment = cleanText(input.comment, COMMENT_LIMIT, "comment", "The comment");
-  if (comment.length === 0) throw new ServiceError(422, "Say what needs to change: sending a version back needs a comment.", "comment");
+  if (comment.length === 0) throw new ServiceError(422, "invalid", "Say what needs to change: sending a version back needs a comment.", { field: "comment" });
   const version = await database().transaction(async (tx) => {
     const version = await loadVersion(tx, actor.workspace.id, versionId);
     await moveState(tx, version, ["in-review"], "sent-back");
@@ -330,7 +328,7 @@ export async function releaseVersion(actor: Member, versionId: string, input: { 
     // Read again under the gait's lock: another release may have finished while this one waited.
     const [fresh] = await tx.select({ state: gaitVersions.state }).from(gaitVersions).where(eq(gaitVersions.id, version.id));
     if (fresh.state !== "approved") {
-      throw new ServiceError(409, `Version ${version.number} is ${STATE_WORDS[fresh.state]}; only an approved version can be released.`);
+      throw new ServiceError(409, "conflict", `Version ${version.number} is ${STATE_WORDS[fresh.state]}; only an approved version can be released.`);
     }
     const retiredRows = await tx
       .update(gaitVersions)

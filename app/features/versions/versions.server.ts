@@ -7,7 +7,7 @@ import { and, asc, desc, eq, ilike, max, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { gaitVersions, gaits, reviewEvents, robotRevisions, robots, users, type VersionState } from "../../../db/schema";
 import { GaitInputError, parseSequence, sequenceIssuesForRobot, solveSequence, type Sequence, type SolveSummary, type SolvedSequence } from "../../gait/index";
-import { parseRobot, type Robot } from "../../kinematics/index";
+import type { Robot } from "../../kinematics/index";
 import type { Database } from "../../../db/client";
 import { recordAudit } from "../../platform/audit.server";
 import {
@@ -27,6 +27,7 @@ import {
 import { versionContentHash } from "./content-hash.server";
 import { database } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
+import { robotOfRevision } from "../robots/revision-robot.server";
 
 /** What a version keeps of its solve: enough for tables, lists and comparisons without solving again. */
 export type VersionSummary = SolveSummary & { cycleMs: number; loop: boolean };
@@ -59,7 +60,7 @@ export async function commitDraft(
 ): Promise<{ id: string; number: number; contentHash: string }> {
   const text = message.trim();
   if (text.length < 1 || text.length > MESSAGE_LIMIT) {
-    throw new ServiceError(422, `Describe the version in 1 to ${MESSAGE_LIMIT} characters.`, "message");
+    throw new ServiceError(422, "invalid", `Describe the version in 1 to ${MESSAGE_LIMIT} characters.`, { field: "message" });
   }
   return db.transaction(async (tx) => {
     const [gait] = await tx
@@ -67,27 +68,27 @@ export async function commitDraft(
       .from(gaits)
       .where(and(eq(gaits.id, gaitId), eq(gaits.workspaceId, committer.workspaceId)))
       .for("update");
-    if (!gait) throw new ServiceError(404, "No such gait in this workspace.");
-    if (!gait.draftSequence || !gait.draftRobotRevisionId) throw new ServiceError(409, "This gait has no working draft to commit.");
+    if (!gait) throw new ServiceError(404, "not-found", "No such gait in this workspace.");
+    if (!gait.draftSequence || !gait.draftRobotRevisionId) throw new ServiceError(409, "conflict", "This gait has no working draft to commit.");
     if (options.draftRevision !== undefined && options.draftRevision !== gait.draftRevision) {
       throw new ServiceError(
         409,
+        "stale",
         `The draft changed since you opened it (draft revision ${options.draftRevision}, now ${gait.draftRevision}); reload to see it before committing.`,
       );
     }
     const [revision] = await tx.select().from(robotRevisions).where(eq(robotRevisions.id, gait.draftRobotRevisionId));
-    if (!revision || revision.robotId !== gait.robotId) throw new ServiceError(409, "The draft pins a revision of another robot; pin one of this gait's robot.");
-    const robot = parseRobot(revision.definition);
-    if (!robot.ok) throw new ServiceError(409, `Robot revision ${revision.number} no longer parses; move the draft to a newer revision.`);
+    if (!revision || revision.robotId !== gait.robotId) throw new ServiceError(409, "conflict", "The draft pins a revision of another robot; pin one of this gait's robot.");
+    const robot = robotOfRevision(revision, { remedy: "move the draft to a newer revision" });
     const sequence = parseSequence(gait.draftSequence);
-    if (!sequence.ok) throw new ServiceError(422, `The draft is invalid: ${issuesText(sequence.issues)}`);
-    const misfits = sequenceIssuesForRobot(robot.robot, sequence.sequence);
-    if (misfits.length > 0) throw new ServiceError(422, `The draft does not fit robot revision ${revision.number}: ${issuesText(misfits)}`);
+    if (!sequence.ok) throw new ServiceError(422, "invalid", `The draft is invalid: ${issuesText(sequence.issues)}`);
+    const misfits = sequenceIssuesForRobot(robot, sequence.sequence);
+    if (misfits.length > 0) throw new ServiceError(422, "invalid", `The draft does not fit robot revision ${revision.number}: ${issuesText(misfits)}`);
     let solved: SolvedSequence;
     try {
-      solved = solveSequence(robot.robot, sequence.sequence);
+      solved = solveSequence(robot, sequence.sequence);
     } catch (error) {
-      if (error instanceof GaitInputError) throw new ServiceError(422, `The draft cannot be solved: ${issuesText(error.issues)}`);
+      if (error instanceof GaitInputError) throw new ServiceError(422, "invalid", `The draft cannot be solved: ${issuesText(error.issues)}`);
       throw error;
     }
     const summary: VersionSummary = { ...solved.summary, cycleMs: sequence.sequence.cycleMs, loop: sequence.sequence.loop };
@@ -143,7 +144,7 @@ export async function restoreDraft(
       .from(gaitVersions)
       .innerJoin(gaits, eq(gaits.id, gaitVersions.gaitId))
       .where(and(eq(gaitVersions.id, versionId), eq(gaitVersions.gaitId, gaitId), eq(gaits.workspaceId, member.workspaceId)));
-    if (!version) throw new ServiceError(404, "No such version of this gait.");
+    if (!version) throw new ServiceError(404, "not-found", "No such version of this gait.");
     const updated = await tx
       .update(gaits)
       .set({
@@ -159,6 +160,7 @@ export async function restoreDraft(
       const [current] = await tx.select({ draftRevision: gaits.draftRevision }).from(gaits).where(eq(gaits.id, gaitId));
       throw new ServiceError(
         409,
+        "stale",
         `The draft changed since you loaded this page (draft revision ${draftRevision}, now ${current?.draftRevision ?? "gone"}); reload and try again, so no one's edits are lost.`,
       );
     }
@@ -508,17 +510,16 @@ export type SolvedVersion = { robot: Robot; sequence: Sequence; solved: SolvedSe
 /** Solves a version with the robot revision it pins (the same engine that committed it). */
 export async function solveVersion(version: Pick<VersionDetail, "sequence" | "robotRevisionId" | "number">): Promise<SolvedVersion> {
   const [revision] = await database().select({ definition: robotRevisions.definition, number: robotRevisions.number }).from(robotRevisions).where(eq(robotRevisions.id, version.robotRevisionId));
-  const robot = parseRobot(revision?.definition);
-  if (!robot.ok) throw new ServiceError(409, `Version ${version.number} pins robot revision ${revision?.number ?? "?"}, which no longer parses.`);
+  const robot = robotOfRevision(revision, { version: version.number });
   const sequence = parseSequence(version.sequence);
-  if (!sequence.ok) throw new ServiceError(409, `Version ${version.number} holds a sequence this engine cannot read: ${issuesText(sequence.issues)}`);
-  const solved = solveSequence(robot.robot, sequence.sequence);
+  if (!sequence.ok) throw new ServiceError(409, "conflict", `Version ${version.number} holds a sequence this engine cannot read: ${issuesText(sequence.issues)}`);
+  const solved = solveSequence(robot, sequence.sequence);
   const frames = solved.frames.length;
   const display =
     frames <= DISPLAY_FRAME_LIMIT
       ? solved
-      : solveSequence(robot.robot, sequence.sequence, { fps: Math.max(1, Math.floor((DISPLAY_FRAME_LIMIT * 1000) / sequence.sequence.cycleMs)) });
-  return { robot: robot.robot, sequence: sequence.sequence, solved, display };
+      : solveSequence(robot, sequence.sequence, { fps: Math.max(1, Math.floor((DISPLAY_FRAME_LIMIT * 1000) / sequence.sequence.cycleMs)) });
+  return { robot, sequence: sequence.sequence, solved, display };
 }
 
 export type ComparedVersion = Omit<VersionDetail, "sequence" | "events"> & {
@@ -540,9 +541,9 @@ export type Comparison = {
 /** Any two versions of the same gait, or of two gaits on the same robot: what changed from A to B. */
 export async function compareVersions(workspaceId: string, aId: string, bId: string): Promise<Comparison> {
   const [a, b] = await Promise.all([getVersionById(workspaceId, aId), getVersionById(workspaceId, bId)]);
-  if (!a || !b) throw new ServiceError(404, "One of the versions to compare is not in this workspace.");
+  if (!a || !b) throw new ServiceError(404, "not-found", "One or both versions of this comparison are not in your workspace.");
   if (a.gait.robotId !== b.gait.robotId) {
-    throw new ServiceError(422, `These versions belong to gaits of different robots (${a.gait.robotName} and ${b.gait.robotName}); compare versions of one robot.`);
+    throw new ServiceError(422, "invalid", `These versions belong to gaits of different robots (${a.gait.robotName} and ${b.gait.robotName}); compare versions of one robot.`);
   }
   const [solvedA, solvedB] = await Promise.all([solveVersion(a), solveVersion(b)]);
   const [revisionA, revisionB] = await Promise.all(

@@ -10,7 +10,6 @@ import { PageHeader } from "~/components/common/PageHeader";
 import { ProfileEditor, type ProfileIssues } from "~/components/export/ProfileEditor";
 import { requireAccess } from "~/platform/access.server";
 import {
-  CalibrationInvalid,
   calibrationRobot,
   createProfile,
   deleteProfile,
@@ -18,7 +17,7 @@ import {
   profileFromForm,
   updateProfile,
 } from "~/features/robots/calibration.server";
-import { ServiceError, formAction } from "~/platform/errors.server";
+import { ServiceError, formAction, pageGuard, type FormError } from "~/platform/errors.server";
 import { can } from "~/platform/permissions";
 
 const params = z.object({ robotId: z.guid() });
@@ -26,12 +25,7 @@ const params = z.object({ robotId: z.guid() });
 async function robotOr404(workspaceId: string, raw: unknown) {
   const parsed = params.safeParse(raw);
   if (!parsed.success) throw data({ message: "There is no robot at this address." }, { status: 404 });
-  try {
-    return await calibrationRobot(workspaceId, parsed.data.robotId);
-  } catch (error) {
-    if (error instanceof ServiceError) throw data({ message: error.message }, { status: error.status });
-    throw error;
-  }
+  return pageGuard(() => calibrationRobot(workspaceId, parsed.data.robotId));
 }
 
 export async function loader({ request, params: raw }: Route.LoaderArgs) {
@@ -66,44 +60,39 @@ const intent = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("delete"), profileId: z.guid(), baseRevision: revision }),
 ]);
 
-type ActionResult = { error: string; issues?: ProfileIssues; field?: string };
+type ActionResult = FormError<{ issues?: ProfileIssues }>;
 
 export async function action({ request, params: raw }: Route.ActionArgs) {
   const member = await requireAccess(request, "robots.calibrate");
   const target = await robotOr404(member.workspace.id, raw);
   const form = await request.formData();
   const parsed = intent.safeParse(Object.fromEntries([...form].filter(([key]) => ["intent", "json", "profileId", "baseRevision"].includes(key))));
-  if (!parsed.success) return data<ActionResult>({ error: parsed.error.issues[0]?.message ?? "The form was incomplete." }, { status: 400 });
   const actor = { userId: member.user.id, workspaceId: member.workspace.id };
-  const command = parsed.data;
   const page = `/export/calibration/${target.id}`;
   return formAction(async () => {
-    try {
-      if (command.intent === "delete") {
-        const { name } = await deleteProfile(actor, target.id, command.profileId, command.baseRevision);
-        return redirect(`${page}?deleted=${encodeURIComponent(name)}`);
-      }
-      let json: unknown;
-      if (command.intent === "import") {
-        try {
-          json = JSON.parse(command.json);
-        } catch (error) {
-          return data<ActionResult>({ error: `The pasted text is not JSON: ${error instanceof Error ? error.message : String(error)}`, field: "json" }, { status: 400 });
-        }
-      } else {
-        const fromForm = profileFromForm(target.robot, form);
-        if (fromForm.issues.length) return data<ActionResult>({ error: "Some fields are not valid.", issues: fromForm.issues }, { status: 422 });
-        json = fromForm.json;
-      }
-      const saved =
-        command.intent === "update"
-          ? await updateProfile(actor, target.id, command.profileId, json, command.baseRevision)
-          : await createProfile(actor, target.id, json);
-      return redirect(`${page}?edit=${saved.id}&saved=${saved.revision}`);
-    } catch (error) {
-      if (error instanceof CalibrationInvalid) return data<ActionResult>({ error: error.message, issues: error.issues }, { status: 422 });
-      throw error;
+    if (!parsed.success) throw new ServiceError(400, "bad-request", parsed.error.issues[0]?.message ?? "The form was incomplete.");
+    const command = parsed.data;
+    if (command.intent === "delete") {
+      const { name } = await deleteProfile(actor, target.id, command.profileId, command.baseRevision);
+      return redirect(`${page}?deleted=${encodeURIComponent(name)}`);
     }
+    let json: unknown;
+    if (command.intent === "import") {
+      try {
+        json = JSON.parse(command.json);
+      } catch (error) {
+        throw new ServiceError(400, "bad-request", `The pasted text is not JSON: ${error instanceof Error ? error.message : String(error)}`, { field: "json" });
+      }
+    } else {
+      const fromForm = profileFromForm(target.robot, form);
+      if (fromForm.issues.length) throw new ServiceError(422, "invalid", "Some fields are not valid.", { issues: fromForm.issues });
+      json = fromForm.json;
+    }
+    const saved =
+      command.intent === "update"
+        ? await updateProfile(actor, target.id, command.profileId, json, command.baseRevision)
+        : await createProfile(actor, target.id, json);
+    return redirect(`${page}?edit=${saved.id}&saved=${saved.revision}`);
   });
 }
 
@@ -197,7 +186,7 @@ export default function Calibration({ loaderData, actionData }: Route.ComponentP
               robot={robot}
               profile={current}
               readOnly={!canEdit}
-              issues={result?.issues ?? []}
+              issues={result?.details?.issues ?? []}
               busy={navigation.state === "submitting"}
             />
           ) : (

@@ -1,29 +1,18 @@
 // What the export and bring-up pages show for their query: the choices, the
 // table's checks and first rows, the download link and the build script's
 // command. Page composition only; the tables themselves come from
-// app/features/tables/tables.server.ts, the same code as the download API.
+// app/features/tables, the same code as the download API.
 import { z } from "zod";
 import { centreTable, sweepTable, type BenchTable } from "~/export";
 import { JOINT_NAMES, parseRobot, type JointName } from "~/kinematics";
 import { listProfiles } from "~/features/robots/calibration.server";
-import { ServiceError } from "~/platform/errors.server";
+import { attempt, ServiceError } from "~/platform/errors.server";
 import { newestRevisionInWorkspace } from "~/features/robots/robots.server";
-import {
-  TableError,
-  benchQuerySchema,
-  parseQuery,
-  prepareBenchTable,
-  tableVersionsOf,
-  prepareVersionTable,
-  releaseRecordOf,
-  renderBenchTable,
-  renderVersionTable,
-  tableQuerySchema,
-  type PreparedBench,
-  type ReleaseRecord,
-  type RenderedTable,
-  type TableQuery,
-} from "~/features/tables/tables.server";
+import { prepareBenchTable, renderBenchTable, type PreparedBench } from "~/features/tables/bench-tables.server";
+import { benchQuerySchema, parseQuery, tableQuerySchema, type TableQuery } from "~/features/tables/query";
+import { releaseRecordOf, type ReleaseRecord } from "~/features/tables/releases.server";
+import type { RenderedTable } from "~/features/tables/render.server";
+import { prepareVersionTable, renderVersionTable, tableVersionsOf } from "~/features/tables/version-table.server";
 
 /** Rows a page preview carries: the windowed list scrolls through them; the file holds every frame. */
 export const PREVIEW_ROWS = 2000;
@@ -67,20 +56,17 @@ export function previewOf(rendered: RenderedTable, limit = PREVIEW_ROWS) {
 
 export type PageProblem = { message: string; parameter: string | null; needsOverride: boolean; issues: { path: string; message: string }[] };
 
-function problemOf(error: unknown): PageProblem {
-  if (error instanceof TableError) {
-    const details = error.details ?? {};
-    const needsOverride = details.reason === "override-required";
-    return {
-      // The API's sentence names its query parameter; the page names its field.
-      message: needsOverride ? `${String(details.summary)}. To export it anyway, give an override reason; it is written into the table's header and the audit log.` : error.message,
-      parameter: typeof details.parameter === "string" ? details.parameter : null,
-      needsOverride,
-      issues: Array.isArray(details.issues) ? (details.issues as PageProblem["issues"]) : [],
-    };
-  }
-  if (error instanceof ServiceError) return { message: error.message, parameter: error.field ?? null, needsOverride: false, issues: [] };
-  throw error;
+/** A refusal as the page shows it, beside the form: the sentence, the field at fault, the issues. */
+function problemOf(refusal: ServiceError): PageProblem {
+  const details = refusal.record;
+  const needsOverride = refusal.code === "override-required";
+  return {
+    // The API's sentence names its query parameter; the page names its field.
+    message: needsOverride ? `${String(details.summary)}. To export it anyway, give an override reason; it is written into the table's header and the audit log.` : refusal.message,
+    parameter: typeof details.parameter === "string" ? details.parameter : (refusal.field ?? null),
+    needsOverride,
+    issues: details.issues ? [...details.issues] : [],
+  };
 }
 
 /** A page's GET form: empty fields are left out, fields of other forms are ignored. */
@@ -118,13 +104,9 @@ type GaitChoice = { id: string; name: string; robotId: string; robotName: string
 export async function exportPageData(workspaceId: string, search: URLSearchParams, publicUrl: string, gaitChoices: GaitChoice[]) {
   const gaitsWithVersions = gaitChoices.filter((gait) => gait.latestVersion !== null);
   let problem: PageProblem | null = null;
-  let query: z.output<typeof exportPageSchema>;
-  try {
-    query = parseQuery(exportPageSchema, formQuery(search, EXPORT_FORM_KEYS));
-  } catch (error) {
-    problem = problemOf(error);
-    query = { format: "csv", units: "deg" };
-  }
+  const parsed = await attempt(() => parseQuery(exportPageSchema, formQuery(search, EXPORT_FORM_KEYS)));
+  if (!parsed.ok) problem = problemOf(parsed.refusal);
+  const query: z.output<typeof exportPageSchema> = parsed.ok ? parsed.value : { format: "csv", units: "deg" };
   const gait = gaitsWithVersions.find((entry) => entry.id === query.gait) ?? gaitsWithVersions.find((entry) => entry.releasedVersion !== null) ?? gaitsWithVersions[0];
   const base = { gaits: gaitsWithVersions, problem, query: { format: query.format, units: query.units, rate: query.rate ?? null, profile: query.profile ?? null, override: query.override ?? null } };
   if (!gait) return { ...base, gait: null, version: null, versions: [], profiles: [], sequence: null, table: null, download: null, release: null };
@@ -135,11 +117,12 @@ export async function exportPageData(workspaceId: string, search: URLSearchParam
   const tableQuery: TableQuery = { format: query.format, units: query.units, rate: query.rate, profile, override: query.override };
   const apiPath = `/api/v1/gaits/${gait.id}/versions/${version}/table?${apiQueryString({ format: query.format, units: query.units, rate: query.rate, profile, override: query.override })}`;
 
-  let table: ReturnType<typeof previewOf> | null = null;
-  let sequence: { fps: number; cycleMs: number; loop: boolean } | null = null;
-  let release: (ReleaseRecord & { matches: boolean | null; path: string }) | null = null;
-  let download: { path: string; fileName: string; command: string } | null = null;
-  try {
+  // Filled in as far as the table gets: a refusal to print it still shows the sequence and the release record.
+  let table = null as ReturnType<typeof previewOf> | null;
+  let sequence = null as { fps: number; cycleMs: number; loop: boolean } | null;
+  let release = null as (ReleaseRecord & { matches: boolean | null; path: string }) | null;
+  let download = null as { path: string; fileName: string; command: string } | null;
+  const made = await attempt(async () => {
     const prepared = await prepareVersionTable(workspaceId, gait.id, version, tableQuery);
     sequence = { fps: prepared.sequence.fps, cycleMs: prepared.sequence.cycleMs, loop: prepared.sequence.loop };
     const record = await releaseRecordOf(prepared.version.id);
@@ -151,9 +134,8 @@ export async function exportPageData(workspaceId: string, search: URLSearchParam
       release.matches = release.tableSha256 === rendered.sha256;
     }
     download = { path: apiPath, fileName: rendered.fileName, command: curlCommand(`${publicUrl}${apiPath}`, rendered.fileName) };
-  } catch (error) {
-    problem = problemOf(error);
-  }
+  });
+  if (!made.ok) problem = problemOf(made.refusal);
   return {
     ...base,
     problem,
@@ -177,20 +159,16 @@ type RobotChoice = { id: string; name: string };
 /** Everything the bring-up page shows: the robot's joints, the bench table's checks and preview, the download. */
 export async function benchPageData(workspaceId: string, search: URLSearchParams, publicUrl: string, robotChoices: RobotChoice[]) {
   let problem: PageProblem | null = null;
-  let query: z.output<typeof benchPageSchema>;
-  try {
-    query = parseQuery(benchPageSchema, formQuery(search, BENCH_FORM_KEYS));
-  } catch (error) {
-    problem = problemOf(error);
-    query = parseQuery(benchPageSchema, new URLSearchParams());
-  }
+  const parsed = await attempt(() => parseQuery(benchPageSchema, formQuery(search, BENCH_FORM_KEYS)));
+  if (!parsed.ok) problem = problemOf(parsed.refusal);
+  const query = parsed.ok ? parsed.value : parseQuery(benchPageSchema, new URLSearchParams());
   const robotChoice = robotChoices.find((entry) => entry.id === query.robot) ?? robotChoices[0];
   const { robot: _robot, ...benchQuery } = query;
   const base = { robots: robotChoices, problem, query: { ...benchQuery, leg: benchQuery.leg ?? null, joint: benchQuery.joint ?? null, profile: benchQuery.profile ?? null, override: benchQuery.override ?? null } };
   if (!robotChoice) return { ...base, robot: null, legs: [], profiles: [], table: null, checks: null, download: null };
 
   const [row, profiles] = await Promise.all([newestRevisionInWorkspace(workspaceId, robotChoice.id), listProfiles(robotChoice.id)]);
-  if (!row) throw new TableError(404, `No robot ${robotChoice.id} in this workspace.`);
+  if (!row) throw new ServiceError(404, "not-found", `No robot ${robotChoice.id} in this workspace.`);
   const parsedRobot = parseRobot(row.definition);
   const legs = parsedRobot.ok
     ? parsedRobot.robot.legs.map((leg) => ({
@@ -211,21 +189,18 @@ export async function benchPageData(workspaceId: string, search: URLSearchParams
       ? { kind: "centre", seconds: query.seconds, fps: query.fps, format: query.format, units: query.units, profile: query.profile, override: query.override }
       : { kind: "sweep", leg: query.leg, joint: query.joint, speed: query.speed, dwell: query.dwell, fps: query.fps, hold: query.hold, format: query.format, units: query.units, profile: query.profile, override: query.override },
   )}`;
-  let table: ReturnType<typeof previewOf> | null = null;
-  let checks: { flags: { frame: number; kind: string; severity: string; message: string }[]; totalFlags: number; peakSpeedDegS: number | null; limitDegS: number | null; durationS: number } | null = null;
-  let download: { path: string; fileName: string; command: string } | null = null;
+  let table = null as ReturnType<typeof previewOf> | null;
+  let checks = null as { flags: { frame: number; kind: string; severity: string; message: string }[]; totalFlags: number; peakSpeedDegS: number | null; limitDegS: number | null; durationS: number } | null;
+  let download = null as { path: string; fileName: string; command: string } | null;
   if (query.kind === "sweep" && (!query.leg || !query.joint)) {
     problem ??= { message: "Choose the leg and the joint to sweep.", parameter: query.leg ? "joint" : "leg", needsOverride: false, issues: [] };
   } else {
-    try {
+    const made = await attempt(async () => {
       const prepared = await prepareBenchTable(workspaceId, robotChoice.id, benchQuery);
       // The checks are shown even when the table needs an override to be made.
-      let rendered: ReturnType<typeof renderBenchTable> | null = null;
-      try {
-        rendered = renderBenchTable(prepared);
-      } catch (error) {
-        problem = problemOf(error);
-      }
+      const printed = await attempt(() => renderBenchTable(prepared));
+      if (!printed.ok) problem = problemOf(printed.refusal);
+      const rendered = printed.ok ? printed.value : null;
       const bench = rendered?.bench ?? benchOnly(prepared);
       const joint = query.kind === "sweep" ? prepared.robot.legs.find((leg) => leg.id === query.leg)!.joints[query.joint!] : null;
       checks = {
@@ -239,9 +214,8 @@ export async function benchPageData(workspaceId: string, search: URLSearchParams
         table = previewOf(rendered);
         download = { path: apiPath, fileName: rendered.fileName, command: curlCommand(`${publicUrl}${apiPath}`, rendered.fileName) };
       }
-    } catch (error) {
-      problem = problemOf(error);
-    }
+    });
+    if (!made.ok) problem = problemOf(made.refusal);
   }
   return {
     ...base,

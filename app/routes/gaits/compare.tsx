@@ -1,5 +1,5 @@
 import { useCallback, useState } from "react";
-import { data, Link } from "react-router";
+import { Link } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/compare";
 import { ErrorPanel } from "~/components/common/ErrorPanel";
@@ -15,7 +15,7 @@ import { FlagGroupsTable } from "~/components/versions/FlagGroupsTable";
 import { StateBadge } from "~/components/versions/StateBadge";
 import { formatTime, shortHash } from "~/components/versions/format";
 import { requireAccess } from "~/platform/access.server";
-import { ServiceError } from "~/platform/errors.server";
+import { attempt, pageGuard } from "~/platform/errors.server";
 import { compareVersions, listComparableVersions, type Comparison, type ComparedVersion } from "~/features/versions/versions.server";
 
 const compareQuery = z.object({
@@ -28,20 +28,21 @@ export async function loader({ request }: Route.LoaderArgs) {
   const search = new URL(request.url).searchParams;
   const query = compareQuery.parse({ a: search.get("a") ?? undefined, b: search.get("b") ?? undefined });
   const versions = await listComparableVersions(workspace.id);
-  let comparison: Comparison | null = null;
-  let problem: string | null = null;
-  if (query.a && query.b) {
-    try {
-      comparison = await compareVersions(workspace.id, query.a, query.b);
-    } catch (error) {
-      if (!(error instanceof ServiceError)) throw error;
-      if (error.status === 404) throw data({ message: "One or both versions of this comparison are not in your workspace." }, { status: 404 });
-      problem = error.message;
+  return pageGuard(async () => {
+    let comparison: Comparison | null = null;
+    let problem: string | null = null;
+    if (query.a && query.b) {
+      const { a, b } = query;
+      const compared = await attempt(() => compareVersions(workspace.id, a, b));
+      // A version that is not there is the page's error; versions that cannot be compared are said beside the picker.
+      if (compared.ok) comparison = compared.value;
+      else if (compared.refusal.status === 404) throw compared.refusal;
+      else problem = compared.refusal.message;
+    } else if (search.has("a") || search.has("b")) {
+      problem = "Choose two versions, A and B.";
     }
-  } else if (search.has("a") || search.has("b")) {
-    problem = "Choose two versions, A and B.";
-  }
-  return { versions, a: query.a ?? null, b: query.b ?? null, comparison, problem };
+    return { versions, a: query.a ?? null, b: query.b ?? null, comparison, problem };
+  });
 }
 
 export const meta: Route.MetaFunction = ({ loaderData }) => {

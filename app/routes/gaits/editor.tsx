@@ -7,8 +7,8 @@ import type { Route } from "./+types/editor";
 import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { EditorScreen } from "~/components/editor/EditorScreen";
 import { requireAccess } from "~/platform/access.server";
-import { DraftInvalid, moveDraftToNewestRobot, readDraft } from "~/features/gaits/drafts.server";
-import { ServiceError, formAction, type FormError } from "~/platform/errors.server";
+import { moveDraftToNewestRobot, readDraft } from "~/features/gaits/drafts.server";
+import { ServiceError, formAction, pageGuard } from "~/platform/errors.server";
 import { can } from "~/platform/permissions";
 
 const gaitParams = z.object({ gaitId: z.guid({ error: "There is no gait at this address." }) });
@@ -22,7 +22,7 @@ function gaitIdOf(params: unknown): string {
 export async function loader({ request, params }: Route.LoaderArgs) {
   const { workspace, role } = await requireAccess(request, "gaits.read");
   const gaitId = gaitIdOf(params);
-  try {
+  return pageGuard(async () => {
     const draft = await readDraft(workspace.id, gaitId);
     return {
       gait: draft.gait,
@@ -35,10 +35,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
       newestRobotRevision: draft.newestRobotRevision,
       can: { edit: can(role, "gaits.edit"), commit: can(role, "versions.commit") },
     };
-  } catch (error) {
-    if (error instanceof ServiceError) throw data({ message: error.message }, { status: error.status });
-    throw error;
-  }
+  });
 }
 
 const moveForm = z.object({
@@ -50,15 +47,10 @@ export async function action({ request, params }: Route.ActionArgs) {
   const { user, workspace } = await requireAccess(request, "gaits.edit");
   const gaitId = gaitIdOf(params);
   const parsed = moveForm.safeParse(Object.fromEntries(await request.formData()));
-  if (!parsed.success) return data<FormError>({ error: parsed.error.issues[0].message }, { status: 400 });
   return formAction(async () => {
-    try {
-      const moved = await moveDraftToNewestRobot({ userId: user.id, workspaceId: workspace.id }, gaitId, parsed.data.baseRevision);
-      return { ok: true as const, ...moved };
-    } catch (error) {
-      if (error instanceof DraftInvalid) return data<FormError>({ error: error.message }, { status: 422 });
-      throw error;
-    }
+    if (!parsed.success) throw new ServiceError(400, "bad-request", parsed.error.issues[0].message);
+    const moved = await moveDraftToNewestRobot({ userId: user.id, workspaceId: workspace.id }, gaitId, parsed.data.baseRevision);
+    return { ok: true as const, ...moved };
   });
 }
 

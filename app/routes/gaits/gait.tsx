@@ -9,7 +9,7 @@ import { VersionFilters } from "~/components/versions/VersionFilters";
 import { VersionTable } from "~/components/versions/VersionTable";
 import { parseVersionQuery } from "~/components/versions/version-query";
 import { requireAccess } from "~/platform/access.server";
-import { formAction, type FormError } from "~/platform/errors.server";
+import { formAction, ServiceError, type FormError } from "~/platform/errors.server";
 import { can, type Action } from "~/platform/permissions";
 import { readIntentForm } from "~/platform/intent-form.server";
 import { commitDraft, getGait, listVersions, restoreDraft, versionAuthors } from "~/features/versions/versions.server";
@@ -73,14 +73,12 @@ export type GaitActionData = { ok: true; intent: "commit" | "restore"; notice: s
  * Answers { ok: true, intent, notice, … } or { error, field } with the refusal's status.
  */
 export async function action({ request, params }: Route.ActionArgs) {
-  const read = await readIntentForm(request, actionForm, INTENT_PERMISSIONS, "gaits.edit");
-  if (!read.ok) return read.response;
-  const { member, form } = read;
-  const parsed = gaitParams.safeParse(params);
-  if (!parsed.success) return data<FormError>({ error: "There is no gait at this address in your workspace." }, { status: 404 });
-  const gaitId = parsed.data.gaitId;
-  const committer = { userId: member.user.id, workspaceId: member.workspace.id };
   return formAction(async (): Promise<GaitActionData> => {
+    const { member, form } = await readIntentForm(request, actionForm, INTENT_PERMISSIONS, "gaits.edit");
+    const parsed = gaitParams.safeParse(params);
+    if (!parsed.success) throw new ServiceError(404, "not-found", "There is no gait at this address in your workspace.");
+    const gaitId = parsed.data.gaitId;
+    const committer = { userId: member.user.id, workspaceId: member.workspace.id };
     if (form.intent === "commit") {
       const version = await commitDraft(committer, gaitId, form.message, undefined, { draftRevision: form.draftRevision });
       return { ok: true, intent: "commit", notice: `Committed version ${version.number}.`, version };

@@ -2,14 +2,14 @@
 // parameters; the gait is created with that draft and opens in the editor.
 // Also takes the "keep mine as a copy" post from the editor (intent=copy).
 import { useMemo, useState } from "react";
-import { Form, Link, data, redirect, useNavigation } from "react-router";
+import { Form, Link, redirect, useNavigation } from "react-router";
 import type { Route } from "./+types/new";
 import { Notice } from "~/components/common/Notice";
 import { PageHeader } from "~/components/common/PageHeader";
 import { requireAccess } from "~/platform/access.server";
 import { copyForm, createGait, createGaitCopy, newGaitForm, robotChoices } from "~/features/gaits/new-gait.server";
 import { DEFAULT_PARAMS } from "~/features/gaits/editor/templates";
-import { formAction, type FormError } from "~/platform/errors.server";
+import { formAction, ServiceError } from "~/platform/errors.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const { workspace } = await requireAccess(request, "gaits.edit");
@@ -22,18 +22,20 @@ export async function action({ request }: Route.ActionArgs) {
   const { user, workspace } = await requireAccess(request, "gaits.edit");
   const form = Object.fromEntries(await request.formData());
   const actor = { userId: user.id, workspaceId: workspace.id };
-  if (form.intent === "copy") {
-    const parsed = copyForm.safeParse(form);
-    if (!parsed.success) return data<FormError>({ error: parsed.error.issues[0].message, field: String(parsed.error.issues[0].path[0] ?? "") }, { status: 422 });
-    return formAction(async () => redirect(`/gaits/${(await createGaitCopy(actor, parsed.data)).id}/edit`));
-  }
-  const parsed = newGaitForm.safeParse(form);
-  if (!parsed.success) {
-    const issue = parsed.error.issues[0];
-    const field = String(issue.path[0] ?? "");
-    return data<FormError>({ error: `${FIELD_LABELS[field] ?? field}: ${issue.message}`, field }, { status: 422 });
-  }
-  return formAction(async () => redirect(`/gaits/${(await createGait(actor, parsed.data)).id}/edit`));
+  return formAction(async () => {
+    if (form.intent === "copy") {
+      const parsed = copyForm.safeParse(form);
+      if (!parsed.success) throw new ServiceError(422, "invalid", parsed.error.issues[0].message, { field: String(parsed.error.issues[0].path[0] ?? "") });
+      return redirect(`/gaits/${(await createGaitCopy(actor, parsed.data)).id}/edit`);
+    }
+    const parsed = newGaitForm.safeParse(form);
+    if (!parsed.success) {
+      const issue = parsed.error.issues[0];
+      const field = String(issue.path[0] ?? "");
+      throw new ServiceError(422, "invalid", `${FIELD_LABELS[field] ?? field}: ${issue.message}`, { field });
+    }
+    return redirect(`/gaits/${(await createGait(actor, parsed.data)).id}/edit`);
+  });
 }
 
 export const meta: Route.MetaFunction = () => [{ title: "New gait · Gaitloom" }];

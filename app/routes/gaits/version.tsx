@@ -12,7 +12,7 @@ import { VersionFacts } from "~/components/versions/VersionFacts";
 import { formatTime } from "~/components/versions/format";
 import { requireAccess } from "~/platform/access.server";
 import { groupFlags } from "~/features/compare";
-import { formAction, type FormError } from "~/platform/errors.server";
+import { formAction, ServiceError, type FormError } from "~/platform/errors.server";
 import { can, type Action } from "~/platform/permissions";
 import { readIntentForm } from "~/platform/intent-form.server";
 import { approvalRules, approveVersion, releaseVersion, requestReview, reviewersFor, sendBackVersion } from "~/features/versions/review.server";
@@ -87,15 +87,12 @@ export type VersionActionData = { ok: true; intent: Intent; notice: string } | F
  *   intent=release, comment?                                        (versions.release)
  */
 export async function action({ request, params }: Route.ActionArgs) {
-  const read = await readIntentForm(request, actionForm, INTENT_PERMISSIONS, "versions.decide");
-  if (!read.ok) return read.response;
-  const { member, form: input } = read;
-  const parsed = versionParams.safeParse(params);
-  if (!parsed.success) return data<FormError>({ error: "There is no such version of a gait in your workspace." }, { status: 404 });
-  const version = await getVersion(member.workspace.id, parsed.data.gaitId, parsed.data.number);
-  if (!version) return data<FormError>({ error: "There is no such version of a gait in your workspace." }, { status: 404 });
   const mailNote = (mailed: boolean, whom: string) => (mailed ? ` ${whom} has been e-mailed.` : "");
   return formAction(async (): Promise<VersionActionData> => {
+    const { member, form: input } = await readIntentForm(request, actionForm, INTENT_PERMISSIONS, "versions.decide");
+    const parsed = versionParams.safeParse(params);
+    const version = parsed.success ? await getVersion(member.workspace.id, parsed.data.gaitId, parsed.data.number) : null;
+    if (!version) throw new ServiceError(404, "not-found", "There is no such version of a gait in your workspace.");
     switch (input.intent) {
       case "request-review": {
         const outcome = await requestReview(member, version.id, { reviewerId: input.reviewerId, comment: input.comment, compareWithId: input.compareWithId || null });

@@ -1,20 +1,15 @@
 // /invitations/:token — the link from the invitation e-mail.
-import { Form, data, redirect } from "react-router";
+import { Form, redirect } from "react-router";
 import type { Route } from "./+types/accept";
 import { requireUser } from "~/platform/access.server";
-import { ServiceError, formAction } from "~/platform/errors.server";
+import { formAction, pageGuard } from "~/platform/errors.server";
 import { acceptInvitation, invitationForToken } from "~/features/accounts/invitations.server";
 import { ROLE_LABELS } from "~/platform/permissions";
 import { commitSession, readSession } from "~/platform/session.server";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const user = await requireUser(request);
-  try {
-    return { invitation: await invitationForToken(params.token), you: { name: user.name, email: user.email } };
-  } catch (error) {
-    if (error instanceof ServiceError) throw data({ message: error.message }, { status: error.status });
-    throw error;
-  }
+  return pageGuard(async () => ({ invitation: await invitationForToken(params.token), you: { name: user.name, email: user.email } }));
 }
 
 export async function action({ request, params }: Route.ActionArgs) {

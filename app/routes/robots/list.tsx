@@ -1,4 +1,4 @@
-import { data, Link, redirect, useSearchParams } from "react-router";
+import { Link, redirect, useSearchParams } from "react-router";
 import type { Route } from "./+types/list";
 import { EmptyState } from "~/components/common/EmptyState";
 import { PageHeader } from "~/components/common/PageHeader";
@@ -6,9 +6,9 @@ import { AddRobotPanel, type AddPanel } from "~/components/robots/AddRobotPanels
 import { requireAccess } from "~/platform/access.server";
 import { can } from "~/platform/permissions";
 import { addRobot, ADD_BODY_LIMIT_BYTES } from "~/features/robots/add.server";
-import { formatBytes } from "~/features/robots/files";
 import { readFormWithin } from "~/platform/body.server";
-import type { AddResult } from "~/features/robots/results";
+import { formAction } from "~/platform/errors.server";
+import type { AddRefusalDetails, ImportedRobot } from "~/features/robots/results";
 import { listRobots } from "~/features/robots/robots.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -18,16 +18,10 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export async function action({ request }: Route.ActionArgs) {
   const member = await requireAccess(request, "robots.edit");
-  const body = await readFormWithin(request, ADD_BODY_LIMIT_BYTES);
-  if (!body.ok) {
-    const message = body.tooLarge
-      ? `The upload is ${formatBytes(body.bytes)}: a robot definition may be up to 256 KB and a URDF file up to 1 MB. Nothing was saved.`
-      : body.message;
-    return data<AddResult>({ ok: false, intent: null, message }, { status: body.tooLarge ? 413 : 400 });
-  }
-  const answer = await addRobot(body.form, member);
-  if ("redirectTo" in answer) throw redirect(answer.redirectTo);
-  return data<AddResult>(answer.result, { status: answer.status });
+  return formAction<ImportedRobot | Response, AddRefusalDetails>(async () => {
+    const added = await addRobot(await readFormWithin(request, ADD_BODY_LIMIT_BYTES), member);
+    return "redirectTo" in added ? redirect(added.redirectTo) : added;
+  });
 }
 
 export const meta: Route.MetaFunction = () => [{ title: "Robots · Gaitloom" }];

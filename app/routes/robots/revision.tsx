@@ -7,9 +7,9 @@ import { RobotEditor } from "~/components/robots/RobotForm";
 import { requireAccess } from "~/platform/access.server";
 import { can } from "~/platform/permissions";
 import { readFormWithin } from "~/platform/body.server";
+import { formAction, ServiceError } from "~/platform/errors.server";
 import { revisionParams } from "~/features/robots/params";
-import type { SaveResult } from "~/features/robots/results";
-import { restoreAnswer } from "~/features/robots/save.server";
+import { restoreFromForm } from "~/features/robots/save.server";
 import { getRevision, getRobot } from "~/features/robots/robots.server";
 
 const notFound = () => data({ message: "There is no such robot revision in your workspace." }, { status: 404 });
@@ -28,16 +28,14 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 
 export async function action({ request, params }: Route.ActionArgs) {
   const member = await requireAccess(request, "robots.calibrate");
-  const parsed = revisionParams.safeParse(params);
-  if (!parsed.success) return data<SaveResult>({ ok: false, code: "not-found", message: "There is no such robot revision in your workspace." }, { status: 404 });
-  const body = await readFormWithin(request, 16 * 1024);
-  if (!body.ok) return data<SaveResult>({ ok: false, code: body.tooLarge ? "too-large" : "bad-request", message: body.tooLarge ? "The request is too large." : body.message }, { status: body.tooLarge ? 413 : 400 });
-  if (body.form.get("intent") !== "restore") {
-    return data<SaveResult>({ ok: false, code: "bad-request", message: `Unknown intent ${JSON.stringify(body.form.get("intent"))}: expected "restore".` }, { status: 400 });
-  }
-  const answer = await restoreAnswer(body.form, { member, robotId: parsed.data.robotId, number: parsed.data.number });
-  if (answer.result.ok) throw redirect(`/robots/${parsed.data.robotId}`);
-  return data<SaveResult>(answer.result, { status: answer.status });
+  return formAction(async () => {
+    const parsed = revisionParams.safeParse(params);
+    if (!parsed.success) throw new ServiceError(404, "not-found", "There is no such robot revision in your workspace.");
+    const body = await readFormWithin(request, 16 * 1024);
+    if (!body.ok) throw body.tooLarge ? new ServiceError(413, "too-large", "The request is too large.") : new ServiceError(400, "bad-request", body.message);
+    await restoreFromForm(body.form, { member, robotId: parsed.data.robotId, number: parsed.data.number });
+    return redirect(`/robots/${parsed.data.robotId}`);
+  });
 }
 
 export const meta: Route.MetaFunction = ({ loaderData }) => [
@@ -78,10 +76,10 @@ export default function RevisionPage({ loaderData, actionData }: Route.Component
           </Form>
         ) : null}
       </div>
-      {actionData && !actionData.ok ? (
+      {actionData ? (
         <p role="alert" className="mb-4 rounded-md border border-danger bg-danger-soft p-3 text-sm text-danger">
           <span aria-hidden>⚠ </span>
-          {actionData.message}
+          {actionData.error}
         </p>
       ) : null}
       <RobotEditor key={revision.number} robotId={robot.id} initial={revision.definition} baseRevision={latestNumber} mode="read" />

@@ -7,9 +7,10 @@ import { RobotEditor } from "~/components/robots/RobotForm";
 import { requireAccess } from "~/platform/access.server";
 import { can } from "~/platform/permissions";
 import { readFormWithin } from "~/platform/body.server";
+import { formAction, ServiceError } from "~/platform/errors.server";
 import { robotParams } from "~/features/robots/params";
-import type { SaveResult } from "~/features/robots/results";
-import { saveAnswer, SAVE_BODY_LIMIT_BYTES } from "~/features/robots/save.server";
+import type { SaveRefusalDetails, SavedRevision } from "~/features/robots/results";
+import { saveFromForm, SAVE_BODY_LIMIT_BYTES } from "~/features/robots/save.server";
 import { getRobot } from "~/features/robots/robots.server";
 
 const notFound = () => data({ message: "There is no robot at this address in your workspace." }, { status: 404 });
@@ -28,11 +29,11 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 
 export async function action({ request, params }: Route.ActionArgs) {
   const member = await requireAccess(request, "robots.calibrate");
-  const parsed = robotParams.safeParse(params);
-  if (!parsed.success) return data<SaveResult>({ ok: false, code: "not-found", message: "There is no robot at this address in your workspace." }, { status: 404 });
-  const body = await readFormWithin(request, SAVE_BODY_LIMIT_BYTES);
-  const answer = await saveAnswer(body, { member, robotId: parsed.data.robotId });
-  return data<SaveResult>(answer.result, { status: answer.status });
+  return formAction<SavedRevision, SaveRefusalDetails>(async () => {
+    const parsed = robotParams.safeParse(params);
+    if (!parsed.success) throw new ServiceError(404, "not-found", "There is no robot at this address in your workspace.");
+    return saveFromForm(await readFormWithin(request, SAVE_BODY_LIMIT_BYTES), { member, robotId: parsed.data.robotId });
+  });
 }
 
 export const meta: Route.MetaFunction = ({ loaderData }) => [{ title: `${loaderData?.robot.name ?? "Robot"} · Robots · Gaitloom` }];

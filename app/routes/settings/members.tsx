@@ -1,10 +1,10 @@
 // /settings/members: who is in the workspace, their roles, and invitations.
-import { Form, data, useNavigation } from "react-router";
+import { Form, useNavigation } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/members";
 import { Notice } from "~/components/common/Notice";
 import { requireAccess } from "~/platform/access.server";
-import { formAction } from "~/platform/errors.server";
+import { formAction, ServiceError } from "~/platform/errors.server";
 import { invite, listInvitations, resendInvitation, revokeInvitation } from "~/features/accounts/invitations.server";
 import { changeRole, listMembers, parseRole, removeMember } from "~/features/accounts/members.server";
 import { type Action, ROLES, ROLE_LABELS, can, invitableRoles } from "~/platform/permissions";
@@ -42,13 +42,10 @@ const needs: Record<z.infer<typeof input>["intent"], Action> = {
 export async function action({ request }: Route.ActionArgs) {
   const form = Object.fromEntries(await request.formData());
   const parsed = input.safeParse(form);
-  if (!parsed.success) {
-    await requireAccess(request, "members.read");
-    return data({ error: `The form was incomplete: ${parsed.error.issues[0]?.message ?? "unknown field"}` }, { status: 400 });
-  }
-  const command = parsed.data;
-  const member = await requireAccess(request, needs[command.intent]);
+  const member = await requireAccess(request, parsed.success ? needs[parsed.data.intent] : "members.read");
   return formAction(async () => {
+    if (!parsed.success) throw new ServiceError(400, "bad-request", `The form was incomplete: ${parsed.error.issues[0]?.message ?? "unknown field"}`);
+    const command = parsed.data;
     switch (command.intent) {
       case "change-role":
         await changeRole(member, command.userId, parseRole(command.role));

@@ -1,11 +1,11 @@
 // /settings/tokens: personal API tokens for build scripts (owner, lead, firmware).
-import { Form, data } from "react-router";
+import { Form } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/tokens";
 import { Notice } from "~/components/common/Notice";
 import { requireAccess } from "~/platform/access.server";
 import { config } from "~/platform/config.server";
-import { formAction } from "~/platform/errors.server";
+import { formAction, ServiceError } from "~/platform/errors.server";
 import { createToken, listTokens, revokeToken } from "~/features/accounts/tokens.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -21,9 +21,9 @@ const input = z.discriminatedUnion("intent", [
 export async function action({ request }: Route.ActionArgs) {
   const member = await requireAccess(request, "tokens.manage");
   const parsed = input.safeParse(Object.fromEntries(await request.formData()));
-  if (!parsed.success) return data({ error: parsed.error.issues[0]?.message ?? "The form was incomplete." }, { status: 400 });
-  const command = parsed.data;
   return formAction(async () => {
+    if (!parsed.success) throw new ServiceError(400, "bad-request", parsed.error.issues[0]?.message ?? "The form was incomplete.");
+    const command = parsed.data;
     if (command.intent === "create") {
       const { token, row } = await createToken(member, command.name);
       return { created: { token, name: row.name } };

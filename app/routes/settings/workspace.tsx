@@ -1,9 +1,9 @@
-import { Form, data, redirect } from "react-router";
+import { Form, redirect } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/workspace";
 import { Notice } from "~/components/common/Notice";
 import { requireAccess } from "~/platform/access.server";
-import { formAction } from "~/platform/errors.server";
+import { formAction, ServiceError } from "~/platform/errors.server";
 import { can } from "~/platform/permissions";
 import { renameWorkspace, summarizeWorkspace } from "~/features/accounts/workspaces.server";
 
@@ -17,8 +17,8 @@ const input = z.object({ name: z.string() });
 export async function action({ request }: Route.ActionArgs) {
   const member = await requireAccess(request, "workspace.manage");
   const parsed = input.safeParse(Object.fromEntries(await request.formData()));
-  if (!parsed.success) return data({ error: "Give the workspace a name." }, { status: 400 });
   return formAction(async () => {
+    if (!parsed.success) throw new ServiceError(400, "bad-request", "Give the workspace a name.");
     await renameWorkspace(member.user, member.workspace, parsed.data.name);
     return redirect("/settings");
   });

@@ -56,7 +56,7 @@ describe("the new-gait page", () => {
   test("refusals name the field: a taken name (409), a template the robot does not suit (422), a bad number (422)", async () => {
     const taken = await post("lead", { intent: "create", robotId: ids.robotIds["Pier crawler"], name: "Tripod cruise", template: "tripod" });
     expect(taken.status).toBe(409);
-    expect(taken.body).toEqual({ error: "This robot already has a gait named “Tripod cruise”; choose another name.", field: "name" });
+    expect(taken.body).toMatchObject({ error: "This robot already has a gait named “Tripod cruise”; choose another name.", code: "name-taken", field: "name" });
 
     const unsuited = await post("lead", { intent: "create", robotId: ids.robotIds["Pier crawler"], name: unique("Trot"), template: "trot" });
     expect(unsuited.status).toBe(422);
@@ -65,7 +65,7 @@ describe("the new-gait page", () => {
 
     const badNumber = await post("lead", { intent: "create", robotId: ids.robotIds["Pier crawler"], name: unique("Odd"), template: "wave", cycleMs: "fast" });
     expect(badNumber.status).toBe(422);
-    expect(badNumber.body).toEqual({ error: "Cycle time (ms): must be a number", field: "cycleMs" });
+    expect(badNumber.body).toMatchObject({ error: "Cycle time (ms): must be a number", code: "invalid", field: "cycleMs" });
   });
 
   test("keep mine as a copy: a new gait on the same robot revision holding the posted sequence", async () => {

@@ -2,12 +2,12 @@
 // page's form and the service; checked against the robot (schema, legs,
 // channels) with the issues by path; optimistic concurrency on `revision`;
 // audit entries; and the read-only API list.
-import { eq } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { calibrationProfiles } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
 import { act, demoIds, load, requestsAs, type DemoIds } from "../../support/access-matrix";
-import { CalibrationInvalid, createProfile, deleteProfile, listProfiles, updateProfile } from "~/features/robots/calibration.server";
+import { createProfile, deleteProfile, listProfiles, updateProfile } from "~/features/robots/calibration.server";
 import { database } from "~/platform/db.server";
 import { ServiceError } from "~/platform/errors.server";
 import * as apiList from "~/routes/api.v1/export/calibration-profiles";
@@ -81,24 +81,24 @@ describe("through the page's form", () => {
     const name = unique("SN-bad");
     const outcome = await post("firmware", { intent: "create", name, "joints.LF.coxa.trimDeg": "50", "joints.RF.femur.channel": "two" });
     expect(outcome.status).toBe(422);
-    expect(outcome.body.issues).toEqual([{ path: "joints.RF.femur.channel", message: 'must be a whole channel number (got "two")' }]);
+    expect(outcome.body.details.issues).toEqual([{ path: "joints.RF.femur.channel", message: 'must be a whole channel number (got "two")' }]);
     const schema = await post("firmware", { intent: "create", name, "joints.LF.coxa.trimDeg": "50" });
     expect(schema.status).toBe(422);
-    expect(schema.body.issues[0].path).toBe("joints.LF.coxa.trimDeg");
-    expect(schema.body.issues[0].message).toMatch(/45/);
+    expect(schema.body.details.issues[0].path).toBe("joints.LF.coxa.trimDeg");
+    expect(schema.body.details.issues[0].message).toMatch(/45/);
     expect(await database().select().from(calibrationProfiles).where(eq(calibrationProfiles.name, name))).toEqual([]);
   });
 
   test("two joints on one channel: refused, naming the channel", async () => {
     const outcome = await post("firmware", { intent: "create", name: unique("SN-dup"), "joints.LF.coxa.channel": "1" });
     expect(outcome.status).toBe(422);
-    expect(JSON.stringify(outcome.body.issues)).toMatch(/channel 1/);
+    expect(JSON.stringify(outcome.body.details.issues)).toMatch(/channel 1/);
   });
 
   test("a pasted JSON profile naming a leg the robot lacks: the issue at joints.<leg>", async () => {
     const outcome = await post("firmware", { intent: "import", json: JSON.stringify({ name: unique("SN-json"), joints: { LM: { coxa: { trimDeg: 1 } } } }) });
     expect(outcome.status).toBe(422);
-    expect(outcome.body.issues[0].path).toBe("joints.LM");
+    expect(outcome.body.details.issues[0].path).toBe("joints.LM");
     expect((await post("firmware", { intent: "import", json: "{ nope" })).body.error).toMatch(/not JSON/);
   });
 
@@ -154,6 +154,39 @@ describe("the service", () => {
     expect((await auditEntries("calibration.updated", 5)).filter((entry) => (entry.details as any).profileId === created.id)).toHaveLength(1);
   });
 
+  test("two creates of one name that both pass the name check: one wins, the other is told (409), never a 500", async () => {
+    const name = unique("SN-race");
+    let locked!: () => void;
+    let release!: () => void;
+    const lockHeld = new Promise<void>((resolve) => (locked = resolve));
+    const released = new Promise<void>((resolve) => (release = resolve));
+    // SHARE mode lets both name checks read but holds both INSERTs, so neither
+    // check can see the other's row: only the unique constraint tells them apart.
+    const blocker = database().transaction(async (tx) => {
+      await tx.execute(sql`lock table calibration_profiles in share mode`);
+      locked();
+      await released;
+    });
+    await lockHeld;
+    const creates = [1, 2].map(() => createProfile(actor, robotId, { name, joints: {} }));
+    const settled = Promise.allSettled(creates);
+    for (let waiting = 0; waiting < 2; ) {
+      await new Promise((resolve) => setTimeout(resolve, 20));
+      const [row] = await database().execute<{ count: number }>(
+        sql`select count(*)::int as count from pg_locks where relation = 'calibration_profiles'::regclass and not granted`,
+      );
+      waiting = row.count;
+    }
+    release();
+    await blocker;
+    const results = await settled;
+    expect(results.filter((result) => result.status === "fulfilled")).toHaveLength(1);
+    const refused = results.find((result) => result.status === "rejected") as PromiseRejectedResult;
+    expect(refused.reason).toBeInstanceOf(ServiceError);
+    expect(refused.reason).toMatchObject({ status: 409, details: { field: "name" } });
+    expect((await listProfiles(robotId)).filter((entry) => entry.name === name)).toHaveLength(1);
+  });
+
   test("another workspace's actor cannot touch the robot (404)", async () => {
     const error = await thrown(() => createProfile({ userId: actor.userId, workspaceId: "00000000-0000-4000-8000-000000000000" }, robotId, { name: "x", joints: {} }));
     expect((error as ServiceError).status).toBe(404);
@@ -161,10 +194,11 @@ describe("the service", () => {
 
   test("the checks: schema issues by path, and a name longer than 100 characters", async () => {
     const error = await thrown(() => createProfile(actor, robotId, { name: "x".repeat(101), joints: { LF: { knee: {} } } }));
-    expect(error).toBeInstanceOf(CalibrationInvalid);
-    expect((error as CalibrationInvalid).issues.map((issue) => issue.path)).toContain("joints.LF.knee");
+    expect(error).toBeInstanceOf(ServiceError);
+    expect(error).toMatchObject({ status: 422, code: "invalid" });
+    expect((error as ServiceError).record.issues?.map((issue) => issue.path)).toContain("joints.LF.knee");
     const long = await thrown(() => createProfile(actor, robotId, { name: "x".repeat(101), joints: {} }));
-    expect((long as CalibrationInvalid).issues).toEqual([{ path: "name", message: "must be at most 100 characters" }]);
+    expect((long as ServiceError).record.issues).toEqual([{ path: "name", message: "must be at most 100 characters" }]);
   });
 
   test("delete by the service", async () => {

@@ -12,7 +12,9 @@ import { EXPORTER_VERSION } from "~/export";
 import { database } from "~/platform/db.server";
 import { ServiceError } from "~/platform/errors.server";
 import { resetRateLimits } from "~/platform/rate-limit.server";
-import { RELEASE_TABLE, SOLVER_VERSION, recordReleaseTable } from "~/features/tables/tables.server";
+import { SOLVER_VERSION } from "~/gait";
+import { RELEASE_TABLE } from "~/features/tables/query";
+import { recordReleaseTable } from "~/features/tables/releases.server";
 import * as exportPage from "~/routes/export/page";
 import { bearer, getTable, sha256, storedVersion, tablePath, tokenFor } from "./support";
 

@@ -10,7 +10,7 @@ import { solveSequence } from "~/gait";
 import { createProfile, updateProfile } from "~/features/robots/calibration.server";
 import { database } from "~/platform/db.server";
 import { resetRateLimits } from "~/platform/rate-limit.server";
-import { SOLVER_VERSION } from "~/features/tables/tables.server";
+import { SOLVER_VERSION } from "~/gait";
 import { auditEntries, bearer, foreignOwnerToken, getTable, sha256, storedVersion, tablePath, tokenFor, unique } from "./support";
 
 let ids: DemoIds;

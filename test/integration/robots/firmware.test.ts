@@ -70,8 +70,8 @@ describe("firmware saves calibration only", () => {
     const answer = await saveAsFirmware(change);
     expect(answer.status).toBe(403);
     expect(answer.body.code).toBe("forbidden");
-    expect(answer.body.message).toMatch(/^Firmware can change only zero offsets and servo mapping; this save also changes /);
-    expect(answer.body.message).toMatch(expected);
+    expect(answer.body.error).toMatch(/^Firmware can change only zero offsets and servo mapping; this save also changes /);
+    expect(answer.body.error).toMatch(expected);
     expect(await revisionCount()).toBe(count);
   });
 
@@ -82,7 +82,7 @@ describe("firmware saves calibration only", () => {
       copy.legs[1].tibia = 125;
     });
     expect(answer.status).toBe(403);
-    expect(answer.body.message).toBe(
+    expect(answer.body.error).toBe(
       "Firmware can change only zero offsets and servo mapping; this save also changes legs[0].tibia (124 → 125) and 1 more field (legs[1].tibia). Nothing was saved.",
     );
   });

@@ -74,8 +74,8 @@ describe("saving a robot", () => {
     expect([a.status, b.status].sort()).toEqual([200, 409]);
     const lost = a.status === 409 ? a : b;
     const winner = a.status === 409 ? "Mara Lindqvist" : "Theo Brandt";
-    expect(lost.body).toMatchObject({ ok: false, code: "stale", baseRevision: base.number, latest: { number: base.number + 1, authorName: winner } });
-    expect(lost.body.message).toMatch(
+    expect(lost.body).toMatchObject({ code: "stale", details: { baseRevision: base.number, latest: { number: base.number + 1, authorName: winner } } });
+    expect(lost.body.error).toMatch(
       new RegExp(`^Revision ${base.number + 1} was saved by ${winner} at \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d UTC while you were editing revision ${base.number}\\. Nothing was saved\\.$`),
     );
     expect(await revisionCount()).toBe(count + 1);
@@ -109,7 +109,7 @@ describe("saving a robot", () => {
     const count = await revisionCount();
     const taken = await save("animator", crawlerId, { baseRevision: String(next.number), definition: edited(next.definition, (copy) => (copy.name = "Quay walker")) });
     expect(taken.status).toBe(409);
-    expect(taken.body).toMatchObject({ ok: false, code: "name-taken", message: 'Another robot in this workspace is already called "Quay walker": give this one another name. Nothing was saved.' });
+    expect(taken.body).toMatchObject({ code: "name-taken", error: 'Another robot in this workspace is already called "Quay walker": give this one another name. Nothing was saved.' });
     expect(await revisionCount()).toBe(count);
   });
 });
@@ -127,8 +127,8 @@ describe("bad saves are refused with what and where, and write nothing", () => {
       }),
     });
     expect(answer.status).toBe(422);
-    expect(answer.body).toMatchObject({ ok: false, code: "invalid", message: "The definition has 2 problems. Nothing was saved." });
-    expect(answer.body.issues).toEqual(
+    expect(answer.body).toMatchObject({ code: "invalid", error: "The definition has 2 problems. Nothing was saved." });
+    expect(answer.body.details.issues).toEqual(
       expect.arrayContaining([
         { path: "legs[0].tibia", message: "must be positive (got -1)" },
         { path: "legs[2].joints.femur.minDeg", message: "must be below maxDeg (got 40 ≥ 30)" },
@@ -141,13 +141,13 @@ describe("bad saves are refused with what and where, and write nothing", () => {
     const latest = await latestOf(crawlerId);
     const notJson = await save("animator", crawlerId, { baseRevision: String(latest.number), definition: "{ legs: " });
     expect(notJson.status).toBe(400);
-    expect(notJson.body.message).toBe("Cannot save: the definition is not valid JSON: unexpected \"l\" at line 1, column 3.");
+    expect(notJson.body.error).toBe("Cannot save: the definition is not valid JSON: unexpected \"l\" at line 1, column 3.");
     const noBase = await save("animator", crawlerId, { definition: JSON.stringify(latest.definition) });
     expect(noBase.status).toBe(400);
-    expect(noBase.body.message).toBe("Cannot save: baseRevision is required: the revision the edits started from.");
+    expect(noBase.body.error).toBe("Cannot save: baseRevision is required: the revision the edits started from.");
     const same = await save("animator", crawlerId, { baseRevision: String(latest.number), definition: JSON.stringify(latest.definition) });
     expect(same.status).toBe(422);
-    expect(same.body.message).toBe(`Nothing changed since revision ${latest.number}, so nothing was saved.`);
+    expect(same.body.error).toBe(`Nothing changed since revision ${latest.number}, so nothing was saved.`);
   });
 
   test("a body over the limit: 413", async () => {
@@ -157,7 +157,7 @@ describe("bad saves are refused with what and where, and write nothing", () => {
       definition: edited(latest.definition, (copy) => (copy.description = "x".repeat(300 * 1024))),
     });
     expect(answer.status).toBe(413);
-    expect(answer.body.message).toMatch(/^The save is [\d.]+ KB; a robot definition may be up to 256 KB\. Nothing was saved\.$/);
+    expect(answer.body.error).toMatch(/^The save is [\d.]+ KB; a robot definition may be up to 256 KB\. Nothing was saved\.$/);
   });
 
   test("an unknown robot, a malformed id and another workspace's robot are all 404", async () => {

@@ -60,8 +60,8 @@ describe("upload a robot definition", () => {
     delete broken.standHeight;
     const answer = await unchanged(() => upload({ file: jsonFile(broken) }));
     expect(answer.status).toBe(422);
-    expect(answer.body).toMatchObject({ ok: false, intent: "upload", message: "The definition has 3 problems. Nothing was saved." });
-    expect(answer.body.issues).toEqual([
+    expect(answer.body).toMatchObject({ code: "invalid", error: "The definition has 3 problems. Nothing was saved." });
+    expect(answer.body.details.issues).toEqual([
       { path: "standHeight", message: "is required" },
       { path: "legs[0].coxaLength", message: "is not a known field (check the spelling)" },
       { path: "legs[2].joints.femur.minDeg", message: "must be below maxDeg (got 40 ≥ 30)" },
@@ -76,7 +76,7 @@ describe("upload a robot definition", () => {
     broken.legs[1].id = "LF";
     const answer = await unchanged(() => upload({ file: jsonFile(broken) }));
     expect(answer.status).toBe(422);
-    expect(answer.body.issues).toEqual([
+    expect(answer.body.details.issues).toEqual([
       { path: "legs[2].joints.femur.minDeg", message: "must be below maxDeg (got 40 ≥ 30)" },
       { path: "legs[1].id", message: 'must be unique (got "LF", also legs[0])' },
       { path: "rest.LM", message: 'must name a leg (no leg "LM")' },
@@ -86,7 +86,7 @@ describe("upload a robot definition", () => {
   test("not JSON: 400 with the line and column", async () => {
     const answer = await unchanged(() => upload({ file: jsonFile('{\n  "format": "gaitloom.robot/1",\n  "name": oops\n}', "oops.json") }));
     expect(answer.status).toBe(400);
-    expect(answer.body.message).toBe(`oops.json is not valid JSON: unexpected "o" at line 3, column 11. Nothing was saved.`);
+    expect(answer.body.error).toBe(`oops.json is not valid JSON: unexpected "o" at line 3, column 11. Nothing was saved.`);
   });
 
   test("a file over 256 KB: 413, nothing saved", async () => {
@@ -94,19 +94,19 @@ describe("upload a robot definition", () => {
     const padded = JSON.stringify(big) + " ".repeat(260 * 1024);
     const answer = await unchanged(() => upload({ file: jsonFile(padded, "big.json") }));
     expect(answer.status).toBe(413);
-    expect(answer.body.message).toMatch(/^big\.json is [\d.]+ KB; a robot definition \(JSON\) may be up to 256 KB\. Nothing was saved\.$/);
+    expect(answer.body.error).toMatch(/^big\.json is [\d.]+ KB; a robot definition \(JSON\) may be up to 256 KB\. Nothing was saved\.$/);
   });
 
   test("a request body over every limit is refused before it is read: 413", async () => {
     const answer = await unchanged(() => upload({ file: jsonFile(" ".repeat(1200 * 1024), "huge.json") }));
     expect(answer.status).toBe(413);
-    expect(answer.body).toMatchObject({ ok: false, intent: null });
+    expect(answer.body).toMatchObject({ code: "too-large" });
   });
 
   test("no file, an empty file: 400", async () => {
     const none = await unchanged(() => upload({}));
     expect(none.status).toBe(400);
-    expect(none.body.message).toBe("Choose a robot definition (JSON) to upload.");
+    expect(none.body.error).toBe("Choose a robot definition (JSON) to upload.");
     const empty = await unchanged(() => upload({ file: new File([], "empty.json") }));
     expect(empty.status).toBe(400);
   });
@@ -114,7 +114,7 @@ describe("upload a robot definition", () => {
   test("a name another robot has: 409, nothing saved", async () => {
     const answer = await unchanged(() => upload({ file: jsonFile(demoJson("pier-crawler.json")) }));
     expect(answer.status).toBe(409);
-    expect(answer.body.message).toBe('Another robot in this workspace is already called "Pier crawler": give this one another name. Nothing was saved.');
+    expect(answer.body.error).toBe('Another robot in this workspace is already called "Pier crawler": give this one another name. Nothing was saved.');
   });
 
   test.each(["firmware", "viewer"] as const)("%s may not upload: 403, nothing saved", async (caller) => {
@@ -152,10 +152,10 @@ describe("new robot", () => {
   test("no name, an unknown source, another workspace's robot: refused, nothing saved", async () => {
     const noName = await unchanged(() => create({ name: "  ", source: "starter-6" }));
     expect(noName.status).toBe(400);
-    expect(noName.body.message).toBe("Cannot create the robot: give the robot a name.");
+    expect(noName.body.error).toBe("Cannot create the robot: give the robot a name.");
     const badSource = await unchanged(() => create({ name: uniqueName("X"), source: "starter-5" }));
     expect(badSource.status).toBe(400);
-    expect(badSource.body.message).toBe("Cannot create the robot: choose what the new robot starts from.");
+    expect(badSource.body.error).toBe("Cannot create the robot: choose what the new robot starts from.");
     const missing = await unchanged(() => create({ name: uniqueName("X"), source: "robot-00000000-0000-4000-8000-000000000000" }));
     expect(missing.status).toBe(404);
     const unknownIntent = await unchanged(() => create({ intent: "explode", name: "x" }));

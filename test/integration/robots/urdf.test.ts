@@ -31,7 +31,7 @@ describe("URDF import", () => {
     expect(answer.status).toBe(200);
     const expected = importUrdf(fixture("test-crab.urdf"), { name });
     if (!expected.ok) throw new Error("fixture does not import");
-    expect(answer.body).toMatchObject({ ok: true, intent: "import-urdf", name, report: expected.report });
+    expect(answer.body).toMatchObject({ ok: true, name, report: expected.report });
     expect(answer.body.report[0]).toBe('base link "base_link" is the body frame; 4 legs found');
     const [row] = await database().select().from(robots).where(eq(robots.name, name));
     expect(answer.body.robotId).toBe(row.id);
@@ -47,7 +47,7 @@ describe("URDF import", () => {
     const count = await robotCount();
     const second = await importFile(fixture("test-crab.urdf"));
     expect(second.status).toBe(409);
-    expect(second.body.report.length).toBeGreaterThan(0);
+    expect(second.body.details.report.length).toBeGreaterThan(0);
     expect(await robotCount()).toBe(count);
   });
 
@@ -56,8 +56,8 @@ describe("URDF import", () => {
     const [robotsBefore, revisionsBefore] = [await robotCount(), await revisionCount()];
     const answer = await importFile(continuous, { name: uniqueName("Refused crab") });
     expect(answer.status).toBe(422);
-    expect(answer.body).toMatchObject({ ok: false, intent: "import-urdf", message: "test-crab.urdf cannot be imported. Nothing was saved." });
-    expect(answer.body.issues).toEqual([
+    expect(answer.body).toMatchObject({ code: "invalid", error: "test-crab.urdf cannot be imported. Nothing was saved." });
+    expect(answer.body.details.issues).toEqual([
       { path: 'joint.fr_femur.type', message: 'joint "fr_femur" (femur) is continuous: a leg joint must be revolute, with limits' },
     ]);
     expect([await robotCount(), await revisionCount()]).toEqual([robotsBefore, revisionsBefore]);
@@ -66,6 +66,6 @@ describe("URDF import", () => {
   test("not XML: 422 with the parser's line and column", async () => {
     const answer = await importFile("<robot name='x'><link name='a'></robot>", { name: uniqueName("Not XML") });
     expect(answer.status).toBe(422);
-    expect(answer.body.issues[0].message).toMatch(/^not well-formed XML: .+ \(line \d+, column \d+\)$/);
+    expect(answer.body.details.issues[0].message).toMatch(/^not well-formed XML: .+ \(line \d+, column \d+\)$/);
   });
 });

@@ -1,6 +1,6 @@
 // The firmware angle tables and the bring-up tables: files with ETags, audited downloads.
 import { TABLE_FORMAT, TABLE_MEDIA_TYPES } from "../../../export/index";
-import { RELEASE_TABLE, benchQuerySchema, tableQuerySchema } from "../../tables/tables.server";
+import { RELEASE_TABLE, benchQuerySchema, tableQuerySchema } from "../../tables/query";
 import { AUTH, errorsFor, etagResponses, ifNoneMatch, permission, queryParameters, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
 
 const tableHeadersDoc = {

@@ -3,22 +3,13 @@
 // every servo at its centre, or a slow sweep of one joint checked for speed.
 import type { Route } from "./+types/bench-table";
 import { requireApiAccess } from "~/platform/access.server";
-import {
-  answerTableErrors,
-  benchQuerySchema,
-  matchesIfNoneMatch,
-  parseParams,
-  parseQuery,
-  prepareBenchTable,
-  recordBenchDownload,
-  renderBenchTable,
-  robotParamsSchema,
-  tableHeaders,
-} from "~/features/tables/tables.server";
+import { apiAction } from "~/platform/errors.server";
+import { prepareBenchTable, recordBenchDownload, renderBenchTable } from "~/features/tables/bench-tables.server";
+import { benchQuerySchema, matchesIfNoneMatch, parseParams, parseQuery, robotParamsSchema, tableHeaders } from "~/features/tables/query";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const member = await requireApiAccess(request, "tables.download");
-  return answerTableErrors(async () => {
+  return apiAction(async () => {
     const { robotId } = parseParams(robotParamsSchema, params);
     const query = parseQuery(benchQuerySchema, new URL(request.url).searchParams);
     const prepared = await prepareBenchTable(member.workspace.id, robotId, query);

@@ -3,11 +3,12 @@
 import type { Route } from "./+types/calibration-profiles";
 import { requireApiAccess } from "~/platform/access.server";
 import { calibrationRobot, listProfiles } from "~/features/robots/calibration.server";
-import { answerTableErrors, parseParams, robotParamsSchema } from "~/features/tables/tables.server";
+import { apiAction } from "~/platform/errors.server";
+import { parseParams, robotParamsSchema } from "~/features/tables/query";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const { workspace } = await requireApiAccess(request, "robots.read");
-  return answerTableErrors(async () => {
+  return apiAction(async () => {
     const { robotId } = parseParams(robotParamsSchema, params);
     const robot = await calibrationRobot(workspace.id, robotId);
     const profiles = await listProfiles(robot.id);

@@ -5,22 +5,13 @@
 // and 304 on If-None-Match; every download in the audit log.
 import type { Route } from "./+types/table";
 import { requireApiAccess } from "~/platform/access.server";
-import {
-  answerTableErrors,
-  matchesIfNoneMatch,
-  parseParams,
-  parseQuery,
-  prepareVersionTable,
-  recordTableDownload,
-  renderVersionTable,
-  tableHeaders,
-  tableParamsSchema,
-  tableQuerySchema,
-} from "~/features/tables/tables.server";
+import { apiAction } from "~/platform/errors.server";
+import { matchesIfNoneMatch, parseParams, parseQuery, tableHeaders, tableParamsSchema, tableQuerySchema } from "~/features/tables/query";
+import { prepareVersionTable, recordTableDownload, renderVersionTable } from "~/features/tables/version-table.server";
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const member = await requireApiAccess(request, "tables.download");
-  return answerTableErrors(async () => {
+  return apiAction(async () => {
     const { gaitId, number } = parseParams(tableParamsSchema, params);
     const query = parseQuery(tableQuerySchema, new URL(request.url).searchParams);
     const prepared = await prepareVersionTable(member.workspace.id, gaitId, number, query);

@@ -5,9 +5,9 @@
 import { z } from "zod";
 import type { Route } from "./+types/draft";
 import { requireApiAccess } from "~/platform/access.server";
-import { apiError, readJsonBody } from "~/platform/api-errors.server";
-import { DRAFT_BODY_LIMIT_BYTES, DraftConflict, DraftInvalid, readDraft, saveDraft, type DraftContext } from "~/features/gaits/drafts.server";
-import { apiAction } from "~/platform/errors.server";
+import { readJsonBody } from "~/platform/body.server";
+import { DRAFT_BODY_LIMIT_BYTES, readDraft, saveDraft, type DraftContext } from "~/features/gaits/drafts.server";
+import { apiAction, apiError } from "~/platform/errors.server";
 
 const gaitParams = z.object({ gaitId: z.guid({ error: (issue) => `gaitId must be a UUID (got ${JSON.stringify(issue.input)})` }) });
 
@@ -29,23 +29,10 @@ export const draftJson = (draft: DraftContext) => ({
 
 const noStore = { "Cache-Control": "no-store" };
 
-/** Refusals with details (the conflicting revision, the sequence's issues) keep them; other refusals as usual. */
-function draftAction(run: () => Promise<Response>) {
-  return apiAction(async () => {
-    try {
-      return await run();
-    } catch (error) {
-      if (error instanceof DraftConflict) return apiError(409, "conflict", error.message, error.details);
-      if (error instanceof DraftInvalid) return apiError(422, "invalid", error.message, error.issues);
-      throw error;
-    }
-  });
-}
-
 export async function loader({ request, params }: Route.LoaderArgs) {
   const { workspace } = await requireApiAccess(request, "gaits.read");
   const gaitId = gaitIdOf(params);
-  return draftAction(async () => Response.json(draftJson(await readDraft(workspace.id, gaitId)), { headers: noStore }));
+  return apiAction(async () => Response.json(draftJson(await readDraft(workspace.id, gaitId)), { headers: noStore }));
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
@@ -53,5 +40,5 @@ export async function action({ request, params }: Route.ActionArgs) {
   const { user, workspace } = await requireApiAccess(request, "gaits.edit");
   const gaitId = gaitIdOf(params);
   const body = await readJsonBody(request, DRAFT_BODY_LIMIT_BYTES);
-  return draftAction(async () => Response.json(await saveDraft({ userId: user.id, workspaceId: workspace.id }, gaitId, body), { headers: noStore }));
+  return apiAction(async () => Response.json(await saveDraft({ userId: user.id, workspaceId: workspace.id }, gaitId, body), { headers: noStore }));
 }

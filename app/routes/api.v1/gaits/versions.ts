@@ -3,7 +3,7 @@
 import { z } from "zod";
 import type { Route } from "./+types/versions";
 import { requireApiAccess } from "~/platform/access.server";
-import { apiError } from "~/platform/api-errors.server";
+import { apiError } from "~/platform/errors.server";
 import { getGait, listVersions } from "~/features/versions/versions.server";
 
 const params = z.object({ gaitId: z.guid({ error: (issue) => `gaitId must be a UUID (got ${JSON.stringify(issue.input)})` }) });

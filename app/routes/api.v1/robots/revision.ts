@@ -1,6 +1,6 @@
 // GET /api/v1/robots/:robotId/revisions/:number: one revision's definition, for build scripts that pin one.
 import type { Route } from "./+types/revision";
-import { apiError } from "~/platform/api-errors.server";
+import { apiError } from "~/platform/errors.server";
 import { requireApiAccess } from "~/platform/access.server";
 import { revisionParams } from "~/features/robots/params";
 import { getRevision } from "~/features/robots/robots.server";

@@ -1,6 +1,6 @@
 // GET /api/v1/robots/:robotId: the newest definition and the list of revisions.
 import type { Route } from "./+types/robot";
-import { apiError } from "~/platform/api-errors.server";
+import { apiError } from "~/platform/errors.server";
 import { requireApiAccess } from "~/platform/access.server";
 import { robotParams } from "~/features/robots/params";
 import { getRobot, type RevisionSummary } from "~/features/robots/robots.server";

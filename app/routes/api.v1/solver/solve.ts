@@ -3,9 +3,10 @@
 // "checks" only flags and summary.
 import type { Route } from "./+types/solve";
 import { requireApiAccess } from "~/platform/access.server";
-import { apiError, parseJsonText, readBodyText } from "~/platform/api-errors.server";
+import { parseJsonText, readBodyText } from "~/platform/body.server";
+import { apiAction, apiError } from "~/platform/errors.server";
 import { bodyKey, cachedAnswer, rememberAnswer } from "~/features/solver/answer-cache.server";
-import { InputIssues, SOLVE_BODY_LIMIT_BYTES, solveRequest } from "~/features/solver/solve.server";
+import { SOLVE_BODY_LIMIT_BYTES, solveRequest } from "~/features/solver/solve.server";
 
 export async function action({ request }: Route.ActionArgs) {
   if (request.method !== "POST") return apiError(400, "bad_request", "Use POST with a JSON body.");
@@ -14,19 +15,13 @@ export async function action({ request }: Route.ActionArgs) {
   const key = bodyKey(text);
   // `Cache-Control: no-cache` asks for a fresh solve (the benchmarks use it to time cold requests).
   const fresh = /no-cache/.test(request.headers.get("Cache-Control") ?? "");
-  let answer = fresh ? undefined : cachedAnswer(key);
-  const hit = answer !== undefined;
-  if (answer === undefined) {
-    try {
-      answer = solveRequest(parseJsonText(text));
-    } catch (error) {
-      if (error instanceof InputIssues) return apiError(422, "invalid", error.message, error.issues);
-      throw error;
-    }
-    rememberAnswer(key, answer);
-  }
-  return new Response(answer, {
-    headers: { "Content-Type": "application/json", "Cache-Control": "no-store", "X-Solve-Cache": hit ? "hit" : "miss" },
+  const cached = fresh ? undefined : cachedAnswer(key);
+  return apiAction(async () => {
+    const answer = cached ?? solveRequest(parseJsonText(text));
+    if (cached === undefined) rememberAnswer(key, answer);
+    return new Response(answer, {
+      headers: { "Content-Type": "application/json", "Cache-Control": "no-store", "X-Solve-Cache": cached !== undefined ? "hit" : "miss" },
+    });
   });
 }
 
