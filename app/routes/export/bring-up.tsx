@@ -14,12 +14,13 @@ import { TablePreview } from "~/components/export/TablePreview";
 import { requireAccess } from "~/platform/access.server";
 import { robotsWithProfiles } from "~/features/robots/calibration.server";
 import { config } from "~/platform/config.server";
+import { pageGuard } from "~/platform/errors.server";
 import { benchPageData } from "./page-data.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const member = await requireAccess(request, "tables.download");
   const robots = await robotsWithProfiles(member.workspace.id);
-  return benchPageData(member.workspace.id, new URL(request.url).searchParams, config().publicUrl, robots);
+  return pageGuard(() => benchPageData(member.workspace.id, new URL(request.url).searchParams, config().publicUrl, robots));
 }
 
 export const meta: Route.MetaFunction = () => [{ title: "Bring-up tables · Gaitloom" }];
