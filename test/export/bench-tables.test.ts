@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { angleTable, centreTable, sweepTable, TableExportError } from "~/export/index";
 import { JOINT_NAMES, neutralStance, solveLeg } from "~/kinematics/index";
-import { DEMO_ROBOT_FILES, OVERRIDE, loadDemoRobot, metaFor, modifiedRobot, readJsonTable } from "./helpers";
+import { DEMO_ROBOT_FILES, loadDemoRobot } from "../support/robots";
+import { OVERRIDE, metaFor, modifiedRobot, readJsonTable } from "./helpers";
 
 /** The fastest step between frames of one joint, worked out here from the frames: max |Δangle| · fps, °/s. */
 function peakSpeedDegS(frames: { legs: Record<string, { angles: Record<string, number> }> }[], legId: string, joint: string, fps: number): number {

@@ -1,4 +1,4 @@
-// Shared by the export tests: the demo robots and realistic gaits, the JSON
+// Shared by the export tests: realistic gaits on the demo robots, the JSON
 // table read back, the CSV read back with papaparse (an outside RFC 4180
 // parser), and gcc (the outside C toolchain) compiling a header into a
 // program that prints the table.
@@ -6,20 +6,11 @@ import { execFileSync, spawnSync } from "node:child_process";
 import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { readFileSync } from "node:fs";
 import Papa from "papaparse";
 import { generateGait, solveSequence, type GaitParams, type Sequence, type SolvedSequence } from "~/gait/index";
 import { parseRobot, type Robot } from "~/kinematics/index";
 import { cIdentifier, UNIT_ROUNDING, type TableMetaInput, type TableUnits } from "~/export/index";
-
-export const DEMO_ROBOT_FILES = ["pier-crawler", "quay-walker", "hull-climber"] as const;
-export type DemoRobotFile = (typeof DEMO_ROBOT_FILES)[number];
-
-export function loadDemoRobot(file: DemoRobotFile): Robot {
-  const parsed = parseRobot(JSON.parse(readFileSync(new URL(`../../db/demo/robots/${file}.json`, import.meta.url), "utf8")));
-  if (!parsed.ok) throw new Error(`${file}: ${parsed.issues.map((issue) => `${issue.path}: ${issue.message}`).join("; ")}`);
-  return parsed.robot;
-}
+import { loadDemoRobot, type DemoRobotFile } from "../support/robots";
 
 /** A robot definition changed and validated again (for servo settings the demo robots lack). */
 export function modifiedRobot(robot: Robot, change: (json: Robot) => void): Robot {

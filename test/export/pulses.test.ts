@@ -3,7 +3,8 @@ import { angleTable, angleTableMetadata, centreTable, sweepTable, TableExportErr
 import { solveSequence } from "~/gait/index";
 import { JOINT_NAMES, type Robot } from "~/kinematics/index";
 import type { SolvedSequence } from "~/gait/index";
-import { OVERRIDE, DEMO_ROBOT_FILES, demoGait, loadDemoRobot, metaFor, modifiedRobot, readJsonTable } from "./helpers";
+import { DEMO_ROBOT_FILES, loadDemoRobot } from "../support/robots";
+import { OVERRIDE, demoGait, metaFor, modifiedRobot, readJsonTable } from "./helpers";
 
 function json(robot: Robot, solved: SolvedSequence, units: TableUnits, extra: { overrideReason?: string } = {}) {
   return readJsonTable(angleTable(robot, solved, { format: "json", units, meta: metaFor({ robot }), ...extra }));

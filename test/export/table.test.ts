@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import { angleTable, sweepTable, TABLE_MEDIA_TYPES, TableExportError, tableFileName, type TableMetadata } from "~/export/index";
 import type { SolvedSequence } from "~/gait/index";
 import { JOINT_NAMES } from "~/kinematics/index";
-import { OVERRIDE, demoGait, loadDemoRobot, metaFor, modifiedRobot, readCsv, readJsonTable } from "./helpers";
+import { loadDemoRobot } from "../support/robots";
+import { OVERRIDE, demoGait, metaFor, modifiedRobot, readCsv, readJsonTable } from "./helpers";
 
 function codeOf(run: () => unknown): string | undefined {
   try {

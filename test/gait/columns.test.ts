@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { COLUMNS_LAYOUT, columnsOf, decodeColumns, encodeColumns, generateGait, runSolve, solveSequence } from "~/gait/index";
-import { DEMO_ROBOTS, loadDemoRobot } from "./helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../support/robots";
 
 describe("the column layout of a solve (compact transfer form)", () => {
   const robot = loadDemoRobot(DEMO_ROBOTS.six);

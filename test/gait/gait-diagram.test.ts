@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { generateGait, solveSequence, type SolvedFrame } from "~/gait/index";
-import { DEMO_ROBOTS, cycleFraction, loadDemoRobot } from "./helpers";
+import { DEMO_ROBOTS, loadDemoRobot, type DemoRobotFile } from "../support/robots";
+import { cycleFraction } from "./helpers";
 
 // M. Hildebrand, "Symmetrical gaits of horses", Science 150 (1965): a gait
 // diagram has one row per foot with a bar while the foot is on the ground; a
@@ -26,7 +27,7 @@ function stanceBars(frames: readonly SolvedFrame[], legId: string): Bar[] {
   return bars;
 }
 
-function diagram(file: string, template: "wave" | "trot", cycleMs: number) {
+function diagram(file: DemoRobotFile, template: "wave" | "trot", cycleMs: number) {
   const robot = loadDemoRobot(file);
   const frames = solveSequence(robot, generateGait(robot, { template, cycleMs, fps: 50, strideMm: 30 }), { checks: [] }).frames;
   const bars = Object.fromEntries(["LF", "LR", "RF", "RR"].map((legId) => [legId, stanceBars(frames, legId)]));

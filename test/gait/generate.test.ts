@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { neutralStance } from "~/kinematics/index";
 import { GAIT_DEFAULTS, GaitInputError, SEQUENCE_FORMAT, generateGait, parseSequence } from "~/gait/index";
-import { DEMO_ROBOTS, loadDemoRobot } from "./helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../support/robots";
 
 describe("generateGait (DESIGN.md, Core module contracts)", () => {
   const robot = loadDemoRobot(DEMO_ROBOTS.six);

@@ -1,18 +1,9 @@
-// Shared by the gait tests: the demo robots, an independent reading of the
-// CSS cubic-bezier definition, and world-frame helpers built on three.js (an
-// outside 3-D library working in doubles) rather than on the engine's own math.
-import { readFileSync } from "node:fs";
+// Shared by the gait tests: an independent reading of the CSS cubic-bezier
+// definition, and world-frame helpers built on three.js (an outside 3-D
+// library working in doubles) rather than on the engine's own math.
 import { Euler, Matrix4, Vector3 } from "three";
-import { parseRobot, type BodyPose, type Robot, type Vec3 } from "~/kinematics/index";
+import type { BodyPose, Vec3 } from "~/kinematics/index";
 import type { SolvedFrame } from "~/gait/index";
-
-export const DEMO_ROBOTS = { six: "pier-crawler.json", four: "quay-walker.json", eight: "hull-climber.json" } as const;
-
-export function loadDemoRobot(file: string): Robot {
-  const parsed = parseRobot(JSON.parse(readFileSync(new URL(`../../db/demo/robots/${file}`, import.meta.url), "utf8")));
-  if (!parsed.ok) throw new Error(`${file}: ${parsed.issues.map((issue) => `${issue.path}: ${issue.message}`).join("; ")}`);
-  return parsed.robot;
-}
 
 /**
  * cubic-bezier(x1, y1, x2, y2) as W3C CSS Easing Functions Level 1 defines it:

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { JOINT_NAMES, type Robot } from "~/kinematics/index";
 import { GaitInputError, generateEntryMove, generateExitMove, generateGait, solveSequence, type SolvedSequence } from "~/gait/index";
-import { DEMO_ROBOTS, loadDemoRobot, numbersIn } from "./helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../support/robots";
+import { numbersIn } from "./helpers";
 
 // Entry and exit moves: from the robot's rest pose into the gait's first frame
 // and back, one-shot, timed so that no joint exceeds half its maxSpeedDegS.

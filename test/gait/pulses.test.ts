@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { JOINT_NAMES, angleToPulse } from "~/kinematics/index";
 import { clampPulseUs, createPulseTable, rawPulseUs } from "~/gait/pulses";
-import { DEMO_ROBOTS, loadDemoRobot } from "./helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../support/robots";
 
 // The solve's allocation-free pulse mapping must give what the kinematics' angleToPulse gives.
 describe("the solve's pulse table equals the kinematics' angleToPulse", () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { SEQUENCE_FORMAT, frameCount, parseSequence, sequenceIssuesForRobot, sequenceJsonSchema, type SequenceInput } from "~/gait/index";
-import { DEMO_ROBOTS, loadDemoRobot } from "./helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../support/robots";
 
 function minimal(): SequenceInput {
   return {

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { forwardLeg, neutralStance } from "~/kinematics/index";
 import { FLAG_KINDS, GaitInputError, SEQUENCE_FORMAT, generateGait, parseSequence, solveSequence, type Sequence } from "~/gait/index";
-import { DEMO_ROBOTS, loadDemoRobot, numbersIn, worldFoot } from "./helpers";
+import { DEMO_ROBOTS, loadDemoRobot, type DemoRobotFile } from "../support/robots";
+import { numbersIn, worldFoot } from "./helpers";
 
 function parsed(json: unknown): Sequence {
   const result = parseSequence(json);
@@ -141,7 +142,7 @@ describe("solveSequence: frames (DESIGN.md, Gait sequence)", () => {
 });
 
 describe("no NaN anywhere, and plain JSON", () => {
-  const cases: [string, string, Record<string, unknown>][] = [
+  const cases: [string, DemoRobotFile, Record<string, unknown>][] = [
     ["tripod, everything out of reach (stride 900 mm)", DEMO_ROBOTS.six, { template: "tripod", strideMm: 900 }],
     ["wave lifting too many legs, turning hard", DEMO_ROBOTS.six, { template: "wave", dutyFactor: 0.3, strideMm: 80, turnDegPerCycle: 90 }],
     ["trot on the spot, crouching", DEMO_ROBOTS.four, { template: "trot", strideMm: 0, bodyKeys: [{ t: 0, pose: { z: -40 } }, { t: 0.5, pose: { z: 60, pitch: 30 } }] }],

@@ -4,7 +4,8 @@ import GeometryFactory from "jsts/org/locationtech/jts/geom/GeometryFactory.js";
 import monotoneConvexHull from "monotone-convex-hull-2d";
 import { describe, expect, it } from "vitest";
 import { convexHullInto, generateGait, solveSequence, stabilityMargin, type GaitParams, type SolvedFrame } from "~/gait/index";
-import { DEMO_ROBOTS, loadDemoRobot, worldFoot } from "./helpers";
+import { DEMO_ROBOTS, loadDemoRobot, type DemoRobotFile } from "../support/robots";
+import { worldFoot } from "./helpers";
 
 // Support polygon = convex hull of the stance feet on the ground, checked
 // against monotone-convex-hull-2d; the CoM's containment and its distance to
@@ -26,7 +27,7 @@ function point([x, y]: readonly [number, number]): unknown {
   return factory.createPoint(new Coordinate(x, y));
 }
 
-const GAITS: [string, string, GaitParams][] = [
+const GAITS: [string, DemoRobotFile, GaitParams][] = [
   ["six-leg tripod, turning", DEMO_ROBOTS.six, { template: "tripod", strideMm: 50, turnDegPerCycle: 20 }],
   ["six-leg wave that lifts too many legs (β = 0.4)", DEMO_ROBOTS.six, { template: "wave", dutyFactor: 0.4, strideMm: 40 }],
   ["four-leg crawl (CoM outside at times)", DEMO_ROBOTS.four, { template: "wave", strideMm: 40, cycleMs: 2400 }],
@@ -37,7 +38,7 @@ const GAITS: [string, string, GaitParams][] = [
   ],
 ];
 
-function solvedFrames(file: string, params: GaitParams): SolvedFrame[] {
+function solvedFrames(file: DemoRobotFile, params: GaitParams): SolvedFrame[] {
   const robot = loadDemoRobot(file);
   return solveSequence(robot, generateGait(robot, { cycleMs: 1200, fps: 50, ...params }), { checks: [] }).frames;
 }

@@ -1,7 +1,7 @@
 // The invented demo robots of db/demo/robots: each must be a robot one can walk.
 import { describe, expect, it } from "vitest";
 import { forwardLeg, JOINT_NAMES, legSide, neutralStance, solveLeg, type Vec3 } from "../../app/kinematics";
-import { loadDemoRobots } from "./support/demo-robots";
+import { loadDemoRobots } from "../support/robots";
 
 const STRIDE_MM = 60;
 const STEP_HEIGHT_MM = 30;

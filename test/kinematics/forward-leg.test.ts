@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { forwardLeg, parseRobot, solveLeg, type BodyPose, type JointAngles, type Robot } from "../../app/kinematics";
-import { loadDemoRobots } from "./support/demo-robots";
+import { loadDemoRobots } from "../support/robots";
 import { sampleJointSet } from "./support/joint-samples";
 import { seededRandom, type Random } from "./support/prng";
 import { distanceMm, referenceFoot } from "./support/reference-fk";

@@ -12,7 +12,7 @@ import {
   type BodyPose,
   type Vec3,
 } from "../../app/kinematics";
-import { loadDemoRobots } from "./support/demo-robots";
+import { loadDemoRobots } from "../support/robots";
 import { seededRandom } from "./support/prng";
 
 describe("createLegSolver: the hot path gives the public API's numbers", () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { copyLegGeometry, forwardLeg, mirrorLeg, parseRobot } from "../../app/kinematics";
-import { loadDemoRobots } from "./support/demo-robots";
+import { loadDemoRobots } from "../support/robots";
 
 describe("mirrorLeg (DESIGN.md: mirroring negates y, the mount yaw and the coxa's limits and offset)", () => {
   const [pier] = loadDemoRobots();

@@ -1,7 +1,7 @@
 import numeric from "numeric";
 import { describe, expect, it } from "vitest";
 import { forwardLeg, solveLeg, type JointAngles, type Vec3 } from "../../app/kinematics";
-import { loadDemoRobots } from "./support/demo-robots";
+import { loadDemoRobots } from "../support/robots";
 import { sampleJointSet } from "./support/joint-samples";
 import { seededRandom } from "./support/prng";
 import { distanceMm, referenceFoot } from "./support/reference-fk";

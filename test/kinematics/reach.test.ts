@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { neutralStance, reachRing, solveLeg, type Vec3 } from "../../app/kinematics";
-import { loadDemoRobots } from "./support/demo-robots";
+import { loadDemoRobots } from "../support/robots";
 
 const along = (center: [number, number], directionDeg: number, radiusMm: number, z: number): Vec3 => [
   center[0] + radiusMm * Math.cos((directionDeg * Math.PI) / 180),

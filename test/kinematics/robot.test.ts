@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { JOINT_NAMES, legRow, legSide, parseRobot, robotJsonSchema, type Leg } from "../../app/kinematics";
-import { demoRobotJson, loadDemoRobots } from "./support/demo-robots";
+import { demoRobotJson, loadDemoRobots } from "../support/robots";
 
 // A fresh, mutable copy of the six-legged demo robot's JSON.
 const pierCrawler = () => demoRobotJson("pier-crawler") as Record<string, any>;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { angleToPulse, JOINT_NAMES, pulseToAngle, solveLeg, type Joint } from "../../app/kinematics";
-import { loadDemoRobots } from "./support/demo-robots";
+import { loadDemoRobots } from "../support/robots";
 
 const joint = (servo: Partial<Joint["servo"]> = {}): Joint => ({
   minDeg: -90,

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { forwardLeg, solveLeg, type Vec3 } from "../../app/kinematics";
-import { loadDemoRobots } from "./support/demo-robots";
+import { loadDemoRobots } from "../support/robots";
 import { seededRandom } from "./support/prng";
 import { testRobot } from "./support/test-robot";
 

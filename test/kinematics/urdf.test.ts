@@ -2,7 +2,7 @@ import { XMLParser } from "fast-xml-parser";
 import { Euler, Matrix4, Vector3 } from "three";
 import { describe, expect, it } from "vitest";
 import { forwardLeg, importUrdf, parseRobot, solveLeg, type Robot, type Vec3 } from "../../app/kinematics";
-import { fixtureText } from "./support/demo-robots";
+import { fixtureText } from "../support/robots";
 import { seededRandom } from "./support/prng";
 import { distanceMm } from "./support/reference-fk";
 

@@ -2,7 +2,7 @@
 import { cleanup, render, screen, within } from "@testing-library/react";
 import { afterEach, describe, expect, test } from "vitest";
 import { RobotViews } from "~/components/robot-view";
-import { demoRobot } from "../robots/helpers";
+import { loadDemoRobot } from "../../support/robots";
 
 afterEach(cleanup);
 
@@ -18,8 +18,8 @@ function numbersIn(container: Element): string[] {
 }
 
 describe("robot views", () => {
-  test.each(["pier-crawler.json", "quay-walker.json", "hull-climber.json"] as const)("%s: a top and a side view with every leg and its reach ring, no NaN", (file) => {
-    const robot = demoRobot(file);
+  test.each(["pier-crawler", "quay-walker", "hull-climber"] as const)("%s: a top and a side view with every leg and its reach ring, no NaN", (file) => {
+    const robot = loadDemoRobot(file);
     const { container } = render(<RobotViews robot={robot} />);
     const top = screen.getByRole("img", { name: `Top view of ${robot.name}` });
     const side = screen.getByRole("img", { name: `Side view of ${robot.name}, from the right` });
@@ -35,7 +35,7 @@ describe("robot views", () => {
   });
 
   test("a body too high for its legs: feet drawn as crosses, named in the description and the legend, still no NaN", () => {
-    const robot = demoRobot("quay-walker.json");
+    const robot = loadDemoRobot("quay-walker");
     const { container } = render(<RobotViews robot={robot} bodyHeightMm={400} />);
     expect(container.querySelectorAll("[data-flag]").length).toBe(robot.legs.length * 2);
     expect(screen.getByRole("img", { name: /Top view/ }).querySelector("desc")?.textContent).toContain("Out of reach or limits: LF, LR, RF, RR.");
@@ -44,7 +44,7 @@ describe("robot views", () => {
   });
 
   test("given angles are drawn as they are, without solving", () => {
-    const robot = demoRobot("quay-walker.json");
+    const robot = loadDemoRobot("quay-walker");
     const angles = Object.fromEntries(robot.legs.map((leg) => [leg.id, { coxa: 0, femur: 30, tibia: 0 }]));
     const { container } = render(<RobotViews robot={robot} angles={angles} showReach={false} compact />);
     expect(container.querySelectorAll("[data-ring]")).toHaveLength(0);

@@ -1,7 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { forwardLeg, neutralStance, type BodyPose } from "~/kinematics";
 import { legPoints, legPostures } from "~/components/robot-view";
-import { demoRobot } from "../robots/helpers";
+import { loadDemoRobot } from "../../support/robots";
 
 // A small seeded generator (Park–Miller), so failures repeat.
 function random(seed: number) {
@@ -15,8 +15,8 @@ function random(seed: number) {
 describe("leg points for the views", () => {
   test("the foot agrees with forwardLeg to 1e-9 mm for random angles, with and without a body pose", () => {
     const next = random(20240611);
-    for (const file of ["pier-crawler.json", "quay-walker.json", "hull-climber.json"] as const) {
-      const robot = demoRobot(file);
+    for (const file of ["pier-crawler", "quay-walker", "hull-climber"] as const) {
+      const robot = loadDemoRobot(file);
       for (let trial = 0; trial < 200; trial += 1) {
         const leg = robot.legs[trial % robot.legs.length];
         const angles = { coxa: next() * 80 - 40, femur: next() * 140 - 70, tibia: next() * 140 - 70 };
@@ -30,7 +30,7 @@ describe("leg points for the views", () => {
   });
 
   test("the joints lie along the leg: femur joint one coxa length out from the mount, knee one femur length on", () => {
-    const robot = demoRobot("pier-crawler.json");
+    const robot = loadDemoRobot("pier-crawler");
     const leg = robot.legs[0];
     const { mount, hip, knee, foot } = legPoints(leg, { coxa: 10, femur: 20, tibia: -15 });
     const distance = (a: number[], b: number[]) => Math.hypot(a[0] - b[0], a[1] - b[1], a[2] - b[2]);
@@ -40,8 +40,8 @@ describe("leg points for the views", () => {
   });
 
   test("the neutral stance of every demo robot is reachable and within limits", () => {
-    for (const file of ["pier-crawler.json", "quay-walker.json", "hull-climber.json"] as const) {
-      const robot = demoRobot(file);
+    for (const file of ["pier-crawler", "quay-walker", "hull-climber"] as const) {
+      const robot = loadDemoRobot(file);
       const postures = legPostures(robot, neutralStance(robot));
       expect(postures.map((posture) => posture.legId)).toEqual(robot.legs.map((leg) => leg.id));
       for (const posture of postures) {

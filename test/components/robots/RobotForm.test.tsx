@@ -6,14 +6,14 @@ import { afterEach, describe, expect, test } from "vitest";
 import { RobotEditor } from "~/components/robots/RobotForm";
 import type { EditorMode } from "~/components/robots/robot-form-context";
 import type { SaveResult } from "~/features/robots/results";
-import { demoRobot } from "./helpers";
+import { loadDemoRobot, type DemoRobotFile } from "../../support/robots";
 
 afterEach(cleanup);
 
 let lastPost: FormData | null = null;
 
-function renderEditor(mode: EditorMode, file: Parameters<typeof demoRobot>[0] = "pier-crawler.json") {
-  const robot = demoRobot(file);
+function renderEditor(mode: EditorMode, file: DemoRobotFile = "pier-crawler") {
+  const robot = loadDemoRobot(file);
   lastPost = null;
   const Stub = createRoutesStub([
     {
@@ -79,7 +79,7 @@ describe("robot editor", { timeout: 30_000 }, () => {
     expect(lastPost!.get("message")).toBe("Longer tibia");
     const sent = JSON.parse(String(lastPost!.get("definition")));
     expect(sent.legs[0].tibia).toBe(104);
-    expect(sent.legs[1]).toEqual(demoRobot("pier-crawler.json").legs[1]);
+    expect(sent.legs[1]).toEqual(loadDemoRobot("pier-crawler").legs[1]);
   });
 
   test("mirror left → right copies an edited left leg onto its right counterpart", () => {
@@ -91,7 +91,7 @@ describe("robot editor", { timeout: 30_000 }, () => {
   });
 
   test("copy a leg to others", () => {
-    renderEditor("edit", "quay-walker.json");
+    renderEditor("edit", "quay-walker");
     fireEvent.change(field("LF femur length (mm)"), { target: { value: "90" } });
     fireEvent.click(screen.getByRole("button", { name: "Copy" }));
     for (const id of ["LR", "RF", "RR"]) expect(field(`${id} femur length (mm)`).value).toBe("90");
@@ -124,7 +124,7 @@ describe("robot editor", { timeout: 30_000 }, () => {
   });
 
   test("axe finds no violations in the editor and its views", async () => {
-    const { container } = renderEditor("edit", "quay-walker.json");
+    const { container } = renderEditor("edit", "quay-walker");
     // Contrast needs real layout, which jsdom has not; the browser tests run axe with it.
     const results = await axe.run(container, { rules: { "color-contrast": { enabled: false } } });
     expect(results.violations.map((violation) => `${violation.id}: ${violation.nodes.length} × ${violation.nodes[0]?.html}`)).toEqual([]);

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { generateGait, solveSequence } from "~/gait/index";
 import { metricDeltas, peakJointSpeed, type MetricSummary } from "~/features/compare";
-import { DEMO_ROBOTS, loadDemoRobot } from "../../gait/helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
 
 const base: MetricSummary = {
   cycleMs: 1200,

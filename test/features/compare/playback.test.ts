@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { generateGait, solveSequence } from "~/gait/index";
 import { frameAt, playbackOf, syncedFractions } from "~/features/compare";
-import { DEMO_ROBOTS, loadDemoRobot } from "../../gait/helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
 
 describe("playbackOf", () => {
   it("keeps per frame the body height and tilt, each leg's servo angles (to 0.001°), the margin and the feet down", () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { generateGait, parseSequence, type Sequence } from "~/gait/index";
 import { alignKeys, describeKeyChanges, diffSequences } from "~/features/compare";
-import { DEMO_ROBOTS, loadDemoRobot } from "../../gait/helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
 
 const robot = loadDemoRobot(DEMO_ROBOTS.six);
 

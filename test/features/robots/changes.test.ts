@@ -1,6 +1,6 @@
 import { describe, expect, test } from "vitest";
 import { changedFields, describeChange, isCalibrationPath, nonCalibrationChanges, summarizeChanges } from "~/features/robots/changes";
-import { demoRobot } from "../../components/robots/helpers";
+import { loadDemoRobot } from "../../support/robots";
 
 describe("which fields firmware may change", () => {
   test("zero offsets and everything under servo are calibration; limits, lengths and mounts are not", () => {
@@ -14,7 +14,7 @@ describe("which fields firmware may change", () => {
   });
 
   test("a calibration-only edit has no non-calibration changes", () => {
-    const before = demoRobot("pier-crawler.json");
+    const before = loadDemoRobot("pier-crawler");
     const after = structuredClone(before);
     after.legs[2].joints.coxa.zeroOffsetDeg = 3.5;
     after.legs[4].joints.tibia.servo = { ...after.legs[4].joints.tibia.servo, reversed: !after.legs[4].joints.tibia.servo.reversed, centerUs: 1512 };
@@ -27,7 +27,7 @@ describe("which fields firmware may change", () => {
   });
 
   test("a length, a limit, a new field or a removed leg is named with its old and new value", () => {
-    const before = demoRobot("pier-crawler.json");
+    const before = loadDemoRobot("pier-crawler");
     const after = structuredClone(before);
     after.legs[0].femur = 70;
     after.legs[1].joints.femur.maxDeg = 80;

@@ -1,11 +1,11 @@
 import { describe, expect, test } from "vitest";
 import { JOINT_NAMES, mirrorLeg, parseRobot } from "~/kinematics";
 import { addLeg, copyGeometryTo, counterpartOf, defaultRest, freeChannels, mirrorSide, removeLeg } from "~/features/robots/leg-tools";
-import { demoRobot } from "../../components/robots/helpers";
+import { loadDemoRobot } from "../../support/robots";
 
 describe("mirror one side onto the other", () => {
   test("right legs become mirror images of the left ones, keeping their ids and servo mappings (DESIGN.md: coxa limits and offsets negated)", () => {
-    const robot = demoRobot("pier-crawler.json");
+    const robot = loadDemoRobot("pier-crawler");
     robot.legs[0].femur = 66; // LF
     robot.legs[0].joints.coxa.minDeg = -50;
     robot.legs[0].joints.coxa.zeroOffsetDeg = 4;
@@ -24,7 +24,7 @@ describe("mirror one side onto the other", () => {
   });
 
   test("counterparts pair by side and row (DESIGN.md); a leg without one gets a new mirrored leg on free channels", () => {
-    const robot = demoRobot("pier-crawler.json");
+    const robot = loadDemoRobot("pier-crawler");
     const fewer = removeLeg(robot, "RR");
     expect(fewer.legs.map((leg) => leg.id)).not.toContain("RR");
     expect(Object.keys(fewer.rest ?? {})).not.toContain("RR");
@@ -45,7 +45,7 @@ describe("mirror one side onto the other", () => {
 
 describe("copy a leg's geometry", () => {
   test("same side copies as is; the other side gets the coxa mirrored; mounts and servos stay", () => {
-    const robot = demoRobot("quay-walker.json");
+    const robot = loadDemoRobot("quay-walker");
     robot.legs[0].tibia = 130;
     robot.legs[0].joints.coxa.minDeg = -30;
     const copied = copyGeometryTo(robot, "LF", ["LR", "RF"]);
@@ -63,17 +63,17 @@ describe("copy a leg's geometry", () => {
 
 describe("add a leg, rest pose defaults", () => {
   test("a new leg has a fresh id and unused channels; a full robot takes no more", () => {
-    const robot = demoRobot("quay-walker.json");
+    const robot = loadDemoRobot("quay-walker");
     const more = addLeg(robot)!;
     expect(more.legs).toHaveLength(5);
     const parsed = parseRobot(more);
     expect(parsed.ok ? [] : parsed.issues).toEqual([]);
     expect(freeChannels(robot, 3)).toEqual([12, 13, 14]);
-    expect(addLeg(demoRobot("hull-climber.json"))).toBeNull();
+    expect(addLeg(loadDemoRobot("hull-climber"))).toBeNull();
   });
 
   test("the default rest pose sits every joint at 0° or its nearest limit", () => {
-    const robot = demoRobot("quay-walker.json");
+    const robot = loadDemoRobot("quay-walker");
     robot.legs[0].joints.femur.minDeg = 10;
     const rest = defaultRest(robot);
     expect(rest.LF).toEqual({ coxa: 0, femur: 10, tibia: 0 });

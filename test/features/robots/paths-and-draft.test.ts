@@ -2,7 +2,7 @@ import { describe, expect, test } from "vitest";
 import { formatPath } from "~/kinematics";
 import { checkDraft, removeLegAt, renameLeg, valueFromNumberText } from "~/features/robots/form-draft";
 import { fieldId, formFieldIdFor, getAt, parsePathText, setAt } from "~/features/robots/paths";
-import { demoRobot } from "../../components/robots/helpers";
+import { loadDemoRobot } from "../../support/robots";
 
 describe("field paths", () => {
   test("parsePathText reads back what formatPath writes", () => {
@@ -44,7 +44,7 @@ describe("the editor's working copy", () => {
   });
 
   test("parseRobot's issues land at the field paths", () => {
-    const robot = demoRobot("pier-crawler.json") as unknown as Record<string, unknown>;
+    const robot = loadDemoRobot("pier-crawler") as unknown as Record<string, unknown>;
     let document = setAt(robot, ["legs", 0, "femur"], -5);
     document = setAt(document, ["legs", 1, "joints", "femur", "minDeg"], 90);
     document = setAt(document, ["standHeight"], "abc");
@@ -58,7 +58,7 @@ describe("the editor's working copy", () => {
   });
 
   test("renaming a leg carries its rest angles; removing drops them", () => {
-    const robot = demoRobot("pier-crawler.json") as unknown as Record<string, unknown>;
+    const robot = loadDemoRobot("pier-crawler") as unknown as Record<string, unknown>;
     const renamed = renameLeg(robot, 0, "FL");
     expect(getAt(renamed, ["legs", 0, "id"])).toBe("FL");
     expect(getAt(renamed, ["rest", "FL"])).toEqual(getAt(robot, ["rest", "LF"]));

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { generateGait, solveSequence } from "~/gait/index";
-import { DEMO_ROBOTS, loadDemoRobot } from "../helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
 
 // com-outside (error) and low-margin (warning below the user's threshold), on
 // the four-legged crawl, whose margin (McGhee and Frank 1968) dips below zero

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { generateGait, parseSequence, solveSequence, type Sequence } from "~/gait/index";
-import { DEMO_ROBOTS, loadDemoRobot, worldFoot } from "../helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
+import { worldFoot } from "../helpers";
 
 // ground-penetration: a foot below the ground plane z = 0 (DESIGN.md: the ground is the world's z = 0).
 describe("ground-penetration: a stance key 5 mm below the ground", () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { generateGait, solveSequence } from "~/gait/index";
-import { DEMO_ROBOTS, loadDemoRobot } from "../helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
 import { expectedStraightWalkFlags, flagKey } from "./expected";
 
 // A deliberately too-long stride: 320 mm a cycle for the six-legged demo robot

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { CSS_EASE, generateGait, solveSequence } from "~/gait/index";
-import { DEMO_ROBOTS, cssCubicBezier, loadDemoRobot } from "../helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
+import { cssCubicBezier } from "../helpers";
 import { expectedStraightWalkFlags, flagKey } from "./expected";
 
 // A deliberately too-fast cycle: a tripod step of 40 mm in 500 ms turns some

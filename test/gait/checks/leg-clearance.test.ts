@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { generateGait, solveSequence } from "~/gait/index";
-import { DEMO_ROBOTS, distance, loadDemoRobot, worldFoot } from "../helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
+import { distance, worldFoot } from "../helpers";
 
 // leg-clearance (warning): neighbouring legs of one side (by the kinematics'
 // side and row) whose feet come closer than the clearance.

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { JOINT_NAMES } from "~/kinematics/index";
 import { SEQUENCE_FORMAT, generateGait, parseSequence, solveSequence } from "~/gait/index";
-import { DEMO_ROBOTS, loadDemoRobot } from "../helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
 
 // loop-jump (warning): the step from the last frame back to the first turns a
 // joint faster than its limit. A leg that never lifts while the body travels

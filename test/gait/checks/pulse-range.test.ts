@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { angleToPulse, parseRobot, type Robot } from "~/kinematics/index";
 import { generateGait, solveSequence } from "~/gait/index";
-import { DEMO_ROBOTS, loadDemoRobot } from "../helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
 
 // pulse-range: the angle asks for a pulse outside the servo's minUs..maxUs; the
 // table holds the clamped pulse (DESIGN.md). Expected pulses from the

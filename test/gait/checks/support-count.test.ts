@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { generateGait, solveSequence } from "~/gait/index";
-import { DEMO_ROBOTS, cycleFraction, flaggedFrames, loadDemoRobot } from "../helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
+import { cycleFraction, flaggedFrames } from "../helpers";
 
 // A wave that lifts too many legs: duty factor 0.4 instead of 5/6 keeps each
 // leg up for 0.6 of the cycle, so three or four legs are up at once. With the

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { findLeg } from "~/kinematics/index";
 import { generateGait, parseSequence, solveSequence, type Sequence } from "~/gait/index";
-import { DEMO_ROBOTS, flaggedFrames, loadDemoRobot, numbersIn } from "../helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
+import { flaggedFrames, numbersIn } from "../helpers";
 
 // unreachable: beyond full extension (femur + tibia from the femur joint,
 // DESIGN.md "Closed-form IK"); the leg keeps its last reachable angles, so no

@@ -1,7 +1,8 @@
 import { Euler, Matrix4, Vector3 } from "three";
 import { describe, expect, it } from "vitest";
 import { generateGait, solveSequence } from "~/gait/index";
-import { DEMO_ROBOTS, cssCubicBezier, loadDemoRobot } from "../helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
+import { cssCubicBezier } from "../helpers";
 
 // DESIGN.md, Gait sequence: body pose offsets are eased between keys and ride on
 // the travel, T_world←body = Trans(x, y, bodyHeight) · Rz(heading) · T_offset.

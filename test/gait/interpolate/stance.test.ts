@@ -1,11 +1,12 @@
 import { describe, expect, it } from "vitest";
 import { generateGait, solveSequence, type GaitParams } from "~/gait/index";
-import { DEMO_ROBOTS, distance, loadDemoRobot, worldFoot } from "../helpers";
+import { DEMO_ROBOTS, loadDemoRobot, type DemoRobotFile } from "../../support/robots";
+import { distance, worldFoot } from "../helpers";
 
 // DESIGN.md, Gait sequence: a stance foot stays where it touched down, fixed in
 // the world, while the body moves. The world foot is recomposed here with
 // three.js (T(body) · foot), not with the engine's own transforms.
-const CASES: [string, string, GaitParams][] = [
+const CASES: [string, DemoRobotFile, GaitParams][] = [
   ["straight, tripod", DEMO_ROBOTS.six, { template: "tripod", strideMm: 50 }],
   ["sideways and turning, ripple", DEMO_ROBOTS.six, { template: "ripple", strideMm: 40, directionDeg: 60, turnDegPerCycle: 20 }],
   ["turning on the spot, wave", DEMO_ROBOTS.four, { template: "wave", strideMm: 0, turnDegPerCycle: -15, cycleMs: 2400 }],

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { CSS_EASE, generateGait, solveSequence, swingLift } from "~/gait/index";
-import { DEMO_ROBOTS, cssCubicBezier, distance, loadDemoRobot, worldFoot } from "../helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
+import { cssCubicBezier, distance, worldFoot } from "../helpers";
 
 // DESIGN.md, Gait sequence: a swing goes from the lift-off point to the
 // touch-down point; horizontal progress is the eased time fraction (CSS

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { generateGait, solveSequence } from "~/gait/index";
-import { DEMO_ROBOTS, loadDemoRobot, swingingLegs } from "../helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
+import { swingingLegs } from "../helpers";
 
 // Alternating tetrapod for eight legs: the tripod's pattern with four legs a set
 // (rows 1 and 3 of one side with rows 2 and 4 of the other), duty factor 1/2

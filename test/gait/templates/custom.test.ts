@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { GaitInputError, generateGait, solveSequence } from "~/gait/index";
-import { DEMO_ROBOTS, loadDemoRobot, swingingLegs } from "../helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
+import { swingingLegs } from "../helpers";
 
 describe("custom template", () => {
   const robot = loadDemoRobot(DEMO_ROBOTS.four);

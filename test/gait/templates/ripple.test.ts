@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { generateGait, legLayout, solveSequence } from "~/gait/index";
-import { DEMO_ROBOTS, cycleFraction, loadDemoRobot, swingingLegs } from "../helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
+import { cycleFraction, swingingLegs } from "../helpers";
 
 // Ripple: duty factor 3/4; on each side the legs lift from the back forwards a
 // third of a cycle apart, the sides half a cycle apart, so at most two legs are

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { generateGait, legLayout, solveSequence } from "~/gait/index";
-import { DEMO_ROBOTS, loadDemoRobot, swingingLegs } from "../helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
+import { swingingLegs } from "../helpers";
 
 // Tetrapod: duty factor 2/3, two legs up at a time, one on each side and in
 // different rows, four feet always down (common practice, from memory).

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { generateGait, solveSequence } from "~/gait/index";
-import { DEMO_ROBOTS, cycleFraction, loadDemoRobot, swingingLegs } from "../helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
+import { cycleFraction, swingingLegs } from "../helpers";
 
 // S.-M. Song and K. J. Waldron, Machines That Walk (MIT Press, 1989): the tripod
 // gait has duty factor 1/2 and two alternating sets of three legs, the front and

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { GaitInputError, generateGait, solveSequence } from "~/gait/index";
-import { DEMO_ROBOTS, loadDemoRobot, swingingLegs } from "../helpers";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
+import { swingingLegs } from "../helpers";
 
 // Trot: the diagonal pairs alternate with duty factor 1/2 (M. Hildebrand,
 // "Symmetrical gaits of horses", Science 150, 1965: diagonal feet move together).
