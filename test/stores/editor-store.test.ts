@@ -1,22 +1,9 @@
 // The editor store: every edit is one undo step (a drag too), keys snap to
 // frames and keep their order, copy and mirror carry feet across legs, and
 // scrubbing never solves again.
-import { readFileSync } from "node:fs";
 import { describe, expect, test } from "vitest";
-import { generateGait, type Sequence } from "~/gait";
-import { parseRobot, type Robot } from "~/kinematics";
 import { createEditorStore } from "~/stores/editor-store";
-
-const robotFile = (file: string): Robot => {
-  const parsed = parseRobot(JSON.parse(readFileSync(new URL(`../../db/demo/robots/${file}`, import.meta.url), "utf8")));
-  if (!parsed.ok) throw new Error(`${file} invalid`);
-  return parsed.robot;
-};
-const crawler = robotFile("pier-crawler.json");
-
-function tripod(overrides: Partial<Parameters<typeof generateGait>[1]> = {}): Sequence {
-  return generateGait(crawler, { template: "tripod", cycleMs: 1200, fps: 50, strideMm: 40, ...overrides });
-}
+import { crawler, tripod } from "../support/editor";
 
 const storeWith = (sequence = tripod(), readOnly = false) => createEditorStore({ robot: crawler, sequence, revision: 3, readOnly });
 

@@ -6,7 +6,7 @@ import { afterEach, expect, test } from "vitest";
 import { ChecksList } from "~/components/editor/ChecksList";
 import type { useServerReference } from "~/components/editor/use-server-reference";
 import { EditorStoreProvider } from "~/stores/editor-context";
-import { renderWithStore } from "./support";
+import { renderWithStore } from "../../support/editor";
 
 afterEach(cleanup);
 

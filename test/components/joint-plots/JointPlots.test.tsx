@@ -5,7 +5,7 @@ import { act, cleanup, screen } from "@testing-library/react";
 import { afterEach, expect, test } from "vitest";
 import { jointSeries } from "~/components/joint-plots/joint-series";
 import { JointPlots } from "~/components/joint-plots/JointPlots";
-import { renderWithStore } from "../editor/support";
+import { renderWithStore } from "../../support/editor";
 
 afterEach(cleanup);
 

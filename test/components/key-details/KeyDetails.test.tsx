@@ -4,7 +4,7 @@
 import { act, cleanup, fireEvent, screen } from "@testing-library/react";
 import { afterEach, describe, expect, test } from "vitest";
 import { KeyDetails } from "~/components/key-details/KeyDetails";
-import { renderWithStore } from "../editor/support";
+import { renderWithStore } from "../../support/editor";
 
 afterEach(cleanup);
 

@@ -6,7 +6,7 @@ import { act, cleanup, fireEvent, screen, within } from "@testing-library/react"
 import { afterEach, describe, expect, test } from "vitest";
 import { Timeline } from "~/components/timeline/Timeline";
 import { tickStep } from "~/components/timeline/TimeRuler";
-import { renderWithStore } from "../editor/support";
+import { renderWithStore } from "../../support/editor";
 
 afterEach(cleanup);
 

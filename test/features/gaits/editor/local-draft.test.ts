@@ -3,7 +3,7 @@
 // server and differs from what the server holds.
 import { afterEach, expect, test } from "vitest";
 import { clearLocalDraft, markLocalDraftSynced, pendingLocalDraft, readLocalDraft, writeLocalDraft } from "~/features/gaits/editor/local-draft";
-import { tripod } from "../../../components/editor/support";
+import { tripod } from "../../../support/editor";
 
 afterEach(() => window.localStorage.clear());
 

@@ -1,18 +1,14 @@
-// Helpers of the editor component tests: the demo crawler, a tripod on it,
-// and a render with a store of its own.
+// The gait editor under test: the demo crawler, a tripod on it, and a render
+// with an editor store of its own (the component tests add jsdom themselves).
 import { render } from "@testing-library/react";
 import type { ReactNode } from "react";
 import { generateGait, type GaitParams, type Sequence } from "~/gait";
-import pierCrawler from "../../../db/demo/robots/pier-crawler.json";
-import { parseRobot, type Robot } from "~/kinematics";
+import type { Robot } from "~/kinematics";
 import { EditorStoreProvider } from "~/stores/editor-context";
 import { createEditorStore, type EditorStore } from "~/stores/editor-store";
+import { loadDemoRobot } from "./robots";
 
-export const crawler: Robot = (() => {
-  const parsed = parseRobot(structuredClone(pierCrawler));
-  if (!parsed.ok) throw new Error("demo crawler invalid");
-  return parsed.robot;
-})();
+export const crawler: Robot = loadDemoRobot("pier-crawler");
 
 export const tripod = (params: Partial<GaitParams> = {}): Sequence =>
   generateGait(crawler, { template: "tripod", cycleMs: 1200, fps: 50, strideMm: 40, ...params } as GaitParams);
