@@ -8,7 +8,8 @@ import { seedDemo } from "../../../db/seed";
 import routeConfig from "~/routes";
 import { database } from "~/platform/db.server";
 import { ROLES, can } from "~/platform/permissions";
-import { type Caller, type DemoIds, type RouteCase, demoIds, requestsAs, statusOf } from "../../support/access-matrix";
+import { type Caller, type DemoIds, demoIds, outcome, requestsAs } from "../../support/routes";
+import type { RouteCase } from "./support";
 
 const caseFiles = import.meta.glob<{ cases: RouteCase[] }>("./cases/*.ts", { eager: true });
 const cases = Object.values(caseFiles).flatMap((file) => file.cases);
@@ -56,15 +57,15 @@ describe.each(cases.map((entry) => [entry.name, entry] as const))("%s", (_name, 
   test.each(callers)("as %s", async (caller) => {
     const prepared = entry.prepare ? await entry.prepare(database(), ids, caller) : {};
     const before = await fingerprint();
-    const outcome = await statusOf(async () => entry.run(await requestsAs(caller, ids), ids, prepared));
+    const answer = await outcome(async () => entry.run(await requestsAs(caller, ids), ids, prepared));
     const expectAllowed = allowed(entry, caller);
     if (expectAllowed) {
-      const ok = outcome.status < 400 || outcome.status === entry.allowedStatus;
-      expect(ok, `${caller} may call ${entry.name} (needs ${entry.needs}) but got ${outcome.status}`).toBe(true);
-      expect(outcome.location ?? "", `${caller} was sent to sign in`).not.toMatch(/^\/(sign-in|welcome)/);
+      const ok = answer.status < 400 || answer.status === entry.allowedStatus;
+      expect(ok, `${caller} may call ${entry.name} (needs ${entry.needs}) but got ${answer.status}`).toBe(true);
+      expect(answer.location ?? "", `${caller} was sent to sign in`).not.toMatch(/^\/(sign-in|welcome)/);
     } else {
-      const refused = outcome.status === 401 || outcome.status === 403 || (caller === "signed-out" && /^\/sign-in/.test(outcome.location ?? ""));
-      expect(refused, `${caller} must be refused ${entry.name} (needs ${entry.needs}) but got ${outcome.status} ${outcome.location ?? ""}`).toBe(true);
+      const refused = answer.status === 401 || answer.status === 403 || (caller === "signed-out" && /^\/sign-in/.test(answer.location ?? ""));
+      expect(refused, `${caller} must be refused ${entry.name} (needs ${entry.needs}) but got ${answer.status} ${answer.location ?? ""}`).toBe(true);
       expect(await fingerprint(), `${caller}'s refused ${entry.name} changed the database`).toBe(before);
     }
   });

@@ -2,10 +2,10 @@ import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { invitations, memberships, users } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
-import { demoIds, requestsAs, type DemoIds } from "../../support/access-matrix";
-import { currentMember, type Member, type User } from "~/platform/access.server";
+import { uniqueName } from "../../support/names";
+import { demoIds, memberAs, refusal, type DemoIds } from "../../support/routes";
+import type { Member, User } from "~/platform/access.server";
 import { database } from "~/platform/db.server";
-import { ServiceError } from "~/platform/errors.server";
 import { acceptInvitation, invitationForToken, invite, resendInvitation, revokeInvitation } from "~/features/accounts/invitations.server";
 
 const MAIL_API = process.env.MAIL_INBOX_URL ?? "http://127.0.0.1:2626";
@@ -26,27 +26,16 @@ async function linkTokenFor(email: string): Promise<string> {
   return token;
 }
 
-const refusal = async (run: () => Promise<unknown>) => {
-  try {
-    await run();
-  } catch (error) {
-    if (error instanceof ServiceError) return error;
-    throw error;
-  }
-  throw new Error("expected a refusal");
-};
-
 beforeAll(async () => {
   await seedDemo(database());
   ids = await demoIds(database());
-  owner = (await currentMember(await (await requestsAs("owner", ids))("GET", "/")))!;
-  lead = (await currentMember(await (await requestsAs("lead", ids))("GET", "/")))!;
+  owner = await memberAs("owner", ids);
+  lead = await memberAs("lead", ids);
 });
 
 describe("invitations", () => {
   test("the e-mailed link adds the membership once; the link is single-use", async () => {
-    const stamp = Date.now().toString(36);
-    const person = await newPerson(`inv-${stamp}`);
+    const person = await newPerson(uniqueName("inv"));
     await invite(lead, person.email, "animator");
     const token = await linkTokenFor(person.email);
     expect((await invitationForToken(token)).role).toBe("animator");
@@ -74,7 +63,7 @@ describe("invitations", () => {
   });
 
   test("resending retires the old link; revoking retires every link", async () => {
-    const person = await newPerson(`resend-${Date.now().toString(36)}`);
+    const person = await newPerson(uniqueName("resend"));
     const row = await invite(owner, person.email, "viewer");
     const first = await linkTokenFor(person.email);
     await resendInvitation(owner, row.id);
@@ -86,7 +75,7 @@ describe("invitations", () => {
   });
 
   test("an expired invitation is refused with a message saying so", async () => {
-    const person = await newPerson(`late-${Date.now().toString(36)}`);
+    const person = await newPerson(uniqueName("late"));
     const row = await invite(owner, person.email, "viewer");
     const token = await linkTokenFor(person.email);
     await database().update(invitations).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(invitations.id, row.id));
@@ -96,7 +85,7 @@ describe("invitations", () => {
   });
 
   test("two tabs accepting at once add one membership", async () => {
-    const person = await newPerson(`twice-${Date.now().toString(36)}`);
+    const person = await newPerson(uniqueName("twice"));
     await invite(owner, person.email, "viewer");
     const token = await linkTokenFor(person.email);
     const results = await Promise.allSettled([acceptInvitation(person, { token }), acceptInvitation(person, { token })]);

@@ -2,10 +2,9 @@ import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { auditLog, memberships } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
-import { demoIds, requestsAs, type DemoIds } from "../../support/access-matrix";
-import { currentMember, type Member } from "~/platform/access.server";
+import { demoIds, memberAs, refusal, type DemoIds } from "../../support/routes";
+import type { Member } from "~/platform/access.server";
 import { database } from "~/platform/db.server";
-import { ServiceError } from "~/platform/errors.server";
 import { changeRole, removeMember } from "~/features/accounts/members.server";
 
 let ids: DemoIds;
@@ -14,18 +13,8 @@ let owner: Member;
 beforeAll(async () => {
   await seedDemo(database());
   ids = await demoIds(database());
-  owner = (await currentMember(await (await requestsAs("owner", ids))("GET", "/")))!;
+  owner = await memberAs("owner", ids);
 });
-
-const refusal = async (run: () => Promise<unknown>) => {
-  try {
-    await run();
-  } catch (error) {
-    if (error instanceof ServiceError) return error;
-    throw error;
-  }
-  throw new Error("expected a refusal");
-};
 
 describe("members and roles", () => {
   test("the only owner can be neither demoted nor removed (409, nothing changed)", async () => {

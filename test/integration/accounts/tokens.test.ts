@@ -1,39 +1,22 @@
 import { beforeAll, beforeEach, describe, expect, test } from "vitest";
 import { seedDemo } from "../../../db/seed";
-import { demoIds, type DemoIds } from "../../support/access-matrix";
-import { currentMember, type Member, requireApiAccess } from "~/platform/access.server";
+import { bearer, demoIds, memberAs, outcome, type DemoIds } from "../../support/routes";
+import { type Member, requireApiAccess } from "~/platform/access.server";
 import { database } from "~/platform/db.server";
 import { resetRateLimits } from "~/platform/rate-limit.server";
 import { createToken, listTokens, revokeToken } from "~/features/accounts/tokens.server";
 import { createWorkspace } from "~/features/accounts/workspaces.server";
 import { loader as apiWorkspace } from "~/routes/api.v1/workspace";
-import { requestsAs } from "../../support/access-matrix";
 
 let ids: DemoIds;
 let firmware: Member;
 
-async function memberAs(role: "firmware" | "owner" | "viewer"): Promise<Member> {
-  const request = await (await requestsAs(role, ids))("GET", "/");
-  return (await currentMember(request))!;
-}
-
-const withToken = (token: string, headers: Record<string, string> = {}) =>
-  new Request("http://127.0.0.1:3000/api/v1/workspace", { headers: { Authorization: `Bearer ${token}`, ...headers } });
-
-async function errorOf(run: () => Promise<unknown>): Promise<{ status: number; body: { error: { code: string; message: string } }; headers: Headers }> {
-  try {
-    await run();
-  } catch (thrown) {
-    if (thrown instanceof Response) return { status: thrown.status, body: await thrown.json(), headers: thrown.headers };
-    throw thrown;
-  }
-  throw new Error("expected a refusal");
-}
+const withToken = (token: string) => bearer("/api/v1/workspace", token);
 
 beforeAll(async () => {
   await seedDemo(database());
   ids = await demoIds(database());
-  firmware = await memberAs("firmware");
+  firmware = await memberAs("firmware", ids);
 });
 beforeEach(() => resetRateLimits());
 
@@ -54,13 +37,13 @@ describe("API tokens", () => {
   test("a revoked token is refused with 401", async () => {
     const { token, row } = await createToken(firmware, "to revoke");
     await revokeToken(firmware, row.id);
-    const refusal = await errorOf(() => requireApiAccess(withToken(token), "workspace.read"));
+    const refusal = await outcome(() => requireApiAccess(withToken(token), "workspace.read"));
     expect(refusal.status).toBe(401);
     expect(refusal.body.error.code).toBe("unauthorized");
   });
 
   test("a token of another workspace does not reach this one", async () => {
-    const owner = await memberAs("owner");
+    const owner = await memberAs("owner", ids);
     const other = await createWorkspace(owner.user, "Driftwood Test Lab");
     const { token } = await createToken({ ...owner, workspace: other, role: "owner" }, "other lab");
     const member = await requireApiAccess(withToken(token), "workspace.read");
@@ -69,16 +52,15 @@ describe("API tokens", () => {
   });
 
   test("a token stops working when its holder's role no longer allows tokens", async () => {
-    const viewerRequest = await (await requestsAs("viewer", ids))("GET", "/");
-    const viewer = (await currentMember(viewerRequest))!;
+    const viewer = await memberAs("viewer", ids);
     // Made while the holder was allowed, then the role changed.
     const { token } = await createToken({ ...viewer, role: "firmware" }, "was firmware");
-    const refusal = await errorOf(() => requireApiAccess(withToken(token), "workspace.read"));
+    const refusal = await outcome(() => requireApiAccess(withToken(token), "workspace.read"));
     expect(refusal.status).toBe(401);
   });
 
   test("a malformed Authorization header gets a 401 that says how to send the token", async () => {
-    const refusal = await errorOf(() => requireApiAccess(new Request("http://127.0.0.1:3000/api/v1/workspace", { headers: { Authorization: "Token abc" } }), "workspace.read"));
+    const refusal = await outcome(() => requireApiAccess(new Request("http://127.0.0.1:3000/api/v1/workspace", { headers: { Authorization: "Token abc" } }), "workspace.read"));
     expect(refusal.status).toBe(401);
     expect(refusal.body.error.message).toContain("Bearer <token>");
   });
@@ -86,7 +68,7 @@ describe("API tokens", () => {
   test("each token has a rate limit: past it, 429 with Retry-After", async () => {
     const { token } = await createToken(firmware, "busy script");
     for (let i = 0; i < 120; i++) await requireApiAccess(withToken(token), "workspace.read");
-    const refusal = await errorOf(() => requireApiAccess(withToken(token), "workspace.read"));
+    const refusal = await outcome(() => requireApiAccess(withToken(token), "workspace.read"));
     expect(refusal.status).toBe(429);
     expect(Number(refusal.headers.get("Retry-After"))).toBeGreaterThan(0);
     expect(refusal.body.error.code).toBe("rate_limited");
@@ -94,7 +76,7 @@ describe("API tokens", () => {
 
   test("a token acts within its role: firmware cannot approve versions", async () => {
     const { token } = await createToken(firmware, "limited");
-    const refusal = await errorOf(() => requireApiAccess(withToken(token), "versions.decide"));
+    const refusal = await outcome(() => requireApiAccess(withToken(token), "versions.decide"));
     expect(refusal.status).toBe(403);
     expect(refusal.body.error.message).toBe("The firmware role cannot approve or send back versions.");
   });

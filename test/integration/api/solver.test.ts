@@ -1,15 +1,15 @@
-import { readFileSync } from "node:fs";
 import { beforeAll, describe, expect, test } from "vitest";
 import { seedDemo } from "../../../db/seed";
-import { act, demoIds, requestsAs, type DemoIds } from "../../support/access-matrix";
+import { act, demoIds, PUBLIC_ORIGIN, requestsAs, responseOf, type DemoIds } from "../../support/routes";
+import { demoRobotJson, loadDemoRobot } from "../../support/robots";
 import { database } from "~/platform/db.server";
 import { COLUMNS_LAYOUT, decodeColumns, generateGait } from "~/gait";
-import { neutralStance, parseRobot, type Robot } from "~/kinematics";
+import { neutralStance } from "~/kinematics";
 import * as solve from "~/routes/api.v1/solver/solve";
 import * as ik from "~/routes/api.v1/solver/ik";
 
-const robotJson = JSON.parse(readFileSync(new URL("../../../db/demo/robots/pier-crawler.json", import.meta.url), "utf8"));
-const robot = (parseRobot(robotJson) as { ok: true; robot: Robot }).robot;
+const robotJson = demoRobotJson("pier-crawler");
+const robot = loadDemoRobot("pier-crawler");
 
 let ids: DemoIds;
 beforeAll(async () => {
@@ -21,14 +21,9 @@ async function post(route: typeof solve | typeof ik, path: string, body: BodyIni
   const make = await requestsAs(role, ids);
   const request =
     typeof body === "string"
-      ? new Request(new URL(path, "http://127.0.0.1:3000"), { method: "POST", body, headers: (await make("POST", path)).headers })
+      ? new Request(new URL(path, PUBLIC_ORIGIN), { method: "POST", body, headers: (await make("POST", path)).headers })
       : await make("POST", path, { json: body });
-  try {
-    return (await act(route, request)) as Response;
-  } catch (thrown) {
-    if (thrown instanceof Response) return thrown;
-    throw thrown;
-  }
+  return responseOf(() => act(route, request));
 }
 
 describe("POST /api/v1/solve", () => {
@@ -36,7 +31,7 @@ describe("POST /api/v1/solve", () => {
     const sequence = generateGait(robot, { template: "tripod", cycleMs: 1200, fps: 50, strideMm: 40 });
     const response = await post(solve, "/api/v1/solve", { robot: robotJson, sequence });
     expect(response.status).toBe(200);
-    const body = await response.json();
+    const body = response.body;
     expect(body.frames).toHaveLength(60);
     expect(Object.keys(body.frames[0].legs).sort()).toEqual(["LF", "LM", "LR", "RF", "RM", "RR"]);
     expect(body.frames[0]).toMatchObject({ index: 0, timeMs: 0 });
@@ -50,11 +45,11 @@ describe("POST /api/v1/solve", () => {
     const first = await post(solve, "/api/v1/solve", body);
     const second = await post(solve, "/api/v1/solve", body);
     expect([first.headers.get("X-Solve-Cache"), second.headers.get("X-Solve-Cache")]).toEqual(["miss", "hit"]);
-    const [a, b] = [await first.json(), await second.json()];
+    const [a, b] = [first.body, second.body];
     expect(b).toEqual(a);
     expect(a).toMatchObject({ layout: COLUMNS_LAYOUT, frames: 60, legs: ["LF", "LM", "LR", "RF", "RM", "RR"] });
     // The same numbers as the frame layout, to float32.
-    const frames = await (await post(solve, "/api/v1/solve", { robot: robotJson, sequence })).json();
+    const frames = (await post(solve, "/api/v1/solve", { robot: robotJson, sequence })).body;
     const columns = decodeColumns(a);
     frames.frames.forEach((frame: { legs: Record<string, { angles: { coxa: number } }> }, i: number) =>
       expect(columns.leg.RM.angles.coxa[i]).toBe(Math.fround(frame.legs.RM.angles.coxa)),
@@ -64,8 +59,8 @@ describe("POST /api/v1/solve", () => {
 
   test("the checks layout answers flags and summary only, the same as the full solve's", async () => {
     const sequence = generateGait(robot, { template: "tripod", cycleMs: 1200, fps: 50, strideMm: 400 });
-    const full = await (await post(solve, "/api/v1/solve", { robot: robotJson, sequence })).json();
-    const checks = await (await post(solve, "/api/v1/solve", { robot: robotJson, sequence, options: { layout: "checks" } })).json();
+    const full = (await post(solve, "/api/v1/solve", { robot: robotJson, sequence })).body;
+    const checks = (await post(solve, "/api/v1/solve", { robot: robotJson, sequence, options: { layout: "checks" } })).body;
     expect(Object.keys(checks).sort()).toEqual(["flags", "summary"]);
     expect(checks.flags.length).toBeGreaterThan(0);
     expect(checks).toEqual({ flags: full.flags, summary: full.summary });
@@ -75,25 +70,25 @@ describe("POST /api/v1/solve", () => {
     const sequence = generateGait(robot, { template: "tripod", cycleMs: 1200, fps: 50 });
     const response = await post(solve, "/api/v1/solve", { robot: robotJson, sequence, options: { layout: "rows" } });
     expect(response.status).toBe(422);
-    expect((await response.json()).error.details[0].path).toBe("options.layout");
+    expect(response.body.error.details[0].path).toBe("options.layout");
   });
 
   test("signed out: 401 JSON error", async () => {
     const response = await post(solve, "/api/v1/solve", { robot: robotJson, sequence: {} }, "signed-out");
     expect(response.status).toBe(401);
-    expect(await response.json()).toMatchObject({ error: { code: "unauthorized" } });
+    expect(response.body).toMatchObject({ error: { code: "unauthorized" } });
   });
 
   test("a body that is not JSON: 400 saying so", async () => {
     const response = await post(solve, "/api/v1/solve", "{not json");
     expect(response.status).toBe(400);
-    expect((await response.json()).error.message).toMatch(/not valid JSON/);
+    expect(response.body.error.message).toMatch(/not valid JSON/);
   });
 
   test("a body over the limit: 413 with both sizes", async () => {
     const response = await post(solve, "/api/v1/solve", JSON.stringify({ robot: robotJson, padding: "x".repeat(2 * 1024 * 1024 + 10) }));
     expect(response.status).toBe(413);
-    expect((await response.json()).error.message).toMatch(/limit is 2097152/);
+    expect(response.body.error.message).toMatch(/limit is 2097152/);
   });
 
   test("an invalid robot: 422 with the path of every problem", async () => {
@@ -103,7 +98,7 @@ describe("POST /api/v1/solve", () => {
     const sequence = generateGait(robot, { template: "tripod", cycleMs: 1200, fps: 50 });
     const response = await post(solve, "/api/v1/solve", { robot: broken, sequence });
     expect(response.status).toBe(422);
-    const body = await response.json();
+    const body = response.body;
     expect(body.error.code).toBe("invalid");
     expect(body.error.details).toContainEqual({ path: "robot.legs[2].joints.femur.minDeg", message: "must be below maxDeg (got 40 ≥ 30)" });
   });
@@ -112,7 +107,7 @@ describe("POST /api/v1/solve", () => {
     const sequence = generateGait(robot, { template: "tripod", cycleMs: 1200, fps: 50 }) as unknown as Record<string, unknown>;
     const response = await post(solve, "/api/v1/solve", { robot: robotJson, sequence: { ...sequence, fps: -5 } });
     expect(response.status).toBe(422);
-    const body = await response.json();
+    const body = response.body;
     expect(body.error.details.some((issue: { path: string }) => issue.path === "sequence.fps")).toBe(true);
   });
 
@@ -126,7 +121,7 @@ describe("POST /api/v1/ik", () => {
   test("the neutral stance solves within limits for every leg, with pulses", async () => {
     const response = await post(ik, "/api/v1/ik", { robot: robotJson, feet: neutralStance(robot) });
     expect(response.status).toBe(200);
-    const { legs } = await response.json();
+    const { legs } = response.body;
     for (const leg of robot.legs) {
       expect(legs[leg.id].reachable, `${leg.id} reachable`).toBe(true);
       expect(legs[leg.id].violations).toEqual([]);
@@ -136,7 +131,7 @@ describe("POST /api/v1/ik", () => {
 
   test("a foot far out of reach is reported with a reason, never NaN", async () => {
     const response = await post(ik, "/api/v1/ik", { robot: robotJson, feet: { LF: [900, 900, -90] } });
-    const { legs } = await response.json();
+    const { legs } = response.body;
     expect(legs.LF.reachable).toBe(false);
     expect(legs.LF.reason).toMatch(/LF/);
     expect(Object.values(legs.LF.angles).every((value) => Number.isFinite(value))).toBe(true);
@@ -145,6 +140,6 @@ describe("POST /api/v1/ik", () => {
   test("a foot for a leg the robot does not have: 422 naming it", async () => {
     const response = await post(ik, "/api/v1/ik", { robot: robotJson, feet: { XX: [0, 0, 0] } });
     expect(response.status).toBe(422);
-    expect((await response.json()).error.details[0].path).toBe("feet.XX");
+    expect(response.body.error.details[0].path).toBe("feet.XX");
   });
 });

@@ -7,13 +7,12 @@ import { and, desc, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { auditLog, gaitVersions, gaits, robotRevisions, robots, workspaces } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
-import { act, demoIds, load, requestsAs, type Caller, type DemoIds } from "../../support/access-matrix";
+import { act, demoIds, load, outcome, requestsAs, type Caller, type DemoIds } from "../../support/routes";
 import { generateGait, parseSequence } from "~/gait";
 import { parseRobot } from "~/kinematics";
 import { database } from "~/platform/db.server";
 import * as draftApi from "~/routes/api.v1/gaits/draft";
 import * as editor from "~/routes/gaits/editor";
-import { outcome } from "../robots/support";
 
 let ids: DemoIds;
 let gaitId: string;

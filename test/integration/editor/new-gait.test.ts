@@ -5,20 +5,17 @@ import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { auditLog, gaits, robotRevisions } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
-import { act, demoIds, load, requestsAs, type Caller, type DemoIds } from "../../support/access-matrix";
+import { act, demoIds, load, outcome, requestsAs, type Caller, type DemoIds } from "../../support/routes";
+import { uniqueName } from "../../support/names";
 import { parseSequence } from "~/gait";
 import { database } from "~/platform/db.server";
 import * as newGait from "~/routes/gaits/new";
-import { outcome } from "../robots/support";
 
 let ids: DemoIds;
 beforeAll(async () => {
   await seedDemo(database());
   ids = await demoIds(database());
 });
-
-let counter = 0;
-const unique = (label: string) => `${label} ${Date.now().toString(36)}-${++counter}`;
 
 async function post(caller: Caller, form: Record<string, string>) {
   const request = await requestsAs(caller, ids);
@@ -38,7 +35,7 @@ describe("the new-gait page", () => {
   });
 
   test("creates the gait with a generated draft on the newest robot revision and opens the editor", async () => {
-    const name = unique("Quick tripod");
+    const name = uniqueName("Quick tripod");
     const answer = await post("animator", { intent: "create", robotId: ids.robotIds["Pier crawler"], name, template: "tripod", cycleMs: "1000", fps: "50", strideMm: "50", stepHeightMm: "30" });
     expect(answer.status).toBe(302);
     const gaitId = answer.location!.match(/^\/gaits\/([0-9a-f-]{36})\/edit$/)![1];
@@ -58,12 +55,12 @@ describe("the new-gait page", () => {
     expect(taken.status).toBe(409);
     expect(taken.body).toMatchObject({ error: "This robot already has a gait named “Tripod cruise”; choose another name.", code: "name-taken", field: "name" });
 
-    const unsuited = await post("lead", { intent: "create", robotId: ids.robotIds["Pier crawler"], name: unique("Trot"), template: "trot" });
+    const unsuited = await post("lead", { intent: "create", robotId: ids.robotIds["Pier crawler"], name: uniqueName("Trot"), template: "trot" });
     expect(unsuited.status).toBe(422);
     expect(unsuited.body.field).toBe("template");
     expect(unsuited.body.error).toMatch(/^template: trot needs 4 legs/);
 
-    const badNumber = await post("lead", { intent: "create", robotId: ids.robotIds["Pier crawler"], name: unique("Odd"), template: "wave", cycleMs: "fast" });
+    const badNumber = await post("lead", { intent: "create", robotId: ids.robotIds["Pier crawler"], name: uniqueName("Odd"), template: "wave", cycleMs: "fast" });
     expect(badNumber.status).toBe(422);
     expect(badNumber.body).toMatchObject({ error: "Cycle time (ms): must be a number", code: "invalid", field: "cycleMs" });
   });
@@ -72,7 +69,7 @@ describe("the new-gait page", () => {
     const [source] = await database().select().from(gaits).where(eq(gaits.id, ids.gaitIds["Wave creep"]));
     const sequence = structuredClone(source.draftSequence) as any;
     sequence.legs.LF.keys[0].apexMm = 44;
-    const name = unique("Wave creep (my copy)");
+    const name = uniqueName("Wave creep (my copy)");
     const answer = await post("animator", { intent: "copy", sourceGaitId: source.id, name, sequence: JSON.stringify(sequence) });
     expect(answer.status).toBe(302);
     const copyId = answer.location!.split("/")[2];
@@ -81,7 +78,7 @@ describe("the new-gait page", () => {
     expect((copy.draftSequence as any).legs.LF.keys[0].apexMm).toBe(44);
     expect((copy.draftSequence as any).name).toBe(name);
 
-    const broken = await post("animator", { intent: "copy", sourceGaitId: source.id, name: unique("Broken"), sequence: "{not json" });
+    const broken = await post("animator", { intent: "copy", sourceGaitId: source.id, name: uniqueName("Broken"), sequence: "{not json" });
     expect(broken.status).toBe(400);
     expect(broken.body.field).toBe("sequence");
   });
@@ -90,7 +87,7 @@ describe("the new-gait page", () => {
     for (const caller of ["viewer", "firmware"] as const) {
       const page = await outcome(async () => load(newGait, await (await requestsAs(caller, ids))("GET", "/gaits/new")));
       expect(page.status).toBe(403);
-      const created = await post(caller, { intent: "create", robotId: ids.robotIds["Pier crawler"], name: unique("Nope"), template: "tripod" });
+      const created = await post(caller, { intent: "create", robotId: ids.robotIds["Pier crawler"], name: uniqueName("Nope"), template: "tripod" });
       expect(created.status).toBe(403);
     }
   });

@@ -6,13 +6,14 @@ import { eq, sql } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { calibrationProfiles } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
-import { act, demoIds, load, requestsAs, type DemoIds } from "../../support/access-matrix";
+import { uniqueName } from "../../support/names";
+import { act, bearer, demoIds, load, outcome, requestsAs, responseOf, type DemoIds, type Outcome } from "../../support/routes";
 import { createProfile, deleteProfile, listProfiles, updateProfile } from "~/features/robots/calibration.server";
 import { database } from "~/platform/db.server";
 import { ServiceError } from "~/platform/errors.server";
 import * as apiList from "~/routes/api.v1/export/calibration-profiles";
 import * as page from "~/routes/export/calibration";
-import { answerOf, auditEntries, bearer, tokenFor, unique } from "./support";
+import { auditEntries, tokenFor } from "./support";
 
 let ids: DemoIds;
 let robotId: string;
@@ -25,20 +26,10 @@ beforeAll(async () => {
   actor = { userId: ids.userIds.firmware, workspaceId: ids.workspaceId };
 });
 
-type Outcome = { status: number; location?: string; body: any };
-
 /** What the page's action answered: a redirect, or data with a status. */
 async function post(role: "firmware" | "viewer" | "owner", form: Record<string, string>): Promise<Outcome> {
   const request = await requestsAs(role, ids);
-  let value: unknown;
-  try {
-    value = await act(page, await request("POST", `/export/calibration/${robotId}`, { form }), { robotId });
-  } catch (thrown) {
-    value = thrown;
-  }
-  if (value instanceof Response) return { status: value.status, location: value.headers.get("Location") ?? undefined, body: null };
-  const { data, init } = value as { data: unknown; init?: ResponseInit | null };
-  return { status: init?.status ?? 200, body: data };
+  return outcome(async () => act(page, await request("POST", `/export/calibration/${robotId}`, { form }), { robotId }));
 }
 
 async function thrown(run: () => Promise<unknown>): Promise<Error> {
@@ -52,7 +43,7 @@ async function thrown(run: () => Promise<unknown>): Promise<Error> {
 
 describe("through the page's form", () => {
   test("create: the form's fields become the profile; the page then opens it at revision 1", async () => {
-    const name = unique("SN-QW");
+    const name = uniqueName("SN-QW");
     const outcome = await post("firmware", {
       intent: "create",
       name,
@@ -78,7 +69,7 @@ describe("through the page's form", () => {
   });
 
   test("invalid fields come back by path, beside their inputs, and nothing is saved", async () => {
-    const name = unique("SN-bad");
+    const name = uniqueName("SN-bad");
     const outcome = await post("firmware", { intent: "create", name, "joints.LF.coxa.trimDeg": "50", "joints.RF.femur.channel": "two" });
     expect(outcome.status).toBe(422);
     expect(outcome.body.details.issues).toEqual([{ path: "joints.RF.femur.channel", message: 'must be a whole channel number (got "two")' }]);
@@ -90,20 +81,20 @@ describe("through the page's form", () => {
   });
 
   test("two joints on one channel: refused, naming the channel", async () => {
-    const outcome = await post("firmware", { intent: "create", name: unique("SN-dup"), "joints.LF.coxa.channel": "1" });
+    const outcome = await post("firmware", { intent: "create", name: uniqueName("SN-dup"), "joints.LF.coxa.channel": "1" });
     expect(outcome.status).toBe(422);
     expect(JSON.stringify(outcome.body.details.issues)).toMatch(/channel 1/);
   });
 
   test("a pasted JSON profile naming a leg the robot lacks: the issue at joints.<leg>", async () => {
-    const outcome = await post("firmware", { intent: "import", json: JSON.stringify({ name: unique("SN-json"), joints: { LM: { coxa: { trimDeg: 1 } } } }) });
+    const outcome = await post("firmware", { intent: "import", json: JSON.stringify({ name: uniqueName("SN-json"), joints: { LM: { coxa: { trimDeg: 1 } } } }) });
     expect(outcome.status).toBe(422);
     expect(outcome.body.details.issues[0].path).toBe("joints.LM");
     expect((await post("firmware", { intent: "import", json: "{ nope" })).body.error).toMatch(/not JSON/);
   });
 
   test("update over a stale revision: 409 with both revisions; the newer save stays", async () => {
-    const created = await createProfile(actor, robotId, { name: unique("SN-race"), joints: {} });
+    const created = await createProfile(actor, robotId, { name: uniqueName("SN-race"), joints: {} });
     const first = await post("firmware", { intent: "update", profileId: created.id, baseRevision: "1", name: created.name, "joints.LF.tibia.trimDeg": "1" });
     expect(first.status).toBe(302);
     expect(first.location).toContain("saved=2");
@@ -116,7 +107,7 @@ describe("through the page's form", () => {
   });
 
   test("delete needs the current revision too; then the profile is gone and the deletion audited", async () => {
-    const created = await createProfile(actor, robotId, { name: unique("SN-del"), joints: {} });
+    const created = await createProfile(actor, robotId, { name: uniqueName("SN-del"), joints: {} });
     await updateProfile(actor, robotId, created.id, { name: created.name, joints: { RF: { coxa: { trimDeg: 0.5 } } } }, 1);
     expect((await post("firmware", { intent: "delete", profileId: created.id, baseRevision: "1" })).status).toBe(409);
     const done = await post("firmware", { intent: "delete", profileId: created.id, baseRevision: "2" });
@@ -128,7 +119,7 @@ describe("through the page's form", () => {
   });
 
   test("a name the robot already uses: 409 on the name field", async () => {
-    const created = await createProfile(actor, robotId, { name: unique("SN-twice"), joints: {} });
+    const created = await createProfile(actor, robotId, { name: uniqueName("SN-twice"), joints: {} });
     const outcome = await post("firmware", { intent: "create", name: created.name });
     expect(outcome.status).toBe(409);
     expect(outcome.body).toMatchObject({ field: "name" });
@@ -136,14 +127,14 @@ describe("through the page's form", () => {
 
   test("a viewer is refused, and nothing changes", async () => {
     const before = (await listProfiles(robotId)).length;
-    expect((await post("viewer", { intent: "create", name: unique("SN-viewer") })).status).toBe(403);
+    expect((await post("viewer", { intent: "create", name: uniqueName("SN-viewer") })).status).toBe(403);
     expect((await listProfiles(robotId)).length).toBe(before);
   });
 });
 
 describe("the service", () => {
   test("two saves from the same revision at once: one wins, the other is told (409)", async () => {
-    const created = await createProfile(actor, robotId, { name: unique("SN-both"), joints: {} });
+    const created = await createProfile(actor, robotId, { name: uniqueName("SN-both"), joints: {} });
     const results = await Promise.allSettled(
       [1, 2].map((trim) => updateProfile(actor, robotId, created.id, { name: created.name, joints: { LF: { coxa: { trimDeg: trim } } } }, 1)),
     );
@@ -155,7 +146,7 @@ describe("the service", () => {
   });
 
   test("two creates of one name that both pass the name check: one wins, the other is told (409), never a 500", async () => {
-    const name = unique("SN-race");
+    const name = uniqueName("SN-race");
     let locked!: () => void;
     let release!: () => void;
     const lockHeld = new Promise<void>((resolve) => (locked = resolve));
@@ -202,19 +193,19 @@ describe("the service", () => {
   });
 
   test("delete by the service", async () => {
-    const created = await createProfile(actor, robotId, { name: unique("SN-gone"), joints: {} });
+    const created = await createProfile(actor, robotId, { name: uniqueName("SN-gone"), joints: {} });
     expect(await deleteProfile(actor, robotId, created.id, 1)).toEqual({ name: created.name });
   });
 });
 
 describe("GET /api/v1/robots/:robotId/calibration-profiles", () => {
   test("lists the robot's profiles with their revisions, with a token", async () => {
-    const created = await createProfile(actor, robotId, { name: unique("SN-api"), joints: { RR: { femur: { reversed: true } } } });
+    const created = await createProfile(actor, robotId, { name: uniqueName("SN-api"), joints: { RR: { femur: { reversed: true } } } });
     const token = await tokenFor(ids.workspaceId, ids.userIds.firmware);
-    const answer = await answerOf(() => load(apiList, bearer(`/api/v1/robots/${robotId}/calibration-profiles`, token), { robotId }));
+    const answer = await responseOf(() => load(apiList, bearer(`/api/v1/robots/${robotId}/calibration-profiles`, token), { robotId }));
     expect(answer.status).toBe(200);
-    expect(answer.json.robot).toMatchObject({ id: robotId, name: "Quay walker" });
-    expect(answer.json.profiles.find((entry: { id: string }) => entry.id === created.id)).toMatchObject({
+    expect(answer.body.robot).toMatchObject({ id: robotId, name: "Quay walker" });
+    expect(answer.body.profiles.find((entry: { id: string }) => entry.id === created.id)).toMatchObject({
       name: created.name,
       revision: 1,
       updatedBy: { login: "priya-sandoval" },
@@ -225,7 +216,7 @@ describe("GET /api/v1/robots/:robotId/calibration-profiles", () => {
   test("a robot of another workspace or a malformed id: 404 / 400", async () => {
     const token = await tokenFor(ids.workspaceId, ids.userIds.firmware);
     const missing = "00000000-0000-4000-8000-000000000000";
-    expect((await answerOf(() => load(apiList, bearer(`/api/v1/robots/${missing}/calibration-profiles`, token), { robotId: missing }))).status).toBe(404);
-    expect((await answerOf(() => load(apiList, bearer("/api/v1/robots/x/calibration-profiles", token), { robotId: "x" }))).status).toBe(400);
+    expect((await responseOf(() => load(apiList, bearer(`/api/v1/robots/${missing}/calibration-profiles`, token), { robotId: missing }))).status).toBe(404);
+    expect((await responseOf(() => load(apiList, bearer("/api/v1/robots/x/calibration-profiles", token), { robotId: "x" }))).status).toBe(400);
   });
 });

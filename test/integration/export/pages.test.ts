@@ -3,13 +3,13 @@
 // shown (override, bad query), and the bench tables' speed checks.
 import { beforeAll, beforeEach, describe, expect, test } from "vitest";
 import { seedDemo } from "../../../db/seed";
-import { demoIds, load, requestsAs, type DemoIds } from "../../support/access-matrix";
+import { bearer, demoIds, load, requestsAs, responseOf, type DemoIds } from "../../support/routes";
 import { database } from "~/platform/db.server";
 import { resetRateLimits } from "~/platform/rate-limit.server";
 import * as benchTable from "~/routes/api.v1/export/bench-table";
 import * as bringUp from "~/routes/export/bring-up";
 import * as exportPage from "~/routes/export/page";
-import { answerOf, auditEntries, bearer, getTable, tokenFor } from "./support";
+import { auditEntries, getTable, tokenFor } from "./support";
 
 let ids: DemoIds;
 let token: string;
@@ -79,15 +79,15 @@ describe("/export", () => {
 });
 
 describe("bench tables", () => {
-  const get = (query: string) => answerOf(() => load(benchTable, bearer(`/api/v1/robots/${crawler}/bench-table?${query}`, token), { robotId: crawler }));
+  const get = (query: string) => responseOf(() => load(benchTable, bearer(`/api/v1/robots/${crawler}/bench-table?${query}`, token), { robotId: crawler }));
 
   test("centre: every pulse at its servo's centerUs, held for 2 s at 50 Hz", async () => {
     const answer = await get("kind=centre&format=json&units=us");
     expect(answer.status).toBe(200);
     expect(answer.headers.get("Content-Disposition")).toBe('attachment; filename="pier_crawler_centre_vbench_us_50hz.json"');
-    expect(answer.json.meta.frameCount).toBe(100);
-    for (const frame of [answer.json.frames[0], answer.json.frames[99]]) {
-      frame.values.forEach((us: number, column: number) => expect(us).toBe(answer.json.channels[column].centerUs));
+    expect(answer.body.meta.frameCount).toBe(100);
+    for (const frame of [answer.body.frames[0], answer.body.frames[99]]) {
+      frame.values.forEach((us: number, column: number) => expect(us).toBe(answer.body.channels[column].centerUs));
     }
     const [entry] = await auditEntries("bench-table.downloaded", 1);
     expect(entry.details).toMatchObject({ table: "centre", format: "json", units: "us", via: "token" });
@@ -96,18 +96,18 @@ describe("bench tables", () => {
   test("a slow sweep passes its speed check; one at twice the joint's limit needs an override (joint-speed errors)", async () => {
     const slow = await get("kind=sweep&leg=LF&joint=femur&speed=0.25&format=json");
     expect(slow.status).toBe(200);
-    expect(slow.json.meta.flags.errors).toBe(0);
+    expect(slow.body.meta.flags.errors).toBe(0);
     const fast = await get("kind=sweep&leg=LF&joint=femur&speed=2&format=json");
     expect(fast.status).toBe(409);
-    expect(fast.json.error.details.errorFlags["joint-speed"]).toBeGreaterThan(0);
+    expect(fast.body.error.details.errorFlags["joint-speed"]).toBeGreaterThan(0);
     const overridden = await get(`kind=sweep&leg=LF&joint=femur&speed=2&format=json&override=${encodeURIComponent("servo test at double speed")}`);
     expect(overridden.status).toBe(200);
-    expect(overridden.json.meta.flags.byKind["joint-speed"]).toBeGreaterThan(0);
+    expect(overridden.body.meta.flags.byKind["joint-speed"]).toBeGreaterThan(0);
   });
 
   test("ETag and 304 as for gait tables", async () => {
     const first = await get("kind=sweep&leg=RM&joint=tibia");
-    const again = await answerOf(() =>
+    const again = await responseOf(() =>
       load(benchTable, bearer(`/api/v1/robots/${crawler}/bench-table?kind=sweep&leg=RM&joint=tibia`, token, { "If-None-Match": first.headers.get("ETag")! }), { robotId: crawler }),
     );
     expect(again.status).toBe(304);
@@ -122,7 +122,7 @@ describe("bench tables", () => {
   ])("%s: 400 naming %s", async (query, parameter) => {
     const answer = await get(query);
     expect(answer.status).toBe(400);
-    expect(answer.json.error.details.parameter).toBe(parameter);
+    expect(answer.body.error.details.parameter).toBe(parameter);
   });
 
   test("the bring-up page shows the sweep's checks, its speed against the limit, and the download", async () => {

@@ -7,7 +7,7 @@ import { eq } from "drizzle-orm";
 import { beforeAll, beforeEach, describe, expect, test } from "vitest";
 import { releases, reviewEvents } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
-import { demoIds, load, requestsAs, type DemoIds } from "../../support/access-matrix";
+import { bearer, demoIds, load, requestsAs, type DemoIds } from "../../support/routes";
 import { EXPORTER_VERSION } from "~/export";
 import { database } from "~/platform/db.server";
 import { ServiceError } from "~/platform/errors.server";
@@ -16,7 +16,7 @@ import { SOLVER_VERSION } from "~/gait";
 import { RELEASE_TABLE } from "~/features/tables/query";
 import { recordReleaseTable } from "~/features/tables/releases.server";
 import * as exportPage from "~/routes/export/page";
-import { bearer, getTable, sha256, storedVersion, tablePath, tokenFor } from "./support";
+import { getTable, sha256, storedVersion, tablePath, tokenFor } from "./support";
 
 let ids: DemoIds;
 let token: string;

@@ -1,7 +1,5 @@
-// Helpers of the export integration tests: calling the table routes with a
-// bearer token or a session, reading what they answered, the stored versions
-// and robots, and the pure exporter's own bytes to compare against.
-import { readFileSync } from "node:fs";
+// Helpers of the export integration tests: API tokens, calling the table
+// route, and reading back stored versions, their robots and audit entries.
 import { createHash } from "node:crypto";
 import { and, desc, eq } from "drizzle-orm";
 import { apiTokens, auditLog, gaitVersions, gaits, memberships, robotRevisions, robots, users, workspaces, type Role } from "../../../db/schema";
@@ -10,52 +8,31 @@ import { parseRobot, type Robot } from "~/kinematics";
 import { hashToken } from "~/platform/access.server";
 import { database } from "~/platform/db.server";
 import * as tableRoute from "~/routes/api.v1/export/table";
-import { load, PUBLIC_ORIGIN } from "../../support/access-matrix";
-
-export type Answer = { status: number; headers: Headers; text: string; json: any };
-
-/** What a loader answered, returned or thrown, with its body read. */
-export async function answerOf(run: () => Promise<unknown>): Promise<Answer> {
-  let value: unknown;
-  try {
-    value = await run();
-  } catch (thrown) {
-    value = thrown;
-  }
-  if (!(value instanceof Response)) throw new Error(`expected a Response, got ${JSON.stringify(value)?.slice(0, 200)}`);
-  const text = await value.text();
-  const type = value.headers.get("Content-Type") ?? "";
-  return { status: value.status, headers: value.headers, text, json: /json/.test(type) && text ? JSON.parse(text) : null };
-}
-
-let counter = 0;
-export const unique = (label: string) => `${label}-${Date.now().toString(36)}-${++counter}`;
+import { uniqueName } from "../../support/names";
+import { load, responseOf, type Outcome } from "../../support/routes";
 
 /** A token of `userId` in `workspaceId`, stored as the app stores one. */
 export async function tokenFor(workspaceId: string, userId: string): Promise<string> {
-  const token = `gl_export_test_${unique("t")}_0123456789abcdef`;
-  await database().insert(apiTokens).values({ workspaceId, userId, name: unique("export test"), tokenHash: hashToken(token), prefix: token.slice(0, 8) });
+  const token = `gl_export_test_${uniqueName("t")}_0123456789abcdef`;
+  await database().insert(apiTokens).values({ workspaceId, userId, name: uniqueName("export test"), tokenHash: hashToken(token), prefix: token.slice(0, 8) });
   return token;
 }
 
 /** Another workspace with an owner who holds a token there. */
 export async function foreignOwnerToken(): Promise<string> {
   const db = database();
-  const [workspace] = await db.insert(workspaces).values({ slug: unique("other-lab"), name: "Other lab" }).returning();
-  const login = unique("other-owner");
+  const [workspace] = await db.insert(workspaces).values({ slug: uniqueName("other-lab"), name: "Other lab" }).returning();
+  const login = uniqueName("other-owner");
   const [user] = await db.insert(users).values({ login, name: "Other Owner", email: `${login}@other.test` }).returning();
   await db.insert(memberships).values({ workspaceId: workspace.id, userId: user.id, role: "owner" satisfies Role });
   return tokenFor(workspace.id, user.id);
 }
 
-export const bearer = (path: string, token: string, headers: Record<string, string> = {}) =>
-  new Request(new URL(path, PUBLIC_ORIGIN), { headers: { Authorization: `Bearer ${token}`, ...headers } });
-
 export const tablePath = (gaitId: string, number: string | number, query = "") => `/api/v1/gaits/${gaitId}/versions/${number}/table${query ? `?${query}` : ""}`;
 
 /** GET the table route as the framework would call it. */
-export function getTable(request: Request, gaitId: string, number: string | number): Promise<Answer> {
-  return answerOf(() => load(tableRoute, request, { gaitId, number: String(number) }));
+export function getTable(request: Request, gaitId: string, number: string | number): Promise<Outcome> {
+  return responseOf(() => load(tableRoute, request, { gaitId, number: String(number) }));
 }
 
 export const sha256 = (text: string) => createHash("sha256").update(text, "utf8").digest("hex");
@@ -79,5 +56,3 @@ export async function storedVersion(gaitId: string, number: number): Promise<{ i
 export async function auditEntries(action: string, limit = 5) {
   return database().select().from(auditLog).where(eq(auditLog.action, action)).orderBy(desc(auditLog.id)).limit(limit);
 }
-
-export const demoJson = (file: string) => JSON.parse(readFileSync(new URL(`../../../db/demo/robots/${file}`, import.meta.url), "utf8"));

@@ -4,14 +4,15 @@
 import { beforeAll, beforeEach, describe, expect, test } from "vitest";
 import Papa from "papaparse";
 import { seedDemo } from "../../../db/seed";
-import { demoIds, requestsAs, type DemoIds } from "../../support/access-matrix";
+import { uniqueName } from "../../support/names";
+import { bearer, demoIds, requestsAs, type DemoIds } from "../../support/routes";
 import { EXPORTER_VERSION, TABLE_MEDIA_TYPES, buildAngleTable } from "~/export";
 import { solveSequence } from "~/gait";
 import { createProfile, updateProfile } from "~/features/robots/calibration.server";
 import { database } from "~/platform/db.server";
 import { resetRateLimits } from "~/platform/rate-limit.server";
 import { SOLVER_VERSION } from "~/gait";
-import { auditEntries, bearer, foreignOwnerToken, getTable, sha256, storedVersion, tablePath, tokenFor, unique } from "./support";
+import { auditEntries, foreignOwnerToken, getTable, sha256, storedVersion, tablePath, tokenFor } from "./support";
 
 let ids: DemoIds;
 let token: string;
@@ -74,7 +75,7 @@ describe("formats and units", () => {
   test("the JSON table names the robot revision, version, hash, solver and exporter", async () => {
     const answer = await get(tripod, 1, "format=json");
     const version = await storedVersion(tripod, 1);
-    expect(answer.json.meta).toMatchObject({
+    expect(answer.body.meta).toMatchObject({
       exporterVersion: EXPORTER_VERSION,
       solverVersion: SOLVER_VERSION,
       robot: { name: "Pier crawler", revision: 1 },
@@ -90,9 +91,9 @@ describe("formats and units", () => {
 
   test("pulse widths lie inside each servo's minUs..maxUs", async () => {
     const answer = await get(tripod, 1, "format=json&units=us");
-    for (const frame of answer.json.frames) {
+    for (const frame of answer.body.frames) {
       frame.values.forEach((us: number, column: number) => {
-        const channel = answer.json.channels[column];
+        const channel = answer.body.channels[column];
         expect(us, `${channel.name} frame ${frame.index}`).toBeGreaterThanOrEqual(channel.minUs);
         expect(us, `${channel.name} frame ${frame.index}`).toBeLessThanOrEqual(channel.maxUs);
       });
@@ -105,23 +106,23 @@ describe("another rate solves the sequence again", () => {
     const answer = await get(tripod, 1, "format=json&rate=20");
     expect(answer.status).toBe(200);
     expect(answer.headers.get("Content-Disposition")).toBe('attachment; filename="tripod_cruise_v1_deg10_20hz.json"');
-    expect(answer.json.meta.rateHz).toBe(20);
-    expect(answer.json.meta.frameCount).toBe(24);
+    expect(answer.body.meta.rateHz).toBe(20);
+    expect(answer.body.meta.frameCount).toBe(24);
     expect(answer.text).toBe(await expectedTable(tripod, 1, { format: "json", units: "deg", rateHz: 20 }));
     // Frame 5 at 20 Hz is t = 250 ms: the solve at 20 Hz, rounded to 0.1°, whatever the 50 Hz frames around it hold.
     const version = await storedVersion(tripod, 1);
     const solved = solveSequence(version.robot, version.sequence, { fps: 20 });
-    const firstChannel = answer.json.channels[0];
+    const firstChannel = answer.body.channels[0];
     const expectedDeg = Math.round(solved.frames[5].legs[firstChannel.leg].angles[firstChannel.joint as "coxa" | "femur" | "tibia"] * 10) / 10;
-    expect(answer.json.frames[5].timeMs).toBe(250);
-    expect(answer.json.frames[5].values[0]).toBeCloseTo(expectedDeg, 6);
+    expect(answer.body.frames[5].timeMs).toBe(250);
+    expect(answer.body.frames[5].values[0]).toBeCloseTo(expectedDeg, 6);
   });
 
   test("a rate giving too many frames, or none, is a 400 naming rate", async () => {
     for (const rate of ["0", "1000.5", "abc", "0.0001"]) {
       const answer = await get(tripod, 1, `rate=${rate}`);
       expect(answer.status, rate).toBe(400);
-      expect(answer.json.error.details.parameter, rate).toBe("rate");
+      expect(answer.body.error.details.parameter, rate).toBe("rate");
     }
   });
 });
@@ -139,13 +140,13 @@ describe("released", () => {
   test("a gait with no released version: 404 JSON that says so", async () => {
     const answer = await get(waveCreep, "released");
     expect(answer.status).toBe(404);
-    expect(answer.json.error).toEqual({ code: "not_found", message: 'Gait "Wave creep" has no released version yet.' });
+    expect(answer.body.error).toEqual({ code: "not_found", message: 'Gait "Wave creep" has no released version yet.' });
   });
 
   test("a version that does not exist: 404", async () => {
     const answer = await get(tripod, 99);
     expect(answer.status).toBe(404);
-    expect(answer.json.error.message).toBe('Gait "Tripod cruise" has no version 99.');
+    expect(answer.body.error.message).toBe('Gait "Tripod cruise" has no version 99.');
   });
 });
 
@@ -191,10 +192,10 @@ describe("error flags need an override reason", () => {
   test("Crawl v1 (com-outside errors) without override: 409 saying why and what to send", async () => {
     const answer = await get(crawl, 1, "format=json");
     expect(answer.status).toBe(409);
-    expect(answer.json.error.code).toBe("conflict");
-    expect(answer.json.error.message).toMatch(/error flags .*com-outside/);
-    expect(answer.json.error.message).toMatch(/`override` parameter/);
-    expect(answer.json.error.details).toMatchObject({ parameter: "override", reason: "override-required", errorFlags: { "com-outside": 34 } });
+    expect(answer.body.error.code).toBe("conflict");
+    expect(answer.body.error.message).toMatch(/error flags .*com-outside/);
+    expect(answer.body.error.message).toMatch(/`override` parameter/);
+    expect(answer.body.error.details).toMatchObject({ parameter: "override", reason: "override-required", errorFlags: { "com-outside": 34 } });
   });
 
   test("with override: the reason is in the JSON meta, the C comment and the CSV's headers", async () => {
@@ -202,8 +203,8 @@ describe("error flags need an override reason", () => {
     const query = `override=${encodeURIComponent(reason)}`;
     const json = await get(crawl, 1, `format=json&${query}`);
     expect(json.status).toBe(200);
-    expect(json.json.meta.overrideReason).toBe(reason);
-    expect(json.json.meta.flags.errors).toBe(34);
+    expect(json.body.meta.overrideReason).toBe(reason);
+    expect(json.body.meta.flags.errors).toBe(34);
     const header = await get(crawl, 1, `format=c&${query}`);
     expect(header.text).toContain(reason);
     const csv = await get(crawl, 1, `format=csv&${query}`);
@@ -214,14 +215,14 @@ describe("error flags need an override reason", () => {
   test("a blank override is a 400 naming override", async () => {
     const answer = await get(crawl, 1, "override=%20%20");
     expect(answer.status).toBe(400);
-    expect(answer.json.error.details.parameter).toBe("override");
+    expect(answer.body.error.details.parameter).toBe("override");
   });
 });
 
 describe("calibration profiles", () => {
   let robotId: string;
   let profileId: string;
-  const name = unique("SN-PC");
+  const name = uniqueName("SN-PC");
   beforeAll(async () => {
     robotId = ids.robotIds["Pier crawler"];
     const created = await createProfile({ userId: ids.userIds.firmware, workspaceId: ids.workspaceId }, robotId, {
@@ -235,11 +236,11 @@ describe("calibration profiles", () => {
     const plain = await get(tripod, 1, "format=json");
     const trimmed = await get(tripod, 1, `format=json&profile=${encodeURIComponent(name)}`);
     expect(trimmed.status).toBe(200);
-    expect(trimmed.json.meta.calibrationProfile).toBe(`${name} (revision 1)`);
-    const column = trimmed.json.channels.findIndex((channel: { name: string }) => channel.name === "LF.coxa");
-    expect(trimmed.json.channels[column].trimDeg).toBe(2.5);
+    expect(trimmed.body.meta.calibrationProfile).toBe(`${name} (revision 1)`);
+    const column = trimmed.body.channels.findIndex((channel: { name: string }) => channel.name === "LF.coxa");
+    expect(trimmed.body.channels[column].trimDeg).toBe(2.5);
     for (let frame = 0; frame < 60; frame += 1) {
-      expect(trimmed.json.frames[frame].values[column], `frame ${frame}, LF.coxa in degrees`).toBeCloseTo(plain.json.frames[frame].values[column] + 2.5, 6);
+      expect(trimmed.body.frames[frame].values[column], `frame ${frame}, LF.coxa in degrees`).toBeCloseTo(plain.body.frames[frame].values[column] + 2.5, 6);
     }
     expect(decodeURIComponent(trimmed.headers.get("Gaitloom-Calibration")!)).toBe(`${name} (revision 1)`);
   });
@@ -255,8 +256,8 @@ describe("calibration profiles", () => {
   test("a profile the robot does not have: 422 naming profile and listing the ones there are", async () => {
     const answer = await get(tripod, 1, "profile=SN-none");
     expect(answer.status).toBe(422);
-    expect(answer.json.error.details.parameter).toBe("profile");
-    expect(answer.json.error.message).toContain(name);
+    expect(answer.body.error.details.parameter).toBe("profile");
+    expect(answer.body.error.message).toContain(name);
   });
 });
 
@@ -269,14 +270,14 @@ describe("query and path checks", () => {
   ])("%s: 400 naming %s", async (query, parameter, message) => {
     const answer = await get(tripod, 1, query);
     expect(answer.status).toBe(400);
-    expect(answer.json.error).toEqual({ code: "bad_request", message, details: { parameter } });
+    expect(answer.body.error).toEqual({ code: "bad_request", message, details: { parameter } });
   });
 
   test("a malformed gait id or version number: 400", async () => {
     expect((await getTable(bearer("/api/v1/gaits/nope/versions/1/table", token), "nope", 1)).status).toBe(400);
     const zero = await getTable(bearer(tablePath(tripod, 0), token), tripod, "0");
     expect(zero.status).toBe(400);
-    expect(zero.json.error.message).toBe('the version must be a number from 1 or "released" (got "0")');
+    expect(zero.body.error.message).toBe('the version must be a number from 1 or "released" (got "0")');
   });
 });
 
@@ -293,14 +294,14 @@ describe("who may download", () => {
     const other = await foreignOwnerToken();
     const answer = await getTable(bearer(tablePath(tripod, "released"), other), tripod, "released");
     expect(answer.status).toBe(404);
-    expect(answer.json.error.code).toBe("not_found");
+    expect(answer.body.error.code).toBe("not_found");
   });
 
   test("a viewer's session: 403", async () => {
     const request = await requestsAs("viewer", ids);
     const answer = await getTable(await request("GET", tablePath(tripod, 1)), tripod, 1);
     expect(answer.status).toBe(403);
-    expect(answer.json.error.message).toBe("The viewer role cannot download angle tables.");
+    expect(answer.body.error.message).toBe("The viewer role cannot download angle tables.");
   });
 
   test("an animator's session downloads; the bytes are the token's", async () => {

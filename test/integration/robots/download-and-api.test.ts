@@ -3,7 +3,8 @@
 import { beforeAll, describe, expect, test } from "vitest";
 import { apiTokens, robotRevisions, robots, workspaces } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
-import { act, demoIds, load, requestsAs, type DemoIds } from "../../support/access-matrix";
+import { act, bearer, demoIds, load, outcome, requestsAs, type DemoIds } from "../../support/routes";
+import { demoRobotJson } from "../../support/robots";
 import { robotJsonSchema } from "~/kinematics";
 import { hashToken } from "~/platform/access.server";
 import { database } from "~/platform/db.server";
@@ -13,7 +14,7 @@ import * as apiRobot from "~/routes/api.v1/robots/robot";
 import * as apiSchema from "~/routes/api.v1/robots/schema";
 import * as download from "~/routes/robots/download";
 import * as robotPage from "~/routes/robots/robot";
-import { demoJson, outcome, revisionsOf } from "./support";
+import { revisionsOf } from "./support";
 
 let ids: DemoIds;
 let walkerId: string;
@@ -27,7 +28,7 @@ beforeAll(async () => {
   walkerId = ids.robotIds["Quay walker"];
   const [other] = await db.insert(workspaces).values({ slug: "other-lab-api", name: "Other lab" }).returning();
   const [foreign] = await db.insert(robots).values({ workspaceId: other.id, name: "Their walker" }).returning();
-  await db.insert(robotRevisions).values({ robotId: foreign.id, number: 1, definition: demoJson("quay-walker.json") });
+  await db.insert(robotRevisions).values({ robotId: foreign.id, number: 1, definition: demoRobotJson("quay-walker") });
   foreignId = foreign.id;
   await db.insert(apiTokens).values({ workspaceId: ids.workspaceId, userId: ids.userIds.firmware, name: "build script", tokenHash: hashToken(TOKEN), prefix: TOKEN.slice(0, 8) });
 
@@ -44,7 +45,6 @@ beforeAll(async () => {
   expect(saved.status).toBe(200);
 });
 
-const bearer = (path: string, token = TOKEN) => new Request(`http://127.0.0.1:3000${path}`, { headers: { Authorization: `Bearer ${token}` } });
 
 describe("download a revision's JSON", () => {
   test.each([1, 2])("revision %i comes as a file named after the robot and revision, the definition as stored", async (number) => {
@@ -75,7 +75,7 @@ describe("download a revision's JSON", () => {
 
 describe("GET /api/v1/robots", () => {
   test("lists the workspace's robots, not another's, with a bearer token", async () => {
-    const answer = await outcome(async () => load(apiList, bearer("/api/v1/robots")));
+    const answer = await outcome(async () => load(apiList, bearer("/api/v1/robots", TOKEN)));
     expect(answer.status).toBe(200);
     const names = answer.body.robots.map((robot: any) => robot.name);
     expect(names).toEqual(["Hull climber", "Pier crawler", "Quay walker"]);
@@ -96,7 +96,7 @@ describe("GET /api/v1/robots", () => {
 
 describe("GET /api/v1/robots/:robotId", () => {
   test("the newest definition and every revision, newest first", async () => {
-    const answer = await outcome(async () => load(apiRobot, bearer(`/api/v1/robots/${walkerId}`), { robotId: walkerId }));
+    const answer = await outcome(async () => load(apiRobot, bearer(`/api/v1/robots/${walkerId}`, TOKEN), { robotId: walkerId }));
     expect(answer.status).toBe(200);
     const revisions = await revisionsOf(walkerId);
     expect(answer.body).toMatchObject({ id: walkerId, name: "Quay walker", latest: { number: 2, message: "Coxa trim", author: { login: "priya-sandoval", name: "Priya Sandoval" } } });
@@ -112,11 +112,11 @@ describe("GET /api/v1/robots/:robotId", () => {
 
   test("unknown or another workspace's robot: 404 JSON; a malformed id: 400 JSON", async () => {
     for (const robotId of [foreignId, "00000000-0000-4000-8000-000000000000"]) {
-      const answer = await outcome(async () => load(apiRobot, bearer(`/api/v1/robots/${robotId}`), { robotId }));
+      const answer = await outcome(async () => load(apiRobot, bearer(`/api/v1/robots/${robotId}`, TOKEN), { robotId }));
       expect(answer.status).toBe(404);
       expect(answer.body).toEqual({ error: { code: "not_found", message: `No robot ${robotId} in this workspace.` } });
     }
-    const malformed = await outcome(async () => load(apiRobot, bearer("/api/v1/robots/walker"), { robotId: "walker" }));
+    const malformed = await outcome(async () => load(apiRobot, bearer("/api/v1/robots/walker", TOKEN), { robotId: "walker" }));
     expect(malformed.status).toBe(400);
     expect(malformed.body).toEqual({ error: { code: "bad_request", message: 'robotId must be a UUID (got "walker")' } });
   });
@@ -124,14 +124,14 @@ describe("GET /api/v1/robots/:robotId", () => {
 
 describe("GET /api/v1/robots/:robotId/revisions/:number", () => {
   test("one revision's definition; 404 for a number the robot does not have, 400 for one that is not a number", async () => {
-    const answer = await outcome(async () => load(apiRevision, bearer(`/api/v1/robots/${walkerId}/revisions/1`), { robotId: walkerId, number: "1" }));
+    const answer = await outcome(async () => load(apiRevision, bearer(`/api/v1/robots/${walkerId}/revisions/1`, TOKEN), { robotId: walkerId, number: "1" }));
     expect(answer.status).toBe(200);
     expect(answer.body).toMatchObject({ robot: { id: walkerId, name: "Quay walker" }, latestRevision: 2, revision: { number: 1 } });
-    expect(answer.body.revision.definition.legs[0].joints.coxa.zeroOffsetDeg).toBe(demoJson("quay-walker.json").legs[0].joints.coxa.zeroOffsetDeg);
-    const missing = await outcome(async () => load(apiRevision, bearer(`/api/v1/robots/${walkerId}/revisions/9`), { robotId: walkerId, number: "9" }));
+    expect(answer.body.revision.definition.legs[0].joints.coxa.zeroOffsetDeg).toBe(demoRobotJson("quay-walker").legs[0].joints.coxa.zeroOffsetDeg);
+    const missing = await outcome(async () => load(apiRevision, bearer(`/api/v1/robots/${walkerId}/revisions/9`, TOKEN), { robotId: walkerId, number: "9" }));
     expect(missing.status).toBe(404);
     expect(missing.body.error.code).toBe("not_found");
-    const bad = await outcome(async () => load(apiRevision, bearer(`/api/v1/robots/${walkerId}/revisions/x`), { robotId: walkerId, number: "x" }));
+    const bad = await outcome(async () => load(apiRevision, bearer(`/api/v1/robots/${walkerId}/revisions/x`, TOKEN), { robotId: walkerId, number: "x" }));
     expect(bad.status).toBe(400);
     expect(bad.body.error.message).toBe('the revision number must be a whole number from 1 (got "x")');
   });

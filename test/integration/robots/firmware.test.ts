@@ -2,10 +2,10 @@
 // server compares the save with the newest definition and names the field it refuses.
 import { beforeAll, describe, expect, test } from "vitest";
 import { seedDemo } from "../../../db/seed";
-import { act, demoIds, requestsAs, type DemoIds } from "../../support/access-matrix";
+import { act, demoIds, outcome, requestsAs, type DemoIds } from "../../support/routes";
 import { database } from "~/platform/db.server";
 import * as robotPage from "~/routes/robots/robot";
-import { outcome, revisionCount, revisionsOf } from "./support";
+import { revisionCount, revisionsOf } from "./support";
 
 let ids: DemoIds;
 let walkerId: string;

@@ -4,12 +4,13 @@ import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { robotRevisions, robots, workspaces } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
-import { act, demoIds, load, requestsAs, type DemoIds } from "../../support/access-matrix";
+import { act, demoIds, load, outcome, requestsAs, type DemoIds } from "../../support/routes";
+import { demoRobotJson } from "../../support/robots";
 import { database } from "~/platform/db.server";
 import { refusal } from "~/platform/permissions";
 import * as robotPage from "~/routes/robots/robot";
 import * as revisionPage from "~/routes/robots/revision";
-import { demoJson, outcome, revisionCount, revisionsOf } from "./support";
+import { revisionCount, revisionsOf } from "./support";
 
 let ids: DemoIds;
 let crawlerId: string;
@@ -163,8 +164,8 @@ describe("bad saves are refused with what and where, and write nothing", () => {
   test("an unknown robot, a malformed id and another workspace's robot are all 404", async () => {
     const [other] = await database().insert(workspaces).values({ slug: "other-lab-save", name: "Other lab" }).returning();
     const [foreign] = await database().insert(robots).values({ workspaceId: other.id, name: "Theirs" }).returning();
-    await database().insert(robotRevisions).values({ robotId: foreign.id, number: 1, definition: demoJson("quay-walker.json") });
-    const definition = JSON.stringify(demoJson("quay-walker.json"));
+    await database().insert(robotRevisions).values({ robotId: foreign.id, number: 1, definition: demoRobotJson("quay-walker") });
+    const definition = JSON.stringify(demoRobotJson("quay-walker"));
     for (const robotId of [foreign.id, "00000000-0000-4000-8000-000000000000", "not-a-uuid"]) {
       const answer = await save("owner", robotId, { baseRevision: "1", definition });
       expect(answer.status, robotId).toBe(404);

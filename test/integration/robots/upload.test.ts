@@ -5,10 +5,12 @@ import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { robots } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
-import { act, demoIds, load, requestsAs, type Caller, type DemoIds } from "../../support/access-matrix";
+import { act, demoIds, load, multipart, outcome, requestsAs, type Caller, type DemoIds } from "../../support/routes";
+import { uniqueName } from "../../support/names";
+import { demoRobotJson } from "../../support/robots";
 import { database } from "~/platform/db.server";
 import * as list from "~/routes/robots/list";
-import { demoJson, multipart, outcome, revisionCount, revisionsOf, robotCount, uniqueName } from "./support";
+import { revisionCount, revisionsOf, robotCount } from "./support";
 
 let ids: DemoIds;
 
@@ -35,7 +37,7 @@ async function unchanged<T>(run: () => Promise<T>): Promise<T> {
 describe("upload a robot definition", () => {
   test("a valid file creates the robot with revision 1 and opens its page", async () => {
     const name = uniqueName("Uploaded walker");
-    const answer = await upload({ file: jsonFile({ ...demoJson("quay-walker.json"), name }, "walker.json") });
+    const answer = await upload({ file: jsonFile({ ...demoRobotJson("quay-walker"), name }, "walker.json") });
     expect(answer.status).toBe(302);
     const [row] = await database().select().from(robots).where(eq(robots.name, name));
     expect(answer.location).toBe(`/robots/${row.id}`);
@@ -46,13 +48,13 @@ describe("upload a robot definition", () => {
 
   test("the name field replaces the file's name", async () => {
     const name = uniqueName("Renamed on upload");
-    const answer = await upload({ file: jsonFile(demoJson("pier-crawler.json")), name });
+    const answer = await upload({ file: jsonFile(demoRobotJson("pier-crawler")), name });
     expect(answer.status).toBe(302);
     expect(await database().select().from(robots).where(eq(robots.name, name))).toHaveLength(1);
   });
 
   test("an invalid definition: 422 listing each path and message exactly, nothing saved", async () => {
-    const broken = demoJson("pier-crawler.json");
+    const broken = demoRobotJson("pier-crawler");
     broken.name = uniqueName("Broken");
     broken.legs[2].joints.femur.minDeg = 40;
     broken.legs[2].joints.femur.maxDeg = 30;
@@ -69,7 +71,7 @@ describe("upload a robot definition", () => {
   });
 
   test("rules across fields are reported once the shape is right", async () => {
-    const broken = demoJson("pier-crawler.json");
+    const broken = demoRobotJson("pier-crawler");
     broken.name = uniqueName("Broken limits");
     broken.legs[2].joints.femur.minDeg = 40;
     broken.legs[2].joints.femur.maxDeg = 30;
@@ -90,7 +92,7 @@ describe("upload a robot definition", () => {
   });
 
   test("a file over 256 KB: 413, nothing saved", async () => {
-    const big = { ...demoJson("pier-crawler.json"), name: uniqueName("Big"), description: "x".repeat(1900) };
+    const big = { ...demoRobotJson("pier-crawler"), name: uniqueName("Big"), description: "x".repeat(1900) };
     const padded = JSON.stringify(big) + " ".repeat(260 * 1024);
     const answer = await unchanged(() => upload({ file: jsonFile(padded, "big.json") }));
     expect(answer.status).toBe(413);
@@ -112,13 +114,13 @@ describe("upload a robot definition", () => {
   });
 
   test("a name another robot has: 409, nothing saved", async () => {
-    const answer = await unchanged(() => upload({ file: jsonFile(demoJson("pier-crawler.json")) }));
+    const answer = await unchanged(() => upload({ file: jsonFile(demoRobotJson("pier-crawler")) }));
     expect(answer.status).toBe(409);
     expect(answer.body.error).toBe('Another robot in this workspace is already called "Pier crawler": give this one another name. Nothing was saved.');
   });
 
   test.each(["firmware", "viewer"] as const)("%s may not upload: 403, nothing saved", async (caller) => {
-    const answer = await unchanged(() => upload({ file: jsonFile({ ...demoJson("quay-walker.json"), name: uniqueName("Refused") }) }, caller));
+    const answer = await unchanged(() => upload({ file: jsonFile({ ...demoRobotJson("quay-walker"), name: uniqueName("Refused") }) }, caller));
     expect(answer.status).toBe(403);
   });
 });

@@ -4,11 +4,13 @@ import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { robots } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
-import { act, demoIds, requestsAs, type DemoIds } from "../../support/access-matrix";
+import { act, demoIds, multipart, outcome, requestsAs, type DemoIds } from "../../support/routes";
+import { uniqueName } from "../../support/names";
+import { fixtureText } from "../../support/robots";
 import { importUrdf } from "~/kinematics";
 import { database } from "~/platform/db.server";
 import * as list from "~/routes/robots/list";
-import { fixture, multipart, outcome, revisionCount, revisionsOf, robotCount, uniqueName } from "./support";
+import { revisionCount, revisionsOf, robotCount } from "./support";
 
 let ids: DemoIds;
 
@@ -27,9 +29,9 @@ async function importFile(xml: string, fields: Record<string, string> = {}) {
 describe("URDF import", () => {
   test("the test fixture imports: the report says what was mapped and the robot is created as importUrdf maps it", async () => {
     const name = uniqueName("Imported crab");
-    const answer = await importFile(fixture("test-crab.urdf"), { name });
+    const answer = await importFile(fixtureText("test-crab.urdf"), { name });
     expect(answer.status).toBe(200);
-    const expected = importUrdf(fixture("test-crab.urdf"), { name });
+    const expected = importUrdf(fixtureText("test-crab.urdf"), { name });
     if (!expected.ok) throw new Error("fixture does not import");
     expect(answer.body).toMatchObject({ ok: true, name, report: expected.report });
     expect(answer.body.report[0]).toBe('base link "base_link" is the body frame; 4 legs found');
@@ -41,18 +43,18 @@ describe("URDF import", () => {
   });
 
   test("without a name the URDF robot's own name is used; importing it twice is a 409 with the report kept", async () => {
-    const first = await importFile(fixture("test-crab.urdf"));
+    const first = await importFile(fixtureText("test-crab.urdf"));
     expect(first.status).toBe(200);
     expect(first.body.name).toBe("test_crab");
     const count = await robotCount();
-    const second = await importFile(fixture("test-crab.urdf"));
+    const second = await importFile(fixtureText("test-crab.urdf"));
     expect(second.status).toBe(409);
     expect(second.body.details.report.length).toBeGreaterThan(0);
     expect(await robotCount()).toBe(count);
   });
 
   test("an unsupported chain is refused naming the joint: 422, nothing saved", async () => {
-    const continuous = fixture("test-crab.urdf").replace('<joint name="fr_femur" type="revolute">', '<joint name="fr_femur" type="continuous">');
+    const continuous = fixtureText("test-crab.urdf").replace('<joint name="fr_femur" type="revolute">', '<joint name="fr_femur" type="continuous">');
     const [robotsBefore, revisionsBefore] = [await robotCount(), await revisionCount()];
     const answer = await importFile(continuous, { name: uniqueName("Refused crab") });
     expect(answer.status).toBe(422);

@@ -2,7 +2,8 @@
 import { and, asc, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { auditLog, gaitVersions, gaits, reviewEvents, robotRevisions } from "../../../db/schema";
-import { requestsAs, act, type DemoIds } from "../../support/access-matrix";
+import { uniqueName } from "../../support/names";
+import { act, memberAs, outcome, refusal, requestsAs, type DemoIds } from "../../support/routes";
 import { parseSequence, solveSequence } from "~/gait/index";
 import { parseRobot } from "~/kinematics";
 import type { Member } from "~/platform/access.server";
@@ -10,7 +11,7 @@ import { versionContentHash } from "~/features/versions/content-hash.server";
 import { database } from "~/platform/db.server";
 import { commitDraft, restoreDraft } from "~/features/versions/versions.server";
 import * as gaitPage from "~/routes/gaits/gait";
-import { draftRevisionOf, memberAs, outcome, refusal, setUp, unique } from "./support";
+import { draftRevisionOf, setUp } from "./support";
 
 let ids: DemoIds;
 let animator: Member;
@@ -26,7 +27,7 @@ describe("commitDraft", () => {
   test("makes the next numbered version with the message, author, pinned revision, full sequence, solved summary and content hash", async () => {
     const gaitId = ids.gaitIds["Wave creep"];
     const [gait] = await database().select().from(gaits).where(eq(gaits.id, gaitId));
-    const message = unique("A calmer wave");
+    const message = uniqueName("A calmer wave");
     const committed = await commitDraft(committer(), gaitId, `  ${message}  `);
     const [row] = await database().select().from(gaitVersions).where(eq(gaitVersions.id, committed.id));
     const [revision] = await database().select().from(robotRevisions).where(eq(robotRevisions.id, gait.draftRobotRevisionId!));
@@ -48,7 +49,7 @@ describe("commitDraft", () => {
 
   test("two concurrent commits of one gait get distinct numbers and neither is lost", async () => {
     const gaitId = ids.gaitIds["Ripple turn left"];
-    const messages = [unique("Racer one"), unique("Racer two"), unique("Racer three")];
+    const messages = [uniqueName("Racer one"), uniqueName("Racer two"), uniqueName("Racer three")];
     const results = await Promise.all(messages.map((message) => commitDraft(committer(), gaitId, message)));
     expect(new Set(results.map((result) => result.number)).size).toBe(3);
     const rows = await database().select().from(gaitVersions).where(eq(gaitVersions.gaitId, gaitId)).orderBy(asc(gaitVersions.number));
@@ -64,13 +65,13 @@ describe("commitDraft", () => {
     const stale = await refusal(() => commitDraft(committer(), gaitId, "stale", undefined, { draftRevision: current - 1 }));
     expect(stale.status).toBe(409);
     expect(stale.message).toMatch(/draft changed/);
-    await expect(commitDraft(committer(), gaitId, unique("Fresh"), undefined, { draftRevision: current })).resolves.toMatchObject({ number: expect.any(Number) });
+    await expect(commitDraft(committer(), gaitId, uniqueName("Fresh"), undefined, { draftRevision: current })).resolves.toMatchObject({ number: expect.any(Number) });
   });
 
   test("the gait page's commit action answers with the new version, or the message field's error", async () => {
     const gaitId = ids.gaitIds["Crawl"];
     const request = await requestsAs("animator", ids);
-    const done = await outcome(async () => act(gaitPage, await request("POST", `/gaits/${gaitId}`, { form: { intent: "commit", message: unique("From the page") } }), { gaitId }));
+    const done = await outcome(async () => act(gaitPage, await request("POST", `/gaits/${gaitId}`, { form: { intent: "commit", message: uniqueName("From the page") } }), { gaitId }));
     expect(done.status).toBe(200);
     expect(done.body).toMatchObject({ ok: true, intent: "commit", version: { number: 3 } });
     const empty = await outcome(async () => act(gaitPage, await request("POST", `/gaits/${gaitId}`, { form: { intent: "commit", message: "" } }), { gaitId }));
@@ -90,7 +91,7 @@ describe("a new draft from any version (restore / branch)", () => {
     expect(gait.draftRobotRevisionId).toBe(first.robotRevisionId);
     expect(gait.draftUpdatedById).toBe(animator.user.id);
     // Committing it gives a new number with the same content (and hash) as version 1.
-    const again = await commitDraft(committer(), gaitId, unique("Back to the first trot"));
+    const again = await commitDraft(committer(), gaitId, uniqueName("Back to the first trot"));
     expect(again.contentHash).toBe(first.contentHash);
     expect(again.number).toBe(3);
     const [audit] = await database().select().from(auditLog).where(and(eq(auditLog.action, "draft.restored"), eq(auditLog.targetId, gaitId)));

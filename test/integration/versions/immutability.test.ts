@@ -3,9 +3,9 @@
 import { eq, sql } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { gaitVersions } from "../../../db/schema";
-import type { DemoIds } from "../../support/access-matrix";
+import { memberAs, type DemoIds } from "../../support/routes";
 import { database } from "~/platform/db.server";
-import { memberAs, setUp, versionIn } from "./support";
+import { setUp, versionIn } from "./support";
 
 let ids: DemoIds;
 let versionId: string;

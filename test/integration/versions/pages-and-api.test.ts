@@ -3,14 +3,15 @@
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { apiTokens, gaitVersions, gaits, robotRevisions, robots, workspaces } from "../../../db/schema";
-import { load, requestsAs, type DemoIds } from "../../support/access-matrix";
+import { uniqueName } from "../../support/names";
+import { load, memberAs, outcome, requestsAs, type DemoIds } from "../../support/routes";
 import { hashToken, type Member } from "~/platform/access.server";
 import { database } from "~/platform/db.server";
 import * as apiVersions from "~/routes/api.v1/gaits/versions";
 import * as compare from "~/routes/gaits/compare";
 import * as gaitPage from "~/routes/gaits/gait";
 import * as gaitList from "~/routes/gaits/list";
-import { memberAs, outcome, setUp, unique, versionIn } from "./support";
+import { setUp, versionIn } from "./support";
 
 let ids: DemoIds;
 let lead: Member;
@@ -130,7 +131,7 @@ describe("the comparison", () => {
     const [revision2] = await database().insert(robotRevisions).values({ robotId, number: 2, definition, message: "Longer LF femur" }).returning();
     const gaitId = ids.gaitIds["Wave creep"];
     await database().update(gaits).set({ draftRobotRevisionId: revision2.id }).where(eq(gaits.id, gaitId));
-    const newer = await versionIn(ids, "Wave creep", "committed", lead, { message: unique("On revision 2") });
+    const newer = await versionIn(ids, "Wave creep", "committed", lead, { message: uniqueName("On revision 2") });
     const [first] = await versionsOf("Wave creep");
     const { body } = await compareLoad(first.id, newer.id);
     expect(body.comparison.robotDiff).toMatchObject({ a: 1, b: 2, changes: [{ path: "legs[0].femur", before: definition.legs[0].femur - 4, after: definition.legs[0].femur }] });

@@ -4,12 +4,12 @@ import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { auditLog, gaitVersions, reviewEvents } from "../../../db/schema";
 import { demoPeople } from "../../../db/demo/scenario";
-import { act, requestsAs, type DemoIds } from "../../support/access-matrix";
+import { act, memberAs, outcome, refusal, requestsAs, type DemoIds } from "../../support/routes";
 import type { Member } from "~/platform/access.server";
 import { database } from "~/platform/db.server";
 import { approveVersion, releaseVersion, requestReview, reviewQueue, sendBackVersion } from "~/features/versions/review.server";
 import * as versionPage from "~/routes/gaits/version";
-import { mailsTo, memberAs, outcome, refusal, setUp, stateOf, unique, versionIn } from "./support";
+import { mailsTo, setUp, stateOf, versionIn } from "./support";
 
 let ids: DemoIds;
 let owner: Member;

@@ -1,7 +1,9 @@
 // Access cases for the shell, sign-in, workspaces, members, invitations, tokens and audit.
 import { randomBytes } from "node:crypto";
 import { apiTokens, invitations, memberships, users } from "../../../../db/schema";
-import { type RouteCase, act, load } from "../../../support/access-matrix";
+import { act, load } from "../../../support/routes";
+import { uniqueName } from "../../../support/names";
+import type { RouteCase } from "../support";
 import { hashToken } from "~/platform/access.server";
 import * as root from "~/root";
 import * as healthz from "~/routes/healthz";
@@ -25,11 +27,8 @@ import * as reviews from "~/routes/reviews";
 import * as notFound from "~/routes/not-found";
 import * as apiWorkspace from "~/routes/api.v1/workspace";
 
-let counter = 0;
-const unique = (label: string) => `${label}-${Date.now().toString(36)}-${++counter}`;
-
 async function throwawayMember(db: Parameters<NonNullable<RouteCase["prepare"]>>[0], workspaceId: string) {
-  const login = unique("throwaway");
+  const login = uniqueName("throwaway");
   const [user] = await db.insert(users).values({ login, name: login, email: `${login}@example.test` }).returning();
   await db.insert(memberships).values({ workspaceId, userId: user.id, role: "viewer" });
   return { userId: user.id };
@@ -39,7 +38,7 @@ async function pendingInvitation(db: Parameters<NonNullable<RouteCase["prepare"]
   const token = randomBytes(12).toString("base64url");
   const [row] = await db
     .insert(invitations)
-    .values({ workspaceId, email: `${unique("invitee")}@example.test`, role, tokenHash: hashToken(token), expiresAt: new Date(Date.now() + 86_400_000) })
+    .values({ workspaceId, email: `${uniqueName("invitee")}@example.test`, role, tokenHash: hashToken(token), expiresAt: new Date(Date.now() + 86_400_000) })
     .returning();
   return { token, invitationId: row.id };
 }
@@ -78,7 +77,7 @@ export const cases: RouteCase[] = [
     route: "routes/welcome.tsx",
     kind: "action",
     needs: "signed-in",
-    run: (req) => req("POST", "/welcome", { form: { intent: "create", name: unique("Lab") } }).then((r) => act(welcome, r)),
+    run: (req) => req("POST", "/welcome", { form: { intent: "create", name: uniqueName("Lab") } }).then((r) => act(welcome, r)),
   },
   {
     name: "GET /invitations/:token",
@@ -129,7 +128,7 @@ export const cases: RouteCase[] = [
     kind: "action",
     needs: "invitations.manage",
     run: (req) =>
-      req("POST", "/settings/members", { form: { intent: "invite", email: `${unique("new")}@example.test`, role: "viewer" } }).then((r) => act(members, r)),
+      req("POST", "/settings/members", { form: { intent: "invite", email: `${uniqueName("new")}@example.test`, role: "viewer" } }).then((r) => act(members, r)),
   },
   {
     name: "POST /settings/members (resend)",
@@ -153,7 +152,7 @@ export const cases: RouteCase[] = [
     route: "routes/settings/tokens.tsx",
     kind: "action",
     needs: "tokens.manage",
-    run: (req) => req("POST", "/settings/tokens", { form: { intent: "create", name: unique("build") } }).then((r) => act(tokens, r)),
+    run: (req) => req("POST", "/settings/tokens", { form: { intent: "create", name: uniqueName("build") } }).then((r) => act(tokens, r)),
   },
   {
     name: "POST /settings/tokens (revoke one's own)",
@@ -164,7 +163,7 @@ export const cases: RouteCase[] = [
       const userId = caller === "signed-out" ? ids.userIds.owner : ids.userIds[caller];
       const [row] = await db
         .insert(apiTokens)
-        .values({ workspaceId: ids.workspaceId, userId, name: unique("old"), tokenHash: hashToken(unique("t")), prefix: "gl_xxxxxx" })
+        .values({ workspaceId: ids.workspaceId, userId, name: uniqueName("old"), tokenHash: hashToken(uniqueName("t")), prefix: "gl_xxxxxx" })
         .returning();
       return { tokenId: row.id };
     },

@@ -2,16 +2,15 @@
 // its move-to-newest-robot action, and the draft API.
 import { desc, eq } from "drizzle-orm";
 import { gaits, robotRevisions } from "../../../../db/schema";
-import { type RouteCase, act, load } from "../../../support/access-matrix";
+import { act, load } from "../../../support/routes";
+import { uniqueName } from "../../../support/names";
+import type { RouteCase } from "../support";
 import * as draftApi from "~/routes/api.v1/gaits/draft";
 import * as editor from "~/routes/gaits/editor";
 import * as newGait from "~/routes/gaits/new";
 
 const EDITED = "Wave climb"; // on the hull climber: no other case touches that robot
 const CRAWLER = "Pier crawler";
-
-let counter = 0;
-const unique = (label: string) => `${label} ${Date.now().toString(36)}-${++counter}`;
 
 type Db = Parameters<NonNullable<RouteCase["prepare"]>>[0];
 
@@ -34,7 +33,7 @@ export const cases: RouteCase[] = [
     kind: "action",
     needs: "gaits.edit",
     run: (req, ids) =>
-      req("POST", "/gaits/new", { form: { intent: "create", robotId: ids.robotIds[CRAWLER], name: unique("Matrix tripod"), template: "tripod" } }).then((r) => act(newGait, r)),
+      req("POST", "/gaits/new", { form: { intent: "create", robotId: ids.robotIds[CRAWLER], name: uniqueName("Matrix tripod"), template: "tripod" } }).then((r) => act(newGait, r)),
   },
   {
     name: "POST /gaits/new (keep edits as a copy)",
@@ -43,7 +42,7 @@ export const cases: RouteCase[] = [
     needs: "gaits.edit",
     prepare: async (db, ids) => ({ sequence: JSON.stringify((await draftOf(db, ids.gaitIds["Tripod cruise"])).draftSequence) }),
     run: (req, ids, prepared) =>
-      req("POST", "/gaits/new", { form: { intent: "copy", sourceGaitId: ids.gaitIds["Tripod cruise"], name: unique("Matrix copy"), sequence: prepared.sequence } }).then((r) => act(newGait, r)),
+      req("POST", "/gaits/new", { form: { intent: "copy", sourceGaitId: ids.gaitIds["Tripod cruise"], name: uniqueName("Matrix copy"), sequence: prepared.sequence } }).then((r) => act(newGait, r)),
   },
   {
     name: "GET /gaits/:gaitId/edit",

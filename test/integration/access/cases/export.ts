@@ -1,7 +1,9 @@
 // Access cases for the export feature: angle and bench tables, calibration
 // profiles (pages and API), the export and bring-up pages, the OpenAPI
 // document, the public schemas and the API page.
-import { type RouteCase, act, load } from "../../../support/access-matrix";
+import { act, load } from "../../../support/routes";
+import { uniqueName } from "../../../support/names";
+import type { RouteCase } from "../support";
 import * as benchTable from "~/routes/api.v1/export/bench-table";
 import * as calibrationProfiles from "~/routes/api.v1/export/calibration-profiles";
 import * as calibrationSchema from "~/routes/api.v1/export/calibration-schema";
@@ -16,9 +18,6 @@ import * as exportPage from "~/routes/export/page";
 
 const GAIT = "Tripod cruise";
 const ROBOT = "Pier crawler";
-
-let counter = 0;
-const unique = (label: string) => `${label} ${Date.now().toString(36)}-${++counter}`;
 
 export const cases: RouteCase[] = [
   {
@@ -81,7 +80,7 @@ export const cases: RouteCase[] = [
     kind: "action",
     needs: "robots.calibrate",
     run: (req, ids) =>
-      req("POST", `/export/calibration/${ids.robotIds[ROBOT]}`, { form: { intent: "create", name: unique("SN matrix"), "joints.LF.femur.trimDeg": "1.5" } }).then((r) =>
+      req("POST", `/export/calibration/${ids.robotIds[ROBOT]}`, { form: { intent: "create", name: uniqueName("SN matrix"), "joints.LF.femur.trimDeg": "1.5" } }).then((r) =>
         act(calibration, r, { robotId: ids.robotIds[ROBOT] }),
       ),
   },

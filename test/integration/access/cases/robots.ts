@@ -1,8 +1,10 @@
 // Access cases for the robot pages, downloads and the robot API.
-import { readFileSync } from "node:fs";
 import { desc, eq } from "drizzle-orm";
 import { robotRevisions } from "../../../../db/schema";
-import { type MakeRequest, type RouteCase, act, load } from "../../../support/access-matrix";
+import { act, load, multipart } from "../../../support/routes";
+import { uniqueName } from "../../../support/names";
+import { demoRobotJson, fixtureText } from "../../../support/robots";
+import type { RouteCase } from "../support";
 import * as apiList from "~/routes/api.v1/robots/list";
 import * as apiRevision from "~/routes/api.v1/robots/revision";
 import * as apiRobot from "~/routes/api.v1/robots/robot";
@@ -13,11 +15,10 @@ import * as revision from "~/routes/robots/revision";
 import * as robot from "~/routes/robots/robot";
 
 const ROBOT = "Quay walker";
-const demoJson = JSON.parse(readFileSync(new URL("../../../../db/demo/robots/quay-walker.json", import.meta.url), "utf8"));
-const urdf = readFileSync(new URL("../../../kinematics/fixtures/test-crab.urdf", import.meta.url), "utf8");
+const demoJson = demoRobotJson("quay-walker");
+const urdf = fixtureText("test-crab.urdf");
 
 let counter = 0;
-const unique = (label: string) => `${label} ${Date.now().toString(36)}-${++counter}`;
 
 type Db = Parameters<NonNullable<RouteCase["prepare"]>>[0];
 
@@ -29,15 +30,6 @@ async function calibrationEdit(db: Db, robotId: string) {
   return { baseRevision: String(latest.number), definition: JSON.stringify(definition) };
 }
 
-async function multipart(request: MakeRequest, path: string, fields: Record<string, string | File>) {
-  const base = await request("POST", path);
-  const form = new FormData();
-  for (const [name, value] of Object.entries(fields)) form.append(name, value);
-  const headers = new Headers(base.headers);
-  headers.delete("Content-Type");
-  return new Request(base.url, { method: "POST", headers, body: form });
-}
-
 export const cases: RouteCase[] = [
   { name: "GET /robots", route: "routes/robots/list.tsx", kind: "loader", needs: "robots.read", run: (req) => req("GET", "/robots").then((r) => load(list, r)) },
   {
@@ -45,7 +37,7 @@ export const cases: RouteCase[] = [
     route: "routes/robots/list.tsx",
     kind: "action",
     needs: "robots.edit",
-    run: (req) => req("POST", "/robots?index", { form: { intent: "create", name: unique("Matrix starter"), source: "starter-4" } }).then((r) => act(list, r)),
+    run: (req) => req("POST", "/robots?index", { form: { intent: "create", name: uniqueName("Matrix starter"), source: "starter-4" } }).then((r) => act(list, r)),
   },
   {
     name: "POST /robots (upload a definition)",
@@ -53,7 +45,7 @@ export const cases: RouteCase[] = [
     kind: "action",
     needs: "robots.edit",
     run: async (req) => {
-      const file = new File([JSON.stringify({ ...demoJson, name: unique("Matrix upload") })], "walker.json", { type: "application/json" });
+      const file = new File([JSON.stringify({ ...demoJson, name: uniqueName("Matrix upload") })], "walker.json", { type: "application/json" });
       return act(list, await multipart(req, "/robots?index", { intent: "upload", file }));
     },
   },
@@ -64,7 +56,7 @@ export const cases: RouteCase[] = [
     needs: "robots.edit",
     run: async (req) => {
       const file = new File([urdf], "test-crab.urdf", { type: "application/xml" });
-      return act(list, await multipart(req, "/robots?index", { intent: "import-urdf", file, name: unique("Matrix crab") }));
+      return act(list, await multipart(req, "/robots?index", { intent: "import-urdf", file, name: uniqueName("Matrix crab") }));
     },
   },
   {

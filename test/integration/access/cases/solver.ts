@@ -1,17 +1,14 @@
 // Access cases for the solver API.
-import { readFileSync } from "node:fs";
-import { type RouteCase, act, load } from "../../../support/access-matrix";
+import { act, load } from "../../../support/routes";
+import { demoRobotJson, loadDemoRobot } from "../../../support/robots";
+import type { RouteCase } from "../support";
 import * as solve from "~/routes/api.v1/solver/solve";
 import * as ik from "~/routes/api.v1/solver/ik";
 import { generateGait } from "~/gait";
-import { neutralStance, parseRobot } from "~/kinematics";
+import { neutralStance } from "~/kinematics";
 
-const robotJson = JSON.parse(readFileSync(new URL("../../../../db/demo/robots/pier-crawler.json", import.meta.url), "utf8"));
-const robot = (() => {
-  const parsed = parseRobot(robotJson);
-  if (!parsed.ok) throw new Error("demo robot invalid");
-  return parsed.robot;
-})();
+const robotJson = demoRobotJson("pier-crawler");
+const robot = loadDemoRobot("pier-crawler");
 const sequence = generateGait(robot, { template: "tripod", cycleMs: 1000, fps: 25, strideMm: 40 });
 
 export const cases: RouteCase[] = [

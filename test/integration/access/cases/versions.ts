@@ -1,7 +1,9 @@
 // Access cases for the gait page, versions, review steps, the comparison and the versions API.
 import { and, desc, eq } from "drizzle-orm";
 import { gaitVersions, gaits, type VersionState } from "../../../../db/schema";
-import { type DemoIds, type RouteCase, act, load } from "../../../support/access-matrix";
+import { type DemoIds, act, load } from "../../../support/routes";
+import { uniqueName } from "../../../support/names";
+import type { RouteCase } from "../support";
 import { commitDraft } from "~/features/versions/versions.server";
 import * as apiVersions from "~/routes/api.v1/gaits/versions";
 import * as compare from "~/routes/gaits/compare";
@@ -14,13 +16,10 @@ const GAIT = "Wave climb";
 
 type Db = Parameters<NonNullable<RouteCase["prepare"]>>[0];
 
-let counter = 0;
-const unique = (label: string) => `${label} ${Date.now().toString(36)}-${++counter}`;
-
 /** A fresh version of the gait by the animator, moved straight to `state` (reviewer: the lead). */
 async function versionIn(db: Db, ids: DemoIds, state: VersionState) {
   const gaitId = ids.gaitIds[GAIT];
-  const version = await commitDraft({ userId: ids.userIds.animator, workspaceId: ids.workspaceId }, gaitId, unique("Matrix version"), db);
+  const version = await commitDraft({ userId: ids.userIds.animator, workspaceId: ids.workspaceId }, gaitId, uniqueName("Matrix version"), db);
   if (state !== "committed") await db.update(gaitVersions).set({ state, reviewerId: ids.userIds.lead }).where(eq(gaitVersions.id, version.id));
   return { gaitId, number: String(version.number), versionId: version.id };
 }
@@ -67,7 +66,7 @@ export const cases: RouteCase[] = [
     kind: "action",
     needs: "versions.commit",
     run: (req, ids) =>
-      req("POST", `/gaits/${ids.gaitIds[GAIT]}`, { form: { intent: "commit", message: unique("Matrix commit") } }).then((r) => act(gaitPage, r, { gaitId: ids.gaitIds[GAIT] })),
+      req("POST", `/gaits/${ids.gaitIds[GAIT]}`, { form: { intent: "commit", message: uniqueName("Matrix commit") } }).then((r) => act(gaitPage, r, { gaitId: ids.gaitIds[GAIT] })),
   },
   {
     name: "POST /gaits/:gaitId (start a new draft from a version)",

@@ -1,0 +1,27 @@
+// The role × route matrix: each feature lists its loaders, actions and API
+// routes as cases in test/integration/access/cases/<feature>.ts, naming the
+// permission each needs; test/integration/access/matrix.test.ts runs every
+// case as every demo role and signed out, in-process against the test
+// database, and expects what the one permission table (app/platform/permissions.ts) says.
+import type { Database } from "../../../db/client";
+import type { Action } from "~/platform/permissions";
+import type { Caller, DemoIds, MakeRequest } from "../../support/routes";
+
+/** What a route needs: a permission, just a signed-in person, or nothing. */
+export type Requirement = Action | "signed-in" | "public";
+
+export type RouteCase = {
+  /** e.g. "POST /robots/:robotId (save geometry)" */
+  name: string;
+  /** The route module as app/routes.ts names it, e.g. "routes/robots/list.tsx". */
+  route: string;
+  /** Which export the case calls. */
+  kind: "loader" | "action";
+  needs: Requirement;
+  /** A status an allowed caller gets besides 2xx/3xx (the 404 page answers 404 to everyone). */
+  allowedStatus?: number;
+  /** Runs before each caller, for cases that use up what they act on (a member to remove). */
+  prepare?: (db: Database, ids: DemoIds, caller: Caller) => Promise<Record<string, string>>;
+  /** Calls the route's loader or action; may return or throw a Response or `data()`. */
+  run: (request: MakeRequest, ids: DemoIds, prepared: Record<string, string>) => Promise<unknown>;
+};

@@ -1,0 +1,160 @@
+// Calling the app in-process as the demo people: requests as each role would
+// send them from the app's own pages (or with an API token), a route
+// module's loader or action called as the framework calls it, and what it
+// answered read back, whether returned or thrown. Route tests need the seeded
+// demo workspace of the test database.
+import { eq } from "drizzle-orm";
+import type { Database } from "../../db/client";
+import { demoPeople, demoWorkspace } from "../../db/demo/scenario";
+import { gaits, robots, users, workspaces, type Role } from "../../db/schema";
+import { currentMember, type Member } from "~/platform/access.server";
+import { ServiceError } from "~/platform/errors.server";
+import { commitSession, sessionStorage } from "~/platform/session.server";
+
+/** The origin the app's pages are served from in tests; mutations must name it. */
+export const PUBLIC_ORIGIN = "http://127.0.0.1:3000";
+
+export type Caller = Role | "signed-out";
+
+export type DemoIds = {
+  workspaceId: string;
+  userIds: Record<Role, string>;
+  robotIds: Record<string, string>; // by robot name
+  gaitIds: Record<string, string>; // by gait name
+};
+
+/** The ids of the seeded demo workspace, its people (by role), robots and gaits (by name). */
+export async function demoIds(db: Database): Promise<DemoIds> {
+  const [workspace] = await db.select().from(workspaces).where(eq(workspaces.slug, demoWorkspace.slug));
+  const userIds = {} as Record<Role, string>;
+  for (const person of demoPeople) {
+    const [user] = await db.select({ id: users.id }).from(users).where(eq(users.login, person.login));
+    userIds[person.role] = user.id;
+  }
+  const robotRows = await db.select().from(robots).where(eq(robots.workspaceId, workspace.id));
+  const gaitRows = await db.select().from(gaits).where(eq(gaits.workspaceId, workspace.id));
+  return {
+    workspaceId: workspace.id,
+    userIds,
+    robotIds: Object.fromEntries(robotRows.map((row) => [row.name, row.id])),
+    gaitIds: Object.fromEntries(gaitRows.map((row) => [row.name, row.id])),
+  };
+}
+
+export type MakeRequest = (method: string, path: string, body?: { form?: Record<string, string>; json?: unknown }) => Promise<Request>;
+
+/** Requests as `caller` would send them from the app's own pages: their session cookie, and the Origin a mutation carries. */
+export async function requestsAs(caller: Caller, ids: DemoIds): Promise<MakeRequest> {
+  let cookie: string | null = null;
+  if (caller !== "signed-out") {
+    const session = await sessionStorage().getSession();
+    session.set("userId", ids.userIds[caller]);
+    session.set("workspaceId", ids.workspaceId);
+    cookie = (await commitSession(session)).split(";")[0];
+  }
+  return async (method, path, body) => {
+    const headers = new Headers();
+    if (cookie) headers.set("Cookie", cookie);
+    let payload: BodyInit | undefined;
+    if (body?.form) {
+      payload = new URLSearchParams(body.form);
+      headers.set("Content-Type", "application/x-www-form-urlencoded");
+    } else if (body?.json !== undefined) {
+      payload = JSON.stringify(body.json);
+      headers.set("Content-Type", "application/json");
+    }
+    if (method !== "GET" && method !== "HEAD") headers.set("Origin", PUBLIC_ORIGIN);
+    return new Request(new URL(path, PUBLIC_ORIGIN), { method, headers, body: payload });
+  };
+}
+
+/** A multipart POST as the browser sends a file form, with the caller's session. */
+export async function multipart(request: MakeRequest, path: string, fields: Record<string, string | File>): Promise<Request> {
+  const base = await request("POST", path);
+  const form = new FormData();
+  for (const [name, value] of Object.entries(fields)) form.append(name, value);
+  const headers = new Headers(base.headers);
+  headers.delete("Content-Type");
+  return new Request(base.url, { method: "POST", headers, body: form });
+}
+
+/** A GET as a script sends it with an API token: no cookie, no Origin. */
+export const bearer = (path: string, token: string, headers: Record<string, string> = {}): Request =>
+  new Request(new URL(path, PUBLIC_ORIGIN), { headers: { Authorization: `Bearer ${token}`, ...headers } });
+
+type RouteModule = { loader?: (args: never) => unknown; action?: (args: never) => unknown };
+
+/** Calls a route module's loader as the framework would. */
+export function load(module: RouteModule, request: Request, params: Record<string, string> = {}) {
+  if (!module.loader) throw new Error("this route module has no loader");
+  return Promise.resolve(module.loader({ request, params, context: {} } as never));
+}
+
+/** Calls a route module's action as the framework would. */
+export function act(module: RouteModule, request: Request, params: Record<string, string> = {}) {
+  if (!module.action) throw new Error("this route module has no action");
+  return Promise.resolve(module.action({ request, params, context: {} } as never));
+}
+
+export type Outcome<T = any> = {
+  status: number;
+  /** Where a redirect points. */
+  location?: string;
+  headers: Headers;
+  /** A Response's body as sent; "" for data the framework would serialise. */
+  text: string;
+  /** A JSON body parsed, any other body as its text, or the data itself. */
+  body: T;
+};
+
+/** What a loader or action produced, returned or thrown: a Response, `data()`, or plain data. */
+export function outcome<T = any>(run: () => Promise<unknown>): Promise<Outcome<T>> {
+  return settle<T>(run, false);
+}
+
+/** What a resource route (an API, a download) answered; anything but a Response of its own fails the test. */
+export function responseOf<T = any>(run: () => Promise<unknown>): Promise<Outcome<T>> {
+  return settle<T>(run, true);
+}
+
+async function settle<T>(run: () => Promise<unknown>, responseOnly: boolean): Promise<Outcome<T>> {
+  let value: unknown;
+  let thrown = false;
+  try {
+    value = await run();
+  } catch (error) {
+    value = error;
+    thrown = true;
+  }
+  if (value instanceof Response) {
+    const text = await value.text();
+    const body = /json/.test(value.headers.get("Content-Type") ?? "") && text ? JSON.parse(text) : text;
+    return { status: value.status, location: value.headers.get("Location") ?? undefined, headers: value.headers, text, body };
+  }
+  const isData = !!value && typeof value === "object" && "type" in value && value.type === "DataWithResponseInit";
+  if (thrown && !isData) throw value;
+  if (responseOnly) throw new Error(`expected a Response, got ${isData ? "data()" : JSON.stringify(value)?.slice(0, 200)}`);
+  if (isData) {
+    const { data, init } = value as { data: T; init?: ResponseInit | null };
+    return { status: init?.status ?? 200, headers: new Headers(init?.headers), text: "", body: data };
+  }
+  return { status: 200, headers: new Headers(), text: "", body: value as T };
+}
+
+/** The member a demo person is once signed in, as the services take them. */
+export async function memberAs(role: Role, ids: DemoIds): Promise<Member> {
+  const member = await currentMember(await (await requestsAs(role, ids))("GET", "/"));
+  if (!member) throw new Error(`no member for ${role}`);
+  return member;
+}
+
+/** The refusal a service call ends in; fails the test if the call succeeds. */
+export async function refusal(run: () => Promise<unknown>): Promise<ServiceError> {
+  try {
+    await run();
+  } catch (error) {
+    if (error instanceof ServiceError) return error;
+    throw error;
+  }
+  throw new Error("expected a refusal, but the call succeeded");
+}
