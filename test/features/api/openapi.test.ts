@@ -2,6 +2,9 @@
 // app/routes.ts is described (with a write operation where the module has an
 // action), every reference resolves, every path parameter is declared, and the
 // generated schemas are the zod schemas' own. OpenAPI 3.1 (spec.openapis.org/oas/v3.1.0).
+// Then the public documents as their routes serve them (servePublicDocument):
+// /api/v1/openapi.json, /api/v1/schema/sequence.json and
+// /api/v1/schema/calibration.json — no sign-in, a strong ETag, 304 on If-None-Match.
 import { describe, expect, test } from "vitest";
 import routeConfig from "~/routes";
 import { calibrationProfileJsonSchema } from "~/export";
@@ -9,6 +12,9 @@ import { sequenceJsonSchema } from "~/gait";
 import { robotJsonSchema } from "~/kinematics";
 import { openApiDocument, type OpenApiOperation } from "~/features/api/openapi.server";
 import { PERMISSIONS } from "~/platform/permissions";
+import { loader as calibrationSchema } from "~/routes/api.v1/export/calibration-schema";
+import { loader as openapi } from "~/routes/api.v1/export/openapi";
+import { loader as sequenceSchema } from "~/routes/api.v1/export/sequence-schema";
 
 type ConfigEntry = { path?: string; file: string; children?: ConfigEntry[] };
 
@@ -140,5 +146,39 @@ describe("schemas come from the zod schemas", () => {
     expect(body.required).toEqual(["sequence", "baseRevision"]);
     expect(body.properties.sequence).toEqual({ $ref: "#/components/schemas/Sequence" });
     expect(body.properties.baseRevision.type).toBe("integer");
+  });
+});
+
+const get = (path: string, headers: Record<string, string> = {}) => ({ request: new Request(`http://127.0.0.1:3000${path}`, { headers }), params: {}, context: {} }) as never;
+
+describe.each([
+  ["/api/v1/openapi.json", openapi, "application/json; charset=utf-8"],
+  ["/api/v1/schema/sequence.json", sequenceSchema, "application/schema+json; charset=utf-8"],
+  ["/api/v1/schema/calibration.json", calibrationSchema, "application/schema+json; charset=utf-8"],
+] as const)("%s", (path, loader, type) => {
+  test("answers JSON to anyone, cacheable, with an ETag; 304 when it matches", async () => {
+    const answer = loader(get(path));
+    expect(answer.status).toBe(200);
+    expect(answer.headers.get("Content-Type")).toBe(type);
+    expect(answer.headers.get("Cache-Control")).toBe("public, max-age=3600");
+    const etag = answer.headers.get("ETag")!;
+    expect(etag).toMatch(/^"[0-9a-f]{32}"$/);
+    expect(() => JSON.parse("")).toThrow();
+    JSON.parse(await answer.text());
+    const again = loader(get(path, { "If-None-Match": etag }));
+    expect(again.status).toBe(304);
+    expect(await again.text()).toBe("");
+  });
+});
+
+describe("the schemas are the zod schemas'", () => {
+  test("sequence.json is sequenceJsonSchema() with its $id", async () => {
+    const body = await sequenceSchema(get("/api/v1/schema/sequence.json")).json();
+    expect(body).toEqual({ $id: "http://127.0.0.1:3000/api/v1/schema/sequence.json", ...sequenceJsonSchema() });
+  });
+
+  test("calibration.json is calibrationProfileJsonSchema() with its $id", async () => {
+    const body = await calibrationSchema(get("/api/v1/schema/calibration.json")).json();
+    expect(body).toEqual({ $id: "http://127.0.0.1:3000/api/v1/schema/calibration.json", ...calibrationProfileJsonSchema() });
   });
 });
