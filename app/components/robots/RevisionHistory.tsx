@@ -1,17 +1,12 @@
 // Every saved revision of a robot, newest first, with a link to view each and to download its JSON.
 import { Link } from "react-router";
+import { formatTime } from "~/platform/format";
 
 export type RevisionRow = {
   number: number;
   message: string;
   author: { login: string; name: string } | null;
   createdAt: Date | string;
-};
-
-export const formatTime = (value: Date | string) => {
-  const date = new Date(value);
-  // One fixed format on the server and in the browser, so hydration agrees: 2025-03-04 14:05 UTC.
-  return `${date.toISOString().slice(0, 10)} ${date.toISOString().slice(11, 16)} UTC`;
 };
 
 export function RevisionHistory({ robotId, revisions, current }: { robotId: string; revisions: readonly RevisionRow[]; current?: number }) {

@@ -8,6 +8,7 @@ import { recordAudit } from "../../platform/audit.server";
 import { config } from "../../platform/config.server";
 import { database } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
+import { formatDate } from "../../platform/format";
 import { sendMail } from "../../platform/mail.server";
 import { invitableRoles, ROLE_LABELS } from "../../platform/permissions";
 
@@ -32,7 +33,7 @@ async function mailInvitation(invitation: InvitationRow, token: string, inviter:
       "",
       `Accept the invitation: ${link}`,
       "",
-      `The link works once and expires on ${invitation.expiresAt.toISOString().slice(0, 10)}.`,
+      `The link works once and expires on ${formatDate(invitation.expiresAt)}.`,
       "If you did not expect this, you can ignore this e-mail.",
     ].join("\n"),
   });

@@ -13,6 +13,7 @@ import { database, type Reader } from "../../platform/db.server";
 import { robotOfRevision } from "../robots/revision-robot.server";
 import { starterSequence } from "./editor/starter-sequence";
 import { ServiceError } from "../../platform/errors.server";
+import { formatTime } from "../../platform/format";
 
 /** A draft is keys, not frames: a megabyte holds tens of thousands of keys. */
 export const DRAFT_BODY_LIMIT_BYTES = 1024 * 1024;
@@ -48,8 +49,6 @@ export const draftSaveBody = z.strictObject({
   sequence: z.unknown().refine((value) => value !== undefined, "is required: the gait sequence (gaitloom.sequence/1)"),
   baseRevision: z.number({ error: "must be the draft revision the edits started from (a whole number)" }).int().min(0),
 });
-
-const utc = (date: Date) => `${date.toISOString().slice(0, 16).replace("T", " ")} UTC`;
 
 async function authorOf(db: Reader, userId: string | null): Promise<DraftAuthor> {
   if (!userId) return null;
@@ -141,7 +140,7 @@ async function conflict(db: Reader, gaitId: string, baseRevision: number): Promi
   throw new ServiceError(
     409,
     "draft-conflict",
-    `Revision ${row.revision} of the draft was saved by ${updatedBy?.name ?? "someone"} at ${utc(row.updatedAt)} while you were editing revision ${baseRevision}. Nothing was saved.`,
+    `Revision ${row.revision} of the draft was saved by ${updatedBy?.name ?? "someone"} at ${formatTime(row.updatedAt)} while you were editing revision ${baseRevision}. Nothing was saved.`,
     details,
   );
 }

@@ -7,6 +7,7 @@ import { importUrdf, parseRobot, type DefinitionIssue, type Robot } from "~/kine
 import { recordAudit } from "../../platform/audit.server";
 import { database, isUniqueViolation, type Reader } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
+import { formatTime } from "../../platform/format";
 import { can, ROLE_LABELS } from "../../platform/permissions";
 import { changedFields, describeChange, nonCalibrationChanges, summarizeChanges, type FieldChange } from "./changes";
 import type { SaveRefusalDetails } from "./results";
@@ -150,8 +151,6 @@ const invalidDefinition = (issues: DefinitionIssue[]) =>
 const nameTakenError = (name: string, report?: string[]) =>
   new ServiceError(409, "name-taken", `Another robot in this workspace is already called "${name}": give this one another name. Nothing was saved.`, report ? { report } : undefined);
 
-const timeOf = (date: Date) => `${date.toISOString().slice(0, 10)} ${date.toISOString().slice(11, 16)} UTC`;
-
 function staleError(baseRevision: number, latest: RevisionSummary): ServiceError {
   const details: SaveRefusalDetails = {
     baseRevision,
@@ -160,7 +159,7 @@ function staleError(baseRevision: number, latest: RevisionSummary): ServiceError
   return new ServiceError(
     409,
     "stale",
-    `Revision ${latest.number} was saved by ${latest.author?.name ?? "someone"} at ${timeOf(latest.createdAt)} while you were editing revision ${baseRevision}. Nothing was saved.`,
+    `Revision ${latest.number} was saved by ${latest.author?.name ?? "someone"} at ${formatTime(latest.createdAt)} while you were editing revision ${baseRevision}. Nothing was saved.`,
     details,
   );
 }

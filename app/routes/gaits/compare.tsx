@@ -13,14 +13,15 @@ import { RobotRevisionDiff } from "~/components/compare/RobotRevisionDiff";
 import { SequenceDiffTable } from "~/components/compare/SequenceDiffTable";
 import { FlagGroupsTable } from "~/components/versions/FlagGroupsTable";
 import { StateBadge } from "~/components/versions/StateBadge";
-import { formatTime, shortHash } from "~/components/versions/format";
+import { formatTime, shortHash } from "~/platform/format";
 import { requireAccess } from "~/platform/access.server";
 import { attempt, pageGuard } from "~/platform/errors.server";
+import { id } from "~/platform/params";
 import { compareVersions, listComparableVersions, type Comparison, type ComparedVersion } from "~/features/versions/versions.server";
 
 const compareQuery = z.object({
-  a: z.guid().optional().catch(undefined),
-  b: z.guid().optional().catch(undefined),
+  a: id().optional().catch(undefined),
+  b: id().optional().catch(undefined),
 });
 
 export async function loader({ request }: Route.LoaderArgs) {

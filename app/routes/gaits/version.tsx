@@ -9,18 +9,19 @@ import { ReviewActions } from "~/components/versions/ReviewActions";
 import { ReviewHistory } from "~/components/versions/ReviewHistory";
 import { StateBadge } from "~/components/versions/StateBadge";
 import { VersionFacts } from "~/components/versions/VersionFacts";
-import { formatTime } from "~/components/versions/format";
+import { formatTime } from "~/platform/format";
 import { requireAccess } from "~/platform/access.server";
 import { groupFlags } from "~/features/compare";
 import { formAction, ServiceError, type FormError } from "~/platform/errors.server";
 import { can, type Action } from "~/platform/permissions";
+import { id, versionNumber } from "~/platform/params";
 import { readIntentForm } from "~/platform/intent-form.server";
 import { approvalRules, approveVersion, releaseVersion, requestReview, reviewersFor, sendBackVersion } from "~/features/versions/review.server";
 import { getGait, getVersion, listVersions, solveVersion } from "~/features/versions/versions.server";
 
 const versionParams = z.object({
-  gaitId: z.guid(),
-  number: z.string().regex(/^[1-9][0-9]{0,8}$/).transform(Number),
+  gaitId: id(),
+  number: versionNumber(),
 });
 
 const notFound = () => data({ message: "There is no such version of a gait in your workspace." }, { status: 404 });
@@ -30,8 +31,8 @@ const text = z.string().optional().default("");
 const actionForm = z.discriminatedUnion("intent", [
   z.object({
     intent: z.literal("request-review"),
-    reviewerId: z.guid({ error: "Choose who should review this version." }),
-    compareWithId: z.union([z.guid(), z.literal("")]).optional().default(""),
+    reviewerId: id("Choose who should review this version."),
+    compareWithId: z.union([id(), z.literal("")]).optional().default(""),
     comment: text,
   }),
   z.object({ intent: z.literal("approve"), comment: text, overrideReason: text }),

@@ -4,6 +4,7 @@ import { EmptyState } from "~/components/common/EmptyState";
 import { PageHeader } from "~/components/common/PageHeader";
 import { AddRobotPanel, type AddPanel } from "~/components/robots/AddRobotPanels";
 import { requireAccess } from "~/platform/access.server";
+import { formatDate } from "~/platform/format";
 import { can } from "~/platform/permissions";
 import { addRobot, ADD_BODY_LIMIT_BYTES } from "~/features/robots/add.server";
 import { readFormWithin } from "~/platform/body.server";
@@ -81,7 +82,7 @@ export default function RobotList({ loaderData, actionData }: Route.ComponentPro
                 </td>
                 <td className="px-4 py-2 text-right">{robot.legCount}</td>
                 <td className="px-4 py-2 text-right">{robot.latestRevision}</td>
-                <td className="px-4 py-2 text-right">{new Date(robot.updatedAt).toISOString().slice(0, 10)}</td>
+                <td className="px-4 py-2 text-right">{formatDate(robot.updatedAt)}</td>
               </tr>
             ))}
           </tbody>

@@ -5,6 +5,8 @@ import type { Route } from "./+types/members";
 import { Notice } from "~/components/common/Notice";
 import { requireAccess } from "~/platform/access.server";
 import { formAction, ServiceError } from "~/platform/errors.server";
+import { formatDate } from "~/platform/format";
+import { id } from "~/platform/params";
 import { invite, listInvitations, resendInvitation, revokeInvitation } from "~/features/accounts/invitations.server";
 import { changeRole, listMembers, parseRole, removeMember } from "~/features/accounts/members.server";
 import { type Action, ROLES, ROLE_LABELS, can, invitableRoles } from "~/platform/permissions";
@@ -22,7 +24,7 @@ export async function loader({ request }: Route.LoaderArgs) {
   };
 }
 
-const uuid = z.string().uuid("That is not a valid id.");
+const uuid = id("That is not a valid id.");
 const input = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("change-role"), userId: uuid, role: z.string() }),
   z.object({ intent: z.literal("remove"), userId: uuid }),
@@ -124,7 +126,7 @@ export default function Members({ loaderData, actionData }: Route.ComponentProps
                   ROLE_LABELS[row.role]
                 )}
               </td>
-              <td className="px-4 py-2 text-right">{new Date(row.joinedAt).toISOString().slice(0, 10)}</td>
+              <td className="px-4 py-2 text-right">{formatDate(row.joinedAt)}</td>
               {canRemove ? (
                 <td className="px-4 py-2 text-right">
                   <Form
@@ -195,7 +197,7 @@ export default function Members({ loaderData, actionData }: Route.ComponentProps
                       {new Date(invitation.expiresAt) < new Date() ? (
                         <span className="text-warning">expired</span>
                       ) : (
-                        new Date(invitation.expiresAt).toISOString().slice(0, 10)
+                        formatDate(invitation.expiresAt)
                       )}
                     </td>
                     <td className="flex justify-end gap-2 py-2">

@@ -6,6 +6,8 @@ import { Notice } from "~/components/common/Notice";
 import { requireAccess } from "~/platform/access.server";
 import { config } from "~/platform/config.server";
 import { formAction, ServiceError } from "~/platform/errors.server";
+import { formatTime } from "~/platform/format";
+import { id } from "~/platform/params";
 import { createToken, listTokens, revokeToken } from "~/features/accounts/tokens.server";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -15,7 +17,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 const input = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("create"), name: z.string() }),
-  z.object({ intent: z.literal("revoke"), tokenId: z.string().uuid("That is not a valid token id.") }),
+  z.object({ intent: z.literal("revoke"), tokenId: id("That is not a valid token id.") }),
 ]);
 
 export async function action({ request }: Route.ActionArgs) {
@@ -35,7 +37,7 @@ export async function action({ request }: Route.ActionArgs) {
 
 export const meta: Route.MetaFunction = () => [{ title: "API tokens · Gaitloom" }];
 
-const when = (date: Date | string | null) => (date ? new Date(date).toISOString().slice(0, 16).replace("T", " ") : "never");
+const when = (date: Date | string | null) => (date ? formatTime(date, { zone: false }) : "never");
 
 export default function Tokens({ loaderData, actionData }: Route.ComponentProps) {
   const created = actionData && "created" in actionData ? actionData.created : null;
