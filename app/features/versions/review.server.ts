@@ -13,8 +13,10 @@ import { config } from "../../platform/config.server";
 import { database, type Reader, type Tx } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
 import { sendMail } from "../../platform/mail.server";
+import { isId } from "../../platform/params";
 import { recordReleaseTable } from "../tables/releases.server";
 import { can, type Action } from "../../platform/permissions";
+import { stateWord } from "./state-labels";
 import type { Person, VersionSummary } from "./versions.server";
 
 export const COMMENT_LIMIT = 2000;
@@ -36,11 +38,9 @@ type LoadedVersion = {
   author: { id: string; name: string; email: string } | null;
 };
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-
 async function loadVersion(db: Reader, workspaceId: string, versionId: string): Promise<LoadedVersion> {
   // Checked here so a malformed id is a 404, not an SQL error that aborts the transaction.
-  if (!UUID.test(versionId)) throw new ServiceError(404, "not-found", "No such version in this workspace.");
+  if (!isId(versionId)) throw new ServiceError(404, "not-found", "No such version in this workspace.");
   const [row] = await db
     .select({
       id: gaitVersions.id,
@@ -70,15 +70,6 @@ async function loadVersion(db: Reader, workspaceId: string, versionId: string): 
   };
 }
 
-const STATE_WORDS: Record<VersionState, string> = {
-  committed: "committed",
-  "in-review": "in review",
-  "sent-back": "sent back",
-  approved: "approved",
-  released: "released",
-  retired: "retired",
-};
-
 /** Moves the version from one of `from` to `to`, or refuses with 409 when someone else moved it first. */
 async function moveState(tx: Tx, version: LoadedVersion, from: VersionState[], to: VersionState, extra: { reviewerId?: string } = {}): Promise<void> {
   const moved = await tx
@@ -88,7 +79,7 @@ async function moveState(tx: Tx, version: LoadedVersion, from: VersionState[], t
     .returning({ id: gaitVersions.id });
   if (moved.length === 0) {
     const [now] = await tx.select({ state: gaitVersions.state }).from(gaitVersions).where(eq(gaitVersions.id, version.id));
-    throw new ServiceError(409, "conflict", `Version ${version.number} is ${STATE_WORDS[now?.state ?? version.state]} now, not ${from.map((state) => STATE_WORDS[state]).join(" or ")}; reload to see what changed.`);
+    throw new ServiceError(409, "conflict", `Version ${version.number} is ${stateWord(now?.state ?? version.state)} now, not ${from.map(stateWord).join(" or ")}; reload to see what changed.`);
   }
 }
 
@@ -124,9 +115,10 @@ async function deliver(mail: { to: string; subject: string; text: string }): Pro
   }
 }
 
-async function mailAuthor(version: LoadedVersion, actor: Member, decision: "approved" | "sent back" | "released", lines: string[]): Promise<boolean> {
+async function mailAuthor(version: LoadedVersion, actor: Member, decided: Extract<VersionState, "approved" | "sent-back" | "released">, lines: string[]): Promise<boolean> {
   // No mail to oneself: the author who decides sees the outcome on the page.
   if (!version.author || version.author.id === actor.user.id || !version.author.email) return false;
+  const decision = stateWord(decided);
   return deliver({
     to: version.author.email,
     subject: `${version.gaitName} v${version.number} ${decision} by ${actor.user.name}`,
@@ -189,7 +181,7 @@ export async function requestReview(
   const db = database();
   const { version, reviewer, baseline } = await db.transaction(async (tx) => {
     const version = await loadVersion(tx, actor.workspace.id, versionId);
-    if (!UUID.test(input.reviewerId)) throw new ServiceError(422, "invalid", "Choose a reviewer from this workspace.", { field: "reviewerId" });
+    if (!isId(input.reviewerId)) throw new ServiceError(422, "invalid", "Choose a reviewer from this workspace.", { field: "reviewerId" });
     const [reviewer] = await tx
       .select({ id: users.id, name: users.name, email: users.email, role: memberships.role })
       .from(memberships)
@@ -250,7 +242,7 @@ export async function approveVersion(actor: Member, versionId: string, input: { 
   const db = database();
   const { version, needs } = await db.transaction(async (tx) => {
     const version = await loadVersion(tx, actor.workspace.id, versionId);
-    if (version.state !== "in-review") throw new ServiceError(409, "conflict", `Version ${version.number} is ${STATE_WORDS[version.state]}, not in review; only a version in review can be approved.`);
+    if (version.state !== "in-review") throw new ServiceError(409, "conflict", `Version ${version.number} is ${stateWord(version.state)}, not in review; only a version in review can be approved.`);
     const rules = approvalRules({ authorId: version.author?.id ?? null, errors: version.summary.errors ?? 0 }, { userId: actor.user.id, role: actor.role });
     if (!rules.allowed) throw new ServiceError(403, "forbidden", rules.refusal!);
     if (rules.needsReason.length > 0 && reason.length === 0) {
@@ -310,7 +302,7 @@ export async function sendBackVersion(actor: Member, versionId: string, input: {
     );
     return version;
   });
-  const mailed = await mailAuthor(version, actor, "sent back", [`Comment: ${comment}`, "Start a new draft from it, change what the comment asks, commit and request review again."]);
+  const mailed = await mailAuthor(version, actor, "sent-back", [`Comment: ${comment}`, "Start a new draft from it, change what the comment asks, commit and request review again."]);
   return { state: "sent-back", mailed };
 }
 
@@ -328,7 +320,7 @@ export async function releaseVersion(actor: Member, versionId: string, input: { 
     // Read again under the gait's lock: another release may have finished while this one waited.
     const [fresh] = await tx.select({ state: gaitVersions.state }).from(gaitVersions).where(eq(gaitVersions.id, version.id));
     if (fresh.state !== "approved") {
-      throw new ServiceError(409, "conflict", `Version ${version.number} is ${STATE_WORDS[fresh.state]}; only an approved version can be released.`);
+      throw new ServiceError(409, "conflict", `Version ${version.number} is ${stateWord(fresh.state)}; only an approved version can be released.`);
     }
     const retiredRows = await tx
       .update(gaitVersions)
