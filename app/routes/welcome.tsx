@@ -7,6 +7,7 @@ import { membershipsOf, requireUser } from "~/platform/access.server";
 import { formAction, ServiceError } from "~/platform/errors.server";
 import { acceptInvitation, invitationsForEmail } from "~/features/accounts/invitations.server";
 import { ROLE_LABELS } from "~/platform/permissions";
+import { id } from "~/platform/params";
 import { commitSession, readSession } from "~/platform/session.server";
 import { createWorkspace } from "~/features/accounts/workspaces.server";
 
@@ -18,7 +19,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 const input = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("create"), name: z.string() }),
-  z.object({ intent: z.literal("accept"), invitationId: z.string().uuid() }),
+  z.object({ intent: z.literal("accept"), invitationId: id() }),
 ]);
 
 export async function action({ request }: Route.ActionArgs) {

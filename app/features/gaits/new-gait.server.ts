@@ -11,6 +11,7 @@ import { recordAudit } from "../../platform/audit.server";
 import { database, isUniqueViolation } from "../../platform/db.server";
 import { checkSequenceFor, type DraftActor } from "./drafts.server";
 import { ServiceError } from "../../platform/errors.server";
+import { id } from "../../platform/params";
 import { robotOfRevision } from "../robots/revision-robot.server";
 import { newestRevisionInWorkspace } from "../robots/robots.server";
 import { suitableTemplates, type TemplateChoice } from "./editor/templates";
@@ -68,7 +69,7 @@ export const gaitName = z.string().trim().min(1, "give the gait a name").max(120
 
 /** The new-gait form: strings in, generator parameters out; each message names its field. */
 export const newGaitForm = z.object({
-  robotId: z.guid({ error: "choose a robot" }),
+  robotId: id("choose a robot"),
   name: gaitName,
   description: z.string().trim().max(2000, "the description must be at most 2000 characters").optional().default(""),
   template: z.enum(TEMPLATE_NAMES, { error: "choose a template" }),
@@ -160,7 +161,7 @@ export async function createGait(actor: DraftActor, input: NewGaitInput, db: Dat
 }
 
 export const copyForm = z.object({
-  sourceGaitId: z.guid({ error: "the gait to copy is missing" }),
+  sourceGaitId: id("the gait to copy is missing"),
   name: gaitName,
   sequence: z.string().min(2, "the sequence to keep is missing"),
 });

@@ -3,6 +3,7 @@
 import type { Member } from "../../platform/access.server";
 import type { LimitedForm } from "../../platform/body.server";
 import { ServiceError } from "../../platform/errors.server";
+import { revisionNumber } from "../../platform/params";
 import { getRevision, saveRevision } from "./robots.server";
 import { DEFINITION_LIMIT_BYTES, formatBytes } from "./files";
 import { describeJsonError } from "./json-errors";
@@ -43,9 +44,10 @@ export async function restoreFromForm(form: FormData, context: { member: Member;
   if (form.get("intent") !== "restore") {
     throw new ServiceError(400, "bad-request", `Unknown intent ${JSON.stringify(form.get("intent"))}: expected "restore".`);
   }
-  const base = String(form.get("baseRevision") ?? "");
-  if (!/^[1-9][0-9]{0,8}$/.test(base)) {
-    throw new ServiceError(400, "bad-request", `Cannot restore: baseRevision must be a revision number (got ${JSON.stringify(base)}).`);
+  const given = String(form.get("baseRevision") ?? "");
+  const base = revisionNumber().safeParse(given);
+  if (!base.success) {
+    throw new ServiceError(400, "bad-request", `Cannot restore: baseRevision must be a revision number (got ${JSON.stringify(given)}).`);
   }
   const old = await getRevision(context.member.workspace.id, context.robotId, context.number);
   if (!old) throw new ServiceError(404, "not-found", `This robot has no revision ${context.number}.`);
@@ -53,7 +55,7 @@ export async function restoreFromForm(form: FormData, context: { member: Member;
     workspaceId: context.member.workspace.id,
     robotId: context.robotId,
     author: { id: context.member.user.id, role: context.member.role },
-    baseRevision: Number(base),
+    baseRevision: base.data,
     definition: old.revision.definition,
     message: `Restored revision ${context.number}`,
   });

@@ -8,6 +8,7 @@ import { EXPORTER_VERSION, TABLE_FORMAT, TABLE_FORMATS, TABLE_UNITS, type Calibr
 import { MAX_FPS, SOLVER_VERSION } from "../../gait/index";
 import { JOINT_NAMES } from "../../kinematics/index";
 import { ServiceError } from "../../platform/errors.server";
+import { idParam, versionOrReleased } from "../../platform/params";
 import { canonicalJson } from "../versions/content-hash.server";
 import type { RenderedTable } from "./render.server";
 
@@ -97,14 +98,12 @@ export type BenchQuery = z.output<typeof benchQuerySchema>;
 
 /** Route parameters of the table route: `:number` is a version number or `released`. */
 export const tableParamsSchema = z.object({
-  gaitId: z.guid({ error: (issue) => `gaitId must be a UUID (got ${JSON.stringify(issue.input)})` }),
-  number: z.union([z.literal("released"), z.string().regex(/^[1-9][0-9]{0,8}$/).transform(Number)], {
-    error: (issue) => `the version must be a number from 1 or "released" (got ${JSON.stringify(issue.input)})`,
-  }),
+  gaitId: idParam("gaitId"),
+  number: versionOrReleased((issue) => `the version must be a number from 1 or "released" (got ${JSON.stringify(issue.input)})`),
 });
 
 export const robotParamsSchema = z.object({
-  robotId: z.guid({ error: (issue) => `robotId must be a UUID (got ${JSON.stringify(issue.input)})` }),
+  robotId: idParam("robotId"),
 });
 
 const badParameter = (parameter: string, message: string) => new ServiceError(400, "bad-request", message, { parameter });

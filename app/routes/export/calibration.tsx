@@ -19,8 +19,9 @@ import {
 } from "~/features/robots/calibration.server";
 import { ServiceError, formAction, pageGuard, type FormError } from "~/platform/errors.server";
 import { can } from "~/platform/permissions";
+import { id, revisionNumber } from "~/platform/params";
 
-const params = z.object({ robotId: z.guid() });
+const params = z.object({ robotId: id() });
 
 async function robotOr404(workspaceId: string, raw: unknown) {
   const parsed = params.safeParse(raw);
@@ -52,12 +53,12 @@ export async function loader({ request, params: raw }: Route.LoaderArgs) {
   };
 }
 
-const revision = z.string().regex(/^[1-9][0-9]{0,8}$/, "baseRevision must be the profile revision the edits started from").transform(Number);
+const revision = revisionNumber("baseRevision must be the profile revision the edits started from");
 const intent = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("create") }),
   z.object({ intent: z.literal("import"), json: z.string().min(1, "paste the profile's JSON") }),
-  z.object({ intent: z.literal("update"), profileId: z.guid(), baseRevision: revision }),
-  z.object({ intent: z.literal("delete"), profileId: z.guid(), baseRevision: revision }),
+  z.object({ intent: z.literal("update"), profileId: id(), baseRevision: revision }),
+  z.object({ intent: z.literal("delete"), profileId: id(), baseRevision: revision }),
 ]);
 
 type ActionResult = FormError<{ issues?: ProfileIssues }>;

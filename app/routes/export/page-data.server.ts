@@ -7,6 +7,7 @@ import { centreTable, sweepTable, type BenchTable } from "~/export";
 import { JOINT_NAMES, parseRobot, type JointName } from "~/kinematics";
 import { listProfiles } from "~/features/robots/calibration.server";
 import { attempt, ServiceError } from "~/platform/errors.server";
+import { id, versionOrReleased } from "~/platform/params";
 import { newestRevisionInWorkspace } from "~/features/robots/robots.server";
 import { prepareBenchTable, renderBenchTable, type PreparedBench } from "~/features/tables/bench-tables.server";
 import { benchQuerySchema, parseQuery, tableQuerySchema, type TableQuery } from "~/features/tables/query";
@@ -94,8 +95,8 @@ export function curlCommand(url: string, fileName: string): string {
 const EXPORT_FORM_KEYS = ["gait", "version", "format", "units", "rate", "profile", "override"] as const;
 
 const exportPageSchema = tableQuerySchema.extend({
-  gait: z.guid({ error: "gait must be a gait id" }).optional(),
-  version: z.union([z.literal("released"), z.string().regex(/^[1-9][0-9]{0,8}$/).transform(Number)], { error: 'version must be a number or "released"' }).optional(),
+  gait: id("gait must be a gait id").optional(),
+  version: versionOrReleased('version must be a number or "released"').optional(),
 });
 
 type GaitChoice = { id: string; name: string; robotId: string; robotName: string; releasedVersion: number | null; latestVersion: number | null };
@@ -152,7 +153,7 @@ export async function exportPageData(workspaceId: string, search: URLSearchParam
 
 const BENCH_FORM_KEYS = ["robot", "kind", "leg", "joint", "speed", "dwell", "seconds", "fps", "hold", "format", "units", "profile", "override"] as const;
 
-const benchPageSchema = benchQuerySchema.extend({ robot: z.guid({ error: "robot must be a robot id" }).optional() });
+const benchPageSchema = benchQuerySchema.extend({ robot: id("robot must be a robot id").optional() });
 
 type RobotChoice = { id: string; name: string };
 

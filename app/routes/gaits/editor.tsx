@@ -10,8 +10,9 @@ import { requireAccess } from "~/platform/access.server";
 import { moveDraftToNewestRobot, readDraft } from "~/features/gaits/drafts.server";
 import { ServiceError, formAction, pageGuard } from "~/platform/errors.server";
 import { can } from "~/platform/permissions";
+import { id } from "~/platform/params";
 
-const gaitParams = z.object({ gaitId: z.guid({ error: "There is no gait at this address." }) });
+const gaitParams = z.object({ gaitId: id("There is no gait at this address.") });
 
 function gaitIdOf(params: unknown): string {
   const parsed = gaitParams.safeParse(params);

@@ -11,17 +11,15 @@ import { parseVersionQuery } from "~/components/versions/version-query";
 import { requireAccess } from "~/platform/access.server";
 import { formAction, ServiceError, type FormError } from "~/platform/errors.server";
 import { can, type Action } from "~/platform/permissions";
+import { draftRevision, id } from "~/platform/params";
 import { readIntentForm } from "~/platform/intent-form.server";
 import { commitDraft, getGait, listVersions, restoreDraft, versionAuthors } from "~/features/versions/versions.server";
 
-const gaitParams = z.object({ gaitId: z.guid() });
+const gaitParams = z.object({ gaitId: id() });
 
 const notFound = () => data({ message: "There is no gait at this address in your workspace." }, { status: 404 });
 
-const revisionField = z
-  .string()
-  .regex(/^\d{1,9}$/, { error: "draftRevision must be the draft revision the page showed" })
-  .transform(Number);
+const revisionField = draftRevision("draftRevision must be the draft revision the page showed");
 
 const actionForm = z.discriminatedUnion("intent", [
   z.object({
@@ -31,7 +29,7 @@ const actionForm = z.discriminatedUnion("intent", [
   }),
   z.object({
     intent: z.literal("restore"),
-    versionId: z.guid({ error: "Choose the version to start the draft from." }),
+    versionId: id("Choose the version to start the draft from."),
     draftRevision: revisionField,
   }),
 ]);

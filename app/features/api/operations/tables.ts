@@ -1,5 +1,6 @@
 // The firmware angle tables and the bring-up tables: files with ETags, audited downloads.
 import { TABLE_FORMAT, TABLE_MEDIA_TYPES } from "../../../export/index";
+import { NUMBER_PATTERN } from "../../../platform/params";
 import { RELEASE_TABLE, benchQuerySchema, tableQuerySchema } from "../../tables/query";
 import { AUTH, errorsFor, etagResponses, ifNoneMatch, permission, queryParameters, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
 
@@ -60,7 +61,7 @@ export function angleTablePaths(): OpenApiPaths {
             in: "path",
             required: true,
             description: "The version number, or `released` for the gait's released version.",
-            schema: { anyOf: [{ type: "string", pattern: "^[1-9][0-9]{0,8}$" }, { const: "released" }] },
+            schema: { anyOf: [{ type: "string", pattern: NUMBER_PATTERN }, { const: "released" }] },
           },
           ...queryParameters(tableQuerySchema),
           ifNoneMatch,

@@ -5,11 +5,12 @@
 import { z } from "zod";
 import type { Route } from "./+types/draft";
 import { requireApiAccess } from "~/platform/access.server";
+import { idParam } from "~/platform/params";
 import { readJsonBody } from "~/platform/body.server";
 import { DRAFT_BODY_LIMIT_BYTES, readDraft, saveDraft, type DraftContext } from "~/features/gaits/drafts.server";
 import { apiAction, apiError } from "~/platform/errors.server";
 
-const gaitParams = z.object({ gaitId: z.guid({ error: (issue) => `gaitId must be a UUID (got ${JSON.stringify(issue.input)})` }) });
+const gaitParams = z.object({ gaitId: idParam("gaitId") });
 
 function gaitIdOf(params: unknown): string {
   const parsed = gaitParams.safeParse(params);

@@ -3,10 +3,11 @@
 import { z } from "zod";
 import type { Route } from "./+types/versions";
 import { requireApiAccess } from "~/platform/access.server";
+import { idParam } from "~/platform/params";
 import { apiError } from "~/platform/errors.server";
 import { getGait, listVersions } from "~/features/versions/versions.server";
 
-const params = z.object({ gaitId: z.guid({ error: (issue) => `gaitId must be a UUID (got ${JSON.stringify(issue.input)})` }) });
+const params = z.object({ gaitId: idParam("gaitId") });
 
 export async function loader({ request, params: raw }: Route.LoaderArgs) {
   const { workspace } = await requireApiAccess(request, "gaits.read");
