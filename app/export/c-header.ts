@@ -20,12 +20,8 @@
 // be included together. The cells are the same integers the CSV and JSON
 // tables print with decimals.
 import { TableExportError } from "./errors";
-import * as roundingModule from "./rounding";
+import { UNIT_ROUNDING, formatFixed } from "./rounding";
 import type { AngleTableData } from "./table";
-
-// A module-local copy: some module loaders read imported bindings through getters (see table.ts).
-const formatFixed = roundingModule.formatFixed;
-const UNIT_ROUNDING = roundingModule.UNIT_ROUNDING;
 
 const MAX_IDENTIFIER_PART = 40;
 

@@ -6,11 +6,8 @@
 // calibration profile, override reason, clamped cells, safety notice) is what
 // angleTableMetadata returns, for the download's HTTP headers, and what the
 // JSON and C tables carry inside.
-import * as rounding from "./rounding";
+import { formatFixed } from "./rounding";
 import type { AngleTableData } from "./table";
-
-// A module-local copy: some module loaders read imported bindings through getters (see table.ts).
-const formatFixed = rounding.formatFixed;
 
 const NEEDS_QUOTES = /[",\r\n]/;
 

@@ -11,12 +11,9 @@
 // Numbers in `frames` are printed from the same fixed-point integers as the
 // CSV and C tables, with the same decimals (so the text of a cell is the CSV's
 // text); one frame per line so that long tables stay readable and diffable.
-import * as rounding from "./rounding";
+import { formatFixed } from "./rounding";
 import type { AngleTableData } from "./table";
 import { TABLE_FORMAT } from "./version";
-
-// A module-local copy: some module loaders read imported bindings through getters (see table.ts).
-const formatFixed = rounding.formatFixed;
 
 function indented(value: unknown, indent: string): string {
   return JSON.stringify(value, null, 2).replace(/\n/g, `\n${indent}`);

@@ -8,24 +8,13 @@
 // servo is reversed), clamp to minUs..maxUs and round to whole µs. A cell whose
 // pulse lies outside minUs..maxUs is listed in `clamped`, whatever the units.
 import { FLAG_KINDS, type FlagKind, type SolvedSequence } from "../gait/index";
-import * as kinematics from "../kinematics/index";
-import type { JointName, Robot } from "../kinematics/index";
+import { JOINT_NAMES, RAD_PER_DEG, angleToPulse, type JointName, type Robot } from "../kinematics/index";
 import { tableChannels, type TableChannel } from "./channels";
 import { TableExportError } from "./errors";
 import { parseTableOptions, type TableOptions, type TableUnits } from "./options";
-import * as rounding from "./rounding";
+import { UNIT_ROUNDING, timeToMicroseconds, toFixedPoint } from "./rounding";
 import { SAFETY_NOTICE } from "./safety";
 import { EXPORTER_VERSION } from "./version";
-
-// Module-local copies on purpose, as in the kinematics' leg kernel: some module
-// loaders (vitest's, tsx's) read imported bindings through getters, which
-// doubled the time of the cell loop here.
-const JOINT_NAMES = kinematics.JOINT_NAMES;
-const RAD_PER_DEG = kinematics.RAD_PER_DEG;
-const angleToPulse = kinematics.angleToPulse;
-const UNIT_ROUNDING = rounding.UNIT_ROUNDING;
-const timeToMicroseconds = rounding.timeToMicroseconds;
-const toFixedPoint = rounding.toFixedPoint;
 
 /** A cell whose pulse lies outside the servo's minUs..maxUs: a pulse table holds clampedUs there. */
 export type ClampedCell = {

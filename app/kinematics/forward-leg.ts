@@ -1,17 +1,11 @@
 // forwardLeg: where the foot is for given servo angles, the exact inverse of solveLeg.
-import * as bodyPoseModule from "./body-pose";
-import * as legConstantsModule from "./leg-constants";
-import * as kernel from "./leg-kernel";
-import * as robotModule from "./robot";
-import type { BodyPose, JointAngles, Robot, Vec3 } from "./robot";
-
-// Module-local copies: some module loaders read imported bindings through getters (see leg-kernel.ts).
-const cachedLegConstants = legConstantsModule.cachedLegConstants;
-const forwardLegInto = kernel.forwardLegInto;
-const findLeg = robotModule.findLeg;
+import { createPoseRotationCache } from "./body-pose";
+import { cachedLegConstants } from "./leg-constants";
+import { forwardLegInto } from "./leg-kernel";
+import { findLeg, type BodyPose, type JointAngles, type Robot, type Vec3 } from "./robot";
 
 const footScratch = new Float64Array(3);
-const rotationOf = bodyPoseModule.createPoseRotationCache();
+const rotationOf = createPoseRotationCache();
 
 /**
  * The foot (mm) in the neutral body frame for servo angles `angles` (degrees),

@@ -8,22 +8,18 @@
 // turn counter-clockwise; with coxa c, femur f, tibia t:
 //   knee = (c + f·cos φf, f·sin φf),  foot = knee + t·(cos α, sin α),  α = φf − 90° + φt.
 // servoDeg = geometricDeg − zeroOffsetDeg.
-import * as angles from "./angles";
+import { DEG_PER_RAD, wrapNear } from "./angles";
 import type { LegConstants } from "./leg-constants";
-import * as status from "./solve-status";
-
-// Module-local copies on purpose: some module loaders (vitest's, tsx's) read
-// imported bindings through getters, which doubled the time of a solve here.
-const DEG_PER_RAD = angles.DEG_PER_RAD;
-const wrapNear = angles.wrapNear;
-const COXA_AXIS_CLEARANCE_MM = status.COXA_AXIS_CLEARANCE_MM;
-const SOLVE_BEYOND_REACH = status.SOLVE_BEYOND_REACH;
-const SOLVE_INSIDE_FOLD = status.SOLVE_INSIDE_FOLD;
-const SOLVE_ON_COXA_AXIS = status.SOLVE_ON_COXA_AXIS;
-const SOLVE_NOT_FINITE = status.SOLVE_NOT_FINITE;
-const SOLVE_COXA_LIMIT = status.SOLVE_COXA_LIMIT;
-const SOLVE_FEMUR_LIMIT = status.SOLVE_FEMUR_LIMIT;
-const SOLVE_TIBIA_LIMIT = status.SOLVE_TIBIA_LIMIT;
+import {
+  COXA_AXIS_CLEARANCE_MM,
+  SOLVE_BEYOND_REACH,
+  SOLVE_COXA_LIMIT,
+  SOLVE_FEMUR_LIMIT,
+  SOLVE_INSIDE_FOLD,
+  SOLVE_NOT_FINITE,
+  SOLVE_ON_COXA_AXIS,
+  SOLVE_TIBIA_LIMIT,
+} from "./solve-status";
 
 type NumberSink = { [index: number]: number };
 

@@ -3,13 +3,9 @@
 // arrays. No allocation per call.
 import { poseRotation } from "./body-pose";
 import { legConstants, type LegConstants } from "./leg-constants";
-import * as kernel from "./leg-kernel";
+import { forwardLegInto, solveLegInto } from "./leg-kernel";
 import type { BodyPose, Robot } from "./robot";
 import { unreachableReason } from "./solve-leg";
-
-// Module-local copies: some module loaders read imported bindings through getters (see leg-kernel.ts).
-const solveLegInto = kernel.solveLegInto;
-const forwardLegInto = kernel.forwardLegInto;
 
 type NumberSink = { [index: number]: number };
 

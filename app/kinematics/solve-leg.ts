@@ -1,21 +1,20 @@
 // solveLeg: the public, one-call leg solve (DESIGN.md, "Core module contracts").
 // For thousands of solves use createLegSolver, which keeps the per-leg constants.
-import * as bodyPoseModule from "./body-pose";
-import * as legConstantsModule from "./leg-constants";
-import type { LegConstants } from "./leg-constants";
-import * as kernel from "./leg-kernel";
-import * as robotModule from "./robot";
-import type { BodyPose, JointAngles, JointName, Robot, Vec3 } from "./robot";
-import * as status from "./solve-status";
-
-// Module-local copies: some module loaders read imported bindings through getters (see leg-kernel.ts).
-const cachedLegConstants = legConstantsModule.cachedLegConstants;
-const solveLegInto = kernel.solveLegInto;
-const findLeg = robotModule.findLeg;
-const SOLVE_COXA_LIMIT = status.SOLVE_COXA_LIMIT;
-const SOLVE_FEMUR_LIMIT = status.SOLVE_FEMUR_LIMIT;
-const SOLVE_TIBIA_LIMIT = status.SOLVE_TIBIA_LIMIT;
-const SOLVE_UNREACHABLE = status.SOLVE_UNREACHABLE;
+import { createPoseRotationCache } from "./body-pose";
+import { cachedLegConstants, type LegConstants } from "./leg-constants";
+import { solveLegInto } from "./leg-kernel";
+import { findLeg, type BodyPose, type JointAngles, type JointName, type Robot, type Vec3 } from "./robot";
+import {
+  COXA_AXIS_CLEARANCE_MM,
+  SOLVE_BEYOND_REACH,
+  SOLVE_COXA_LIMIT,
+  SOLVE_FEMUR_LIMIT,
+  SOLVE_INSIDE_FOLD,
+  SOLVE_NOT_FINITE,
+  SOLVE_ON_COXA_AXIS,
+  SOLVE_TIBIA_LIMIT,
+  SOLVE_UNREACHABLE,
+} from "./solve-status";
 
 /** A joint outside its limits, all in servo degrees. */
 export type JointLimitViolation = { joint: JointName; valueDeg: number; minDeg: number; maxDeg: number };
@@ -30,7 +29,7 @@ export type LegSolution = {
 };
 
 const anglesScratch = new Float64Array(3);
-const rotationOf = bodyPoseModule.createPoseRotationCache();
+const rotationOf = createPoseRotationCache();
 
 /**
  * Joint angles (servo degrees) that put the leg's foot at `foot` (mm, neutral
@@ -63,16 +62,16 @@ export function solveLeg(robot: Robot, legId: string, foot: Vec3, bodyPose?: Bod
 
 /** The human reason for an unreachable target (body-frame mm), naming the leg and the distance. */
 export function unreachableReason(k: LegConstants, x: number, y: number, z: number, bits: number): string {
-  if (bits & status.SOLVE_NOT_FINITE) return `leg ${k.id}: the target (${x}, ${y}, ${z}) is not a finite point`;
+  if (bits & SOLVE_NOT_FINITE) return `leg ${k.id}: the target (${x}, ${y}, ${z}) is not a finite point`;
   const radius = Math.hypot(x - k.mountXMm, y - k.mountYMm);
-  if (bits & status.SOLVE_ON_COXA_AXIS) {
-    return `leg ${k.id}: the foot is ${mm(radius)} from the coxa axis, where the coxa angle is undefined (${mm(status.COXA_AXIS_CLEARANCE_MM)} needed)`;
+  if (bits & SOLVE_ON_COXA_AXIS) {
+    return `leg ${k.id}: the foot is ${mm(radius)} from the coxa axis, where the coxa angle is undefined (${mm(COXA_AXIS_CLEARANCE_MM)} needed)`;
   }
   const distance = Math.hypot(radius - k.coxaMm, z - k.mountZMm);
-  if (bits & status.SOLVE_BEYOND_REACH) {
+  if (bits & SOLVE_BEYOND_REACH) {
     return `leg ${k.id}: the foot is ${mm(distance)} from the femur joint, beyond full extension (${mm(k.reachMaxMm)})`;
   }
-  if (bits & status.SOLVE_INSIDE_FOLD) {
+  if (bits & SOLVE_INSIDE_FOLD) {
     return `leg ${k.id}: the foot is ${mm(distance)} from the femur joint, inside full fold (${mm(k.reachMinMm)})`;
   }
   return `leg ${k.id}: reachable`;
