@@ -27,7 +27,7 @@ export { formatIssues, formatPath } from "./issues";
 export { DEG_PER_RAD, RAD_PER_DEG, wrapNear } from "./angles";
 export { NEUTRAL_POSE, poseApply, poseRotation, poseUnapply } from "./body-pose";
 export { solveLeg, type JointLimitViolation, type LegSolution } from "./solve-leg";
-export { forwardLeg } from "./forward-leg";
+export { forwardLeg, forwardLegJoints, type LegJointPoints } from "./forward-leg";
 export { createLegSolver, type LegSolver } from "./leg-solver";
 export {
   COXA_AXIS_CLEARANCE_MM,

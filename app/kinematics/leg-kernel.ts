@@ -105,14 +105,60 @@ export function forwardLegInto(
   out: NumberSink,
   offset: number,
 ): void {
+  forwardInto(k, coxaServoDeg, femurServoDeg, tibiaServoDeg, false, out, offset);
+}
+
+/**
+ * Femur joint, knee and foot (body frame, mm) for servo degrees, written to
+ * out[offset..offset+8] in that order; the coxa joint is the mount itself.
+ */
+export function legJointsInto(
+  k: LegConstants,
+  coxaServoDeg: number,
+  femurServoDeg: number,
+  tibiaServoDeg: number,
+  out: NumberSink,
+  offset: number,
+): void {
+  forwardInto(k, coxaServoDeg, femurServoDeg, tibiaServoDeg, true, out, offset);
+}
+
+// The one forward solve. In the (r, z) leg plane knee = (c + f·cos φf, f·sin φf)
+// and foot = knee + t·(cos α, sin α); each point is then turned by the coxa and
+// the mount yaw and moved to the mount. Without `joints` only the foot is
+// written, the figure a solve needs many times.
+function forwardInto(
+  k: LegConstants,
+  coxaServoDeg: number,
+  femurServoDeg: number,
+  tibiaServoDeg: number,
+  joints: boolean,
+  out: NumberSink,
+  offset: number,
+): void {
   const coxaRad = coxaServoDeg / DEG_PER_RAD + k.coxaOffsetRad;
   const femurRad = femurServoDeg / DEG_PER_RAD + k.femurOffsetRad;
   const tibiaRad = tibiaServoDeg / DEG_PER_RAD + k.tibiaOffsetRad;
   const tibiaDirectionRad = femurRad - HALF_PI + tibiaRad;
-  const radius = k.coxaMm + k.femurMm * Math.cos(femurRad) + k.tibiaMm * Math.cos(tibiaDirectionRad);
-  const height = k.femurMm * Math.sin(femurRad) + k.tibiaMm * Math.sin(tibiaDirectionRad);
-  const legX = radius * Math.cos(coxaRad);
-  const legY = radius * Math.sin(coxaRad);
+  const kneeRadius = k.coxaMm + k.femurMm * Math.cos(femurRad);
+  const kneeHeight = k.femurMm * Math.sin(femurRad);
+  const footRadius = kneeRadius + k.tibiaMm * Math.cos(tibiaDirectionRad);
+  const footHeight = kneeHeight + k.tibiaMm * Math.sin(tibiaDirectionRad);
+  const cosCoxa = Math.cos(coxaRad);
+  const sinCoxa = Math.sin(coxaRad);
+  let at = offset;
+  if (joints) {
+    planeToBody(k, k.coxaMm, 0, cosCoxa, sinCoxa, out, at);
+    planeToBody(k, kneeRadius, kneeHeight, cosCoxa, sinCoxa, out, at + 3);
+    at += 6;
+  }
+  planeToBody(k, footRadius, footHeight, cosCoxa, sinCoxa, out, at);
+}
+
+// A point (radius, height) of the leg plane, turned by the coxa and the mount yaw, moved to the mount.
+function planeToBody(k: LegConstants, radius: number, height: number, cosCoxa: number, sinCoxa: number, out: NumberSink, offset: number): void {
+  const legX = radius * cosCoxa;
+  const legY = radius * sinCoxa;
   out[offset] = k.mountXMm + k.cosYaw * legX - k.sinYaw * legY;
   out[offset + 1] = k.mountYMm + k.sinYaw * legX + k.cosYaw * legY;
   out[offset + 2] = k.mountZMm + height;

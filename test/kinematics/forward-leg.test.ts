@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
-import { forwardLeg, parseRobot, solveLeg, type BodyPose, type JointAngles, type Robot } from "../../app/kinematics";
+import { forwardLeg, forwardLegJoints, parseRobot, solveLeg, type BodyPose, type JointAngles, type Robot } from "../../app/kinematics";
 import { loadDemoRobots } from "../support/robots";
 import { sampleJointSet } from "./support/joint-samples";
 import { seededRandom, type Random } from "./support/prng";
-import { distanceMm, referenceFoot } from "./support/reference-fk";
+import { distanceMm, referenceFoot, referenceJoints } from "./support/reference-fk";
 
 const SAMPLES = 12_000;
 
@@ -63,6 +63,40 @@ describe("forwardLeg against FK composed with three.js Matrix4 (reference librar
       }
     }
     expect(worstMm, `worst foot error (mm) — ${worstCase}`).toBeLessThanOrEqual(1e-6);
+  });
+});
+
+describe("forwardLegJoints against the same three.js chain, joint by joint", () => {
+  it("puts the coxa joint, femur joint, knee and foot within 1e-6 mm of the reference, and its foot is forwardLeg's", () => {
+    let worstMm = 0;
+    let worstCase = "";
+    let footDiffers = 0;
+    for (const { robot, legId, angles, pose } of samples(4).slice(0, 3000)) {
+      const leg = robot.legs.find((candidate) => candidate.id === legId)!;
+      const expected = referenceJoints(leg, angles, pose);
+      const got = forwardLegJoints(robot, legId, angles, pose);
+      for (const joint of ["coxa", "femur", "knee", "foot"] as const) {
+        const errorMm = distanceMm(expected[joint], got[joint]);
+        if (errorMm > worstMm) {
+          worstMm = errorMm;
+          worstCase = `${robot.name} ${legId} ${joint} ${JSON.stringify(angles)}: expected [${expected[joint].join(", ")}] mm, got [${got[joint].join(", ")}] mm`;
+        }
+      }
+      const foot = forwardLeg(robot, legId, angles, pose);
+      if (got.foot.some((value, axis) => value !== foot[axis])) footDiffers += 1;
+    }
+    expect(worstMm, `worst joint error (mm) — ${worstCase}`).toBeLessThanOrEqual(1e-6);
+    expect(footDiffers, "joint sets whose foot is not forwardLeg's, bit for bit").toBe(0);
+  });
+
+  it("keeps the links' lengths: coxa, femur and tibia apart, joint to joint", () => {
+    for (const { robot, legId, angles, pose } of samples(5).slice(0, 500)) {
+      const leg = robot.legs.find((candidate) => candidate.id === legId)!;
+      const { coxa, femur, knee, foot } = forwardLegJoints(robot, legId, angles, pose);
+      expect(distanceMm(coxa, femur), `${robot.name} ${legId} coxa (mm)`).toBeCloseTo(leg.coxa, 9);
+      expect(distanceMm(femur, knee), `${robot.name} ${legId} femur (mm)`).toBeCloseTo(leg.femur, 9);
+      expect(distanceMm(knee, foot), `${robot.name} ${legId} tibia (mm)`).toBeCloseTo(leg.tibia, 9);
+    }
   });
 });
 

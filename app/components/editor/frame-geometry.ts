@@ -3,8 +3,8 @@
 // lookup. Everything is in the frame's own body frame (x forward, y left),
 // seen from above; world points (support polygon, CoM) are brought into it.
 import type { SolvedSequence } from "~/gait";
-import { legPoints, type LegPosture } from "~/components/robot-view/leg-postures";
-import { RAD_PER_DEG, type JointLimitViolation, type Robot } from "~/kinematics";
+import type { LegPosture } from "~/components/robot-view/leg-postures";
+import { RAD_PER_DEG, forwardLegJoints, type JointLimitViolation, type Robot } from "~/kinematics";
 
 export type FrameGeometry = {
   postures: LegPosture[];
@@ -43,7 +43,7 @@ export function frameGeometry(robot: Robot, solved: SolvedSequence, index: numbe
     const solvedLeg = frame.legs[leg.id];
     if (!solvedLeg) return;
     if (solvedLeg.contact === "stance") stanceLegs.push(leg.id);
-    postures.push({ legId: leg.id, index: legIndex, points: legPoints(leg, solvedLeg.angles), reachable: solvedLeg.reachable, violations: violations.get(leg.id) ?? [] });
+    postures.push({ legId: leg.id, index: legIndex, points: forwardLegJoints(robot, leg.id, solvedLeg.angles), reachable: solvedLeg.reachable, violations: violations.get(leg.id) ?? [] });
   });
   // World → body frame, on the ground plane: undo the body's position and heading.
   const cos = Math.cos(-frame.body.yaw * RAD_PER_DEG);

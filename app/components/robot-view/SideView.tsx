@@ -42,8 +42,8 @@ export function SideView({ robot, postures, bodyHeightMm = robot.standHeight, hi
       {ordered.map((posture) => {
         const leg = robot.legs[posture.index];
         const far = legSide(robot, leg) === "left";
-        const { mount, hip, knee, foot } = posture.points;
-        const path = [mount, hip, knee, foot].map(([x, , z]) => frame.toScreen(x, z).join(",")).join(" ");
+        const { coxa, femur, knee, foot } = posture.points;
+        const path = [coxa, femur, knee, foot].map(([x, , z]) => frame.toScreen(x, z).join(",")).join(" ");
         const [footX, footY] = frame.toScreen(foot[0], foot[2]);
         const faded = (highlightLegId !== undefined && highlightLegId !== posture.legId) || far;
         const flagged = !posture.reachable || posture.violations.length > 0;

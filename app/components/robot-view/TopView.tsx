@@ -39,8 +39,8 @@ export function TopView({ robot, postures, rings, highlightLegId, width = 360, h
       <TopStatic robot={robot} frame={frame} rings={rings} />
       <g>
         {postures.map((posture) => {
-          const { mount, hip, knee, foot } = posture.points;
-          const path = [mount, hip, knee, foot].map(([x, y]) => frame.toScreen(x, y).join(",")).join(" ");
+          const { coxa, femur, knee, foot } = posture.points;
+          const path = [coxa, femur, knee, foot].map(([x, y]) => frame.toScreen(x, y).join(",")).join(" ");
           const [footX, footY] = frame.toScreen(foot[0], foot[1]);
           const faded = highlightLegId !== undefined && highlightLegId !== posture.legId;
           const flagged = !posture.reachable || posture.violations.length > 0;

@@ -2,6 +2,6 @@
 export { RobotViews, groundRings, type RobotViewsProps } from "./RobotViews";
 export { TopView, type TopViewProps } from "./TopView";
 export { SideView, type SideViewProps } from "./SideView";
-export { legPoints, legPostures, type LegPoints, type LegPosture } from "./leg-postures";
+export { legPostures, type LegPosture } from "./leg-postures";
 export { legBackground, legFill, legStroke } from "./leg-colours";
 export { sideFrame, topFrame, type ViewFrame } from "./frame";

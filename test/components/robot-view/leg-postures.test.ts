@@ -1,42 +1,41 @@
 import { describe, expect, test } from "vitest";
-import { forwardLeg, neutralStance, type BodyPose } from "~/kinematics";
-import { legPoints, legPostures } from "~/components/robot-view";
+import { forwardLegJoints, neutralStance, type BodyPose } from "~/kinematics";
+import { legPostures } from "~/components/robot-view";
 import { loadDemoRobot } from "../../support/robots";
 
-// A small seeded generator (Park–Miller), so failures repeat.
-function random(seed: number) {
-  let state = seed;
-  return () => {
-    state = (state * 48271) % 2147483647;
-    return state / 2147483647;
-  };
-}
+const POSE: BodyPose = { x: 4, y: -3, z: 6, roll: 3, pitch: -4, yaw: 12 };
 
-describe("leg points for the views", () => {
-  test("the foot agrees with forwardLeg to 1e-9 mm for random angles, with and without a body pose", () => {
-    const next = random(20240611);
-    for (const file of ["pier-crawler", "quay-walker", "hull-climber"] as const) {
-      const robot = loadDemoRobot(file);
-      for (let trial = 0; trial < 200; trial += 1) {
-        const leg = robot.legs[trial % robot.legs.length];
-        const angles = { coxa: next() * 80 - 40, femur: next() * 140 - 70, tibia: next() * 140 - 70 };
-        const pose: BodyPose | undefined =
-          trial % 2 === 0 ? undefined : { x: next() * 20 - 10, y: next() * 20 - 10, z: next() * 20 - 10, roll: next() * 10 - 5, pitch: next() * 10 - 5, yaw: next() * 30 - 15 };
-        const expected = forwardLeg(robot, leg.id, angles, pose);
-        const { foot } = legPoints(leg, angles, pose);
-        for (let axis = 0; axis < 3; axis += 1) expect(Math.abs(foot[axis] - expected[axis]), `${file} ${leg.id} axis ${axis}`).toBeLessThan(1e-9);
+describe("leg postures for the views", () => {
+  test("a leg with given angles is drawn at those angles (the kinematics' forwardLegJoints), moved with the body", () => {
+    const robot = loadDemoRobot("pier-crawler");
+    const angles = { coxa: 10, femur: 20, tibia: -15 };
+    const given = Object.fromEntries(robot.legs.map((leg) => [leg.id, angles]));
+    const postures = legPostures(robot, {}, given, POSE);
+    expect(postures.map((posture) => posture.legId)).toEqual(robot.legs.map((leg) => leg.id));
+    for (const posture of postures) {
+      expect(posture.points).toEqual(forwardLegJoints(robot, posture.legId, angles, POSE));
+      expect(posture.reachable).toBe(true);
+    }
+  });
+
+  test("a leg with only a foot target is solved: its foot lands on the target to 1e-9 mm, with and without a body pose", () => {
+    for (const pose of [undefined, POSE]) {
+      const robot = loadDemoRobot("quay-walker");
+      const feet = neutralStance(robot);
+      for (const posture of legPostures(robot, feet, undefined, pose)) {
+        const target = feet[posture.legId];
+        for (let axis = 0; axis < 3; axis += 1) expect(Math.abs(posture.points.foot[axis] - target[axis]), `${posture.legId} axis ${axis}`).toBeLessThan(1e-9);
       }
     }
   });
 
-  test("the joints lie along the leg: femur joint one coxa length out from the mount, knee one femur length on", () => {
-    const robot = loadDemoRobot("pier-crawler");
-    const leg = robot.legs[0];
-    const { mount, hip, knee, foot } = legPoints(leg, { coxa: 10, femur: 20, tibia: -15 });
-    const distance = (a: number[], b: number[]) => Math.hypot(a[0] - b[0], a[1] - b[1], a[2] - b[2]);
-    expect(distance(mount, hip)).toBeCloseTo(leg.coxa, 9);
-    expect(distance(hip, knee)).toBeCloseTo(leg.femur, 9);
-    expect(distance(knee, foot)).toBeCloseTo(leg.tibia, 9);
+  test("a leg with neither angles nor a foot target is left out; an unreachable target is marked with its reason", () => {
+    const robot = loadDemoRobot("hull-climber");
+    const [first, second] = robot.legs;
+    const postures = legPostures(robot, { [first.id]: [first.mount.x + 1000, first.mount.y, first.mount.z] }, { [second.id]: { coxa: 0, femur: 0, tibia: 0 } });
+    expect(postures.map((posture) => posture.legId)).toEqual([first.id, second.id]);
+    expect(postures[0].reachable).toBe(false);
+    expect(postures[0].reason).toMatch(/beyond full extension/);
   });
 
   test("the neutral stance of every demo robot is reachable and within limits", () => {

@@ -14,24 +14,33 @@ export function poseMatrix(pose: BodyPose): Matrix4 {
   return new Matrix4().makeTranslation(pose.x, pose.y, pose.z).multiply(rotation);
 }
 
-/** Foot in the neutral body frame for servo angles, composed link by link. */
-export function referenceFoot(leg: Leg, servo: JointAngles, pose?: BodyPose): Vec3 {
+/** The coxa joint, femur joint, knee and foot in the neutral body frame for servo angles, composed link by link. */
+export function referenceJoints(leg: Leg, servo: JointAngles, pose?: BodyPose): { coxa: Vec3; femur: Vec3; knee: Vec3; foot: Vec3 } {
   const coxaRad = (servo.coxa + leg.joints.coxa.zeroOffsetDeg) * RAD;
   const femurRad = (servo.femur + leg.joints.femur.zeroOffsetDeg) * RAD;
   const tibiaRad = (servo.tibia + leg.joints.tibia.zeroOffsetDeg) * RAD;
   const chain = pose ? poseMatrix(pose) : new Matrix4();
+  const position = (): Vec3 => {
+    const point = new Vector3().setFromMatrixPosition(chain);
+    return [point.x, point.y, point.z];
+  };
+  chain.multiply(new Matrix4().makeTranslation(leg.mount.x, leg.mount.y, leg.mount.z));
+  const coxa = position();
   chain
-    .multiply(new Matrix4().makeTranslation(leg.mount.x, leg.mount.y, leg.mount.z))
     .multiply(new Matrix4().makeRotationAxis(Z_AXIS, leg.mount.yawDeg * RAD))
     .multiply(new Matrix4().makeRotationAxis(Z_AXIS, coxaRad))
-    .multiply(new Matrix4().makeTranslation(leg.coxa, 0, 0))
-    .multiply(new Matrix4().makeRotationAxis(LEG_PLANE_AXIS, femurRad))
-    .multiply(new Matrix4().makeTranslation(leg.femur, 0, 0))
-    // Tibia zero is at a right angle to the femur, pointing down.
-    .multiply(new Matrix4().makeRotationAxis(LEG_PLANE_AXIS, tibiaRad - Math.PI / 2))
-    .multiply(new Matrix4().makeTranslation(leg.tibia, 0, 0));
-  const foot = new Vector3().setFromMatrixPosition(chain);
-  return [foot.x, foot.y, foot.z];
+    .multiply(new Matrix4().makeTranslation(leg.coxa, 0, 0));
+  const femur = position();
+  chain.multiply(new Matrix4().makeRotationAxis(LEG_PLANE_AXIS, femurRad)).multiply(new Matrix4().makeTranslation(leg.femur, 0, 0));
+  const knee = position();
+  // Tibia zero is at a right angle to the femur, pointing down.
+  chain.multiply(new Matrix4().makeRotationAxis(LEG_PLANE_AXIS, tibiaRad - Math.PI / 2)).multiply(new Matrix4().makeTranslation(leg.tibia, 0, 0));
+  return { coxa, femur, knee, foot: position() };
+}
+
+/** Foot in the neutral body frame for servo angles, composed link by link. */
+export function referenceFoot(leg: Leg, servo: JointAngles, pose?: BodyPose): Vec3 {
+  return referenceJoints(leg, servo, pose).foot;
 }
 
 export function distanceMm(a: Vec3, b: Vec3): number {
