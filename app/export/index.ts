@@ -32,5 +32,5 @@ export { formatJson } from "./json";
 export { cCommentText, cIdentifier, formatCHeader } from "./c-header";
 export { angleTable, angleTableMetadata, buildAngleTable, formatAngleTable, solveForTable } from "./angle-table";
 export { TABLE_MEDIA_TYPES, tableFileName } from "./files";
-export { STAND_CHECKS, solveStandFrames } from "./stand-frames";
+export { solveStandFrames } from "./stand-frames";
 export { centreTable, sweepTable, type BenchTable, type CentreTableOptions, type SweepTableOptions } from "./bench-tables";

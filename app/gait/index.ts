@@ -28,7 +28,8 @@ export {
 export { GAIT_DEFAULTS, gaitParamsSchema, generateGait, type GaitParams } from "./generate";
 export { MOVE_DEFAULTS, generateEntryMove, generateExitMove, type MoveOptions } from "./moves";
 export { TEMPLATES, TEMPLATE_NAMES, legLayout, type GaitTemplate, type LegLayout, type TemplateName } from "./templates/index";
-export { SOLVE_DEFAULTS, framesOf, runChecks, runSolve, solveSequence, summarize, type SolveRun, type WorldTrack } from "./solve";
+export { SOLVE_DEFAULTS, framesOf, runSolve, solveSequence, type SolveRun, type WorldTrack } from "./solve";
+export { checkAngleFrames } from "./angle-frames";
 export {
   FLAG_KINDS,
   type Flag,

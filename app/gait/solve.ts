@@ -20,6 +20,7 @@ import {
   poseRotation,
   type BodyPose,
   type JointAngles,
+  type LegSolver,
   type Robot,
   type Vec3,
 } from "../kinematics/index";
@@ -127,14 +128,7 @@ function prepare(robot: Robot, sequence: Sequence, options: SolveOptions): Sampl
   );
   const template = generator.template ? TEMPLATES[generator.template] : undefined;
 
-  const joints: JointSpec[] = [];
-  for (const legId of legIds) {
-    const leg = robot.legs[solver.legIndex(legId)];
-    for (const name of JOINT_NAMES) {
-      const joint = leg.joints[name];
-      joints.push({ legId, name, joint, minDeg: joint.minDeg, maxDeg: joint.maxDeg, maxSpeedDegS: joint.maxSpeedDegS });
-    }
-  }
+  const joints = jointSpecs(robot, solver);
   const layout = legLayout(robot);
   const neighbours: [number, number][] = [];
   for (const side of [layout.left, layout.right]) {
@@ -183,6 +177,19 @@ function prepare(robot: Robot, sequence: Sequence, options: SolveOptions): Sampl
     heading: new Float64Array(frameCount * 4),
     comWorld: new Float64Array(frameCount * 2),
   };
+}
+
+/** Every joint's limits and speed, leg by leg in the solver's order (coxa, femur, tibia): what the checks read. */
+export function jointSpecs(robot: Robot, solver: LegSolver): JointSpec[] {
+  const joints: JointSpec[] = [];
+  for (const legId of solver.legIds) {
+    const leg = robot.legs[solver.legIndex(legId)];
+    for (const name of JOINT_NAMES) {
+      const joint = leg.joints[name];
+      joints.push({ legId, name, joint, minDeg: joint.minDeg, maxDeg: joint.maxDeg, maxSpeedDegS: joint.maxSpeedDegS });
+    }
+  }
+  return joints;
 }
 
 // Pass 1: travel, body offset, each leg's planned foot, IK. No allocation per frame.

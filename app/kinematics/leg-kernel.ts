@@ -77,7 +77,8 @@ export function solveLegInto(k: LegConstants, x: number, y: number, z: number, o
   return bits | limitBits(k, coxaDeg, femurDeg, tibiaDeg);
 }
 
-function limitBits(k: LegConstants, coxaDeg: number, femurDeg: number, tibiaDeg: number): number {
+/** The SOLVE_*_LIMIT bits of servo degrees: a value on its limit, to round-off, is inside it. */
+export function limitBits(k: LegConstants, coxaDeg: number, femurDeg: number, tibiaDeg: number): number {
   let bits = 0;
   if (coxaDeg < k.coxaMinDeg - LIMIT_TOLERANCE_DEG || coxaDeg > k.coxaMaxDeg + LIMIT_TOLERANCE_DEG) bits |= SOLVE_COXA_LIMIT;
   if (femurDeg < k.femurMinDeg - LIMIT_TOLERANCE_DEG || femurDeg > k.femurMaxDeg + LIMIT_TOLERANCE_DEG) bits |= SOLVE_FEMUR_LIMIT;

@@ -3,7 +3,7 @@
 // arrays. No allocation per call.
 import { poseRotation } from "./body-pose";
 import { legConstants, type LegConstants } from "./leg-constants";
-import { forwardLegInto, solveLegInto } from "./leg-kernel";
+import { forwardLegInto, limitBits, solveLegInto } from "./leg-kernel";
 import type { BodyPose, Robot } from "./robot";
 import { unreachableReason } from "./solve-leg";
 
@@ -24,6 +24,8 @@ export interface LegSolver {
    * at (x, y, z) mm; returns the SOLVE_* bits (0 = reachable, inside limits).
    */
   solve(legIndex: number, footXMm: number, footYMm: number, footZMm: number, out: NumberSink, offset?: number): number;
+  /** The SOLVE_*_LIMIT bits of servo degrees given rather than solved, with the solve's own tolerance. */
+  limits(legIndex: number, coxaDeg: number, femurDeg: number, tibiaDeg: number): number;
   /** Foot (mm, neutral body frame) into out[offset..offset+2] for servo degrees. */
   forward(legIndex: number, coxaDeg: number, femurDeg: number, tibiaDeg: number, out: NumberSink, offset?: number): void;
   /** The human reason for a status from `solve` with the same target and pose. */
@@ -76,6 +78,9 @@ export function createLegSolver(robot: Robot): LegSolver {
     solve(legIndex, x, y, z, out, offset = 0) {
       intoBody(x, y, z);
       return solveLegInto(constants[legIndex], bodyX, bodyY, bodyZ, out, offset);
+    },
+    limits(legIndex, coxaDeg, femurDeg, tibiaDeg) {
+      return limitBits(constants[legIndex], coxaDeg, femurDeg, tibiaDeg);
     },
     forward(legIndex, coxaDeg, femurDeg, tibiaDeg, out, offset = 0) {
       forwardLegInto(constants[legIndex], coxaDeg, femurDeg, tibiaDeg, out, offset);

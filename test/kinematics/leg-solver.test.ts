@@ -56,6 +56,23 @@ describe("createLegSolver: the hot path gives the public API's numbers", () => {
     expect([out[3], out[4], out[5]].every(Number.isFinite)).toBe(true);
   });
 
+  it("limits gives the solve's own limit bits for angles given rather than solved: on a limit is inside, 1e-6° past it is out", () => {
+    const [pier] = loadDemoRobots();
+    const solver = createLegSolver(pier);
+    const random = seededRandom(9);
+    const angles = new Float64Array(3);
+    for (let sample = 0; sample < 2000; sample += 1) {
+      const legIndex = random.index(pier.legs.length);
+      const leg = pier.legs[legIndex];
+      const bits = solver.solve(legIndex, leg.mount.x + random.between(-250, 250), leg.mount.y + random.between(-250, 250), random.between(-200, 50), angles, 0);
+      expect(solver.limits(legIndex, angles[0], angles[1], angles[2])).toBe(bits & (SOLVE_COXA_LIMIT | SOLVE_FEMUR_LIMIT | SOLVE_TIBIA_LIMIT));
+    }
+    const { coxa, femur, tibia } = pier.legs[0].joints;
+    expect(solver.limits(0, coxa.minDeg, femur.maxDeg, tibia.minDeg)).toBe(SOLVE_OK);
+    expect(solver.limits(0, coxa.minDeg - 1e-6, femur.maxDeg, tibia.maxDeg + 1e-6)).toBe(SOLVE_COXA_LIMIT | SOLVE_TIBIA_LIMIT);
+    expect(solver.limits(0, 0, femur.maxDeg + 1e-6, 0)).toBe(SOLVE_FEMUR_LIMIT);
+  });
+
   it("knows its legs by id", () => {
     const [, quay] = loadDemoRobots();
     const solver = createLegSolver(quay);
