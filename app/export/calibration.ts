@@ -4,8 +4,7 @@
 // profile is applied at export (channels.ts) and its name is written into the
 // table's header. Validated with zod; issues come as { path, message }.
 import { z } from "zod";
-import { JOINT_NAMES, type Robot } from "../kinematics/index";
-import { formatIssues } from "../kinematics/issues";
+import { JOINT_NAMES, formatIssues, type Robot } from "../kinematics/index";
 import type { TableExportIssue } from "./errors";
 
 /** Largest trim a profile may hold, degrees: more is a change of the robot's zeroOffsetDeg, not a unit's calibration. */

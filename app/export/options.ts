@@ -3,7 +3,7 @@
 // so a caller's mistake comes back as { path, message } issues.
 import { z } from "zod";
 import { MAX_FPS } from "../gait/index";
-import { formatIssues } from "../kinematics/issues";
+import { formatIssues } from "../kinematics/index";
 import type { CalibrationProfile } from "./calibration";
 import { TableExportError } from "./errors";
 

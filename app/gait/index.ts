@@ -42,6 +42,7 @@ export {
   type SolvedSequence,
 } from "./solved";
 export { CHECKS, type Check, type CheckContext } from "./checks/index";
+export { bodyOffsetAt } from "./interpolate/body";
 export { COLUMNS_ENCODING, COLUMNS_LAYOUT, columnsOf, decodeColumns, encodeColumns, mapColumns, type SolveColumns } from "./columns";
 export { easingFor, type EasingFunction } from "./interpolate/easing";
 export { swingLift } from "./interpolate/swing";

@@ -5,7 +5,7 @@
 // Each of the six numbers is eased on its own; the offsets of a gait are a
 // few degrees, where this and any rotation interpolation agree closely.
 import type { BodyPose } from "../../kinematics/index";
-import { CSS_EASE, type BodyKey } from "../sequence";
+import { CSS_EASE, type BodyKey, type BodyOffset, type Sequence } from "../sequence";
 import { easingFor, type EasingFunction } from "./easing";
 import { TIME_EPSILON } from "./legs";
 
@@ -82,4 +82,15 @@ export function sampleBodyPiece(piece: BodyPiece, time: number, out: BodyPose): 
   out.pitch = a[4] + (b[4] - a[4]) * progress;
   out.yaw = a[5] + (b[5] - a[5]) * progress;
   return out;
+}
+
+/**
+ * The body's pose offset at cycle time t (a fraction of the cycle), sampled as
+ * the solve samples it: for an editor that shows one time, not a whole solve.
+ */
+export function bodyOffsetAt(sequence: Sequence, time: number): BodyOffset {
+  const pieces = compileBodyTrack(sequence.body.keys, sequence.loop);
+  let index = 0;
+  while (index + 1 < pieces.length && pieces[index + 1].from <= time + TIME_EPSILON) index += 1;
+  return sampleBodyPiece(pieces[index], time, { x: 0, y: 0, z: 0, roll: 0, pitch: 0, yaw: 0 });
 }

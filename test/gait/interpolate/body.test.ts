@@ -1,6 +1,6 @@
 import { Euler, Matrix4, Vector3 } from "three";
 import { describe, expect, it } from "vitest";
-import { generateGait, solveSequence } from "~/gait/index";
+import { bodyOffsetAt, generateGait, solveSequence } from "~/gait/index";
 import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
 import { cssCubicBezier } from "../helpers";
 
@@ -58,6 +58,19 @@ describe("body track composition (DESIGN.md; composed with three.js)", () => {
       expect(got.roll, `frame ${frame.index} roll (°)`).toBeCloseTo(euler.x / radians, 9);
       expect(got.pitch, `frame ${frame.index} pitch (°)`).toBeCloseTo(euler.y / radians, 9);
       expect(got.yaw, `frame ${frame.index} yaw (°)`).toBeCloseTo(euler.z / radians, 9);
+    });
+  });
+
+  it("bodyOffsetAt gives the offset the solve used at each frame: the eased keys, heading and travel left out", () => {
+    frames.forEach((frame) => {
+      const t = frame.index / frames.length;
+      const [from, to, s] = t < 0.5 ? [keys[0].pose, keys[1].pose, t / 0.5] : [keys[1].pose, keys[0].pose, (t - 0.5) / 0.5];
+      const e = ease(s);
+      const offset = bodyOffsetAt(sequence, t);
+      for (const name of ["x", "y", "z", "roll", "pitch", "yaw"] as const) {
+        expect(offset[name], `frame ${frame.index} ${name}`).toBeCloseTo(from[name] + (to[name] - from[name]) * e, 9);
+      }
+      expect(offset.z, `frame ${frame.index} z (mm)`).toBeCloseTo(frame.body.z - bodyHeightMm, 9);
     });
   });
 
