@@ -3,14 +3,12 @@
 export {
   JOINT_NAMES,
   MAX_LEGS,
-  MIN_LEGS,
   ROBOT_FORMAT,
   findLeg,
   legRow,
   legSide,
   parseRobot,
   robotJsonSchema,
-  robotSchema,
   type BodyPose,
   type DefinitionIssue,
   type Joint,
@@ -18,38 +16,25 @@ export {
   type JointName,
   type Leg,
   type LegSide,
-  type ParseRobotResult,
   type Robot,
   type Servo,
   type Vec3,
 } from "./robot";
 export { formatIssues, formatPath } from "./issues";
-export { DEG_PER_RAD, RAD_PER_DEG, wrapNear } from "./angles";
+export { DEG_PER_RAD, RAD_PER_DEG } from "./angles";
 export { NEUTRAL_POSE, poseApply, poseRotation, poseUnapply } from "./body-pose";
-export { solveLeg, type JointLimitViolation, type LegSolution } from "./solve-leg";
+export { solveLeg, type JointLimitViolation } from "./solve-leg";
 export { forwardLeg, forwardLegJoints, type LegJointPoints } from "./forward-leg";
 export { createLegSolver, type LegSolver } from "./leg-solver";
 export {
-  COXA_AXIS_CLEARANCE_MM,
   SOLVE_BEYOND_REACH,
   SOLVE_COXA_LIMIT,
   SOLVE_FEMUR_LIMIT,
   SOLVE_INSIDE_FOLD,
-  SOLVE_JOINT_LIMIT,
-  SOLVE_NOT_FINITE,
-  SOLVE_OK,
-  SOLVE_ON_COXA_AXIS,
   SOLVE_TIBIA_LIMIT,
   SOLVE_UNREACHABLE,
 } from "./solve-status";
-export { angleToPulse, pulseToAngle, type PulseWidth } from "./servo";
+export { angleToPulse, pulseToAngle } from "./servo";
 export { neutralStance, reachRing, type ReachRing } from "./reach";
-export { copyLegGeometry, mirrorLeg, type ServoChannels } from "./mirror";
-export {
-  importUrdf,
-  URDF_DEFAULT_MASS_KG,
-  URDF_DEFAULT_SPEED_DEG_S,
-  URDF_SERVO_DEFAULTS,
-  type UrdfImportOptions,
-  type UrdfImportResult,
-} from "./urdf";
+export { copyLegGeometry, mirrorLeg } from "./mirror";
+export { importUrdf } from "./urdf";

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { angleTable, buildAngleTable, TableExportError } from "~/export/index";
-import { generateEntryMove, solveSequence } from "~/gait/index";
+import { solveSequence } from "~/gait/index";
+import { generateEntryMove } from "~/gait/moves";
 import { demoGait, metaFor, readJsonTable } from "./helpers";
 
 // DESIGN.md ("Gait sequence", "Core module contracts"): frames at i/fps s, N = round(cycleMs · fps / 1000);

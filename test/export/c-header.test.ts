@@ -1,5 +1,6 @@
 import { beforeAll, describe, expect, it } from "vitest";
-import { angleTable, roundHalfAwayFromZero, TABLE_UNITS, UNIT_ROUNDING, type TableUnits } from "~/export/index";
+import { angleTable, TABLE_UNITS, type TableUnits } from "~/export/index";
+import { roundHalfAwayFromZero, UNIT_ROUNDING } from "~/export/rounding";
 import type { JointName } from "~/kinematics/index";
 import { OVERRIDE, cNames, compileAndRun, demoGaits, metaFor, printingProgram, readJsonTable, readPrinted, requireGcc, type DemoGait } from "./helpers";
 

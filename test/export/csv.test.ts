@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { angleTable, csvField, TABLE_UNITS } from "~/export/index";
+import { angleTable, TABLE_UNITS } from "~/export/index";
+import { csvField } from "~/export/csv";
 import { OVERRIDE, demoGaits, metaFor, readCsv, readJsonTable } from "./helpers";
 
 const UNIT_WORDS = { deg: "°", rad: "rad", us: "µs" } as const;

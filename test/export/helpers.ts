@@ -9,7 +9,10 @@ import { join } from "node:path";
 import Papa from "papaparse";
 import { generateGait, solveSequence, type GaitParams, type Sequence, type SolvedSequence } from "~/gait/index";
 import { parseRobot, type Robot } from "~/kinematics/index";
-import { cIdentifier, UNIT_ROUNDING, type TableMetaInput, type TableUnits } from "~/export/index";
+import type { TableUnits } from "~/export/index";
+import { cIdentifier } from "~/export/c-header";
+import { UNIT_ROUNDING } from "~/export/rounding";
+import type { TableMetaInput } from "~/export/options";
 import { loadDemoRobot, type DemoRobotFile } from "../support/robots";
 
 /** A robot definition changed and validated again (for servo settings the demo robots lack). */

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { angleTable, formatFixed, TABLE_UNITS, toFixedPoint } from "~/export/index";
+import { angleTable, formatFixed, TABLE_UNITS } from "~/export/index";
+import { toFixedPoint } from "~/export/rounding";
 import type { SolvedSequence } from "~/gait/index";
 import { demoGait, metaFor, modifiedRobot, readCsv, readJsonTable } from "./helpers";
 

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { angleTable, sweepTable, TABLE_MEDIA_TYPES, TableExportError, tableFileName, type TableMetadata } from "~/export/index";
+import { angleTable, sweepTable, TABLE_MEDIA_TYPES, TableExportError, tableFileName } from "~/export/index";
+import type { TableMetadata } from "~/export/table";
 import type { SolvedSequence } from "~/gait/index";
 import { JOINT_NAMES } from "~/kinematics/index";
 import { loadDemoRobot } from "../support/robots";

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { neutralStance } from "~/kinematics/index";
-import { GAIT_DEFAULTS, GaitInputError, SEQUENCE_FORMAT, generateGait, parseSequence } from "~/gait/index";
+import { GAIT_DEFAULTS, GaitInputError, generateGait, parseSequence } from "~/gait/index";
+import { SEQUENCE_FORMAT } from "~/gait/sequence";
 import { DEMO_ROBOTS, loadDemoRobot } from "../support/robots";
 
 describe("generateGait (DESIGN.md, Core module contracts)", () => {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { JOINT_NAMES, type Robot } from "~/kinematics/index";
-import { GaitInputError, generateEntryMove, generateExitMove, generateGait, solveSequence, type SolvedSequence } from "~/gait/index";
+import { GaitInputError, generateGait, solveSequence, type SolvedSequence } from "~/gait/index";
+import { generateEntryMove, generateExitMove } from "~/gait/moves";
 import { DEMO_ROBOTS, loadDemoRobot } from "../support/robots";
 import { numbersIn } from "./helpers";
 

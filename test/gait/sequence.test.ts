@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { SEQUENCE_FORMAT, frameCount, parseSequence, sequenceIssuesForRobot, sequenceJsonSchema, type SequenceInput } from "~/gait/index";
+import { frameCount, parseSequence, sequenceIssuesForRobot, sequenceJsonSchema } from "~/gait/index";
+import { SEQUENCE_FORMAT, type SequenceInput } from "~/gait/sequence";
 import { DEMO_ROBOTS, loadDemoRobot } from "../support/robots";
 
 function minimal(): SequenceInput {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { forwardLeg, neutralStance } from "~/kinematics/index";
-import { FLAG_KINDS, GaitInputError, SEQUENCE_FORMAT, generateGait, parseSequence, solveSequence, type Sequence } from "~/gait/index";
+import { FLAG_KINDS, GaitInputError, generateGait, parseSequence, solveSequence, type Sequence } from "~/gait/index";
+import { SEQUENCE_FORMAT } from "~/gait/sequence";
 import { DEMO_ROBOTS, loadDemoRobot, type DemoRobotFile } from "../support/robots";
 import { numbersIn, worldFoot } from "./helpers";
 

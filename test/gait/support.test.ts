@@ -3,7 +3,8 @@ import Coordinate from "jsts/org/locationtech/jts/geom/Coordinate.js";
 import GeometryFactory from "jsts/org/locationtech/jts/geom/GeometryFactory.js";
 import monotoneConvexHull from "monotone-convex-hull-2d";
 import { describe, expect, it } from "vitest";
-import { convexHullInto, generateGait, solveSequence, stabilityMargin, type GaitParams, type SolvedFrame } from "~/gait/index";
+import { generateGait, solveSequence, type GaitParams, type SolvedFrame } from "~/gait/index";
+import { convexHullInto, stabilityMargin } from "~/gait/support";
 import { DEMO_ROBOTS, loadDemoRobot, type DemoRobotFile } from "../support/robots";
 import { worldFoot } from "./helpers";
 

@@ -5,13 +5,12 @@ import {
   solveLeg,
   SOLVE_COXA_LIMIT,
   SOLVE_FEMUR_LIMIT,
-  SOLVE_NOT_FINITE,
-  SOLVE_OK,
   SOLVE_TIBIA_LIMIT,
   SOLVE_UNREACHABLE,
   type BodyPose,
   type Vec3,
 } from "../../app/kinematics";
+import { SOLVE_NOT_FINITE, SOLVE_OK } from "../../app/kinematics/solve-status";
 import { loadDemoRobots } from "../support/robots";
 import { seededRandom } from "./support/prng";
 

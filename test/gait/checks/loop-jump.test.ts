@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { JOINT_NAMES } from "~/kinematics/index";
-import { SEQUENCE_FORMAT, generateGait, parseSequence, solveSequence } from "~/gait/index";
+import { generateGait, parseSequence, solveSequence } from "~/gait/index";
+import { SEQUENCE_FORMAT } from "~/gait/sequence";
 import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
 
 // loop-jump (warning): the step from the last frame back to the first turns a

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { CSS_EASE, easingFor } from "~/gait/index";
+import { CSS_EASE } from "~/gait/index";
+import { easingFor } from "~/gait/interpolate/easing";
 import { cssCubicBezier } from "../helpers";
 
 // W3C CSS Easing Functions Level 1: `ease` is cubic-bezier(0.25, 0.1, 0.25, 1),

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { CSS_EASE, generateGait, solveSequence, swingLift } from "~/gait/index";
+import { CSS_EASE, generateGait, solveSequence } from "~/gait/index";
+import { swingLift } from "~/gait/interpolate/swing";
 import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
 import { cssCubicBezier, distance, worldFoot } from "../helpers";
 
