@@ -8,9 +8,8 @@
 // route of app/routes.ts is described, so the two cannot drift apart.
 import { createHash } from "node:crypto";
 import { EXPORTER_VERSION, calibrationProfileJsonSchema } from "../../export/index";
-import { sequenceJsonSchema } from "../../gait/index";
+import { SOLVER_VERSION, sequenceJsonSchema } from "../../gait/index";
 import { config } from "../../platform/config.server";
-import { SOLVER_VERSION } from "../../gait/index";
 import { matchesIfNoneMatch } from "../tables/query";
 import { accountPaths, accountSchemas } from "./operations/account";
 import { calibrationPaths, calibrationSchemas } from "./operations/calibration";
