@@ -1,32 +1,11 @@
 // The database schema. Migrations under db/migrations are generated from this
 // file with `npx drizzle-kit generate` and committed; never edit them by hand.
 import { sql } from "drizzle-orm";
-import {
-  bigint,
-  bigserial,
-  index,
-  integer,
-  jsonb,
-  pgEnum,
-  pgTable,
-  primaryKey,
-  text,
-  timestamp,
-  unique,
-  uniqueIndex,
-  uuid,
-} from "drizzle-orm/pg-core";
+import { bigint, bigserial, index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp, unique, uniqueIndex, uuid } from "drizzle-orm/pg-core";
 
 export const roleEnum = pgEnum("role", ["owner", "lead", "animator", "firmware", "viewer"]);
 
-export const versionStateEnum = pgEnum("version_state", [
-  "committed",
-  "in-review",
-  "sent-back",
-  "approved",
-  "released",
-  "retired",
-]);
+export const versionStateEnum = pgEnum("version_state", ["committed", "in-review", "sent-back", "approved", "released", "retired"]);
 
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
 
@@ -132,7 +111,9 @@ export const gaitVersions = pgTable(
       .notNull()
       .references(() => robotRevisions.id),
     sequence: jsonb("sequence").notNull(),
-    summary: jsonb("summary").notNull().default(sql`'{}'::jsonb`),
+    summary: jsonb("summary")
+      .notNull()
+      .default(sql`'{}'::jsonb`),
     contentHash: text("content_hash").notNull(),
     state: versionStateEnum("state").notNull().default("committed"),
     // The content above never changes (a trigger refuses it); the review fields below do.
@@ -143,7 +124,9 @@ export const gaitVersions = pgTable(
   (table) => [
     unique("gait_versions_gait_number").on(table.gaitId, table.number),
     // At most one released version per gait.
-    uniqueIndex("gait_versions_one_released").on(table.gaitId).where(sql`${table.state} = 'released'`),
+    uniqueIndex("gait_versions_one_released")
+      .on(table.gaitId)
+      .where(sql`${table.state} = 'released'`),
   ],
 );
 
@@ -253,7 +236,9 @@ export const auditLog = pgTable(
     action: text("action").notNull(),
     targetType: text("target_type"),
     targetId: text("target_id"),
-    details: jsonb("details").notNull().default(sql`'{}'::jsonb`),
+    details: jsonb("details")
+      .notNull()
+      .default(sql`'{}'::jsonb`),
     createdAt: createdAt(),
   },
   (table) => [index("audit_log_workspace_time").on(table.workspaceId, table.createdAt)],

@@ -10,7 +10,10 @@ for (const person of demoPeople) {
     const account = page.getByLabel("Your account");
     await expect(account).toContainText(person.name);
     await expect(account).toContainText(roleLabel(person.role));
-    await page.getByRole("link", { name: /Robots/ }).first().click();
+    await page
+      .getByRole("link", { name: /Robots/ })
+      .first()
+      .click();
     await expect(page.getByRole("heading", { level: 1, name: "Robots" })).toBeVisible();
   });
 }
@@ -30,10 +33,7 @@ test("signing in returns to the page the person was going to, and signing out en
   await expect(page).toHaveURL(/\/sign-in/);
 });
 
-test("an owner invites a new person by e-mail; they follow the link and land in the workspace with the invited role", async ({
-  page,
-  browser,
-}) => {
+test("an owner invites a new person by e-mail; they follow the link and land in the workspace with the invited role", async ({ page, browser }) => {
   const stamp = Date.now().toString(36);
   const newcomer = { login: `dara-${stamp}`, name: `Dara Quill ${stamp}`, email: `dara.${stamp}@breakwater-lab.test` };
 
@@ -46,7 +46,10 @@ test("an owner invites a new person by e-mail; they follow the link and land in 
 
   // The mail, as the local inbox page shows it.
   await page.goto("/local/mail");
-  const letter = page.getByRole("article", { name: /invited you to Breakwater Robotics Lab/ }).filter({ hasText: newcomer.email }).first();
+  const letter = page
+    .getByRole("article", { name: /invited you to Breakwater Robotics Lab/ })
+    .filter({ hasText: newcomer.email })
+    .first();
   await expect(letter).toBeVisible();
   const mail = await latestMailTo(newcomer.email);
   const link = mail.text.match(/https?:\/\/\S+\/invitations\/\S+/)?.[0];

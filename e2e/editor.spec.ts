@@ -44,9 +44,10 @@ async function saved(page: Page) {
 
 /** Every frame of the listed flag runs of one kind and leg, from the Checks list. */
 async function listedFrames(page: Page, kind: string, leg: string): Promise<number[]> {
-  const runs = await page.getByTestId("checks").locator(`button[data-flag-kind="${kind}"][data-leg="${leg}"]`).evaluateAll((buttons) =>
-    buttons.map((button) => [Number(button.getAttribute("data-from")), Number(button.getAttribute("data-to"))]),
-  );
+  const runs = await page
+    .getByTestId("checks")
+    .locator(`button[data-flag-kind="${kind}"][data-leg="${leg}"]`)
+    .evaluateAll((buttons) => buttons.map((button) => [Number(button.getAttribute("data-from")), Number(button.getAttribute("data-to"))]));
   return runs.flatMap(([from, to]) => Array.from({ length: to - from + 1 }, (_, i) => from + i)).sort((a, b) => a - b);
 }
 
@@ -126,7 +127,9 @@ test("animator: new tripod, drag a key, drag a foot out of reach, undo, reload â
   await page.getByRole("button", { name: /^LF key 2 of 2/ }).click();
   await page.addScriptTag({ path: axePath });
   const violations = await page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: (context: unknown) => Promise<{ violations: { id: string; impact: string; nodes: { html: string }[] }[] }> } }).axe;
+    const axe = (
+      window as unknown as { axe: { run: (context: unknown) => Promise<{ violations: { id: string; impact: string; nodes: { html: string }[] }[] }> } }
+    ).axe;
     const result = await axe.run("main");
     return result.violations
       .filter((violation) => violation.impact === "serious" || violation.impact === "critical")

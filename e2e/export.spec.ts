@@ -68,7 +68,9 @@ test("firmware downloads the released table in the app, and curl with a token ge
 
   // The command as the page gives it to copy, run as a build script would: curl with the token from the environment.
   const command = (await page.getByTestId("curl-command").textContent())!.trim();
-  expect(command).toMatch(/^curl -fsS -H "Authorization: Bearer \$GAITLOOM_TOKEN" -o 'tripod_cruise_v1_us_50hz\.csv' '.+\/api\/v1\/gaits\/.+\/versions\/released\/table\?format=csv&units=us'$/);
+  expect(command).toMatch(
+    /^curl -fsS -H "Authorization: Bearer \$GAITLOOM_TOKEN" -o 'tripod_cruise_v1_us_50hz\.csv' '.+\/api\/v1\/gaits\/.+\/versions\/released\/table\?format=csv&units=us'$/,
+  );
   const url = new URL(command.match(/'([^']+)'$/)![1]);
   const target = new URL(url.pathname + url.search, baseURL).toString();
   const scriptCommand = command.replace(/'[^']+'$/, `'${target}'`);
@@ -84,7 +86,18 @@ test("firmware downloads the released table in the app, and curl with a token ge
   // The same again with If-None-Match: nothing changed, so 304.
   const { stdout: headers } = await run(CURL, ["-sS", "-D", "-", "-o", "/dev/null", "-H", `Authorization: Bearer ${token}`, target]);
   const etag = headers.match(/^etag: (.+)\r$/im)![1];
-  const { stdout: status } = await run(CURL, ["-s", "-o", "/dev/null", "-w", "%{http_code}", "-H", `Authorization: Bearer ${token}`, "-H", `If-None-Match: ${etag}`, target]);
+  const { stdout: status } = await run(CURL, [
+    "-s",
+    "-o",
+    "/dev/null",
+    "-w",
+    "%{http_code}",
+    "-H",
+    `Authorization: Bearer ${token}`,
+    "-H",
+    `If-None-Match: ${etag}`,
+    target,
+  ]);
   expect(Number(status)).toBe(304);
   expect(await statusWith(target, "gl_not_a_real_token")).toBe(401);
 });

@@ -36,7 +36,10 @@ async function branchAndCommit(page: Page, from: number, message: string): Promi
   return number;
 }
 
-test("an animator commits two versions and asks for review; the lead compares them from the e-mail, approves and releases", async ({ page, browser }, testInfo) => {
+test("an animator commits two versions and asks for review; the lead compares them from the e-mail, approves and releases", async ({
+  page,
+  browser,
+}, testInfo) => {
   const stamp = `${Date.now().toString(36)}-${testInfo.workerIndex}`;
   const messageA = `Wide stance, e2e ${stamp}`;
   const messageB = `Quicker sets of four, e2e ${stamp}`;
@@ -99,7 +102,10 @@ test("an animator commits two versions and asks for review; the lead compares th
   await expect(lead.getByRole("list", { name: "Joint plots, A and B overlaid" }).getByRole("listitem")).toHaveCount(24);
 
   // Approve, then release.
-  await lead.getByRole("article", { name: `B: ${GAIT} v${numberB}` }).getByRole("link", { name: `${GAIT} v${numberB}` }).click();
+  await lead
+    .getByRole("article", { name: `B: ${GAIT} v${numberB}` })
+    .getByRole("link", { name: `${GAIT} v${numberB}` })
+    .click();
   await expect(lead.getByRole("heading", { level: 1, name: `${GAIT} v${numberB}` })).toBeVisible();
   await lead.getByLabel("Approval comment").fill("Joint speeds are within limits; good to go.");
   await lead.getByRole("button", { name: "Approve", exact: true }).click();

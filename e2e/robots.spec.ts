@@ -12,7 +12,11 @@ const crabUrdf = readFileSync(new URL("../test/kinematics/fixtures/test-crab.urd
 const axePath = createRequire(import.meta.url).resolve("axe-core/axe.min.js");
 
 const uniqueName = (label: string) => `${label} ${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}`;
-const slugOf = (name: string) => name.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-+|-+$/g, "");
+const slugOf = (name: string) =>
+  name
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, "-")
+    .replace(/^-+|-+$/g, "");
 
 /** The page has hydrated: typing now goes through React. */
 async function ready(page: Page) {
@@ -22,7 +26,9 @@ async function ready(page: Page) {
 async function uploadDefinition(page: Page, definition: unknown, fileName = "robot.json") {
   await page.goto("/robots?add=upload");
   await ready(page);
-  await page.getByLabel("Definition file (JSON)").setInputFiles({ name: fileName, mimeType: "application/json", buffer: Buffer.from(JSON.stringify(definition, null, 2)) });
+  await page
+    .getByLabel("Definition file (JSON)")
+    .setInputFiles({ name: fileName, mimeType: "application/json", buffer: Buffer.from(JSON.stringify(definition, null, 2)) });
   await page.getByRole("button", { name: "Upload and create" }).click();
 }
 
@@ -30,7 +36,9 @@ async function expectNoAxeViolations(page: Page) {
   await page.addScriptTag({ path: axePath });
   const violations = await page.evaluate(async () => {
     // Our part of the page: the main content (the shell around it has its own checks).
-    const result = await (window as unknown as { axe: { run: (context: unknown) => Promise<{ violations: { id: string; nodes: { html: string }[] }[] }> } }).axe.run("main");
+    const result = await (
+      window as unknown as { axe: { run: (context: unknown) => Promise<{ violations: { id: string; nodes: { html: string }[] }[] }> } }
+    ).axe.run("main");
     return result.violations.map((violation) => `${violation.id}: ${violation.nodes.length} × ${violation.nodes[0]?.html.slice(0, 120)}`);
   });
   expect(violations).toEqual([]);
@@ -107,7 +115,7 @@ test("import a URDF file: the report says what was mapped and the robot opens", 
   const status = page.getByRole("status").filter({ hasText: "from the URDF file" });
   await expect(status).toContainText(`✓ Created ${name} from the URDF file.`);
   await expect(status).toContainText('base link "base_link" is the body frame; 4 legs found');
-  await expect(status).toContainText("leg FL: fl_coxa → fl_femur → fl_tibia → foot \"fl_foot\"");
+  await expect(status).toContainText('leg FL: fl_coxa → fl_femur → fl_tibia → foot "fl_foot"');
   await expect(status).toContainText("servo mapping not in URDF");
   await status.getByRole("link", { name }).click();
   await expect(page.getByRole("heading", { level: 1, name })).toBeVisible();

@@ -1,10 +1,7 @@
 import { expect, test } from "@playwright/test";
 import { signInAs } from "./support/sign-in";
 
-test("the home page renders in IBM Plex Sans served from our own origin, and nothing leaves 127.0.0.1", async ({
-  page,
-  baseURL,
-}) => {
+test("the home page renders in IBM Plex Sans served from our own origin, and nothing leaves 127.0.0.1", async ({ page, baseURL }) => {
   const requested: string[] = [];
   page.on("request", (request) => requested.push(request.url()));
 

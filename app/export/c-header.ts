@@ -89,7 +89,11 @@ export function formatCHeader(table: AngleTableData): string {
     `Calibration:  ${meta.calibrationProfile ?? "none"}`,
     `Override:     ${meta.overrideReason ?? "none"}`,
     `Flags:        ${meta.flags.errors} errors, ${meta.flags.warnings} warnings` +
-      (Object.keys(meta.flags.byKind).length ? ` (${Object.entries(meta.flags.byKind).map(([kind, count]) => `${kind} ${count}`).join(", ")})` : ""),
+      (Object.keys(meta.flags.byKind).length
+        ? ` (${Object.entries(meta.flags.byKind)
+            .map(([kind, count]) => `${kind} ${count}`)
+            .join(", ")})`
+        : ""),
     `Clamped:      ${meta.clamped.length === 0 ? "none" : `${meta.clamped.length} cells whose pulse lies outside the servo range`}`,
   ];
   for (const cell of meta.clamped) {

@@ -11,12 +11,7 @@ import type { TableExportIssue } from "./errors";
 export const MAX_TRIM_DEG = 45;
 
 const jointCalibrationSchema = z.strictObject({
-  trimDeg: z
-    .number()
-    .min(-MAX_TRIM_DEG)
-    .max(MAX_TRIM_DEG)
-    .optional()
-    .describe("Added to the servo angle of every frame, degrees (before the pulse mapping)."),
+  trimDeg: z.number().min(-MAX_TRIM_DEG).max(MAX_TRIM_DEG).optional().describe("Added to the servo angle of every frame, degrees (before the pulse mapping)."),
   reversed: z.boolean().optional().describe("Overrides the robot's servo.reversed for this unit."),
   channel: z.number().int().min(0).max(255).optional().describe("Overrides the robot's servo.channel for this unit."),
 });
@@ -77,10 +72,6 @@ export function calibrationIssuesForRobot(robot: Robot, profile: ValidCalibratio
 }
 
 /** The calibration of one joint, empty when the profile says nothing of it. */
-export function jointCalibration(
-  profile: ValidCalibrationProfile | undefined,
-  legId: string,
-  joint: (typeof JOINT_NAMES)[number],
-): JointCalibration {
+export function jointCalibration(profile: ValidCalibrationProfile | undefined, legId: string, joint: (typeof JOINT_NAMES)[number]): JointCalibration {
   return profile?.joints[legId]?.[joint] ?? {};
 }

@@ -3,13 +3,7 @@
 // robot's servo with the calibration's channel and reversal overrides — and
 // the calibration's trim. Two joints on one channel is refused.
 import { JOINT_NAMES, type JointName, type Robot, type Servo } from "../kinematics/index";
-import {
-  calibrationIssuesForRobot,
-  jointCalibration,
-  parseCalibrationProfile,
-  type CalibrationProfile,
-  type ValidCalibrationProfile,
-} from "./calibration";
+import { calibrationIssuesForRobot, jointCalibration, parseCalibrationProfile, type CalibrationProfile, type ValidCalibrationProfile } from "./calibration";
 import { TableExportError } from "./errors";
 
 export type TableChannel = {
@@ -39,7 +33,8 @@ function parseValidProfile(robot: Robot, calibration: CalibrationProfile): Valid
   const parsed = parseCalibrationProfile(calibration);
   if (!parsed.ok) throw new TableExportError("calibration-mismatch", "the calibration profile is not valid", parsed.issues);
   const issues = calibrationIssuesForRobot(robot, parsed.profile);
-  if (issues.length) throw new TableExportError("calibration-mismatch", `calibration profile "${parsed.profile.name}" does not fit robot "${robot.name}"`, issues);
+  if (issues.length)
+    throw new TableExportError("calibration-mismatch", `calibration profile "${parsed.profile.name}" does not fit robot "${robot.name}"`, issues);
   return parsed.profile;
 }
 
@@ -77,7 +72,10 @@ export function tableChannels(robot: Robot, calibration?: CalibrationProfile): T
     const source = (entry: TableChannel): string =>
       jointCalibration(profile, entry.legId, entry.joint).channel !== undefined ? `set by calibration "${profile?.name}"` : "from the robot";
     issues.push({
-      path: jointCalibration(profile, here.legId, here.joint).channel !== undefined ? `joints.${here.legId}.${here.joint}.channel` : `joints.${before.legId}.${before.joint}.channel`,
+      path:
+        jointCalibration(profile, here.legId, here.joint).channel !== undefined
+          ? `joints.${here.legId}.${here.joint}.channel`
+          : `joints.${before.legId}.${before.joint}.channel`,
       message: `channel ${here.channel} would drive both ${before.name} (${source(before)}) and ${here.name} (${source(here)})`,
     });
   }

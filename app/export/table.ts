@@ -149,7 +149,10 @@ export function angleTableData(robot: Robot, solved: SolvedSequence, options: Ta
   const legIds = robot.legs.map((leg) => leg.id);
   const strangers = Object.keys(frames[0].legs).filter((legId) => !legIds.includes(legId));
   if (strangers.length) {
-    throw new TableExportError("solved-mismatch", `the solved result has legs robot "${robot.name}" lacks: ${strangers.join(", ")} (legs: ${legIds.join(", ")})`);
+    throw new TableExportError(
+      "solved-mismatch",
+      `the solved result has legs robot "${robot.name}" lacks: ${strangers.join(", ")} (legs: ${legIds.join(", ")})`,
+    );
   }
   const { channels, calibrationProfile } = tableChannels(robot, options.calibration);
   const unitRounding = UNIT_ROUNDING[units];
@@ -177,14 +180,24 @@ export function angleTableData(robot: Robot, solved: SolvedSequence, options: Ta
         const entry = byJoint[legIndex * 3 + j];
         const servoDeg = (j === 0 ? coxa : j === 1 ? femur : tibia) + entry.trimDeg;
         if (!Number.isFinite(servoDeg)) {
-          throw new TableExportError("solved-mismatch", `frame ${frame.index} holds ${servoDeg} for ${entry.name}; a table never holds a value that is not finite`);
+          throw new TableExportError(
+            "solved-mismatch",
+            `frame ${frame.index} holds ${servoDeg} for ${entry.name}; a table never holds a value that is not finite`,
+          );
         }
         let cell: number;
         const pulse = angleToPulse(entry, servoDeg);
         const cellUs = wholePulse(pulse.us, entry.servo.minUs, entry.servo.maxUs);
         if (pulse.clamped) {
           const requested = angleToPulse({ servo: { ...entry.servo, minUs: -Infinity, maxUs: Infinity } }, servoDeg).us;
-          clamped.push({ frame: frame.index, column: entry.column, channel: entry.channel, name: entry.name, requestedUs: toFixedPoint(requested, 1), clampedUs: cellUs });
+          clamped.push({
+            frame: frame.index,
+            column: entry.column,
+            channel: entry.channel,
+            name: entry.name,
+            requestedUs: toFixedPoint(requested, 1),
+            clampedUs: cellUs,
+          });
         }
         if (units === "us") cell = cellUs;
         else if (units === "deg") cell = toFixedPoint(servoDeg, scale);

@@ -71,7 +71,11 @@ export function columnsOf(run: SolveRun): SolveColumns {
       contact[frame] = stance[slot] === 1 ? "s" : "w";
       if (status[slot] & SOLVE_UNREACHABLE) unreachableFrames.push(frame);
     }
-    const joints = (source: Float64Array) => ({ coxa: strided(source, l * 3, perLeg), femur: strided(source, l * 3 + 1, perLeg), tibia: strided(source, l * 3 + 2, perLeg) });
+    const joints = (source: Float64Array) => ({
+      coxa: strided(source, l * 3, perLeg),
+      femur: strided(source, l * 3 + 1, perLeg),
+      tibia: strided(source, l * 3 + 2, perLeg),
+    });
     leg[legId] = {
       contact: contact.join(""),
       foot: { x: strided(targetBody, l * 3, perLeg), y: strided(targetBody, l * 3 + 1, perLeg), z: strided(targetBody, l * 3 + 2, perLeg) },

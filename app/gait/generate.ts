@@ -85,7 +85,8 @@ export function generateGait(robot: Robot, params: GaitParams): Sequence {
   const phase = { ...template.phase(layout, dutyFactor), ...p.phase };
   const issues: SequenceIssue[] = [];
   for (const legId of layout.legIds) if (phase[legId] === undefined) issues.push({ path: `phase.${legId}`, message: "is required for a custom gait" });
-  for (const legId of Object.keys(phase)) if (!layout.legIds.includes(legId)) issues.push({ path: `phase.${legId}`, message: `names no leg of robot "${robot.name}"` });
+  for (const legId of Object.keys(phase))
+    if (!layout.legIds.includes(legId)) issues.push({ path: `phase.${legId}`, message: `names no leg of robot "${robot.name}"` });
   if (issues.length) fail(`template ${p.template} needs a phase for every leg`, issues);
 
   const bodyHeightMm = p.bodyHeightMm ?? robot.standHeight;

@@ -300,14 +300,7 @@ function exitSequence(plan: Plan, gait: Sequence, timing: Timing, name: string):
   return moveSequence(plan, gait, total, legs, body, name);
 }
 
-function moveSequence(
-  plan: Plan,
-  gait: Sequence,
-  cycleMs: number,
-  legs: Record<string, { keys: LegKey[] }>,
-  body: BodyKey[],
-  name: string,
-): Sequence {
+function moveSequence(plan: Plan, gait: Sequence, cycleMs: number, legs: Record<string, { keys: LegKey[] }>, body: BodyKey[], name: string): Sequence {
   const parsed = parseSequence({
     format: SEQUENCE_FORMAT,
     name,

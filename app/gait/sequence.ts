@@ -35,9 +35,7 @@ export const contactSchema = z.enum(["stance", "swing"]);
 const legKeySchema = z.strictObject({
   t: fraction.describe("Time as a fraction of the cycle."),
   contact: contactSchema.describe("Holds from this key until the next key of the track (half-open)."),
-  foot: vec3Schema
-    .optional()
-    .describe("Foot in the neutral body frame at the key's time, mm; omitted: the generator's placement."),
+  foot: vec3Schema.optional().describe("Foot in the neutral body frame at the key's time, mm; omitted: the generator's placement."),
   ease: easeSchema.optional().describe("Shapes the segment that leaves the key; default CSS ease."),
   apexMm: z.number().min(0).max(1000).optional().describe("Swing height above the straight path, mm; default stepHeightMm."),
 });
@@ -94,7 +92,11 @@ const sequenceObjectSchema = z.strictObject({
 function checkKeyTimes(keys: readonly { t: number }[], loop: boolean, path: (string | number)[], ctx: z.RefinementCtx): void {
   keys.forEach((key, index) => {
     if (loop && key.t >= 1) {
-      ctx.addIssue({ code: "custom", path: [...path, index, "t"], message: `must be below 1 in a loop, where t = 1 is t = 0 of the next cycle (got ${key.t})` });
+      ctx.addIssue({
+        code: "custom",
+        path: [...path, index, "t"],
+        message: `must be below 1 in a loop, where t = 1 is t = 0 of the next cycle (got ${key.t})`,
+      });
     }
     if (index > 0 && key.t <= keys[index - 1].t) {
       ctx.addIssue({

@@ -31,11 +31,7 @@ export function poseRotation(pose: BodyPose, out: Float64Array = new Float64Arra
 export function poseApply(pose: BodyPose, point: Vec3): Vec3 {
   const r = poseRotation(pose);
   const [x, y, z] = point;
-  return [
-    r[0] * x + r[1] * y + r[2] * z + pose.x,
-    r[3] * x + r[4] * y + r[5] * z + pose.y,
-    r[6] * x + r[7] * y + r[8] * z + pose.z,
-  ];
+  return [r[0] * x + r[1] * y + r[2] * z + pose.x, r[3] * x + r[4] * y + r[5] * z + pose.y, r[6] * x + r[7] * y + r[8] * z + pose.z];
 }
 
 /** p in the neutral body frame → moved body frame: Rᵀ(p − t). */

@@ -59,9 +59,5 @@ function toNeutral(point: Float64Array, offset: number, bodyPose: BodyPose | und
   const z = point[offset + 2];
   if (!bodyPose) return [x, y, z];
   const r = rotationOf(bodyPose);
-  return [
-    r[0] * x + r[1] * y + r[2] * z + bodyPose.x,
-    r[3] * x + r[4] * y + r[5] * z + bodyPose.y,
-    r[6] * x + r[7] * y + r[8] * z + bodyPose.z,
-  ];
+  return [r[0] * x + r[1] * y + r[2] * z + bodyPose.x, r[3] * x + r[4] * y + r[5] * z + bodyPose.y, r[6] * x + r[7] * y + r[8] * z + bodyPose.z];
 }

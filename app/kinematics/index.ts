@@ -26,14 +26,7 @@ export { NEUTRAL_POSE, poseApply, poseRotation, poseUnapply } from "./body-pose"
 export { solveLeg, type JointLimitViolation } from "./solve-leg";
 export { forwardLeg, forwardLegJoints, type LegJointPoints } from "./forward-leg";
 export { createLegSolver, type LegSolver } from "./leg-solver";
-export {
-  SOLVE_BEYOND_REACH,
-  SOLVE_COXA_LIMIT,
-  SOLVE_FEMUR_LIMIT,
-  SOLVE_INSIDE_FOLD,
-  SOLVE_TIBIA_LIMIT,
-  SOLVE_UNREACHABLE,
-} from "./solve-status";
+export { SOLVE_BEYOND_REACH, SOLVE_COXA_LIMIT, SOLVE_FEMUR_LIMIT, SOLVE_INSIDE_FOLD, SOLVE_TIBIA_LIMIT, SOLVE_UNREACHABLE } from "./solve-status";
 export { angleToPulse, pulseToAngle } from "./servo";
 export { neutralStance, reachRing, type ReachRing } from "./reach";
 export { copyLegGeometry, mirrorLeg } from "./mirror";

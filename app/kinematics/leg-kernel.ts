@@ -98,14 +98,7 @@ function notFinite(k: LegConstants, out: NumberSink, offset: number): number {
 }
 
 /** Foot position (body frame, mm) for servo degrees, written to out[offset..offset+2]. */
-export function forwardLegInto(
-  k: LegConstants,
-  coxaServoDeg: number,
-  femurServoDeg: number,
-  tibiaServoDeg: number,
-  out: NumberSink,
-  offset: number,
-): void {
+export function forwardLegInto(k: LegConstants, coxaServoDeg: number, femurServoDeg: number, tibiaServoDeg: number, out: NumberSink, offset: number): void {
   forwardInto(k, coxaServoDeg, femurServoDeg, tibiaServoDeg, false, out, offset);
 }
 
@@ -113,14 +106,7 @@ export function forwardLegInto(
  * Femur joint, knee and foot (body frame, mm) for servo degrees, written to
  * out[offset..offset+8] in that order; the coxa joint is the mount itself.
  */
-export function legJointsInto(
-  k: LegConstants,
-  coxaServoDeg: number,
-  femurServoDeg: number,
-  tibiaServoDeg: number,
-  out: NumberSink,
-  offset: number,
-): void {
+export function legJointsInto(k: LegConstants, coxaServoDeg: number, femurServoDeg: number, tibiaServoDeg: number, out: NumberSink, offset: number): void {
   forwardInto(k, coxaServoDeg, femurServoDeg, tibiaServoDeg, true, out, offset);
 }
 

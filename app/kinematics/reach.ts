@@ -42,9 +42,7 @@ export function reachRing(robot: Robot, legId: string, footZMm: number): ReachRi
     const outerSpan = Math.sqrt(k.reachMaxMm * k.reachMaxMm - height * height);
     geometricOuterMm = k.coxaMm + outerSpan;
     geometricInnerMm =
-      height < k.reachMinMm
-        ? k.coxaMm + Math.sqrt(k.reachMinMm * k.reachMinMm - height * height)
-        : Math.max(COXA_AXIS_CLEARANCE_MM, k.coxaMm - outerSpan);
+      height < k.reachMinMm ? k.coxaMm + Math.sqrt(k.reachMinMm * k.reachMinMm - height * height) : Math.max(COXA_AXIS_CLEARANCE_MM, k.coxaMm - outerSpan);
   }
   const limited = limitedSpan(k, footZMm, geometricInnerMm, geometricOuterMm);
   const sectorStartDeg = leg.mount.yawDeg + leg.joints.coxa.zeroOffsetDeg + leg.joints.coxa.minDeg;

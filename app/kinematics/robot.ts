@@ -54,11 +54,7 @@ const jointSchema = z
   .strictObject({
     minDeg: z.number().min(-180).max(180).describe("Lower joint limit in servo degrees."),
     maxDeg: z.number().min(-180).max(180).describe("Upper joint limit in servo degrees."),
-    zeroOffsetDeg: z
-      .number()
-      .min(-180)
-      .max(180)
-      .describe("Calibration: servoDeg = geometricDeg − zeroOffsetDeg."),
+    zeroOffsetDeg: z.number().min(-180).max(180).describe("Calibration: servoDeg = geometricDeg − zeroOffsetDeg."),
     maxSpeedDegS: z.number().positive().describe("Fastest the joint may turn (°/s)."),
     servo: servoSchema,
   })
@@ -184,8 +180,7 @@ export const robotSchema = robotObjectSchema
   })
   .meta({
     title: "Gaitloom robot definition",
-    description:
-      "A legged robot for Gaitloom: millimetres and degrees, x forward, y left, z up. Servo degrees are geometric degrees minus zeroOffsetDeg.",
+    description: "A legged robot for Gaitloom: millimetres and degrees, x forward, y left, z up. Servo degrees are geometric degrees minus zeroOffsetDeg.",
   });
 
 export type Robot = z.output<typeof robotSchema>;

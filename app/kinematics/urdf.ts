@@ -140,7 +140,8 @@ function axisSign(axis: [number, number, number], index: number): number {
 function checkRevolute(joint: UrdfJoint, role: JointName): void {
   const where = ["joint", joint.name];
   if (joint.type === "continuous") refuse([...where, "type"], `joint "${joint.name}" (${role}) is continuous: a leg joint must be revolute, with limits`);
-  if (joint.type !== "revolute") refuse([...where, "type"], `joint "${joint.name}" (${role}) is ${joint.type || "of no type"}: only revolute joints make a leg`);
+  if (joint.type !== "revolute")
+    refuse([...where, "type"], `joint "${joint.name}" (${role}) is ${joint.type || "of no type"}: only revolute joints make a leg`);
   if (!joint.limit) refuse([...where, "limit"], `joint "${joint.name}" (${role}) has no <limit lower upper>: a leg joint needs its limits`);
 }
 
@@ -174,7 +175,8 @@ function importOrRefuse(xml: string, options: UrdfImportOptions): UrdfImportResu
   for (const joint of joints) childJoints.set(joint.parent, [...(childJoints.get(joint.parent) ?? []), joint]);
   const childLinks = new Set<string>();
   for (const joint of joints) {
-    if (childLinks.has(joint.child)) refuse(["joint", joint.name, "child"], `link "${joint.child}" is the child of two joints (one is "${joint.name}"): URDF links form a tree`);
+    if (childLinks.has(joint.child))
+      refuse(["joint", joint.name, "child"], `link "${joint.child}" is the child of two joints (one is "${joint.name}"): URDF links form a tree`);
     childLinks.add(joint.child);
   }
   const linkNames = links.map((link) => attribute(link, "name") ?? "");
@@ -205,7 +207,10 @@ function importOrRefuse(xml: string, options: UrdfImportOptions): UrdfImportResu
     }
     const movable = children.filter((joint) => joint.type !== "fixed");
     if (movable.length > 1) {
-      refuse(["joint", after.name], `link "${link}" after joint "${after.name}" branches into ${movable.map((joint) => `"${joint.name}"`).join(", ")}: a leg is one chain`);
+      refuse(
+        ["joint", after.name],
+        `link "${link}" after joint "${after.name}" branches into ${movable.map((joint) => `"${joint.name}"`).join(", ")}: a leg is one chain`,
+      );
     }
     return movable[0];
   };
@@ -231,13 +236,13 @@ function importOrRefuse(xml: string, options: UrdfImportOptions): UrdfImportResu
     if (!femur) refuse(["joint", coxa.name], `the chain from coxa joint "${coxa.name}" ends after 1 joint: a leg has three revolute joints`);
     checkRevolute(femur, "femur");
     const tibia = nextMovable(femur.child, femur);
-    if (!tibia) refuse(["joint", femur.name], `the chain from coxa joint "${coxa.name}" ends after 2 joints at "${femur.name}": a leg has three revolute joints`);
+    if (!tibia)
+      refuse(["joint", femur.name], `the chain from coxa joint "${coxa.name}" ends after 2 joints at "${femur.name}": a leg has three revolute joints`);
     checkRevolute(tibia, "tibia");
     const extra = nextMovable(tibia.child, tibia);
     if (extra) refuse(["joint", extra.name], `joint "${extra.name}" follows tibia joint "${tibia.name}": a leg has exactly three revolute joints`);
     const footJoints = (childJoints.get(tibia.child) ?? []).filter((joint) => joint.type === "fixed");
-    const foot =
-      footJoints.length === 1 ? footJoints[0] : footJoints.find((joint) => /foot|tip|toe/i.test(`${joint.name} ${joint.child}`));
+    const foot = footJoints.length === 1 ? footJoints[0] : footJoints.find((joint) => /foot|tip|toe/i.test(`${joint.name} ${joint.child}`));
     if (!foot) {
       refuse(
         ["joint", tibia.name],
@@ -255,11 +260,17 @@ function importOrRefuse(xml: string, options: UrdfImportOptions): UrdfImportResu
       }
     }
     if (Math.abs(coxa.rpy[0]) > ZERO_ANGLE_RAD || Math.abs(coxa.rpy[1]) > ZERO_ANGLE_RAD) {
-      refuse(["joint", coxa.name, "origin", "rpy"], `coxa joint "${coxa.name}": origin roll and pitch must be 0 (got ${degrees(coxa.rpy[0])}, ${degrees(coxa.rpy[1])}): the coxa turns about the body's vertical`);
+      refuse(
+        ["joint", coxa.name, "origin", "rpy"],
+        `coxa joint "${coxa.name}": origin roll and pitch must be 0 (got ${degrees(coxa.rpy[0])}, ${degrees(coxa.rpy[1])}): the coxa turns about the body's vertical`,
+      );
     }
     for (const joint of [femur, tibia]) {
       if (Math.abs(joint.rpy[0]) > ZERO_ANGLE_RAD || Math.abs(joint.rpy[2]) > ZERO_ANGLE_RAD) {
-        refuse(["joint", joint.name, "origin", "rpy"], `joint "${joint.name}": origin roll and yaw must be 0 (got ${degrees(joint.rpy[0])}, ${degrees(joint.rpy[2])}): femur and tibia turn in the leg plane`);
+        refuse(
+          ["joint", joint.name, "origin", "rpy"],
+          `joint "${joint.name}": origin roll and yaw must be 0 (got ${degrees(joint.rpy[0])}, ${degrees(joint.rpy[2])}): femur and tibia turn in the leg plane`,
+        );
       }
     }
     const offPlane: [UrdfJoint, number][] = [
@@ -273,11 +284,15 @@ function importOrRefuse(xml: string, options: UrdfImportOptions): UrdfImportResu
       }
     }
     if (femur.xyz[0] <= ZERO_LENGTH_M) {
-      refuse(["joint", femur.name, "origin", "xyz"], `femur joint "${femur.name}" must sit out along the coxa (origin x > 0, got ${tidy(femur.xyz[0] * MM_PER_M)} mm)`);
+      refuse(
+        ["joint", femur.name, "origin", "xyz"],
+        `femur joint "${femur.name}" must sit out along the coxa (origin x > 0, got ${tidy(femur.xyz[0] * MM_PER_M)} mm)`,
+      );
     }
     const femurMm = Math.hypot(tibia.xyz[0], tibia.xyz[2]) * MM_PER_M;
     const tibiaMm = Math.hypot(foot.xyz[0], foot.xyz[2]) * MM_PER_M;
-    if (femurMm <= ZERO_LENGTH_M * MM_PER_M) refuse(["joint", tibia.name, "origin", "xyz"], `tibia joint "${tibia.name}" sits on the femur joint: femur length 0`);
+    if (femurMm <= ZERO_LENGTH_M * MM_PER_M)
+      refuse(["joint", tibia.name, "origin", "xyz"], `tibia joint "${tibia.name}" sits on the femur joint: femur length 0`);
     if (tibiaMm <= ZERO_LENGTH_M * MM_PER_M) refuse(["joint", foot.name, "origin", "xyz"], `foot joint "${foot.name}" sits on the knee: tibia length 0`);
 
     // Our femur and tibia turn about the leg frame's −y, a URDF axis (0, ±1, 0) about ±y.
@@ -308,8 +323,10 @@ function importOrRefuse(xml: string, options: UrdfImportOptions): UrdfImportResu
         maxSpeedDegS: tidy(velocity ?? URDF_DEFAULT_SPEED_DEG_S),
         servo: { channel: legIndex * 3 + jointIndex, ...URDF_SERVO_DEFAULTS },
       };
-      if (sign < 0) notes.push(`leg ${id}: ${jointName} "${joint.name}" axis (${joint.axis.join(" ")}) turns against our sense: its angles and limits are negated`);
-      if (velocity === undefined) notes.push(`leg ${id}: ${jointName} "${joint.name}" gives no limit velocity: maxSpeedDegS set to ${URDF_DEFAULT_SPEED_DEG_S}`);
+      if (sign < 0)
+        notes.push(`leg ${id}: ${jointName} "${joint.name}" axis (${joint.axis.join(" ")}) turns against our sense: its angles and limits are negated`);
+      if (velocity === undefined)
+        notes.push(`leg ${id}: ${jointName} "${joint.name}" gives no limit velocity: maxSpeedDegS set to ${URDF_DEFAULT_SPEED_DEG_S}`);
     });
     const leg: Robot["legs"][number] = {
       id,
@@ -343,7 +360,9 @@ function importOrRefuse(xml: string, options: UrdfImportOptions): UrdfImportResu
   report.push(
     massKg > 0 ? `body mass ${tidy(massKg)} kg: the sum of the links' inertial masses` : `no inertial masses: body mass set to ${URDF_DEFAULT_MASS_KG} kg`,
     comOrigin ? `centre of mass from the base link's inertial origin` : `no inertial origin on the base link: centre of mass set to the body origin`,
-    options.standHeightMm === undefined ? `standHeight not in URDF: set to ${standHeight} mm (0.55 × the shortest femur + tibia)` : `standHeight ${standHeight} mm as given`,
+    options.standHeightMm === undefined
+      ? `standHeight not in URDF: set to ${standHeight} mm (0.55 × the shortest femur + tibia)`
+      : `standHeight ${standHeight} mm as given`,
     `servo mapping not in URDF: channels 0–${legs.length * 3 - 1} in leg order (coxa, femur, tibia), not reversed, centre ${URDF_SERVO_DEFAULTS.centerUs} µs, ` +
       `${URDF_SERVO_DEFAULTS.usPerDeg} µs/°, range ${URDF_SERVO_DEFAULTS.minUs}–${URDF_SERVO_DEFAULTS.maxUs} µs`,
   );

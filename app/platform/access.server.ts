@@ -100,15 +100,17 @@ export async function requireApiAccess(request: Request, action: Action): Promis
 const tokenLookups = new WeakMap<Database, ReturnType<typeof prepareTokenLookup>>();
 
 function prepareTokenLookup(db: Database) {
-  return db
-    .select({ token: apiTokens, user: users, workspace: workspaces, role: memberships.role })
-    .from(apiTokens)
-    .innerJoin(users, eq(users.id, apiTokens.userId))
-    .innerJoin(workspaces, eq(workspaces.id, apiTokens.workspaceId))
-    // The token acts with the holder's current role; a removed member's tokens stop working.
-    .innerJoin(memberships, and(eq(memberships.userId, apiTokens.userId), eq(memberships.workspaceId, apiTokens.workspaceId)))
-    .where(and(eq(apiTokens.tokenHash, sql.placeholder("tokenHash")), isNull(apiTokens.revokedAt)))
-    .prepare("member_for_token");
+  return (
+    db
+      .select({ token: apiTokens, user: users, workspace: workspaces, role: memberships.role })
+      .from(apiTokens)
+      .innerJoin(users, eq(users.id, apiTokens.userId))
+      .innerJoin(workspaces, eq(workspaces.id, apiTokens.workspaceId))
+      // The token acts with the holder's current role; a removed member's tokens stop working.
+      .innerJoin(memberships, and(eq(memberships.userId, apiTokens.userId), eq(memberships.workspaceId, apiTokens.workspaceId)))
+      .where(and(eq(apiTokens.tokenHash, sql.placeholder("tokenHash")), isNull(apiTokens.revokedAt)))
+      .prepare("member_for_token")
+  );
 }
 
 async function memberForToken(token: string): Promise<ApiMember | null> {

@@ -54,9 +54,7 @@ export async function upsertGitHubUser({ profile, email }: { profile: GitHubProf
   // A seeded or invited person may exist by login before their first sign-in.
   const [byGitHub] = await db.select().from(users).where(eq(users.githubId, profile.id));
   const [byLogin] = byGitHub ? [byGitHub] : await db.select().from(users).where(eq(users.login, profile.login));
-  const [user] = byLogin
-    ? await db.update(users).set(values).where(eq(users.id, byLogin.id)).returning()
-    : await db.insert(users).values(values).returning();
+  const [user] = byLogin ? await db.update(users).set(values).where(eq(users.id, byLogin.id)).returning() : await db.insert(users).values(values).returning();
   await recordAudit({ workspaceId: null, actorId: user.id, action: "user.signed-in", targetType: "user", targetId: user.id });
   return user;
 }

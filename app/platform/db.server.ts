@@ -17,7 +17,11 @@ export type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
  */
 export function isUniqueViolation(error: unknown, constraint?: string): boolean {
   // The bound only guards against a cause that points back into its own chain.
-  for (let current = error, depth = 0; typeof current === "object" && current !== null && depth < 8; current = (current as { cause?: unknown }).cause, depth++) {
+  for (
+    let current = error, depth = 0;
+    typeof current === "object" && current !== null && depth < 8;
+    current = (current as { cause?: unknown }).cause, depth++
+  ) {
     const { code, constraint_name } = current as { code?: unknown; constraint_name?: unknown };
     if (code === "23505") return constraint === undefined || constraint_name === constraint;
   }

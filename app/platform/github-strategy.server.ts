@@ -45,10 +45,7 @@ export class GitHubAtBaseUrl extends GitHub {
 }
 
 export class ConfigurableGitHubStrategy<User> extends GitHubStrategy<User> {
-  constructor(
-    options: GitHubStrategy.ConstructorOptions & { oauthUrl: string },
-    verify: Strategy.VerifyFunction<User, GitHubStrategy.VerifyOptions>,
-  ) {
+  constructor(options: GitHubStrategy.ConstructorOptions & { oauthUrl: string }, verify: Strategy.VerifyFunction<User, GitHubStrategy.VerifyOptions>) {
     super(options, verify);
     this.client = new GitHubAtBaseUrl({
       clientId: options.clientId,

@@ -15,7 +15,5 @@ export function crossOriginRefusal(request: Request): Response | null {
     ? `Refused: this request came from ${origin}, not from Gaitloom's own pages.`
     : "Refused: a request that carries a session cookie must name its Origin.";
   const wantsJson = new URL(request.url).pathname.startsWith("/api/");
-  return wantsJson
-    ? apiError(403, "forbidden", message)
-    : new Response(message, { status: 403, headers: { "Content-Type": "text/plain; charset=utf-8" } });
+  return wantsJson ? apiError(403, "forbidden", message) : new Response(message, { status: 403, headers: { "Content-Type": "text/plain; charset=utf-8" } });
 }

@@ -39,7 +39,5 @@ export function destroySession(session: AppSession): Promise<string> {
 
 /** Only paths on this site, so a crafted link cannot send someone elsewhere after sign-in. */
 export function safeReturnTo(value: unknown): string {
-  return typeof value === "string" && value.startsWith("/") && !value.startsWith("//") && !value.startsWith("/\\")
-    ? value
-    : "/";
+  return typeof value === "string" && value.startsWith("/") && !value.startsWith("//") && !value.startsWith("/\\") ? value : "/";
 }

@@ -19,16 +19,15 @@ export default function Home({ loaderData }: Route.ComponentProps) {
     <div className="mx-auto max-w-3xl py-6">
       <h1 className="text-3xl font-semibold tracking-tight">Walking motions you can ship</h1>
       <p className="mt-3 text-lg text-ink-muted">
-        Lay out the key poses of a walk on a timeline and Gaitloom checks every frame against each leg's reach, joint
-        limits, servo speed and balance. Approved versions become angle tables your firmware plays back.
+        Lay out the key poses of a walk on a timeline and Gaitloom checks every frame against each leg's reach, joint limits, servo speed and balance. Approved
+        versions become angle tables your firmware plays back.
       </p>
       <section className="mt-8 rounded-lg border border-line bg-surface p-6">
         {workspace ? (
           <>
             <h2 className="text-lg font-semibold">{workspace.name}</h2>
             <p className="mt-1 text-ink-muted">
-              <span className="numeric">{workspace.robotCount}</span> robots and{" "}
-              <span className="numeric">{workspace.gaitCount}</span> gaits.
+              <span className="numeric">{workspace.robotCount}</span> robots and <span className="numeric">{workspace.gaitCount}</span> gaits.
             </p>
             <div className="mt-4 flex gap-3">
               <Link to="/robots" className={primary}>
@@ -51,8 +50,8 @@ export default function Home({ loaderData }: Route.ComponentProps) {
           <>
             <h2 className="text-lg font-semibold">Try the demo</h2>
             <p className="mt-1 text-ink-muted">
-              Breakwater Robotics Lab inspects harbour walls with a six-legged crawler, a four-legged walker and an
-              eight-legged climber. Sign in as one of its people to look around.
+              Breakwater Robotics Lab inspects harbour walls with a six-legged crawler, a four-legged walker and an eight-legged climber. Sign in as one of its
+              people to look around.
             </p>
             <Link to="/sign-in" className={`mt-4 inline-block ${primary}`}>
               Sign in to the demo

@@ -35,13 +35,7 @@ export default function Reviews({ loaderData }: Route.ComponentProps) {
       ) : (
         <div className="space-y-8">
           {canDecide || queue.assigned.length > 0 ? (
-            <ReviewQueueList
-              id="assigned"
-              title="Waiting for your review"
-              empty="No version waits for your review."
-              items={queue.assigned}
-              show="author"
-            />
+            <ReviewQueueList id="assigned" title="Waiting for your review" empty="No version waits for your review." items={queue.assigned} show="author" />
           ) : null}
           {queue.toRelease.length > 0 ? (
             <ReviewQueueList id="release" title="Approved, ready to release" empty="" items={queue.toRelease} show="author" />

@@ -7,7 +7,17 @@
 // undo stack and solves the new one at once; a drag is one gesture, so it is
 // one undo step however many moves it makes. Scrubbing never solves.
 import { createStore, type StoreApi } from "zustand/vanilla";
-import { generateGait, GaitInputError, solveSequence, type BodyKey, type BodyOffset, type GaitParams, type LegKey, type Sequence, type SolvedSequence } from "~/gait";
+import {
+  generateGait,
+  GaitInputError,
+  solveSequence,
+  type BodyKey,
+  type BodyOffset,
+  type GaitParams,
+  type LegKey,
+  type Sequence,
+  type SolvedSequence,
+} from "~/gait";
 import type { Robot, Vec3 } from "~/kinematics";
 import { bodyOffsetAt, plannedFoot } from "~/features/gaits/editor/body-offset";
 import {
@@ -252,7 +262,10 @@ export function createEditorStore(init: EditorInit): EditorStore {
       beginGesture() {
         const state = get();
         if (state.readOnly || state.gesture) return;
-        set({ gesture: { sequence: state.sequence, selection: state.selection }, past: [...state.past, { sequence: state.sequence, selection: state.selection }].slice(-UNDO_LIMIT) });
+        set({
+          gesture: { sequence: state.sequence, selection: state.selection },
+          past: [...state.past, { sequence: state.sequence, selection: state.selection }].slice(-UNDO_LIMIT),
+        });
       },
       endGesture() {
         const state = get();
@@ -339,9 +352,14 @@ export function createEditorStore(init: EditorInit): EditorStore {
         edit((state) => {
           try {
             const sequence = generateGait(state.robot, { ...params, name: state.sequence.name, bodyKeys: state.sequence.body.keys });
-            return { sequence: { ...sequence, ...(state.sequence.description ? { description: state.sequence.description } : {}) }, selection: null, message: `Regenerated from the ${params.template} template.` };
+            return {
+              sequence: { ...sequence, ...(state.sequence.description ? { description: state.sequence.description } : {}) },
+              selection: null,
+              message: `Regenerated from the ${params.template} template.`,
+            };
           } catch (error) {
-            if (error instanceof GaitInputError) throw new EditRefusal(error.issues.map((issue) => `${issue.path}: ${issue.message}`).join("; ") || error.message);
+            if (error instanceof GaitInputError)
+              throw new EditRefusal(error.issues.map((issue) => `${issue.path}: ${issue.message}`).join("; ") || error.message);
             throw error;
           }
         });

@@ -35,8 +35,20 @@ export const demoGaits: {
     name: "Tripod cruise",
     description: "The everyday walk along the pier deck.",
     versions: [
-      { params: { template: "tripod", cycleMs: 1200, fps: 50, strideMm: 40, stepHeightMm: 25 }, message: "First tripod at a gentle pace", author: "theo-brandt", state: "released", reviewer: "mara-lindqvist" },
-      { params: { template: "tripod", cycleMs: 1000, fps: 50, strideMm: 55, stepHeightMm: 30 }, message: "Longer, quicker steps for the open deck", author: "theo-brandt", state: "in-review", reviewer: "mara-lindqvist" },
+      {
+        params: { template: "tripod", cycleMs: 1200, fps: 50, strideMm: 40, stepHeightMm: 25 },
+        message: "First tripod at a gentle pace",
+        author: "theo-brandt",
+        state: "released",
+        reviewer: "mara-lindqvist",
+      },
+      {
+        params: { template: "tripod", cycleMs: 1000, fps: 50, strideMm: 55, stepHeightMm: 30 },
+        message: "Longer, quicker steps for the open deck",
+        author: "theo-brandt",
+        state: "in-review",
+        reviewer: "mara-lindqvist",
+      },
     ],
   },
   {
@@ -44,8 +56,19 @@ export const demoGaits: {
     name: "Wave creep",
     description: "One leg at a time, for wet and weedy planks.",
     versions: [
-      { params: { template: "wave", cycleMs: 2400, fps: 50, strideMm: 30, stepHeightMm: 20 }, message: "Slow wave for slippery boards", author: "theo-brandt", state: "approved", reviewer: "mara-lindqvist" },
-      { params: { template: "wave", cycleMs: 2000, fps: 50, strideMm: 36, stepHeightMm: 22 }, message: "A little faster", author: "theo-brandt", state: "committed" },
+      {
+        params: { template: "wave", cycleMs: 2400, fps: 50, strideMm: 30, stepHeightMm: 20 },
+        message: "Slow wave for slippery boards",
+        author: "theo-brandt",
+        state: "approved",
+        reviewer: "mara-lindqvist",
+      },
+      {
+        params: { template: "wave", cycleMs: 2000, fps: 50, strideMm: 36, stepHeightMm: 22 },
+        message: "A little faster",
+        author: "theo-brandt",
+        state: "committed",
+      },
     ],
   },
   {
@@ -53,8 +76,19 @@ export const demoGaits: {
     name: "Ripple turn left",
     description: "Turning on the spot around a mooring post.",
     versions: [
-      { params: { template: "ripple", cycleMs: 1600, fps: 50, strideMm: 0, turnDegPerCycle: 10, stepHeightMm: 25 }, message: "Ten degrees a cycle", author: "theo-brandt", state: "sent-back", reviewer: "mara-lindqvist" },
-      { params: { template: "ripple", cycleMs: 1600, fps: 50, strideMm: 0, turnDegPerCycle: 8, stepHeightMm: 28 }, message: "Gentler turn, higher steps", author: "theo-brandt", state: "committed" },
+      {
+        params: { template: "ripple", cycleMs: 1600, fps: 50, strideMm: 0, turnDegPerCycle: 10, stepHeightMm: 25 },
+        message: "Ten degrees a cycle",
+        author: "theo-brandt",
+        state: "sent-back",
+        reviewer: "mara-lindqvist",
+      },
+      {
+        params: { template: "ripple", cycleMs: 1600, fps: 50, strideMm: 0, turnDegPerCycle: 8, stepHeightMm: 28 },
+        message: "Gentler turn, higher steps",
+        author: "theo-brandt",
+        state: "committed",
+      },
     ],
   },
   {
@@ -62,8 +96,19 @@ export const demoGaits: {
     name: "Crawl",
     description: "Statically stable walk along the quay edge.",
     versions: [
-      { params: { template: "wave", cycleMs: 2000, fps: 50, strideMm: 30, stepHeightMm: 25 }, message: "Creeping crawl", author: "theo-brandt", state: "sent-back", reviewer: "mara-lindqvist" },
-      { params: { template: "wave", cycleMs: 1800, fps: 50, strideMm: 34, stepHeightMm: 25 }, message: "Slightly brisker crawl", author: "theo-brandt", state: "committed" },
+      {
+        params: { template: "wave", cycleMs: 2000, fps: 50, strideMm: 30, stepHeightMm: 25 },
+        message: "Creeping crawl",
+        author: "theo-brandt",
+        state: "sent-back",
+        reviewer: "mara-lindqvist",
+      },
+      {
+        params: { template: "wave", cycleMs: 1800, fps: 50, strideMm: 34, stepHeightMm: 25 },
+        message: "Slightly brisker crawl",
+        author: "theo-brandt",
+        state: "committed",
+      },
     ],
   },
   {
@@ -71,8 +116,20 @@ export const demoGaits: {
     name: "Trot",
     description: "Diagonal pairs, for the flat concrete apron.",
     versions: [
-      { params: { template: "trot", cycleMs: 800, fps: 50, strideMm: 40, stepHeightMm: 25 }, message: "First trot", author: "theo-brandt", state: "released", reviewer: "mara-lindqvist" },
-      { params: { template: "trot", cycleMs: 700, fps: 50, strideMm: 45, stepHeightMm: 28 }, message: "Faster trot", author: "theo-brandt", state: "in-review", reviewer: "mara-lindqvist" },
+      {
+        params: { template: "trot", cycleMs: 800, fps: 50, strideMm: 40, stepHeightMm: 25 },
+        message: "First trot",
+        author: "theo-brandt",
+        state: "released",
+        reviewer: "mara-lindqvist",
+      },
+      {
+        params: { template: "trot", cycleMs: 700, fps: 50, strideMm: 45, stepHeightMm: 28 },
+        message: "Faster trot",
+        author: "theo-brandt",
+        state: "in-review",
+        reviewer: "mara-lindqvist",
+      },
     ],
   },
   {
@@ -80,8 +137,19 @@ export const demoGaits: {
     name: "Wave climb",
     description: "Eight legs, seven always down, for the hull plates.",
     versions: [
-      { params: { template: "wave", cycleMs: 3200, fps: 50, strideMm: 32, stepHeightMm: 22 }, message: "Wave for climbing", author: "mara-lindqvist", state: "released", reviewer: "ines-okafor" },
-      { params: { template: "wave", cycleMs: 2800, fps: 50, strideMm: 36, stepHeightMm: 22 }, message: "Shorter cycle", author: "mara-lindqvist", state: "committed" },
+      {
+        params: { template: "wave", cycleMs: 3200, fps: 50, strideMm: 32, stepHeightMm: 22 },
+        message: "Wave for climbing",
+        author: "mara-lindqvist",
+        state: "released",
+        reviewer: "ines-okafor",
+      },
+      {
+        params: { template: "wave", cycleMs: 2800, fps: 50, strideMm: 36, stepHeightMm: 22 },
+        message: "Shorter cycle",
+        author: "mara-lindqvist",
+        state: "committed",
+      },
     ],
   },
   {
@@ -89,8 +157,18 @@ export const demoGaits: {
     name: "Alternating tetrapod",
     description: "Four legs at a time on flat decks.",
     versions: [
-      { params: { template: "alternating-tetrapod", cycleMs: 1200, fps: 50, strideMm: 40, stepHeightMm: 25 }, message: "Two sets of four", author: "mara-lindqvist", state: "committed" },
-      { params: { template: "alternating-tetrapod", cycleMs: 1100, fps: 50, strideMm: 44, stepHeightMm: 26 }, message: "Slightly faster", author: "mara-lindqvist", state: "committed" },
+      {
+        params: { template: "alternating-tetrapod", cycleMs: 1200, fps: 50, strideMm: 40, stepHeightMm: 25 },
+        message: "Two sets of four",
+        author: "mara-lindqvist",
+        state: "committed",
+      },
+      {
+        params: { template: "alternating-tetrapod", cycleMs: 1100, fps: 50, strideMm: 44, stepHeightMm: 26 },
+        message: "Slightly faster",
+        author: "mara-lindqvist",
+        state: "committed",
+      },
     ],
   },
 ];

@@ -40,7 +40,15 @@ function medianInTurns(runs: Record<string, () => void>): Record<string, number>
 
 export async function benchExport(): Promise<void> {
   const robot = loadDemoRobot("pier-crawler.json");
-  const sequence = generateGait(robot, { template: "tripod", cycleMs: CYCLE_MS, fps: FPS, strideMm: 40, turnDegPerCycle: 10, stepHeightMm: 25, name: "Bench tripod" });
+  const sequence = generateGait(robot, {
+    template: "tripod",
+    cycleMs: CYCLE_MS,
+    fps: FPS,
+    strideMm: 40,
+    turnDegPerCycle: 10,
+    stepHeightMm: 25,
+    name: "Bench tripod",
+  });
   const solved = solveSequence(robot, sequence);
   const meta = { robotName: robot.name, robotRevision: 1, gaitName: "Bench tripod", gaitVersion: 1, contentHash: "sha256:bench", loop: true };
   const overrideReason = solved.summary.errors > 0 ? "bench" : undefined;

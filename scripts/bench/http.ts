@@ -54,7 +54,8 @@ async function run(baseUrl: string, token: string, scenario: Scenario, connectio
       bytes = resBytes;
     });
   });
-  if (failures.length > 0 || times.length < amount) throw new Error(`${scenario.name}: ${failures.length} answers not 200 (${failures.slice(0, 3).join(", ")}), ${times.length} of ${amount} answered`);
+  if (failures.length > 0 || times.length < amount)
+    throw new Error(`${scenario.name}: ${failures.length} answers not 200 (${failures.slice(0, 3).join(", ")}), ${times.length} of ${amount} answered`);
   return { times: times.sort((a, b) => a - b), bytes };
 }
 
@@ -99,7 +100,11 @@ export async function benchSolveApi(baseUrl: string, token: string, appPid?: num
 
 /** GET of a released demo table in each format (the first request solves; the rest are what build scripts see). */
 export async function benchTableApi(baseUrl: string, token: string, gaitId: string, appPid?: number): Promise<void> {
-  for (const [format, units] of [["csv", "deg"], ["json", "rad"], ["c", "us"]] as const) {
+  for (const [format, units] of [
+    ["csv", "deg"],
+    ["json", "rad"],
+    ["c", "us"],
+  ] as const) {
     await measure(baseUrl, token, appPid, {
       name: `GET …/versions/released/table?format=${format}&units=${units} (Tripod cruise, 60 frames)`,
       path: `/api/v1/gaits/${gaitId}/versions/released/table?format=${format}&units=${units}`,

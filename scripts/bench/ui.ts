@@ -22,13 +22,23 @@ async function signIn(page: Page) {
 
 /** A 1 000-frame tripod (20 s at 50 frames/s) on the pier crawler, made through the new-gait form's action. */
 async function createLongGait(page: Page): Promise<string> {
-  const robots = (await (await page.request.get(`${BASE}/api/v1/robots`)).json()) as { robots?: { id: string; name: string }[] } | { id: string; name: string }[];
+  const robots = (await (await page.request.get(`${BASE}/api/v1/robots`)).json()) as
+    { robots?: { id: string; name: string }[] } | { id: string; name: string }[];
   const list = Array.isArray(robots) ? robots : (robots.robots ?? []);
   const crawler = list.find((robot) => robot.name === "Pier crawler");
   if (!crawler) throw new Error(`the demo robot "Pier crawler" is missing (robots: ${list.map((robot) => robot.name).join(", ")})`);
   const response = await page.request.post(`${BASE}/gaits/new`, {
     headers: { Origin: BASE },
-    form: { intent: "create", robotId: crawler.id, name: `Bench scrub ${Date.now().toString(36)}`, template: "tripod", cycleMs: "20000", fps: String(FRAMES / 20), strideMm: "40", stepHeightMm: "25" },
+    form: {
+      intent: "create",
+      robotId: crawler.id,
+      name: `Bench scrub ${Date.now().toString(36)}`,
+      template: "tripod",
+      cycleMs: "20000",
+      fps: String(FRAMES / 20),
+      strideMm: "40",
+      stepHeightMm: "25",
+    },
     maxRedirects: 0,
   });
   const location = response.headers()["location"];
@@ -81,7 +91,15 @@ const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.lengt
 
 const browser = await chromium.launch({
   executablePath: "/usr/bin/chromium",
-  args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+  args: [
+    "--no-sandbox",
+    "--disable-gpu",
+    "--disable-quic",
+    "--no-first-run",
+    "--disable-background-networking",
+    "--disable-component-update",
+    "--disable-sync",
+  ],
 });
 try {
   const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
@@ -98,7 +116,9 @@ try {
   const p95 = percentile(sorted, 95);
   const distinct = new Set(timing.frames).size;
   console.log(`Gaitloom editor scrub, Chromium ${browser.version()}, ${new Date().toISOString()}`);
-  console.log(`  gait: tripod on Pier crawler, ${frameCount} frames; ${timing.steps.length} scrub steps (after ${WARM_UP} warm-up), ${distinct} distinct frames shown`);
+  console.log(
+    `  gait: tripod on Pier crawler, ${frameCount} frames; ${timing.steps.length} scrub steps (after ${WARM_UP} warm-up), ${distinct} distinct frames shown`,
+  );
   console.log(`  scripting + layout per step: median ${median.toFixed(2)} ms, p95 ${p95.toFixed(2)} ms, max ${sorted[sorted.length - 1].toFixed(2)} ms`);
   console.log(`  target p95 ≤ ${TARGET_MS} ms: ${p95 <= TARGET_MS ? "met" : "NOT met"}`);
   if (frameCount !== FRAMES) console.log(`  (expected ${FRAMES} frames, the editor shows ${frameCount})`);

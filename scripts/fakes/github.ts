@@ -31,8 +31,7 @@ function personFor(login: string, name: string, email: string): Person {
   return { id, login, name: name || login, email };
 }
 
-const escape = (text: string) =>
-  text.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
+const escape = (text: string) => text.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
 
 function authorizePage(query: URLSearchParams): string {
   const hidden = ["state", "redirect_uri", "client_id", "scope"]

@@ -16,7 +16,9 @@ describe("another rate re-solves (DESIGN.md: N = round(cycleMs · rate / 1000), 
       expect(table.frames.length, `frames: expected ${expectedFrames}, got ${table.frames.length}`).toBe(expectedFrames);
       expect(table.meta.rateHz).toBe(rateHz);
       expect(table.meta.framePeriodMs, "frame period, whole µs").toBe(Math.round(1e6 / rateHz) / 1000);
-      table.frames.forEach((frame, i) => expect(frame.timeMs, `frame ${i}: expected ${Math.round((i * 1e6) / rateHz) / 1000} ms`).toBe(Math.round((i * 1e6) / rateHz) / 1000));
+      table.frames.forEach((frame, i) =>
+        expect(frame.timeMs, `frame ${i}: expected ${Math.round((i * 1e6) / rateHz) / 1000} ms`).toBe(Math.round((i * 1e6) / rateHz) / 1000),
+      );
       const fresh = solveSequence(gait.robot, gait.sequence, { fps: rateHz });
       const expected = readJsonTable(angleTable(gait.robot, fresh, { format: "json", units: "deg", meta: metaFor(gait, { loop: true }) }));
       expect(table.frames, "cells equal a fresh solve at the rate").toEqual(expected.frames);

@@ -7,7 +7,8 @@ import { OVERRIDE, metaFor, modifiedRobot, readJsonTable } from "./helpers";
 /** The fastest step between frames of one joint, worked out here from the frames: max |Δangle| · fps, °/s. */
 function peakSpeedDegS(frames: { legs: Record<string, { angles: Record<string, number> }> }[], legId: string, joint: string, fps: number): number {
   let peak = 0;
-  for (let i = 1; i < frames.length; i += 1) peak = Math.max(peak, Math.abs(frames[i].legs[legId].angles[joint] - frames[i - 1].legs[legId].angles[joint]) * fps);
+  for (let i = 1; i < frames.length; i += 1)
+    peak = Math.max(peak, Math.abs(frames[i].legs[legId].angles[joint] - frames[i - 1].legs[legId].angles[joint]) * fps);
   return peak;
 }
 
@@ -19,8 +20,14 @@ describe("bench tables for bring-up (issue 8), checked for speed like any sequen
     const centre = centreTable(robot, { seconds: 1.5, fps: 40 });
     expect(centre.frames.length).toBe(60);
     expect(centre.flags).toEqual([]);
-    const deg = readJsonTable(angleTable(robot, centre, { format: "json", units: "deg", meta: metaFor({ robot }, { gaitName: centre.name, gaitVersion: "bench", loop: centre.loop }) }));
-    for (const frame of deg.frames) expect(frame.values.every((value) => value === 0), `frame ${frame.index}: all 0°`).toBe(true);
+    const deg = readJsonTable(
+      angleTable(robot, centre, { format: "json", units: "deg", meta: metaFor({ robot }, { gaitName: centre.name, gaitVersion: "bench", loop: centre.loop }) }),
+    );
+    for (const frame of deg.frames)
+      expect(
+        frame.values.every((value) => value === 0),
+        `frame ${frame.index}: all 0°`,
+      ).toBe(true);
     const us = readJsonTable(angleTable(robot, centre, { format: "json", units: "us", meta: metaFor({ robot }, { gaitName: centre.name }) }));
     const centres = us.channels.map((channel) => robot.legs.find((leg) => leg.id === channel.leg)!.joints[channel.joint as "coxa"].servo.centerUs);
     for (const frame of us.frames) expect(frame.values, `frame ${frame.index}: each servo's centerUs`).toEqual(centres);
@@ -35,7 +42,12 @@ describe("bench tables for bring-up (issue 8), checked for speed like any sequen
     expect(centre.flags.length).toBe(5);
     expect(centre.flags.every((flag) => flag.kind === "joint-limit" && flag.leg === "LF" && flag.joint === "tibia")).toBe(true);
     const trimmed = readJsonTable(
-      angleTable(robot, centreTable(robot, { seconds: 0.1 }), { format: "json", units: "us", meta: metaFor({ robot }, { gaitName: "centre" }), calibration: { name: "SN-3", joints: { LF: { coxa: { trimDeg: 2 } } } } }),
+      angleTable(robot, centreTable(robot, { seconds: 0.1 }), {
+        format: "json",
+        units: "us",
+        meta: metaFor({ robot }, { gaitName: "centre" }),
+        calibration: { name: "SN-3", joints: { LF: { coxa: { trimDeg: 2 } } } },
+      }),
     );
     expect(trimmed.frames[0].values[0], "LF.coxa: 1500 µs + 2° × 11.1 µs/°").toBe(Math.round(1500 + 2 * 11.1));
   });
@@ -60,13 +72,18 @@ describe("bench tables for bring-up (issue 8), checked for speed like any sequen
           const peak = peakSpeedDegS(sweep.frames, leg.id, joint, 50);
           expect(peak, `${leg.id}.${joint}: peak ${peak.toFixed(3)} °/s, limit ¼ × ${spec.maxSpeedDegS} °/s`).toBeLessThanOrEqual(0.25 * spec.maxSpeedDegS);
           expect(peak, "and not much slower").toBeGreaterThan(0.2 * spec.maxSpeedDegS);
-          expect(sweep.flags.filter((flag) => flag.kind === "joint-speed"), "joint-speed flags").toEqual([]);
+          expect(
+            sweep.flags.filter((flag) => flag.kind === "joint-speed"),
+            "joint-speed flags",
+          ).toEqual([]);
           expect(sweep.summary.peakSpeedDegS[leg.id][joint]).toBeCloseTo(peak, 9);
           for (const other of demo.legs) {
             const hold = solveLeg(demo, other.id, feet[other.id]).angles;
             for (const name of JOINT_NAMES) {
               if (other.id === leg.id && name === joint) continue;
-              expect(new Set(sweep.frames.map((frame) => frame.legs[other.id].angles[name])), `${other.id}.${name} held at ${hold[name]}°`).toEqual(new Set([hold[name]]));
+              expect(new Set(sweep.frames.map((frame) => frame.legs[other.id].angles[name])), `${other.id}.${name} held at ${hold[name]}°`).toEqual(
+                new Set([hold[name]]),
+              );
             }
           }
         }

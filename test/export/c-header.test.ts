@@ -38,7 +38,9 @@ describe("C header compiled with gcc -std=c99 -Wall -Wextra -Werror -pedantic (r
             // The JSON holds the fixed-point number exactly: value × scale is a whole number.
             expect(Math.abs(scaled - Math.round(scaled)), `frame ${frame.index} column ${column}: ${value} × ${scale} is not whole`).toBeLessThan(1e-6);
             if (printed.rows[row][column] !== Math.round(scaled)) {
-              expect.fail(`frame ${frame.index} ${json.channels[column].name}: expected ${Math.round(scaled)} (JSON ${value} × ${scale}), got ${printed.rows[row][column]} from the C table`);
+              expect.fail(
+                `frame ${frame.index} ${json.channels[column].name}: expected ${Math.round(scaled)} (JSON ${value} × ${scale}), got ${printed.rows[row][column]} from the C table`,
+              );
             }
           });
         });
@@ -98,7 +100,10 @@ int main(void) {
 
 describe("rounding against ISO C99 round() (7.12.9.6: halfway cases away from zero), computed by gcc", () => {
   it("roundHalfAwayFromZero equals C's round() on halves, near-halves and negatives, and never gives −0", () => {
-    const xs = [0.5, -0.5, 1.5, -1.5, 2.5, -2.5, 12.5, -12.5, -0.4, 0.4, 0.49999999999999994, -0.49999999999999994, 4503599627370495.5, -13.000000000000002, 1e-300, -1e-300];
+    const xs = [
+      0.5, -0.5, 1.5, -1.5, 2.5, -2.5, 12.5, -12.5, -0.4, 0.4, 0.49999999999999994, -0.49999999999999994, 4503599627370495.5, -13.000000000000002, 1e-300,
+      -1e-300,
+    ];
     const program = `#include <math.h>
 #include <stdio.h>
 int main(void) {
@@ -132,7 +137,10 @@ int main(void) {
   return 0;
 }
 `;
-    const fromC = compileAndRun({ "main.c": program }, ["-lm"]).trim().split("\n").map((line) => line.split(" ").map(Number));
+    const fromC = compileAndRun({ "main.c": program }, ["-lm"])
+      .trim()
+      .split("\n")
+      .map((line) => line.split(" ").map(Number));
     const { json: radJson } = tables(gait, "rad");
     const columns = order.length;
     degJson.frames.forEach((frame, row) => {
@@ -141,7 +149,9 @@ int main(void) {
         const degCell = Math.round(value * 10);
         const radCell = Math.round(radJson.frames[row].values[column] * 10000);
         if (degCell !== deg10 + 0 || radCell !== rad10000 + 0) {
-          expect.fail(`frame ${frame.index} ${degJson.channels[column].name}: expected ${deg10} tenths of a degree and ${rad10000} ten-thousandths of a radian (C), got ${degCell} and ${radCell}`);
+          expect.fail(
+            `frame ${frame.index} ${degJson.channels[column].name}: expected ${deg10} tenths of a degree and ${rad10000} ten-thousandths of a radian (C), got ${degCell} and ${radCell}`,
+          );
         }
       });
     });

@@ -1,11 +1,5 @@
 import { describe, expect, it } from "vitest";
-import {
-  angleTable,
-  calibrationProfileJsonSchema,
-  parseCalibrationProfile,
-  TableExportError,
-  type CalibrationProfile,
-} from "~/export/index";
+import { angleTable, calibrationProfileJsonSchema, parseCalibrationProfile, TableExportError, type CalibrationProfile } from "~/export/index";
 import { demoGait, metaFor, readCsv, readJsonTable } from "./helpers";
 
 function thrown(run: () => unknown): TableExportError {
@@ -65,7 +59,9 @@ describe("calibration profiles (issue 8): applied at export, recorded in the hea
     plainUs.frames.forEach((frame, row) => {
       const before = frame.values[at(plainUs, "LF.femur")];
       const after = calibratedUs.frames[row].values[at(calibratedUs, "LF.femur")];
-      expect(Math.abs(before + after - 2 * centerUs), `frame ${row} LF.femur: ${before} µs and reversed ${after} µs about ${centerUs} µs`).toBeLessThanOrEqual(1);
+      expect(Math.abs(before + after - 2 * centerUs), `frame ${row} LF.femur: ${before} µs and reversed ${after} µs about ${centerUs} µs`).toBeLessThanOrEqual(
+        1,
+      );
     });
   });
 
@@ -94,12 +90,22 @@ describe("calibration profiles (issue 8): applied at export, recorded in the hea
 
   it("a profile naming a leg the robot lacks, or an invalid one, is refused (calibration-mismatch)", () => {
     const stranger = thrown(() =>
-      angleTable(gait.robot, gait.solved, { format: "json", units: "deg", meta: metaFor(gait), calibration: { name: "SN-1", joints: { L9: { coxa: { trimDeg: 1 } } } } }),
+      angleTable(gait.robot, gait.solved, {
+        format: "json",
+        units: "deg",
+        meta: metaFor(gait),
+        calibration: { name: "SN-1", joints: { L9: { coxa: { trimDeg: 1 } } } },
+      }),
     );
     expect(stranger.code).toBe("calibration-mismatch");
     expect(stranger.issues[0].path).toBe("joints.L9");
     const invalid = thrown(() =>
-      angleTable(gait.robot, gait.solved, { format: "json", units: "deg", meta: metaFor(gait), calibration: { name: "SN-1", joints: { LF: { coxa: { trimDeg: -50 } } } } }),
+      angleTable(gait.robot, gait.solved, {
+        format: "json",
+        units: "deg",
+        meta: metaFor(gait),
+        calibration: { name: "SN-1", joints: { LF: { coxa: { trimDeg: -50 } } } },
+      }),
     );
     expect(invalid.code).toBe("calibration-mismatch");
     expect(invalid.issues).toEqual([{ path: "joints.LF.coxa.trimDeg", message: "must be at least -45 (got -50)" }]);

@@ -24,7 +24,9 @@ describe("CSV export against RFC 4180, read back with papaparse (reference parse
             const cell = Number(record[column + 2]);
             const expected = frame.values[column];
             if (cell !== expected) {
-              expect.fail(`frame ${frame.index} ${channel.name}: expected ${expected} ${UNIT_WORDS[units]} (JSON), got ${record[column + 2]} ${UNIT_WORDS[units]} (CSV)`);
+              expect.fail(
+                `frame ${frame.index} ${channel.name}: expected ${expected} ${UNIT_WORDS[units]} (JSON), got ${record[column + 2]} ${UNIT_WORDS[units]} (CSV)`,
+              );
             }
           });
         });

@@ -53,14 +53,18 @@ describe("override reason for versions with error flags (DESIGN.md, issue 8)", (
     const c = angleTable(clean.robot, clean.solved, { format: "c", units: "us", meta: metaFor(clean) });
     expect(c).toContain(" * Override:     none\n");
     // Fewer frames a cycle: bigger steps between frames, so joints turn too fast.
-    expect(codeOf(() => buildAngleTable(faulty.robot, faulty.sequence, { format: "json", units: "deg", rateHz: 10, meta: metaFor(faulty) }))).toBe("override-required");
+    expect(codeOf(() => buildAngleTable(faulty.robot, faulty.sequence, { format: "json", units: "deg", rateHz: 10, meta: metaFor(faulty) }))).toBe(
+      "override-required",
+    );
   });
 
   it("metadata has no timestamp unless given, so the same inputs give the same bytes (reproducible release)", () => {
     const options = { format: "json" as const, units: "rad" as const, meta: metaFor(clean) };
     expect(angleTable(clean.robot, clean.solved, options)).toBe(angleTable(clean.robot, clean.solved, options));
     expect(readJsonTable(angleTable(clean.robot, clean.solved, options)).meta.exportedAt).toBeNull();
-    const stamped = readJsonTable(angleTable(clean.robot, clean.solved, { ...options, meta: metaFor(clean, { exportedAt: "2025-03-01T10:00:00Z", solverVersion: "gait 1" }) }));
+    const stamped = readJsonTable(
+      angleTable(clean.robot, clean.solved, { ...options, meta: metaFor(clean, { exportedAt: "2025-03-01T10:00:00Z", solverVersion: "gait 1" }) }),
+    );
     expect(stamped.meta.exportedAt).toBe("2025-03-01T10:00:00Z");
     expect(stamped.meta.solverVersion).toBe("gait 1");
     expect(stamped.meta.exporterVersion).toBe("1.0.0");

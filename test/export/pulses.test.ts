@@ -103,7 +103,10 @@ describe("reversal (DESIGN.md: degree and radian tables hold servoDeg in the joi
           return;
         }
         // c + k·d and c − k·d, each rounded: their sum is 2c within the 1 µs of rounding.
-        expect(Math.abs(value + flipped - 2 * centerUs), `frame ${frame.index} LF.femur: ${value} µs and reversed ${flipped} µs about ${centerUs} µs`).toBeLessThanOrEqual(1);
+        expect(
+          Math.abs(value + flipped - 2 * centerUs),
+          `frame ${frame.index} LF.femur: ${value} µs and reversed ${flipped} µs about ${centerUs} µs`,
+        ).toBeLessThanOrEqual(1);
         if (value !== centerUs) moved += 1;
       });
     });
@@ -134,7 +137,10 @@ describe("clamping (DESIGN.md: a pulse outside minUs..maxUs is clamped in any ta
       if (expectedClamped.includes(frame.index)) expect(value, `frame ${frame.index} LF.femur clamped`).toBe(1600);
     }
     const listed = us.meta.clamped as { frame: number; name: string; requestedUs: number; clampedUs: number; channel: number }[];
-    expect(listed.map((cell) => cell.frame), "clamped frames").toEqual(expectedClamped);
+    expect(
+      listed.map((cell) => cell.frame),
+      "clamped frames",
+    ).toEqual(expectedClamped);
     for (const cell of listed) {
       expect(cell.name).toBe("LF.femur");
       expect(cell.clampedUs).toBe(1600);
@@ -164,7 +170,9 @@ describe("clamping (DESIGN.md: a pulse outside minUs..maxUs is clamped in any ta
     const attempt = () => angleTable(gait.robot, gait.solved, { format: "json", units: "us", meta: metaFor(gait), calibration });
     expect(attempt).toThrow(TableExportError);
     expect(attempt).toThrow(/pulses? clamped to the servo range/);
-    const table = readJsonTable(angleTable(gait.robot, gait.solved, { format: "json", units: "us", meta: metaFor(gait), calibration, overrideReason: OVERRIDE }));
+    const table = readJsonTable(
+      angleTable(gait.robot, gait.solved, { format: "json", units: "us", meta: metaFor(gait), calibration, overrideReason: OVERRIDE }),
+    );
     expect(table.meta.clamped.length).toBeGreaterThan(0);
     expect(Math.max(...column(table, "LF.femur")), "clamped to maxUs").toBe(1950);
   });

@@ -69,7 +69,11 @@ describe("one rounding for every format (DESIGN.md: 0.1°, 0.0001 rad, whole µs
   it("degree cells are tenths, radian cells ten-thousandths, pulse cells whole µs, with the decimals the metadata states", () => {
     const { robot, solved, meta } = probed();
     const decimalsOf = (text: string) => (text.includes(".") ? text.split(".")[1].length : 0);
-    for (const [units, decimals] of [["deg", 1], ["rad", 4], ["us", 0]] as const) {
+    for (const [units, decimals] of [
+      ["deg", 1],
+      ["rad", 4],
+      ["us", 0],
+    ] as const) {
       const json = readJsonTable(angleTable(robot, solved, { format: "json", units, meta }));
       expect(json.meta.decimals).toBe(decimals);
       const csv = readCsv(angleTable(robot, solved, { format: "csv", units, meta }));

@@ -35,7 +35,9 @@ describe("the column layout of a solve (compact transfer form)", () => {
 
   it("marks the frames where a leg was out of reach", () => {
     const tooLong = generateGait(robot, { template: "tripod", strideMm: 400, cycleMs: 1200, fps: 50 });
-    const expected = solveSequence(robot, tooLong).frames.filter((frame) => !frame.legs.LF.reachable).map((frame) => frame.index);
+    const expected = solveSequence(robot, tooLong)
+      .frames.filter((frame) => !frame.legs.LF.reachable)
+      .map((frame) => frame.index);
     expect(expected.length).toBeGreaterThan(0);
     expect(columnsOf(runSolve(robot, tooLong)).leg.LF.unreachableFrames).toEqual(expected);
   });

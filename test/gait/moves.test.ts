@@ -64,7 +64,14 @@ describe("entry and exit moves", () => {
 
   it("a ripple with a leg in the air at its first frame and a crouch: the entry lifts that leg last and lands in the gait's first frame", () => {
     const robot = loadDemoRobot(DEMO_ROBOTS.six);
-    const gait = generateGait(robot, { template: "ripple", strideMm: 40, bodyKeys: [{ t: 0, pose: { z: -10, pitch: 3 } }, { t: 0.5, pose: { z: 0 } }] });
+    const gait = generateGait(robot, {
+      template: "ripple",
+      strideMm: 40,
+      bodyKeys: [
+        { t: 0, pose: { z: -10, pitch: 3 } },
+        { t: 0.5, pose: { z: 0 } },
+      ],
+    });
     const gaitFirst = solveSequence(robot, gait).frames[0];
     const inAir = Object.entries(gaitFirst.legs).filter(([, leg]) => leg.foot[2] + gaitFirst.body.z > 0.01 && leg.contact === "swing");
     expect(inAir.length).toBeGreaterThan(0);

@@ -9,7 +9,14 @@ function minimal(): SequenceInput {
     cycleMs: 1200,
     fps: 50,
     loop: true,
-    legs: { LF: { keys: [{ t: 0, contact: "swing" }, { t: 0.5, contact: "stance", foot: [150, 120, -90] }] } },
+    legs: {
+      LF: {
+        keys: [
+          { t: 0, contact: "swing" },
+          { t: 0.5, contact: "stance", foot: [150, 120, -90] },
+        ],
+      },
+    },
   };
 }
 
@@ -54,10 +61,18 @@ describe("parseSequence (DESIGN.md, Gait sequence)", () => {
   });
 
   it("reports t = 1 in a loop (t = 1 is the next cycle's t = 0) but allows it in a one-shot move", () => {
-    const json = { ...minimal(), legs: { LF: { keys: [{ t: 0, contact: "stance" }, { t: 1, contact: "swing" }] } } };
-    expect(issuesOf(json)).toEqual([
-      { path: "legs.LF.keys[1].t", message: "must be below 1 in a loop, where t = 1 is t = 0 of the next cycle (got 1)" },
-    ]);
+    const json = {
+      ...minimal(),
+      legs: {
+        LF: {
+          keys: [
+            { t: 0, contact: "stance" },
+            { t: 1, contact: "swing" },
+          ],
+        },
+      },
+    };
+    expect(issuesOf(json)).toEqual([{ path: "legs.LF.keys[1].t", message: "must be below 1 in a loop, where t = 1 is t = 0 of the next cycle (got 1)" }]);
     expect(parseSequence({ ...json, loop: false }).ok).toBe(true);
   });
 
@@ -73,7 +88,15 @@ describe("parseSequence (DESIGN.md, Gait sequence)", () => {
   });
 
   it("reports body keys by path too (body.keys[1].pose.pitch)", () => {
-    const json = { ...minimal(), body: { keys: [{ t: 0, pose: { z: -10 } }, { t: 0.5, pose: { pitch: "5" } }] } };
+    const json = {
+      ...minimal(),
+      body: {
+        keys: [
+          { t: 0, pose: { z: -10 } },
+          { t: 0.5, pose: { pitch: "5" } },
+        ],
+      },
+    };
     expect(issuesOf(json)).toEqual([{ path: "body.keys[1].pose.pitch", message: 'must be a number (got "5")' }]);
   });
 

@@ -65,13 +65,20 @@ describe("solveSequence: frames (DESIGN.md, Gait sequence)", () => {
     expect(summary.speedHeadroom).toBeGreaterThan(1);
     // Headroom = min over joints of maxSpeedDegS / peak speed.
     const expected = Math.min(
-      ...robot.legs.flatMap((leg) => (["coxa", "femur", "tibia"] as const).map((joint) => leg.joints[joint].maxSpeedDegS / summary.peakSpeedDegS[leg.id][joint])),
+      ...robot.legs.flatMap((leg) =>
+        (["coxa", "femur", "tibia"] as const).map((joint) => leg.joints[joint].maxSpeedDegS / summary.peakSpeedDegS[leg.id][joint]),
+      ),
     );
     expect(summary.speedHeadroom).toBeCloseTo(expected, 12);
   });
 
   it("keys without a foot take the generator's placement: neutral stance ± half the body's travel during the stance", () => {
-    const keys = { keys: [{ t: 0, contact: "swing" }, { t: 0.5, contact: "stance" }] };
+    const keys = {
+      keys: [
+        { t: 0, contact: "swing" },
+        { t: 0.5, contact: "stance" },
+      ],
+    };
     const bare = parsed({
       format: SEQUENCE_FORMAT,
       cycleMs: 1200,
@@ -93,7 +100,16 @@ describe("solveSequence: frames (DESIGN.md, Gait sequence)", () => {
     const late = parsed({
       ...gait,
       loop: false,
-      legs: { ...gait.legs, LF: { keys: [{ t: 0.25, contact: "stance", foot }, { t: 0.5, contact: "swing", foot }, { t: 0.75, contact: "stance", foot: [foot[0] + 20, foot[1], foot[2]] }] } },
+      legs: {
+        ...gait.legs,
+        LF: {
+          keys: [
+            { t: 0.25, contact: "stance", foot },
+            { t: 0.5, contact: "swing", foot },
+            { t: 0.75, contact: "stance", foot: [foot[0] + 20, foot[1], foot[2]] },
+          ],
+        },
+      },
     });
     const frames = solveSequence(robot, late, { checks: [] }).frames;
     // Frames 0..14 hold the foot where key 0 puts it at t = 0.25, fixed in the world.
@@ -111,7 +127,10 @@ describe("solveSequence: frames (DESIGN.md, Gait sequence)", () => {
       template: "ripple",
       strideMm: 50,
       turnDegPerCycle: 25,
-      bodyKeys: [{ t: 0, pose: { roll: 3, z: -8 } }, { t: 0.5, pose: { pitch: -4, yaw: 6, x: 5 } }],
+      bodyKeys: [
+        { t: 0, pose: { roll: 3, z: -8 } },
+        { t: 0.5, pose: { pitch: -4, yaw: 6, x: 5 } },
+      ],
     });
     for (const frame of solveSequence(robot, turning, { checks: [] }).frames) {
       for (const [legId, leg] of Object.entries(frame.legs)) {
@@ -137,7 +156,19 @@ describe("solveSequence: frames (DESIGN.md, Gait sequence)", () => {
 
   it("lists the flag kinds of DESIGN.md", () => {
     expect([...FLAG_KINDS].sort()).toEqual(
-      ["unreachable", "joint-limit", "joint-speed", "pulse-range", "ground-penetration", "foot-slip", "support-count", "com-outside", "low-margin", "leg-clearance", "loop-jump"].sort(),
+      [
+        "unreachable",
+        "joint-limit",
+        "joint-speed",
+        "pulse-range",
+        "ground-penetration",
+        "foot-slip",
+        "support-count",
+        "com-outside",
+        "low-margin",
+        "leg-clearance",
+        "loop-jump",
+      ].sort(),
     );
   });
 });
@@ -146,7 +177,18 @@ describe("no NaN anywhere, and plain JSON", () => {
   const cases: [string, DemoRobotFile, Record<string, unknown>][] = [
     ["tripod, everything out of reach (stride 900 mm)", DEMO_ROBOTS.six, { template: "tripod", strideMm: 900 }],
     ["wave lifting too many legs, turning hard", DEMO_ROBOTS.six, { template: "wave", dutyFactor: 0.3, strideMm: 80, turnDegPerCycle: 90 }],
-    ["trot on the spot, crouching", DEMO_ROBOTS.four, { template: "trot", strideMm: 0, bodyKeys: [{ t: 0, pose: { z: -40 } }, { t: 0.5, pose: { z: 60, pitch: 30 } }] }],
+    [
+      "trot on the spot, crouching",
+      DEMO_ROBOTS.four,
+      {
+        template: "trot",
+        strideMm: 0,
+        bodyKeys: [
+          { t: 0, pose: { z: -40 } },
+          { t: 0.5, pose: { z: 60, pitch: 30 } },
+        ],
+      },
+    ],
     ["eight legs, body far too high", DEMO_ROBOTS.eight, { template: "wave", bodyHeightMm: 400 }],
   ];
   for (const [name, file, params] of cases) {
@@ -155,7 +197,10 @@ describe("no NaN anywhere, and plain JSON", () => {
       const solved = solveSequence(robot, generateGait(robot, { template: "tripod", cycleMs: 1200, fps: 50, ...params } as never));
       const numbers = numbersIn(solved);
       expect(numbers.length).toBeGreaterThan(1000);
-      expect(numbers.filter((value) => !Number.isFinite(value)), "non-finite numbers").toEqual([]);
+      expect(
+        numbers.filter((value) => !Number.isFinite(value)),
+        "non-finite numbers",
+      ).toEqual([]);
       expect(JSON.parse(JSON.stringify(solved))).toEqual(solved);
       for (const frame of solved.frames) for (const legId of Object.keys(frame.legs)) expect(worldFoot(frame, legId).every(Number.isFinite)).toBe(true);
     });

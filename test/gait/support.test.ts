@@ -35,7 +35,15 @@ const GAITS: [string, DemoRobotFile, GaitParams][] = [
   [
     "eight-leg wave with a lean",
     DEMO_ROBOTS.eight,
-    { template: "wave", strideMm: 40, cycleMs: 3200, bodyKeys: [{ t: 0, pose: { roll: 0 } }, { t: 0.5, pose: { roll: 8, x: 10 } }] },
+    {
+      template: "wave",
+      strideMm: 40,
+      cycleMs: 3200,
+      bodyKeys: [
+        { t: 0, pose: { roll: 0 } },
+        { t: 0.5, pose: { roll: 8, x: 10 } },
+      ],
+    },
   ],
 ];
 
@@ -55,7 +63,9 @@ describe("support polygon against monotone-convex-hull-2d, margin against jsts (
           .filter((legId) => frame.legs[legId].contact === "stance")
           .map((legId) => worldFoot(frame, legId).slice(0, 2) as [number, number]);
         // The library lists the hull clockwise; ours runs counter-clockwise.
-        const expectedHull = monotoneConvexHull(feet).map((index) => feet[index]).reverse();
+        const expectedHull = monotoneConvexHull(feet)
+          .map((index) => feet[index])
+          .reverse();
         if (feet.length < 3) {
           expect(frame.marginMm, `frame ${frame.index}: ${feet.length} feet down, margin must be null`).toBeNull();
           continue;
@@ -114,7 +124,9 @@ describe("convexHullInto and stabilityMargin on seeded random point sets (monoto
       const ys = Float64Array.from(points, (p) => p[1]);
       const size = convexHullInto(xs, ys, count, order, hull);
       const ours = Array.from(hull.subarray(0, size), (index) => `${xs[index]},${ys[index]}`);
-      const reference = monotoneConvexHull(points).map((index) => `${points[index][0]},${points[index][1]}`).reverse();
+      const reference = monotoneConvexHull(points)
+        .map((index) => `${points[index][0]},${points[index][1]}`)
+        .reverse();
       if (reference.length >= 3) {
         const start = reference.indexOf(ours[0]);
         const rotated = [...reference.slice(start), ...reference.slice(0, start)];

@@ -8,7 +8,8 @@ import { database } from "~/platform/db.server";
 async function counts() {
   const db = database();
   const tally = async (
-    table: typeof users | typeof workspaces | typeof memberships | typeof robots | typeof robotRevisions | typeof gaits | typeof gaitVersions | typeof reviewEvents,
+    table:
+      typeof users | typeof workspaces | typeof memberships | typeof robots | typeof robotRevisions | typeof gaits | typeof gaitVersions | typeof reviewEvents,
   ) => (await db.select({ n: count() }).from(table))[0].n;
   return {
     workspaces: await tally(workspaces),

@@ -19,7 +19,10 @@ describe("demo robots", () => {
 
   it("have turned mounts, some zero offsets and one reversed servo per side", () => {
     for (const robot of robots) {
-      expect(robot.legs.every((leg) => leg.mount.yawDeg !== 0), `${robot.name}: every mount yaw non-zero`).toBe(true);
+      expect(
+        robot.legs.every((leg) => leg.mount.yawDeg !== 0),
+        `${robot.name}: every mount yaw non-zero`,
+      ).toBe(true);
       const offsets = robot.legs.flatMap((leg) => JOINT_NAMES.map((name) => leg.joints[name].zeroOffsetDeg)).filter((offset) => offset !== 0);
       expect(offsets.length, `${robot.name}: non-zero zero offsets`).toBeGreaterThan(0);
       for (const side of ["left", "right"] as const) {

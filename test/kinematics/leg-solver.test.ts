@@ -24,7 +24,16 @@ describe("createLegSolver: the hot path gives the public API's numbers", () => {
       const foot = new Float64Array(3);
       for (let sample = 0; sample < 5000 / 3; sample += 1) {
         const pose: BodyPose | undefined =
-          sample % 2 === 0 ? undefined : { x: random.between(-20, 20), y: random.between(-20, 20), z: random.between(-20, 20), roll: random.between(-10, 10), pitch: random.between(-10, 10), yaw: random.between(-20, 20) };
+          sample % 2 === 0
+            ? undefined
+            : {
+                x: random.between(-20, 20),
+                y: random.between(-20, 20),
+                z: random.between(-20, 20),
+                roll: random.between(-10, 10),
+                pitch: random.between(-10, 10),
+                yaw: random.between(-20, 20),
+              };
         solver.setBodyPose(pose);
         const legIndex = random.index(robot.legs.length);
         const leg = robot.legs[legIndex];
@@ -32,9 +41,13 @@ describe("createLegSolver: the hot path gives the public API's numbers", () => {
         const bits = solver.solve(legIndex, target[0], target[1], target[2], angles, legIndex * 3);
         const expected = solveLeg(robot, leg.id, target, pose);
         const got = { coxa: angles[legIndex * 3], femur: angles[legIndex * 3 + 1], tibia: angles[legIndex * 3 + 2] };
-        if (JSON.stringify(got) !== JSON.stringify(expected.angles)) mismatches.push(`${leg.id} angles ${JSON.stringify(got)} vs ${JSON.stringify(expected.angles)}`);
+        if (JSON.stringify(got) !== JSON.stringify(expected.angles))
+          mismatches.push(`${leg.id} angles ${JSON.stringify(got)} vs ${JSON.stringify(expected.angles)}`);
         if (((bits & SOLVE_UNREACHABLE) === 0) !== expected.reachable) mismatches.push(`${leg.id} reachable bits ${bits} vs ${expected.reachable}`);
-        const limitBits = expected.violations.reduce((sum, v) => sum | { coxa: SOLVE_COXA_LIMIT, femur: SOLVE_FEMUR_LIMIT, tibia: SOLVE_TIBIA_LIMIT }[v.joint], 0);
+        const limitBits = expected.violations.reduce(
+          (sum, v) => sum | { coxa: SOLVE_COXA_LIMIT, femur: SOLVE_FEMUR_LIMIT, tibia: SOLVE_TIBIA_LIMIT }[v.joint],
+          0,
+        );
         if ((bits & ~SOLVE_UNREACHABLE) !== limitBits) mismatches.push(`${leg.id} limit bits ${bits} vs ${JSON.stringify(expected.violations)}`);
         if (!expected.reachable && solver.reason(legIndex, target[0], target[1], target[2], bits) !== expected.reason) mismatches.push(`${leg.id} reason`);
         solver.forward(legIndex, got.coxa, got.femur, got.tibia, foot);
@@ -63,7 +76,14 @@ describe("createLegSolver: the hot path gives the public API's numbers", () => {
     for (let sample = 0; sample < 2000; sample += 1) {
       const legIndex = random.index(pier.legs.length);
       const leg = pier.legs[legIndex];
-      const bits = solver.solve(legIndex, leg.mount.x + random.between(-250, 250), leg.mount.y + random.between(-250, 250), random.between(-200, 50), angles, 0);
+      const bits = solver.solve(
+        legIndex,
+        leg.mount.x + random.between(-250, 250),
+        leg.mount.y + random.between(-250, 250),
+        random.between(-200, 50),
+        angles,
+        0,
+      );
       expect(solver.limits(legIndex, angles[0], angles[1], angles[2])).toBe(bits & (SOLVE_COXA_LIMIT | SOLVE_FEMUR_LIMIT | SOLVE_TIBIA_LIMIT));
     }
     const { coxa, femur, tibia } = pier.legs[0].joints;

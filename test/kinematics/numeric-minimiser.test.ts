@@ -28,7 +28,14 @@ describe("solveLeg against a general-purpose numeric minimiser (numeric.uncmin, 
     let sameAngles = 0;
     for (let index = 0; index < TARGETS; index += 1) {
       const { robot, leg } = legs[index % legs.length];
-      const pose = { x: random.between(-15, 15), y: random.between(-15, 15), z: random.between(-15, 15), roll: random.between(-10, 10), pitch: random.between(-10, 10), yaw: random.between(-15, 15) };
+      const pose = {
+        x: random.between(-15, 15),
+        y: random.between(-15, 15),
+        z: random.between(-15, 15),
+        roll: random.between(-10, 10),
+        pitch: random.between(-10, 10),
+        yaw: random.between(-15, 15),
+      };
       // Targets from the three.js reference FK, so neither side grades its own homework.
       const target = referenceFoot(leg, sampleJointSet(random, leg), pose);
 

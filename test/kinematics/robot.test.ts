@@ -20,34 +20,50 @@ describe("parseRobot: every problem as { path, message }", () => {
   });
 
   const cases: [string, (robot: Record<string, any>) => unknown, { path: string; message: string }[]][] = [
-    ["minDeg not below maxDeg", (r) => ((r.legs[2].joints.femur.minDeg = 40), (r.legs[2].joints.femur.maxDeg = 30), r), [
-      { path: "legs[2].joints.femur.minDeg", message: "must be below maxDeg (got 40 ≥ 30)" },
-    ]],
+    [
+      "minDeg not below maxDeg",
+      (r) => ((r.legs[2].joints.femur.minDeg = 40), (r.legs[2].joints.femur.maxDeg = 30), r),
+      [{ path: "legs[2].joints.femur.minDeg", message: "must be below maxDeg (got 40 ≥ 30)" }],
+    ],
     ["too few legs", (r) => ((r.legs = r.legs.slice(0, 3)), delete r.rest, r), [{ path: "legs", message: "must have 4 to 8 legs (got 3)" }]],
     ["a repeated leg id", (r) => ((r.legs[3].id = "LF"), delete r.rest, r), [{ path: "legs[3].id", message: 'must be unique (got "LF", also legs[0])' }]],
-    ["a repeated servo channel", (r) => ((r.legs[1].joints.tibia.servo.channel = 0), r), [
-      { path: "legs[1].joints.tibia.servo.channel", message: "must be unique across the robot (got 0, also legs[0].joints.coxa)" },
-    ]],
+    [
+      "a repeated servo channel",
+      (r) => ((r.legs[1].joints.tibia.servo.channel = 0), r),
+      [{ path: "legs[1].joints.tibia.servo.channel", message: "must be unique across the robot (got 0, also legs[0].joints.coxa)" }],
+    ],
     ["a rest pose for no leg", (r) => ((r.rest.XX = { coxa: 0, femur: 0, tibia: 0 }), r), [{ path: "rest.XX", message: 'must name a leg (no leg "XX")' }]],
     ["a rest pose missing a leg", (r) => (delete r.rest.LM, r), [{ path: "rest.LM", message: "is missing: the rest pose gives every leg" }]],
-    ["a rest angle outside the limits", (r) => ((r.rest.LM.tibia = -120), r), [{ path: "rest.LM.tibia", message: "must lie within the joint limits -85..80 (got -120)" }]],
+    [
+      "a rest angle outside the limits",
+      (r) => ((r.rest.LM.tibia = -120), r),
+      [{ path: "rest.LM.tibia", message: "must lie within the joint limits -85..80 (got -120)" }],
+    ],
     ["a missing field", (r) => (delete r.legs[0].femur, r), [{ path: "legs[0].femur", message: "is required" }]],
     ["a number given as text", (r) => ((r.legs[0].coxa = "30"), r), [{ path: "legs[0].coxa", message: 'must be a number (got "30")' }]],
     ["a zero link length", (r) => ((r.legs[0].tibia = 0), r), [{ path: "legs[0].tibia", message: "must be positive (got 0)" }]],
-    ["a misspelt field", (r) => ((r.legs[0].joints.coxa.zeroOffset = 1), r), [
-      { path: "legs[0].joints.coxa.zeroOffset", message: "is not a known field (check the spelling)" },
-    ]],
+    [
+      "a misspelt field",
+      (r) => ((r.legs[0].joints.coxa.zeroOffset = 1), r),
+      [{ path: "legs[0].joints.coxa.zeroOffset", message: "is not a known field (check the spelling)" }],
+    ],
     ["another format", (r) => ((r.format = "gaitloom.robot/2"), r), [{ path: "format", message: 'must be "gaitloom.robot/1" (got "gaitloom.robot/2")' }]],
     ["an unknown side", (r) => ((r.legs[0].side = "up"), r), [{ path: "legs[0].side", message: 'must be one of "left", "right" (got "up")' }]],
-    ["a centre pulse outside the range", (r) => ((r.legs[0].joints.coxa.servo.centerUs = 2600), r), [
-      { path: "legs[0].joints.coxa.servo.centerUs", message: "must lie within minUs..maxUs (got 2600 outside 500..2500)" },
-    ]],
-    ["minUs not below maxUs", (r) => ((r.legs[0].joints.coxa.servo.minUs = 2600), r), [
-      { path: "legs[0].joints.coxa.servo.minUs", message: "must be below maxUs (got 2600 ≥ 2500)" },
-    ]],
-    ["a fractional channel", (r) => ((r.legs[0].joints.coxa.servo.channel = 1.5), r), [
-      { path: "legs[0].joints.coxa.servo.channel", message: "must be a whole number (got 1.5)" },
-    ]],
+    [
+      "a centre pulse outside the range",
+      (r) => ((r.legs[0].joints.coxa.servo.centerUs = 2600), r),
+      [{ path: "legs[0].joints.coxa.servo.centerUs", message: "must lie within minUs..maxUs (got 2600 outside 500..2500)" }],
+    ],
+    [
+      "minUs not below maxUs",
+      (r) => ((r.legs[0].joints.coxa.servo.minUs = 2600), r),
+      [{ path: "legs[0].joints.coxa.servo.minUs", message: "must be below maxUs (got 2600 ≥ 2500)" }],
+    ],
+    [
+      "a fractional channel",
+      (r) => ((r.legs[0].joints.coxa.servo.channel = 1.5), r),
+      [{ path: "legs[0].joints.coxa.servo.channel", message: "must be a whole number (got 1.5)" }],
+    ],
     ["two legs in one row", (r) => ((r.legs[1].row = 0), r), [{ path: "legs[1].row", message: "row 0 on the left side is taken by LF" }]],
     ["a mount yaw past a half turn", (r) => ((r.legs[0].mount.yawDeg = 200), r), [{ path: "legs[0].mount.yawDeg", message: "must be at most 180 (got 200)" }]],
     ["a short centre of mass", (r) => ((r.body.com = [0, 0]), r), [{ path: "body.com", message: "must have at least 3 items (got 2)" }]],

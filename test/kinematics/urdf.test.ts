@@ -62,7 +62,9 @@ describe("importUrdf (URDF XML specification: joint origin xyz/rpy in m/rad, axi
     const jointMatrix = (joint: any, q: number) => {
       const [x, y, z] = numbers(joint.origin.xyz);
       const [roll, pitch, yaw] = numbers(joint.origin.rpy);
-      const matrix = new Matrix4().makeTranslation(x * 1000, y * 1000, z * 1000).multiply(new Matrix4().makeRotationFromEuler(new Euler(roll, pitch, yaw, "ZYX")));
+      const matrix = new Matrix4()
+        .makeTranslation(x * 1000, y * 1000, z * 1000)
+        .multiply(new Matrix4().makeRotationFromEuler(new Euler(roll, pitch, yaw, "ZYX")));
       if (joint.type === "revolute") matrix.multiply(new Matrix4().makeRotationAxis(new Vector3(...numbers(joint.axis.xyz)).normalize(), q));
       return matrix;
     };
@@ -115,59 +117,113 @@ describe("importUrdf (URDF XML specification: joint origin xyz/rpy in m/rad, axi
   });
 
   const refusals: [string, string, { path: string; message: string }][] = [
-    ["a prismatic joint", editJoint("fl_femur", (line) => line.replace('type="revolute"', 'type="prismatic"')), {
-      path: "joint.fl_femur.type",
-      message: 'joint "fl_femur" (femur) is prismatic: only revolute joints make a leg',
-    }],
-    ["a continuous joint", editJoint("fr_tibia", (line) => line.replace('type="revolute"', 'type="continuous"')), {
-      path: "joint.fr_tibia.type",
-      message: 'joint "fr_tibia" (tibia) is continuous: a leg joint must be revolute, with limits',
-    }],
-    ["a joint without limits", editJoint("rl_tibia", (line) => line.replace(/<limit [^>]*\/>/, "")), {
-      path: "joint.rl_tibia.limit",
-      message: 'joint "rl_tibia" (tibia) has no <limit lower upper>: a leg joint needs its limits',
-    }],
-    ["a coxa axis along x", editJoint("fl_coxa", (line) => line.replace('<axis xyz="0 0 1"/>', '<axis xyz="1 0 0"/>')), {
-      path: "joint.fl_coxa.axis",
-      message: 'coxa joint "fl_coxa": axis (1 0 0) is not along ±z',
-    }],
-    ["a femur axis along z", editJoint("rr_femur", (line) => line.replace('<axis xyz="0 -1 0"/>', '<axis xyz="0 0 1"/>')), {
-      path: "joint.rr_femur.axis",
-      message: 'femur joint "rr_femur": axis (0 0 1) is not along ±y',
-    }],
-    ["a leg of two joints", editJoint("fl_tibia", (line) => line.replace('type="revolute"', 'type="fixed"')), {
-      path: "joint.fl_femur",
-      message: 'the chain from coxa joint "fl_coxa" ends after 2 joints at "fl_femur": a leg has three revolute joints',
-    }],
-    ["a leg of four joints", editJoint("fr_foot", (line) => line.replace('type="fixed"', 'type="revolute"').replace("</joint>", '<axis xyz="0 1 0"/><limit lower="-1" upper="1"/></joint>')), {
-      path: "joint.fr_foot",
-      message: 'joint "fr_foot" follows tibia joint "fr_tibia": a leg has exactly three revolute joints',
-    }],
-    ["a leg without a foot tip", editJoint("rr_foot", () => "").replace('<link name="rr_foot_link"/>', ""), {
-      path: "joint.rr_tibia",
-      message: 'tibia joint "rr_tibia" has no fixed joint to a foot tip after it: the tibia is measured from the knee to the foot tip',
-    }],
-    ["a femur joint off the leg plane", editJoint("fl_femur", (line) => line.replace('xyz="0.032 0 -0.005"', 'xyz="0.032 0.003 -0.005"')), {
-      path: "joint.fl_femur.origin.xyz",
-      message: 'joint "fl_femur" sits 3 mm off the leg plane (origin y must be 0)',
-    }],
-    ["a tilted coxa", editJoint("fl_coxa", (line) => line.replace('rpy="0 0 0.6108652381980153"', 'rpy="0.1 0 0.6108652381980153"')), {
-      path: "joint.fl_coxa.origin.rpy",
-      message: 'coxa joint "fl_coxa": origin roll and pitch must be 0 (got 5.72957795131°, 0°): the coxa turns about the body\'s vertical',
-    }],
-    ["XML that is not well-formed", urdf.replace("</robot>", ""), {
-      path: "",
-      message: expect.stringMatching(/^not well-formed XML: .+ \(line \d+, column \d+\)$/) as unknown as string,
-    }],
+    [
+      "a prismatic joint",
+      editJoint("fl_femur", (line) => line.replace('type="revolute"', 'type="prismatic"')),
+      {
+        path: "joint.fl_femur.type",
+        message: 'joint "fl_femur" (femur) is prismatic: only revolute joints make a leg',
+      },
+    ],
+    [
+      "a continuous joint",
+      editJoint("fr_tibia", (line) => line.replace('type="revolute"', 'type="continuous"')),
+      {
+        path: "joint.fr_tibia.type",
+        message: 'joint "fr_tibia" (tibia) is continuous: a leg joint must be revolute, with limits',
+      },
+    ],
+    [
+      "a joint without limits",
+      editJoint("rl_tibia", (line) => line.replace(/<limit [^>]*\/>/, "")),
+      {
+        path: "joint.rl_tibia.limit",
+        message: 'joint "rl_tibia" (tibia) has no <limit lower upper>: a leg joint needs its limits',
+      },
+    ],
+    [
+      "a coxa axis along x",
+      editJoint("fl_coxa", (line) => line.replace('<axis xyz="0 0 1"/>', '<axis xyz="1 0 0"/>')),
+      {
+        path: "joint.fl_coxa.axis",
+        message: 'coxa joint "fl_coxa": axis (1 0 0) is not along ±z',
+      },
+    ],
+    [
+      "a femur axis along z",
+      editJoint("rr_femur", (line) => line.replace('<axis xyz="0 -1 0"/>', '<axis xyz="0 0 1"/>')),
+      {
+        path: "joint.rr_femur.axis",
+        message: 'femur joint "rr_femur": axis (0 0 1) is not along ±y',
+      },
+    ],
+    [
+      "a leg of two joints",
+      editJoint("fl_tibia", (line) => line.replace('type="revolute"', 'type="fixed"')),
+      {
+        path: "joint.fl_femur",
+        message: 'the chain from coxa joint "fl_coxa" ends after 2 joints at "fl_femur": a leg has three revolute joints',
+      },
+    ],
+    [
+      "a leg of four joints",
+      editJoint("fr_foot", (line) =>
+        line.replace('type="fixed"', 'type="revolute"').replace("</joint>", '<axis xyz="0 1 0"/><limit lower="-1" upper="1"/></joint>'),
+      ),
+      {
+        path: "joint.fr_foot",
+        message: 'joint "fr_foot" follows tibia joint "fr_tibia": a leg has exactly three revolute joints',
+      },
+    ],
+    [
+      "a leg without a foot tip",
+      editJoint("rr_foot", () => "").replace('<link name="rr_foot_link"/>', ""),
+      {
+        path: "joint.rr_tibia",
+        message: 'tibia joint "rr_tibia" has no fixed joint to a foot tip after it: the tibia is measured from the knee to the foot tip',
+      },
+    ],
+    [
+      "a femur joint off the leg plane",
+      editJoint("fl_femur", (line) => line.replace('xyz="0.032 0 -0.005"', 'xyz="0.032 0.003 -0.005"')),
+      {
+        path: "joint.fl_femur.origin.xyz",
+        message: 'joint "fl_femur" sits 3 mm off the leg plane (origin y must be 0)',
+      },
+    ],
+    [
+      "a tilted coxa",
+      editJoint("fl_coxa", (line) => line.replace('rpy="0 0 0.6108652381980153"', 'rpy="0.1 0 0.6108652381980153"')),
+      {
+        path: "joint.fl_coxa.origin.rpy",
+        message: 'coxa joint "fl_coxa": origin roll and pitch must be 0 (got 5.72957795131°, 0°): the coxa turns about the body\'s vertical',
+      },
+    ],
+    [
+      "XML that is not well-formed",
+      urdf.replace("</robot>", ""),
+      {
+        path: "",
+        message: expect.stringMatching(/^not well-formed XML: .+ \(line \d+, column \d+\)$/) as unknown as string,
+      },
+    ],
     ["a document without <robot>", "<model/>", { path: "", message: "no <robot> element: not a URDF document" }],
-    ["a link with two parents", urdf.replace('<child link="imu_link"/>', '<child link="fl_coxa_link"/>'), {
-      path: "joint.fl_coxa.child",
-      message: 'link "fl_coxa_link" is the child of two joints (one is "fl_coxa"): URDF links form a tree',
-    }],
-    ["two root links", urdf.replace('<link name="imu_link"/>', '<link name="imu_link"/><link name="stray_link"/>'), {
-      path: "link",
-      message: "expected one root link, found 2 (base_link, stray_link); pass baseLink",
-    }],
+    [
+      "a link with two parents",
+      urdf.replace('<child link="imu_link"/>', '<child link="fl_coxa_link"/>'),
+      {
+        path: "joint.fl_coxa.child",
+        message: 'link "fl_coxa_link" is the child of two joints (one is "fl_coxa"): URDF links form a tree',
+      },
+    ],
+    [
+      "two root links",
+      urdf.replace('<link name="imu_link"/>', '<link name="imu_link"/><link name="stray_link"/>'),
+      {
+        path: "link",
+        message: "expected one root link, found 2 (base_link, stray_link); pass baseLink",
+      },
+    ],
   ];
   for (const [what, xml, expected] of refusals) {
     it(`refuses ${what}, naming the joint`, () => {

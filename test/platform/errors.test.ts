@@ -38,7 +38,10 @@ describe("apiAction", () => {
   };
 
   test("a refusal whose code is its status's own keeps the API's code and its details as they are", async () => {
-    expect(await json(refuse(new ServiceError(404, "not-found", "No such gait.")))).toEqual({ status: 404, body: { error: { code: "not_found", message: "No such gait." } } });
+    expect(await json(refuse(new ServiceError(404, "not-found", "No such gait.")))).toEqual({
+      status: 404,
+      body: { error: { code: "not_found", message: "No such gait." } },
+    });
     expect(await json(refuse(new ServiceError(400, "bad-request", "Bad rate.", { parameter: "rate" })))).toEqual({
       status: 400,
       body: { error: { code: "bad_request", message: "Bad rate.", details: { parameter: "rate" } } },
@@ -47,7 +50,10 @@ describe("apiAction", () => {
 
   test("a more specific code goes into details.reason; the API's code stays the status's", async () => {
     const answer = await json(refuse(new ServiceError(409, "revision-unparseable", "Robot revision 3 no longer parses.", { robotRevision: 3 })));
-    expect(answer).toEqual({ status: 409, body: { error: { code: "conflict", message: "Robot revision 3 no longer parses.", details: { reason: "revision-unparseable", robotRevision: 3 } } } });
+    expect(answer).toEqual({
+      status: 409,
+      body: { error: { code: "conflict", message: "Robot revision 3 no longer parses.", details: { reason: "revision-unparseable", robotRevision: 3 } } },
+    });
   });
 
   test("an issue list sent as the details stays a list", async () => {
@@ -89,7 +95,10 @@ describe("pageGuard and attempt", () => {
 
 describe("isUniqueViolation", () => {
   // postgres.js errors carry SQLSTATE as `code` and the constraint as `constraint_name`; drizzle wraps them as `cause`.
-  const driverError = Object.assign(new Error("duplicate key value violates unique constraint"), { code: "23505", constraint_name: "calibration_profiles_robot_name" });
+  const driverError = Object.assign(new Error("duplicate key value violates unique constraint"), {
+    code: "23505",
+    constraint_name: "calibration_profiles_robot_name",
+  });
   const wrapped = new Error("Failed query: insert into calibration_profiles …", { cause: driverError });
 
   test("finds SQLSTATE 23505 on the error or anywhere down its cause chain", () => {

@@ -14,14 +14,21 @@ beforeAll(async () => {
     seen.push({ path: request.url ?? "", authorization: request.headers.authorization, body });
     const code = new URLSearchParams(body).get("code");
     response.writeHead(200, { "Content-Type": "application/json" });
-    response.end(JSON.stringify(code === "good" ? { access_token: "tok-1", token_type: "bearer", scope: "" } : { error: "bad_verification_code", error_description: "The code is wrong." }));
+    response.end(
+      JSON.stringify(
+        code === "good"
+          ? { access_token: "tok-1", token_type: "bearer", scope: "" }
+          : { error: "bad_verification_code", error_description: "The code is wrong." },
+      ),
+    );
   });
   await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
   base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
 });
 afterAll(() => new Promise<void>((resolve) => server.close(() => resolve())));
 
-const client = () => new GitHubAtBaseUrl({ clientId: "id 1", clientSecret: "s:cret", redirectURI: "http://127.0.0.1:3000/auth/github/callback", oauthUrl: base });
+const client = () =>
+  new GitHubAtBaseUrl({ clientId: "id 1", clientSecret: "s:cret", redirectURI: "http://127.0.0.1:3000/auth/github/callback", oauthUrl: base });
 
 describe("the GitHub strategy's endpoint override", () => {
   test("the authorize URL keeps GitHub's path and parameters on the configured host", () => {

@@ -32,7 +32,12 @@ function Options({ versions }: { versions: readonly PickableVersion[] }) {
 export function ComparePicker({ versions, a, b }: { versions: readonly PickableVersion[]; a: string | null; b: string | null }) {
   const select = "w-full rounded-md border border-line bg-canvas px-2 py-1.5 text-sm";
   return (
-    <Form method="get" className="grid items-end gap-3 rounded-lg border border-line bg-surface p-3 sm:grid-cols-[1fr_1fr_auto]" aria-label="Choose versions to compare" key={`${a}-${b}`}>
+    <Form
+      method="get"
+      className="grid items-end gap-3 rounded-lg border border-line bg-surface p-3 sm:grid-cols-[1fr_1fr_auto]"
+      aria-label="Choose versions to compare"
+      key={`${a}-${b}`}
+    >
       <label className="space-y-1 text-sm">
         <span className="font-medium">A</span>
         <select name="a" defaultValue={a ?? ""} required className={select}>

@@ -19,7 +19,8 @@ function SideView({ side, fraction }: { side: PlaybackSide; fraction: number }) 
       <h3 className="flex items-baseline justify-between gap-2 text-sm font-semibold">
         <span>{side.label}</span>
         <span className="font-mono text-xs font-normal text-ink-muted tabular-nums">
-          frame {index} / {side.playback.frames.length} · margin {frame.marginMm === null ? "—" : `${frame.marginMm.toFixed(1)} mm`} · down {frame.stance.join(" ") || "none"}
+          frame {index} / {side.playback.frames.length} · margin {frame.marginMm === null ? "—" : `${frame.marginMm.toFixed(1)} mm`} · down{" "}
+          {frame.stance.join(" ") || "none"}
         </span>
       </h3>
       <RobotViews robot={side.robot} angles={frame.angles} bodyPose={bodyPose} bodyHeightMm={frame.heightMm} showReach={false} compact />
@@ -64,13 +65,27 @@ export function ComparePlayback({ a, b, onFraction }: { a: PlaybackSide; b: Play
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap items-center gap-3 rounded-lg border border-line bg-surface px-3 py-2 text-sm" role="group" aria-label="Playback">
-        <button type="button" onClick={() => setPlaying((value) => !value)} className="min-w-20 rounded-md bg-accent px-3 py-1 font-medium text-on-accent hover:bg-accent-strong">
+        <button
+          type="button"
+          onClick={() => setPlaying((value) => !value)}
+          className="min-w-20 rounded-md bg-accent px-3 py-1 font-medium text-on-accent hover:bg-accent-strong"
+        >
           {playing ? "Pause" : "Play"}
         </button>
-        <button type="button" aria-label="Step back one frame" onClick={() => setTimeMs((value) => Math.max(0, value - stepMs))} className="rounded-md border border-line px-2 py-1 hover:bg-sunken">
+        <button
+          type="button"
+          aria-label="Step back one frame"
+          onClick={() => setTimeMs((value) => Math.max(0, value - stepMs))}
+          className="rounded-md border border-line px-2 py-1 hover:bg-sunken"
+        >
           ◀︎
         </button>
-        <button type="button" aria-label="Step forward one frame" onClick={() => setTimeMs((value) => value + stepMs)} className="rounded-md border border-line px-2 py-1 hover:bg-sunken">
+        <button
+          type="button"
+          aria-label="Step forward one frame"
+          onClick={() => setTimeMs((value) => value + stepMs)}
+          className="rounded-md border border-line px-2 py-1 hover:bg-sunken"
+        >
           ▶︎
         </button>
         <label className="flex min-w-48 flex-1 items-center gap-2">

@@ -19,8 +19,13 @@ const Plot = memo(function Plot({ overlay }: { overlay: JointOverlay }) {
       low -= 1;
       high += 1;
     }
-    const x = scaleLinear().domain([0, 1]).range([PAD.left, WIDTH - PAD.right]);
-    const y = scaleLinear().domain([low, high]).nice(3).range([HEIGHT - PAD.bottom, PAD.top]);
+    const x = scaleLinear()
+      .domain([0, 1])
+      .range([PAD.left, WIDTH - PAD.right]);
+    const y = scaleLinear()
+      .domain([low, high])
+      .nice(3)
+      .range([HEIGHT - PAD.bottom, PAD.top]);
     const indices = overlay.fractions.map((_, index) => index);
     const lineOf = (series: number[]) =>
       line<number>()
@@ -91,7 +96,12 @@ export function JointOverlayPlots({ overlays, fraction, labels }: { overlays: re
                   </span>
                   <span className="text-ink-muted tabular-nums">max Δ {overlay.maxDifferenceDeg.toFixed(1)}°</span>
                 </figcaption>
-                <svg viewBox={`0 0 ${WIDTH} ${HEIGHT}`} className="h-auto w-full" role="img" aria-label={`${overlay.legId} ${overlay.joint}, servo degrees over the cycle: A and B differ by up to ${overlay.maxDifferenceDeg.toFixed(1)}°`}>
+                <svg
+                  viewBox={`0 0 ${WIDTH} ${HEIGHT}`}
+                  className="h-auto w-full"
+                  role="img"
+                  aria-label={`${overlay.legId} ${overlay.joint}, servo degrees over the cycle: A and B differ by up to ${overlay.maxDifferenceDeg.toFixed(1)}°`}
+                >
                   <Plot overlay={overlay} />
                   <line x1={playheadX} x2={playheadX} y1={PAD.top} y2={HEIGHT - PAD.bottom} className="stroke-ink-muted" strokeWidth={1} />
                 </svg>

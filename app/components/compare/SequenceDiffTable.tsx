@@ -88,7 +88,9 @@ export function SequenceDiffTable({ diff }: { diff: SequenceDiff }) {
                       <tr key={`${track.track}-${index}`} className="border-b border-line align-top last:border-0" data-status={key.status}>
                         <td className="px-3 py-1.5 font-mono">
                           {track.track}
-                          {track.presence !== "both" ? <span className="ml-1 font-sans text-xs text-ink-muted">({track.presence === "only-a" ? "only in A" : "only in B"})</span> : null}
+                          {track.presence !== "both" ? (
+                            <span className="ml-1 font-sans text-xs text-ink-muted">({track.presence === "only-a" ? "only in A" : "only in B"})</span>
+                          ) : null}
                         </td>
                         <td className="px-3 py-1.5 whitespace-nowrap">
                           <span className={`inline-flex items-center gap-1 rounded px-1.5 py-0.5 text-xs ${look.className}`}>
@@ -96,7 +98,9 @@ export function SequenceDiffTable({ diff }: { diff: SequenceDiff }) {
                             {look.label}
                           </span>
                         </td>
-                        <td className="px-3 py-1.5">{key.status === "changed" ? describeKeyChanges(key.changes) : key.status === "added" ? "new key" : "key taken out"}</td>
+                        <td className="px-3 py-1.5">
+                          {key.status === "changed" ? describeKeyChanges(key.changes) : key.status === "added" ? "new key" : "key taken out"}
+                        </td>
                         <td className="px-3 py-1.5 font-mono text-xs tabular-nums">{keyText(key.a)}</td>
                         <td className="px-3 py-1.5 font-mono text-xs tabular-nums">{keyText(key.b)}</td>
                       </tr>

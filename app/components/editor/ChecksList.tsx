@@ -16,7 +16,8 @@ const EMPTY: Flag[] = [];
 type Source = "server" | "preview";
 
 const sameFlags = (a: readonly Flag[], b: readonly Flag[]) =>
-  a.length === b.length && a.every((flag, index) => flag.frame === b[index].frame && flag.kind === b[index].kind && flag.leg === b[index].leg && flag.joint === b[index].joint);
+  a.length === b.length &&
+  a.every((flag, index) => flag.frame === b[index].frame && flag.kind === b[index].kind && flag.leg === b[index].leg && flag.joint === b[index].joint);
 
 export function ChecksList({ reference }: { reference: ReturnType<typeof useServerReference> }) {
   const preview = useEditor((state) => state.preview);
@@ -64,10 +65,15 @@ export function ChecksList({ reference }: { reference: ReturnType<typeof useServ
         ) : null}
         <p className="numeric mt-1 text-sm" data-testid="checks-count">
           {source === "server" && serverFlags ? "Server: " : "Preview: "}
-          {runs.length === 0 ? "no flags — every frame passes every check." : `${errors} error and ${shown.length - errors} warning frames in ${runs.length} runs.`}
+          {runs.length === 0
+            ? "no flags — every frame passes every check."
+            : `${errors} error and ${shown.length - errors} warning frames in ${runs.length} runs.`}
         </p>
         {runs.length > 0 ? (
-          <ul className="mt-2 max-h-72 divide-y divide-line overflow-y-auto rounded border border-line" aria-label={`Flags (${source === "server" && serverFlags ? "server reference" : "browser preview"})`}>
+          <ul
+            className="mt-2 max-h-72 divide-y divide-line overflow-y-auto rounded border border-line"
+            aria-label={`Flags (${source === "server" && serverFlags ? "server reference" : "browser preview"})`}
+          >
             {visible.map((run) => (
               <RunItem key={run.id} run={run} />
             ))}
@@ -106,8 +112,8 @@ function RunItem({ run }: { run: FlagRun }) {
         </span>
         <span className="min-w-0 flex-1">
           <span className="font-medium">
-            <span className={error ? "text-danger" : "text-warning"}>{error ? "Error" : "Warning"}</span> · {FLAG_LABELS[run.kind]} · <span className="font-mono">{runPlace(run)}</span> ·{" "}
-            <span className="numeric">{framesText(run)}</span>
+            <span className={error ? "text-danger" : "text-warning"}>{error ? "Error" : "Warning"}</span> · {FLAG_LABELS[run.kind]} ·{" "}
+            <span className="font-mono">{runPlace(run)}</span> · <span className="numeric">{framesText(run)}</span>
           </span>
           <span className="block truncate text-xs text-ink-muted">{run.message}</span>
         </span>

@@ -41,7 +41,10 @@ export function ConflictBanner({ gaitId, gaitName, robotRevision }: { gaitId: st
         return;
       }
       const state = store.getState();
-      state.replaceSequence(body.sequence, `Loaded revision ${body.revision}${body.updatedBy ? ` by ${body.updatedBy.name}` : ""}. Undo brings your version back.`);
+      state.replaceSequence(
+        body.sequence,
+        `Loaded revision ${body.revision}${body.updatedBy ? ` by ${body.updatedBy.name}` : ""}. Undo brings your version back.`,
+      );
       const after = store.getState();
       after.markSaved(after.sequenceVersion, body.revision);
       after.adoptRevision(body.revision);
@@ -64,9 +67,7 @@ export function ConflictBanner({ gaitId, gaitName, robotRevision }: { gaitId: st
       <h2 id="conflict-title" className="font-semibold text-warning">
         <span aria-hidden>◆ </span>Someone else saved this draft
       </h2>
-      <p className="mt-1 text-sm">
-        {conflict.message} Your changes are still here and in this browser; choose what to do with them.
-      </p>
+      <p className="mt-1 text-sm">{conflict.message} Your changes are still here and in this browser; choose what to do with them.</p>
       <div className="mt-2 flex flex-wrap items-end gap-2">
         <button type="button" className={action} disabled={busy} onClick={reloadTheirs}>
           Reload theirs (revision {conflict.currentRevision})
@@ -74,7 +75,11 @@ export function ConflictBanner({ gaitId, gaitName, robotRevision }: { gaitId: st
         <span className="text-sm text-ink-muted">or</span>
         <label className="flex flex-col text-xs">
           Name of the copy
-          <input value={copyName} onChange={(event) => setCopyName(event.currentTarget.value)} className="rounded border border-line bg-surface px-2 py-1 text-sm" />
+          <input
+            value={copyName}
+            onChange={(event) => setCopyName(event.currentTarget.value)}
+            className="rounded border border-line bg-surface px-2 py-1 text-sm"
+          />
         </label>
         <button type="button" className={action} disabled={copy.state !== "idle" || copyName.trim() === ""} onClick={keepMine}>
           Keep mine as a copy
@@ -105,7 +110,9 @@ export function RestoreOffer({ gaitId, serverSequence, serverUpdatedAt }: { gait
       </h2>
       <p className="mt-1 text-sm">
         This browser kept edits from {formatLocalTime(local.savedAt)} (on draft revision {local.baseRevision}) that never reached the server.{" "}
-        {newer ? "They are newer than the saved draft." : `The saved draft changed after them (${formatLocalTime(serverUpdatedAt)}); restoring replaces it, and Undo brings it back.`}
+        {newer
+          ? "They are newer than the saved draft."
+          : `The saved draft changed after them (${formatLocalTime(serverUpdatedAt)}); restoring replaces it, and Undo brings it back.`}
       </p>
       <div className="mt-2 flex gap-2">
         <button

@@ -33,7 +33,11 @@ function SaveIndicator() {
   const tone = status === "saved" || status === "read-only" ? "text-ink-muted" : status === "pending" || status === "saving" ? "text-ink" : "text-danger";
   return (
     <p role="status" className={`text-sm ${tone}`} data-testid="save-status" data-status={status} title={message ?? undefined}>
-      {status === "saved" ? <span aria-hidden>✓ </span> : status === "offline" || status === "conflict" || status === "invalid" ? <span aria-hidden>▲ </span> : null}
+      {status === "saved" ? (
+        <span aria-hidden>✓ </span>
+      ) : status === "offline" || status === "conflict" || status === "invalid" ? (
+        <span aria-hidden>▲ </span>
+      ) : null}
       {STATUS_WORDS[status]}
       {status === "saved" || status === "read-only" ? ` · draft revision ${revision}` : ""}
       {message && status !== "conflict" ? <span className="block max-w-md text-xs">{message}</span> : null}
@@ -99,7 +103,11 @@ function CommitVersion({ gaitId }: { gaitId: string }) {
       >
         Commit version
       </button>
-      <dialog ref={dialog} aria-labelledby="commit-title" className="m-auto w-[28rem] max-w-[95vw] rounded-lg border border-line bg-surface p-5 text-ink shadow-xl backdrop:bg-ink/40">
+      <dialog
+        ref={dialog}
+        aria-labelledby="commit-title"
+        className="m-auto w-[28rem] max-w-[95vw] rounded-lg border border-line bg-surface p-5 text-ink shadow-xl backdrop:bg-ink/40"
+      >
         <Form method="post" action={`/gaits/${gaitId}`} onSubmit={() => dialog.current?.close()}>
           <h2 id="commit-title" className="text-lg font-semibold">
             Commit the draft as a version
@@ -108,12 +116,24 @@ function CommitVersion({ gaitId }: { gaitId: string }) {
           <label htmlFor="commit-message" className="mt-3 block text-sm font-medium">
             What changed
           </label>
-          <textarea id="commit-message" name="message" required minLength={1} maxLength={500} rows={3} className="mt-1 w-full rounded-md border border-line bg-surface px-2 py-1" />
+          <textarea
+            id="commit-message"
+            name="message"
+            required
+            minLength={1}
+            maxLength={500}
+            rows={3}
+            className="mt-1 w-full rounded-md border border-line bg-surface px-2 py-1"
+          />
           <div className="mt-4 flex justify-end gap-2">
             <button type="button" className={button} onClick={() => dialog.current?.close()}>
               Cancel
             </button>
-            <button type="submit" disabled={navigation.state !== "idle"} className="rounded-md bg-accent px-3 py-1.5 font-medium text-on-accent hover:bg-accent-strong">
+            <button
+              type="submit"
+              disabled={navigation.state !== "idle"}
+              className="rounded-md bg-accent px-3 py-1.5 font-medium text-on-accent hover:bg-accent-strong"
+            >
               Commit version
             </button>
           </div>
@@ -129,7 +149,11 @@ export function EditorHeader({ gait, robotRevision, newestRobotRevision, canComm
       <div className="mr-auto">
         <h1 className="text-xl font-semibold tracking-tight">{gait.name}</h1>
         <p className="text-sm text-ink-muted">
-          Draft on <Link to={`/robots/${gait.robotId}`} className="underline underline-offset-2 hover:text-ink">{gait.robotName}</Link>, robot revision {robotRevision}
+          Draft on{" "}
+          <Link to={`/robots/${gait.robotId}`} className="underline underline-offset-2 hover:text-ink">
+            {gait.robotName}
+          </Link>
+          , robot revision {robotRevision}
         </p>
       </div>
       <MoveToNewestRobot from={robotRevision} to={newestRobotRevision} />

@@ -48,7 +48,12 @@ export function EditorScreen(props: EditorScreenProps) {
 function Announcer() {
   const notice = useEditor((state) => state.notice);
   return (
-    <p role="status" aria-live="polite" data-testid="editor-notice" className={`min-h-5 text-sm ${notice?.tone === "error" ? "text-danger" : "text-ink-muted"}`}>
+    <p
+      role="status"
+      aria-live="polite"
+      data-testid="editor-notice"
+      className={`min-h-5 text-sm ${notice?.tone === "error" ? "text-danger" : "text-ink-muted"}`}
+    >
       {notice ? (
         <span key={notice.id}>
           {notice.tone === "error" ? <span aria-hidden>▲ </span> : null}
@@ -68,7 +73,13 @@ function EditorLayout(props: EditorScreenProps) {
   const reference = useServerReference(props.gait.id);
   return (
     <div className="space-y-3" data-testid="gait-editor">
-      <EditorHeader gait={props.gait} robotRevision={props.robotRevision} newestRobotRevision={props.newestRobotRevision} canCommit={props.canCommit} onHelp={openHelp} />
+      <EditorHeader
+        gait={props.gait}
+        robotRevision={props.robotRevision}
+        newestRobotRevision={props.newestRobotRevision}
+        canCommit={props.canCommit}
+        onHelp={openHelp}
+      />
       {props.canEdit ? null : (
         <p className="rounded-md bg-sunken px-3 py-2 text-sm">
           <span aria-hidden>ⓘ </span>You can look at every frame and its checks; your role cannot change gaits.

@@ -88,15 +88,21 @@ export function GeneratorPanel() {
         </div>
         <p className="text-xs text-ink-muted">A change writes new keys from the template; hand edits are asked about first, and Undo brings them back.</p>
       </div>
-      <dialog ref={confirm} aria-labelledby="regenerate-title" className="m-auto w-[28rem] max-w-[95vw] rounded-lg border border-line bg-surface p-5 text-ink shadow-xl backdrop:bg-ink/40" onClose={() => {
+      <dialog
+        ref={confirm}
+        aria-labelledby="regenerate-title"
+        className="m-auto w-[28rem] max-w-[95vw] rounded-lg border border-line bg-surface p-5 text-ink shadow-xl backdrop:bg-ink/40"
+        onClose={() => {
           setPending(null);
           setFieldsKey((value) => value + 1);
-        }}>
+        }}
+      >
         <h2 id="regenerate-title" className="text-lg font-semibold">
           Replace the hand-edited keys?
         </h2>
         <p className="mt-2 text-sm">
-          The keys differ from what the {params.template} template writes. Regenerating with the new parameters replaces every leg key (body keys stay). You can undo it.
+          The keys differ from what the {params.template} template writes. Regenerating with the new parameters replaces every leg key (body keys stay). You can
+          undo it.
         </p>
         <form method="dialog" className="mt-4 flex justify-end gap-2">
           <button type="submit" value="keep" className="rounded-md border border-line px-3 py-1.5 hover:bg-sunken">

@@ -4,7 +4,11 @@ import { SHORTCUTS } from "~/features/gaits/editor/shortcuts";
 
 export const HelpDialog = forwardRef<HTMLDialogElement>(function HelpDialog(_, ref) {
   return (
-    <dialog ref={ref} aria-labelledby="shortcuts-title" className="m-auto w-[36rem] max-w-[95vw] rounded-lg border border-line bg-surface p-0 text-ink shadow-xl backdrop:bg-ink/40">
+    <dialog
+      ref={ref}
+      aria-labelledby="shortcuts-title"
+      className="m-auto w-[36rem] max-w-[95vw] rounded-lg border border-line bg-surface p-0 text-ink shadow-xl backdrop:bg-ink/40"
+    >
       <div className="p-5">
         <h2 id="shortcuts-title" className="text-lg font-semibold">
           Keyboard shortcuts

@@ -39,7 +39,12 @@ export function PlaybackBar() {
       </button>
       <label className="flex items-center gap-1 text-sm">
         <span>Speed</span>
-        <select value={rate} onChange={(event) => actions.setPlaybackRate(Number(event.currentTarget.value))} className="rounded-md border border-line bg-surface px-1 py-1 text-sm" aria-label="Playback speed">
+        <select
+          value={rate}
+          onChange={(event) => actions.setPlaybackRate(Number(event.currentTarget.value))}
+          className="rounded-md border border-line bg-surface px-1 py-1 text-sm"
+          aria-label="Playback speed"
+        >
           {PLAYBACK_RATES.map((value) => (
             <option key={value} value={value}>
               {value}×

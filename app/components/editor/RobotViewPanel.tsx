@@ -15,7 +15,11 @@ export const TOP_VIEW_PX = 360;
 function describeFrame(frame: number, geometry: FrameGeometry): string {
   const down = geometry.stanceLegs.length ? geometry.stanceLegs.join(", ") : "none";
   const margin =
-    geometry.marginMm === null ? "no support polygon (fewer than three feet down)" : geometry.marginMm >= 0 ? `stability margin ${geometry.marginMm.toFixed(1)} mm` : `CoM ${(-geometry.marginMm).toFixed(1)} mm outside the support polygon`;
+    geometry.marginMm === null
+      ? "no support polygon (fewer than three feet down)"
+      : geometry.marginMm >= 0
+        ? `stability margin ${geometry.marginMm.toFixed(1)} mm`
+        : `CoM ${(-geometry.marginMm).toFixed(1)} mm outside the support polygon`;
   const trouble = geometry.postures.filter((posture) => !posture.reachable || posture.violations.length > 0).map((posture) => posture.legId);
   return `Frame ${frame}. Feet down: ${down}; ${margin}.${trouble.length ? ` Out of reach or past a limit: ${trouble.join(", ")}.` : ""}`;
 }
@@ -43,15 +47,31 @@ export function RobotViewPanel() {
       </header>
       <div className="grid gap-2 p-2">
         <figure className="relative">
-          <TopView robot={robot} postures={geometry?.postures ?? []} rings={rings} highlightLegId={focusLegId} label={`Top view of ${robot.name} at the playhead`} description={description} />
+          <TopView
+            robot={robot}
+            postures={geometry?.postures ?? []}
+            rings={rings}
+            highlightLegId={focusLegId}
+            label={`Top view of ${robot.name} at the playhead`}
+            description={description}
+          />
           <svg viewBox={`0 0 ${TOP_VIEW_PX} ${TOP_VIEW_PX}`} className="pointer-events-none absolute inset-0 h-full w-full">
             {geometry ? <SupportLayer geometry={geometry} view={view} /> : null}
             <FootHandle view={view} />
           </svg>
-          <figcaption className="px-1 text-xs text-ink-muted">From above, forward up. Shaded: support polygon of the feet down; dashed circle: the stability margin round the CoM.</figcaption>
+          <figcaption className="px-1 text-xs text-ink-muted">
+            From above, forward up. Shaded: support polygon of the feet down; dashed circle: the stability margin round the CoM.
+          </figcaption>
         </figure>
         <figure>
-          <SideView robot={robot} postures={geometry?.postures ?? []} bodyHeightMm={geometry?.bodyHeightMm ?? bodyHeightMm} highlightLegId={focusLegId} label={`Side view of ${robot.name} at the playhead, from the right`} description={description} />
+          <SideView
+            robot={robot}
+            postures={geometry?.postures ?? []}
+            bodyHeightMm={geometry?.bodyHeightMm ?? bodyHeightMm}
+            highlightLegId={focusLegId}
+            label={`Side view of ${robot.name} at the playhead, from the right`}
+            description={description}
+          />
           <figcaption className="px-1 text-xs text-ink-muted">From the right, forward to the right; far-side legs dashed.</figcaption>
         </figure>
       </div>
@@ -70,11 +90,23 @@ function SupportLayer({ geometry, view }: { geometry: FrameGeometry; view: Retur
   const [comX, comY] = view.toScreen(geometry.com[0], geometry.com[1]);
   const polygon = geometry.support.map(([x, y]) => view.toScreen(x, y).join(",")).join(" ");
   const margin = geometry.marginMm;
-  const tone = margin === null ? "stroke-warning" : margin < 0 ? "stroke-danger" : margin < SOLVE_DEFAULTS.marginThresholdMm ? "stroke-warning" : "stroke-accent";
+  const tone =
+    margin === null ? "stroke-warning" : margin < 0 ? "stroke-danger" : margin < SOLVE_DEFAULTS.marginThresholdMm ? "stroke-warning" : "stroke-accent";
   return (
     <g data-testid="support-layer">
-      {polygon ? <polygon points={polygon} className="fill-accent stroke-accent" fillOpacity={0.14} strokeWidth={1.5} strokeLinejoin="round" data-support={geometry.support.length} /> : null}
-      {margin !== null ? <circle cx={comX} cy={comY} r={Math.max(1, Math.abs(margin) * view.pxPerMm)} className={`${tone} fill-none`} strokeDasharray="4 3" strokeWidth={1.5} /> : null}
+      {polygon ? (
+        <polygon
+          points={polygon}
+          className="fill-accent stroke-accent"
+          fillOpacity={0.14}
+          strokeWidth={1.5}
+          strokeLinejoin="round"
+          data-support={geometry.support.length}
+        />
+      ) : null}
+      {margin !== null ? (
+        <circle cx={comX} cy={comY} r={Math.max(1, Math.abs(margin) * view.pxPerMm)} className={`${tone} fill-none`} strokeDasharray="4 3" strokeWidth={1.5} />
+      ) : null}
       <circle cx={comX} cy={comY} r={3} className="fill-ink" />
     </g>
   );

@@ -43,7 +43,13 @@ export function frameGeometry(robot: Robot, solved: SolvedSequence, index: numbe
     const solvedLeg = frame.legs[leg.id];
     if (!solvedLeg) return;
     if (solvedLeg.contact === "stance") stanceLegs.push(leg.id);
-    postures.push({ legId: leg.id, index: legIndex, points: forwardLegJoints(robot, leg.id, solvedLeg.angles), reachable: solvedLeg.reachable, violations: violations.get(leg.id) ?? [] });
+    postures.push({
+      legId: leg.id,
+      index: legIndex,
+      points: forwardLegJoints(robot, leg.id, solvedLeg.angles),
+      reachable: solvedLeg.reachable,
+      violations: violations.get(leg.id) ?? [],
+    });
   });
   // World → body frame, on the ground plane: undo the body's position and heading.
   const cos = Math.cos(-frame.body.yaw * RAD_PER_DEG);

@@ -60,12 +60,25 @@ export function useAutosave(gaitId: string) {
           });
         } else if (response.status === 422 || response.status === 403 || response.status === 404) {
           const issues = Array.isArray(body?.error?.details) ? (body!.error!.details as { path: string; message: string }[]) : [];
-          after.markInvalid(`${body?.error?.message ?? `The server refused the draft (${response.status}).`}${issues.length ? ` ${issues.slice(0, 3).map((issue) => `${issue.path}: ${issue.message}`).join("; ")}` : ""} It is kept in this browser.`);
+          after.markInvalid(
+            `${body?.error?.message ?? `The server refused the draft (${response.status}).`}${
+              issues.length
+                ? ` ${issues
+                    .slice(0, 3)
+                    .map((issue) => `${issue.path}: ${issue.message}`)
+                    .join("; ")}`
+                : ""
+            } It is kept in this browser.`,
+          );
         } else {
           throw new Error(body?.error?.message ?? `The server answered ${response.status}.`);
         }
       } catch (error) {
-        store.getState().markOffline(`Not saved yet (${error instanceof Error ? error.message : "no connection"}); kept in this browser and tried again in ${Math.round(retryMs / 1000)} s.`);
+        store
+          .getState()
+          .markOffline(
+            `Not saved yet (${error instanceof Error ? error.message : "no connection"}); kept in this browser and tried again in ${Math.round(retryMs / 1000)} s.`,
+          );
         schedule(retryMs);
         retryMs = Math.min(RETRY_MOST_MS, retryMs * 2);
       } finally {
@@ -89,7 +102,8 @@ export function useAutosave(gaitId: string) {
       // Offline, the request would fail too; in a conflict it would be refused. The local copy has it either way.
       if (state.sequenceVersion === state.savedVersion || state.saveStatus === "conflict" || state.saveStatus === "offline") return;
       const body = JSON.stringify({ sequence: state.sequence, baseRevision: state.revision });
-      if (body.length < 60_000) fetch(draftUrl(gaitId), { method: "PUT", headers: { "Content-Type": "application/json" }, body, keepalive: true }).catch(() => {});
+      if (body.length < 60_000)
+        fetch(draftUrl(gaitId), { method: "PUT", headers: { "Content-Type": "application/json" }, body, keepalive: true }).catch(() => {});
     };
     window.addEventListener("pagehide", onHide);
     return () => {

@@ -37,16 +37,35 @@ function Issues({ id, messages }: { id: string; messages: string[] }) {
   );
 }
 
-export function ProfileEditor({ robot, profile, readOnly, issues, busy }: { robot: EditorRobot; profile: EditorProfile | null; readOnly: boolean; issues: ProfileIssues; busy: boolean }) {
+export function ProfileEditor({
+  robot,
+  profile,
+  readOnly,
+  issues,
+  busy,
+}: {
+  robot: EditorRobot;
+  profile: EditorProfile | null;
+  readOnly: boolean;
+  issues: ProfileIssues;
+  busy: boolean;
+}) {
   const at = (path: string) => issues.filter((issue) => issue.path === path).map((issue) => issue.message);
   const known = new Set<string>(["name", "description"]);
-  for (const leg of robot.legs) for (const { joint } of leg.joints) for (const key of ["trimDeg", "reversed", "channel"]) known.add(`joints.${leg.id}.${joint}.${key}`);
+  for (const leg of robot.legs)
+    for (const { joint } of leg.joints) for (const key of ["trimDeg", "reversed", "channel"]) known.add(`joints.${leg.id}.${joint}.${key}`);
   // Issues of no one field (two joints on one channel, a leg the robot lacks) go above the table.
   const general = issues.filter((issue) => !known.has(issue.path));
   const fieldProps = (path: string) => {
     const messages = at(path);
     const id = `field-${path.replaceAll(".", "-")}`;
-    const attrs = { id, name: path, disabled: readOnly, "aria-invalid": messages.length > 0 || undefined, "aria-describedby": messages.length > 0 ? `${id}-issues` : undefined };
+    const attrs = {
+      id,
+      name: path,
+      disabled: readOnly,
+      "aria-invalid": messages.length > 0 || undefined,
+      "aria-describedby": messages.length > 0 ? `${id}-issues` : undefined,
+    };
     return { id, attrs, messages };
   };
   const name = fieldProps("name");
@@ -167,7 +186,11 @@ export function ProfileEditor({ robot, profile, readOnly, issues, busy }: { robo
         {readOnly ? (
           <p className="text-sm text-ink-muted">Your role can read calibration profiles; firmware, animators, leads and owners can change them.</p>
         ) : (
-          <button type="submit" disabled={busy} className="rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover:bg-accent-strong disabled:opacity-60">
+          <button
+            type="submit"
+            disabled={busy}
+            className="rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover:bg-accent-strong disabled:opacity-60"
+          >
             {busy ? "Saving…" : profile ? `Save as revision ${profile.revision + 1}` : "Create the profile"}
           </button>
         )}
@@ -177,7 +200,8 @@ export function ProfileEditor({ robot, profile, readOnly, issues, busy }: { robo
           method="post"
           className="mt-4 border-t border-line pt-4"
           onSubmit={(event) => {
-            if (!window.confirm(`Delete the calibration profile “${profile.name}”? Tables exported with it keep its name in their header.`)) event.preventDefault();
+            if (!window.confirm(`Delete the calibration profile “${profile.name}”? Tables exported with it keep its name in their header.`))
+              event.preventDefault();
           }}
         >
           <input type="hidden" name="intent" value="delete" />

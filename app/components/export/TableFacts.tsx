@@ -25,7 +25,10 @@ export function TableFacts({ facts }: { facts: TableFactsData }) {
     ["Robot", `${facts.robot.name}, revision ${facts.robot.revision}`],
     ["Gait", `${facts.gait.name}, version ${facts.gait.version}`],
     ["Content hash", <code className="font-mono text-xs break-all">{facts.gait.contentHash}</code>],
-    ["Frames", <span className="numeric">{`${facts.frameCount} at ${facts.rateHz} Hz (${facts.framePeriodMs} ms apart), ${facts.channelCount} channels`}</span>],
+    [
+      "Frames",
+      <span className="numeric">{`${facts.frameCount} at ${facts.rateHz} Hz (${facts.framePeriodMs} ms apart), ${facts.channelCount} channels`}</span>,
+    ],
     ["Calibration", facts.calibrationProfile ?? "none (the robot definition's servo settings)"],
     [
       "Flags",

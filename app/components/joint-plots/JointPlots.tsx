@@ -24,16 +24,27 @@ function scalesFor(series: JointSeries, joint: Joint, frames: number): Scales {
   if (joint.minDeg > low - 15) low = Math.min(low, joint.minDeg);
   if (joint.maxDeg < high + 15) high = Math.max(high, joint.maxDeg);
   const pad = Math.max(2, (high - low) * 0.1);
-  const x = scaleLinear().domain([0, Math.max(1, frames - 1)]).range([MARGIN.left, WIDTH - MARGIN.right]);
-  const angle = scaleLinear().domain([low - pad, high + pad]).range([HEIGHT - MARGIN.bottom, MARGIN.top]).nice();
-  const speed = scaleLinear().domain([0, Math.max(series.peakSpeedDegS, joint.maxSpeedDegS) * 1.1 || 1]).range([HEIGHT - MARGIN.bottom, MARGIN.top]);
+  const x = scaleLinear()
+    .domain([0, Math.max(1, frames - 1)])
+    .range([MARGIN.left, WIDTH - MARGIN.right]);
+  const angle = scaleLinear()
+    .domain([low - pad, high + pad])
+    .range([HEIGHT - MARGIN.bottom, MARGIN.top])
+    .nice();
+  const speed = scaleLinear()
+    .domain([0, Math.max(series.peakSpeedDegS, joint.maxSpeedDegS) * 1.1 || 1])
+    .range([HEIGHT - MARGIN.bottom, MARGIN.top]);
   return { x, angle, speed };
 }
 
 const PlotCurves = memo(function PlotCurves({ series, joint, scales, legIndex }: { series: JointSeries; joint: Joint; scales: Scales; legIndex: number }) {
   const { x, angle, speed } = scales;
-  const angleLine = line<number>().x((_, i) => x(i)).y((value) => angle(value));
-  const speedLine = line<number>().x((_, i) => x(i)).y((value) => speed(value));
+  const angleLine = line<number>()
+    .x((_, i) => x(i))
+    .y((value) => angle(value));
+  const speedLine = line<number>()
+    .x((_, i) => x(i))
+    .y((value) => speed(value));
   const [domainLow, domainHigh] = angle.domain();
   const top = MARGIN.top;
   const bottom = HEIGHT - MARGIN.bottom;
@@ -43,11 +54,23 @@ const PlotCurves = memo(function PlotCurves({ series, joint, scales, legIndex }:
   return (
     <g>
       {/* Outside the joint limits: shaded bands with a dashed edge. */}
-      {joint.maxDeg < domainHigh ? <rect x={MARGIN.left} y={top} width={right - MARGIN.left} height={Math.max(0, angle(joint.maxDeg) - top)} className="fill-danger-soft" /> : null}
-      {joint.minDeg > domainLow ? <rect x={MARGIN.left} y={angle(joint.minDeg)} width={right - MARGIN.left} height={Math.max(0, bottom - angle(joint.minDeg))} className="fill-danger-soft" /> : null}
-      {[joint.minDeg, joint.maxDeg].filter((limit) => limit > domainLow && limit < domainHigh).map((limit) => (
-        <line key={limit} x1={MARGIN.left} x2={right} y1={angle(limit)} y2={angle(limit)} className="stroke-danger" strokeDasharray="4 3" strokeWidth={1} />
-      ))}
+      {joint.maxDeg < domainHigh ? (
+        <rect x={MARGIN.left} y={top} width={right - MARGIN.left} height={Math.max(0, angle(joint.maxDeg) - top)} className="fill-danger-soft" />
+      ) : null}
+      {joint.minDeg > domainLow ? (
+        <rect
+          x={MARGIN.left}
+          y={angle(joint.minDeg)}
+          width={right - MARGIN.left}
+          height={Math.max(0, bottom - angle(joint.minDeg))}
+          className="fill-danger-soft"
+        />
+      ) : null}
+      {[joint.minDeg, joint.maxDeg]
+        .filter((limit) => limit > domainLow && limit < domainHigh)
+        .map((limit) => (
+          <line key={limit} x1={MARGIN.left} x2={right} y1={angle(limit)} y2={angle(limit)} className="stroke-danger" strokeDasharray="4 3" strokeWidth={1} />
+        ))}
       {ticks.map((tick) => (
         <g key={tick}>
           <line x1={MARGIN.left - 3} x2={right} y1={angle(tick)} y2={angle(tick)} className="stroke-line" strokeWidth={0.5} />
@@ -73,7 +96,21 @@ function PlotPlayhead({ scales }: { scales: Scales }) {
   return <line x1={x} x2={x} y1={MARGIN.top} y2={HEIGHT - MARGIN.bottom} className="stroke-accent" strokeWidth={1.5} data-playhead={frame} />;
 }
 
-function JointPlot({ legId, name, series, joint, frames, legIndex }: { legId: string; name: JointName; series: JointSeries; joint: Joint; frames: number; legIndex: number }) {
+function JointPlot({
+  legId,
+  name,
+  series,
+  joint,
+  frames,
+  legIndex,
+}: {
+  legId: string;
+  name: JointName;
+  series: JointSeries;
+  joint: Joint;
+  frames: number;
+  legIndex: number;
+}) {
   const scales = useMemo(() => scalesFor(series, joint, frames), [series, joint, frames]);
   const label =
     `${legId} ${name}: from ${series.minAngleDeg.toFixed(1)}° to ${series.maxAngleDeg.toFixed(1)}° over the cycle, ` +
@@ -84,7 +121,14 @@ function JointPlot({ legId, name, series, joint, frames, legIndex }: { legId: st
         <span className="font-medium capitalize">{name}</span>
         <JointReadout series={series} />
       </figcaption>
-      <svg viewBox={`0 0 ${WIDTH} ${HEIGHT}`} className="h-auto w-full" role="img" aria-label={label} data-joint={name} data-peak-speed={Math.round(series.peakSpeedDegS)}>
+      <svg
+        viewBox={`0 0 ${WIDTH} ${HEIGHT}`}
+        className="h-auto w-full"
+        role="img"
+        aria-label={label}
+        data-joint={name}
+        data-peak-speed={Math.round(series.peakSpeedDegS)}
+      >
         <PlotCurves series={series} joint={joint} scales={scales} legIndex={legIndex} />
         <PlotPlayhead scales={scales} />
       </svg>
@@ -117,14 +161,24 @@ export function JointPlots() {
         <h2 id="joint-plots-title" className="font-semibold">
           Joint plots <span className="font-mono text-sm font-normal">{legId}</span>
         </h2>
-        <p className="text-xs text-ink-muted">
-          solid: angle · dashed: speed · shaded: past the joint limits
-        </p>
+        <p className="text-xs text-ink-muted">solid: angle · dashed: speed · shaded: past the joint limits</p>
       </header>
       <div className="grid gap-1 p-2">
-        {series && leg
-          ? series.map((entry) => <JointPlot key={entry.joint} legId={leg.id} name={entry.joint} series={entry} joint={leg.joints[entry.joint]} frames={preview!.frames.length} legIndex={legIndex} />)
-          : <p className="p-2 text-sm text-ink-muted">No preview: the sequence does not solve.</p>}
+        {series && leg ? (
+          series.map((entry) => (
+            <JointPlot
+              key={entry.joint}
+              legId={leg.id}
+              name={entry.joint}
+              series={entry}
+              joint={leg.joints[entry.joint]}
+              frames={preview!.frames.length}
+              legIndex={legIndex}
+            />
+          ))
+        ) : (
+          <p className="p-2 text-sm text-ink-muted">No preview: the sequence does not solve.</p>
+        )}
       </div>
     </section>
   );

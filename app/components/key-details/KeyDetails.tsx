@@ -53,7 +53,8 @@ function KeyTime({ keyRef, t }: { keyRef: KeyRef; t: number }) {
           if (value === undefined) return;
           store.getState().moveKey(keyRef, value / cycleFrames, !Number.isInteger(value));
           const placed = keyAt(store.getState().sequence, keyRef);
-          if (placed && Math.abs(placed.t * cycleFrames - value) > 1e-6) store.getState().announce(`The key stops at frame ${Math.round(placed.t * cycleFrames * 10) / 10}, one frame from its neighbour.`, "error");
+          if (placed && Math.abs(placed.t * cycleFrames - value) > 1e-6)
+            store.getState().announce(`The key stops at frame ${Math.round(placed.t * cycleFrames * 10) / 10}, one frame from its neighbour.`, "error");
         }}
       />
       <p className="numeric pb-1 font-mono text-sm text-ink-muted">
@@ -156,14 +157,32 @@ function LegKeyForm({ keyRef, keyData }: { keyRef: KeyRef; keyData: LegKey }) {
           </select>
         </label>
         {keyData.contact === "swing" ? (
-          <NumberField label="Apex height" unit="mm" value={keyData.apexMm} optional placeholder={String(stepHeightMm)} min={0} max={1000} disabled={readOnly} onCommit={(value) => update({ apexMm: value })} />
+          <NumberField
+            label="Apex height"
+            unit="mm"
+            value={keyData.apexMm}
+            optional
+            placeholder={String(stepHeightMm)}
+            min={0}
+            max={1000}
+            disabled={readOnly}
+            onCommit={(value) => update({ apexMm: value })}
+          />
         ) : null}
       </div>
       <fieldset className="mt-3">
         <legend className="text-sm font-medium">Foot (neutral body frame)</legend>
         <div className="mt-1 flex flex-wrap items-end gap-2">
           {(["x", "y", "z"] as const).map((axis, index) => (
-            <NumberField key={axis} label={`Foot ${axis}`} unit="mm" value={foot?.[index]} placeholder="planned" disabled={readOnly} onCommit={(value) => setFootAxis(index as 0 | 1 | 2, value)} />
+            <NumberField
+              key={axis}
+              label={`Foot ${axis}`}
+              unit="mm"
+              value={foot?.[index]}
+              placeholder="planned"
+              disabled={readOnly}
+              onCommit={(value) => setFootAxis(index as 0 | 1 | 2, value)}
+            />
           ))}
           {foot && !readOnly ? (
             <button type="button" onClick={() => update({ foot: undefined })} className="rounded-md border border-line px-2 py-0.5 text-sm hover:bg-sunken">
@@ -215,7 +234,13 @@ function BodyKeyForm({ index, keyData }: { index: number; keyData: BodyKey }) {
         </div>
       </fieldset>
       <label className="mt-3 flex items-center gap-2 text-sm">
-        <input type="checkbox" disabled={readOnly} checked={keyData.resting ?? false} onChange={(event) => update({ resting: event.currentTarget.checked })} className="accent-accent" />
+        <input
+          type="checkbox"
+          disabled={readOnly}
+          checked={keyData.resting ?? false}
+          onChange={(event) => update({ resting: event.currentTarget.checked })}
+          className="accent-accent"
+        />
         Body rests on the ground from this key (support checks skip it)
       </label>
       <EaseFields ease={keyData.ease ?? [...CSS_EASE]} disabled={readOnly} onChange={(ease) => update({ ease })} />

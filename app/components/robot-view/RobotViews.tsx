@@ -2,15 +2,7 @@
 // and, optionally, where the feet are (default: the neutral stance) or the
 // servo angles; the gait editor passes each frame's feet or angles.
 import { useMemo } from "react";
-import {
-  neutralStance,
-  reachRing,
-  type BodyPose,
-  type JointAngles,
-  type ReachRing,
-  type Robot,
-  type Vec3,
-} from "~/kinematics";
+import { neutralStance, reachRing, type BodyPose, type JointAngles, type ReachRing, type Robot, type Vec3 } from "~/kinematics";
 import { legBackground } from "./leg-colours";
 import { legPostures, type LegPosture } from "./leg-postures";
 import { SideView } from "./SideView";
@@ -74,7 +66,12 @@ function LegLegend({ robot, postures, rings }: { robot: Robot; postures: readonl
       {robot.legs.map((leg, index) => {
         const posture = postures.find((candidate) => candidate.legId === leg.id);
         const ring = rings?.find((candidate) => candidate.legId === leg.id);
-        const problem = posture && !posture.reachable ? "out of reach" : posture && posture.violations.length > 0 ? `${posture.violations.map((v) => v.joint).join(", ")} past limit` : null;
+        const problem =
+          posture && !posture.reachable
+            ? "out of reach"
+            : posture && posture.violations.length > 0
+              ? `${posture.violations.map((v) => v.joint).join(", ")} past limit`
+              : null;
         return (
           <li key={leg.id} className="flex items-center gap-2">
             <span aria-hidden className={`inline-block h-3 w-3 rounded-sm ${legBackground(index)}`} />
@@ -85,9 +82,7 @@ function LegLegend({ robot, postures, rings }: { robot: Robot; postures: readonl
                 {problem}
               </span>
             ) : ring ? (
-              <span className="numeric text-ink-muted">
-                {ring.reachable ? `reach ${mm(ring.innerMm)}–${mm(ring.outerMm)} mm` : "cannot reach the ground"}
-              </span>
+              <span className="numeric text-ink-muted">{ring.reachable ? `reach ${mm(ring.innerMm)}–${mm(ring.outerMm)} mm` : "cannot reach the ground"}</span>
             ) : null}
           </li>
         );

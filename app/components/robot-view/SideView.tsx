@@ -85,7 +85,15 @@ const SideStatic = memo(function SideStatic({ robot, frame, bodyHeightMm }: { ro
       <text x={originX + 5} y={(originY + groundY) / 2} className="fill-ink-muted text-[10px]">
         {`${Math.round(bodyHeightMm * 10) / 10} mm`}
       </text>
-      <rect x={left} y={top} width={Math.max(1, right - left)} height={Math.max(1, bottom - top)} rx={6} className="fill-sunken stroke-ink-muted" strokeWidth={1.5} />
+      <rect
+        x={left}
+        y={top}
+        width={Math.max(1, right - left)}
+        height={Math.max(1, bottom - top)}
+        rx={6}
+        className="fill-sunken stroke-ink-muted"
+        strokeWidth={1.5}
+      />
       <path d={`M${right + 10},${(top + bottom) / 2} l-7,-4 v8 z`} className="fill-ink-muted" />
       <g className="stroke-ink" strokeWidth={1.2}>
         <circle cx={comX} cy={comY} r={4} className="fill-surface" />

@@ -20,22 +20,22 @@ const MARGIN_PX = 14;
  * A frame fitting the two ranges (mm, in the scales' directions) into width × height px
  * with equal scales; spare height goes above the drawing when `bottom` is set.
  */
-function fitFrame(
-  width: number,
-  height: number,
-  horizontalMm: [number, number],
-  verticalMm: [number, number],
-  bottom = false,
-): ViewFrame {
+function fitFrame(width: number, height: number, horizontalMm: [number, number], verticalMm: [number, number], bottom = false): ViewFrame {
   const spanH = Math.max(1, Math.abs(horizontalMm[1] - horizontalMm[0]));
   const spanV = Math.max(1, Math.abs(verticalMm[1] - verticalMm[0]));
   const pxPerMm = Math.min((width - 2 * MARGIN_PX) / spanH, (height - 2 * MARGIN_PX) / spanV);
   const padH = (width - spanH * pxPerMm) / 2;
   const padV = (height - spanV * pxPerMm) / 2;
-  const horizontal = scaleLinear().domain(horizontalMm).range([padH, width - padH]);
+  const horizontal = scaleLinear()
+    .domain(horizontalMm)
+    .range([padH, width - padH]);
   const vertical = bottom
-    ? scaleLinear().domain(verticalMm).range([2 * padV - MARGIN_PX, height - MARGIN_PX])
-    : scaleLinear().domain(verticalMm).range([padV, height - padV]);
+    ? scaleLinear()
+        .domain(verticalMm)
+        .range([2 * padV - MARGIN_PX, height - MARGIN_PX])
+    : scaleLinear()
+        .domain(verticalMm)
+        .range([padV, height - padV]);
   return { width, height, pxPerMm, horizontal, vertical, toScreen: (a, b) => [horizontal(a), vertical(b)] };
 }
 

@@ -29,7 +29,9 @@ export function AddRobotPanel({
     <section aria-labelledby={headingId} className="mb-6 rounded-lg border border-line bg-surface p-5">
       {panel === "new" ? (
         <>
-          <h2 id={headingId} className="text-lg font-semibold">New robot</h2>
+          <h2 id={headingId} className="text-lg font-semibold">
+            New robot
+          </h2>
           <p className="mt-1 text-sm text-ink-muted">Start from a copy of a robot you have, or from a plain template to measure and fill in.</p>
           <Form method="post" className="mt-4 flex flex-wrap items-end gap-4">
             <input type="hidden" name="intent" value="create" />
@@ -63,7 +65,9 @@ export function AddRobotPanel({
         </>
       ) : panel === "upload" ? (
         <>
-          <h2 id={headingId} className="text-lg font-semibold">Upload a robot definition</h2>
+          <h2 id={headingId} className="text-lg font-semibold">
+            Upload a robot definition
+          </h2>
           <p className="mt-1 text-sm text-ink-muted">
             A JSON file in the <code className="font-mono">gaitloom.robot/1</code> format, up to 256 KB (
             <a href="/api/v1/schema/robot.json" className="text-accent underline underline-offset-2">
@@ -88,10 +92,12 @@ export function AddRobotPanel({
         </>
       ) : (
         <>
-          <h2 id={headingId} className="text-lg font-semibold">Import a URDF file</h2>
+          <h2 id={headingId} className="text-lg font-semibold">
+            Import a URDF file
+          </h2>
           <p className="mt-1 text-sm text-ink-muted">
-            Each leg must be a chain of three revolute joints (coxa, femur, tibia) from the base link, ending in a fixed joint at the foot
-            tip. What URDF does not hold (servo mapping, standing height) gets defaults, listed after the import.
+            Each leg must be a chain of three revolute joints (coxa, femur, tibia) from the base link, ending in a fixed joint at the foot tip. What URDF does
+            not hold (servo mapping, standing height) gets defaults, listed after the import.
           </p>
           <Form method="post" encType="multipart/form-data" className="mt-4 flex flex-wrap items-end gap-4">
             <input type="hidden" name="intent" value="import-urdf" />

@@ -20,8 +20,12 @@ export function JointTable() {
         <thead className="text-xs text-ink-muted">
           <tr className="border-b border-line">
             <td colSpan={2} />
-            <th colSpan={4} scope="colgroup" className="px-2 pt-1.5 text-left font-medium">Limits and calibration</th>
-            <th colSpan={6} scope="colgroup" className="border-l border-line px-2 pt-1.5 text-left font-medium">Servo mapping</th>
+            <th colSpan={4} scope="colgroup" className="px-2 pt-1.5 text-left font-medium">
+              Limits and calibration
+            </th>
+            <th colSpan={6} scope="colgroup" className="border-l border-line px-2 pt-1.5 text-left font-medium">
+              Servo mapping
+            </th>
           </tr>
           <tr className="border-b border-line">
             <th className="px-2 py-1.5 text-left font-medium">Leg</th>
@@ -71,16 +75,36 @@ const LegJoints = memo(function LegJoints({ index, leg, signature }: { index: nu
               )}
             </td>
             <td className="px-2 py-1 text-ink-muted">{joint}</td>
-            <td className="px-2 py-1 text-right"><NumberField {...at("minDeg")} label={`${name} minimum (servo degrees)`} width="w-14" /></td>
-            <td className="px-2 py-1 text-right"><NumberField {...at("maxDeg")} label={`${name} maximum (servo degrees)`} width="w-14" /></td>
-            <td className="px-2 py-1 text-right"><NumberField {...at("zeroOffsetDeg")} label={`${name} zero offset (degrees)`} width="w-16" /></td>
-            <td className="px-2 py-1 text-right"><NumberField {...at("maxSpeedDegS")} label={`${name} maximum speed (degrees per second)`} width="w-14" /></td>
-            <td className="border-l border-line px-2 py-1 text-right"><NumberField {...at("servo", "channel")} label={`${name} servo channel`} width="w-12" /></td>
-            <td className="px-2 py-1 text-center"><CheckboxField {...at("servo", "reversed")} label={`${name} servo reversed`} /></td>
-            <td className="px-2 py-1 text-right"><NumberField {...at("servo", "centerUs")} label={`${name} servo centre (µs)`} /></td>
-            <td className="px-2 py-1 text-right"><NumberField {...at("servo", "usPerDeg")} label={`${name} servo µs per degree`} width="w-14" /></td>
-            <td className="px-2 py-1 text-right"><NumberField {...at("servo", "minUs")} label={`${name} servo minimum pulse (µs)`} /></td>
-            <td className="px-2 py-1 text-right"><NumberField {...at("servo", "maxUs")} label={`${name} servo maximum pulse (µs)`} /></td>
+            <td className="px-2 py-1 text-right">
+              <NumberField {...at("minDeg")} label={`${name} minimum (servo degrees)`} width="w-14" />
+            </td>
+            <td className="px-2 py-1 text-right">
+              <NumberField {...at("maxDeg")} label={`${name} maximum (servo degrees)`} width="w-14" />
+            </td>
+            <td className="px-2 py-1 text-right">
+              <NumberField {...at("zeroOffsetDeg")} label={`${name} zero offset (degrees)`} width="w-16" />
+            </td>
+            <td className="px-2 py-1 text-right">
+              <NumberField {...at("maxSpeedDegS")} label={`${name} maximum speed (degrees per second)`} width="w-14" />
+            </td>
+            <td className="border-l border-line px-2 py-1 text-right">
+              <NumberField {...at("servo", "channel")} label={`${name} servo channel`} width="w-12" />
+            </td>
+            <td className="px-2 py-1 text-center">
+              <CheckboxField {...at("servo", "reversed")} label={`${name} servo reversed`} />
+            </td>
+            <td className="px-2 py-1 text-right">
+              <NumberField {...at("servo", "centerUs")} label={`${name} servo centre (µs)`} />
+            </td>
+            <td className="px-2 py-1 text-right">
+              <NumberField {...at("servo", "usPerDeg")} label={`${name} servo µs per degree`} width="w-14" />
+            </td>
+            <td className="px-2 py-1 text-right">
+              <NumberField {...at("servo", "minUs")} label={`${name} servo minimum pulse (µs)`} />
+            </td>
+            <td className="px-2 py-1 text-right">
+              <NumberField {...at("servo", "maxUs")} label={`${name} servo maximum pulse (µs)`} />
+            </td>
           </tr>
         );
       })}

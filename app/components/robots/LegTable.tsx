@@ -80,13 +80,27 @@ const LegRow = memo(function LegRow({
       <td className="px-2 py-1 text-right">
         <NumberField {...at("row")} label={`${id} row (0 = front; empty: by mount x)`} width="w-12" placeholder="auto" />
       </td>
-      <td className="px-2 py-1 text-right"><NumberField {...at("mount", "x")} label={`${id} mount x (mm)`} /></td>
-      <td className="px-2 py-1 text-right"><NumberField {...at("mount", "y")} label={`${id} mount y (mm)`} /></td>
-      <td className="px-2 py-1 text-right"><NumberField {...at("mount", "z")} label={`${id} mount z (mm)`} /></td>
-      <td className="px-2 py-1 text-right"><NumberField {...at("mount", "yawDeg")} label={`${id} mount yaw (degrees)`} /></td>
-      <td className="px-2 py-1 text-right"><NumberField {...at("coxa")} label={`${id} coxa length (mm)`} /></td>
-      <td className="px-2 py-1 text-right"><NumberField {...at("femur")} label={`${id} femur length (mm)`} /></td>
-      <td className="px-2 py-1 text-right"><NumberField {...at("tibia")} label={`${id} tibia length (mm)`} /></td>
+      <td className="px-2 py-1 text-right">
+        <NumberField {...at("mount", "x")} label={`${id} mount x (mm)`} />
+      </td>
+      <td className="px-2 py-1 text-right">
+        <NumberField {...at("mount", "y")} label={`${id} mount y (mm)`} />
+      </td>
+      <td className="px-2 py-1 text-right">
+        <NumberField {...at("mount", "z")} label={`${id} mount z (mm)`} />
+      </td>
+      <td className="px-2 py-1 text-right">
+        <NumberField {...at("mount", "yawDeg")} label={`${id} mount yaw (degrees)`} />
+      </td>
+      <td className="px-2 py-1 text-right">
+        <NumberField {...at("coxa")} label={`${id} coxa length (mm)`} />
+      </td>
+      <td className="px-2 py-1 text-right">
+        <NumberField {...at("femur")} label={`${id} femur length (mm)`} />
+      </td>
+      <td className="px-2 py-1 text-right">
+        <NumberField {...at("tibia")} label={`${id} tibia length (mm)`} />
+      </td>
       {onRemove ? (
         <td className="px-2 py-1 text-right">
           <button

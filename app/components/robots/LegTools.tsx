@@ -94,7 +94,15 @@ export function LegTools({ robot, onApply }: { robot: Robot | null; onApply: (ne
             onClick={() => {
               if (!robot) return;
               const source = robot.legs.find((leg) => leg.id === sourceId);
-              const mirrored = source ? chosenTargets.filter((id) => legSide(robot, robot.legs.find((leg) => leg.id === id)!) !== legSide(robot, source)) : [];
+              const mirrored = source
+                ? chosenTargets.filter(
+                    (id) =>
+                      legSide(
+                        robot,
+                        robot.legs.find((leg) => leg.id === id)!,
+                      ) !== legSide(robot, source),
+                  )
+                : [];
               onApply(
                 copyGeometryTo(robot, sourceId, chosenTargets),
                 `Copied ${sourceId} to ${chosenTargets.join(", ")}${mirrored.length > 0 ? ` (mirrored for ${mirrored.join(", ")} on the other side)` : ""}; mounts and servo mappings kept.`,

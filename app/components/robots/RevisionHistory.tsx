@@ -39,7 +39,11 @@ export function RevisionHistory({ robotId, revisions, current }: { robotId: stri
               </td>
               <td className="px-3 py-2 whitespace-nowrap">
                 <span className="flex justify-end gap-3">
-                  <Link to={`/robots/${robotId}/revisions/${revision.number}`} className="text-accent underline underline-offset-2" aria-label={`View revision ${revision.number}`}>
+                  <Link
+                    to={`/robots/${robotId}/revisions/${revision.number}`}
+                    className="text-accent underline underline-offset-2"
+                    aria-label={`View revision ${revision.number}`}
+                  >
                     View
                   </Link>
                   <a

@@ -87,7 +87,9 @@ export function RobotEditor({ robotId, initial, baseRevision, mode, saveFetcher 
           {editing ? <IssueSummary issues={check.issues} fieldFor={formFieldIdFor} /> : null}
 
           <section aria-labelledby={headings.views} className="space-y-2">
-            <h2 id={headings.views} className="text-lg font-semibold">Neutral stance</h2>
+            <h2 id={headings.views} className="text-lg font-semibold">
+              Neutral stance
+            </h2>
             {check.robot || !editing ? null : (
               <p className="text-sm text-warning">
                 <span aria-hidden>⚠ </span>The views show the last valid definition until the problems are fixed.
@@ -97,12 +99,16 @@ export function RobotEditor({ robotId, initial, baseRevision, mode, saveFetcher 
           </section>
 
           <section aria-labelledby={headings.body} className="space-y-2">
-            <h2 id={headings.body} className="text-lg font-semibold">Body</h2>
+            <h2 id={headings.body} className="text-lg font-semibold">
+              Body
+            </h2>
             <BodySection />
           </section>
 
           <section aria-labelledby={headings.legs} className="space-y-2">
-            <h2 id={headings.legs} className="text-lg font-semibold">Legs</h2>
+            <h2 id={headings.legs} className="text-lg font-semibold">
+              Legs
+            </h2>
             <LegTable onRemove={mode === "edit" ? removeLeg : undefined} />
             {mode === "edit" ? <LegTools robot={check.robot} onApply={(next, note) => replaceAll(next, note)} /> : null}
             <p role="status" aria-live="polite" className="text-sm text-ok">
@@ -111,20 +117,24 @@ export function RobotEditor({ robotId, initial, baseRevision, mode, saveFetcher 
           </section>
 
           <section aria-labelledby={headings.joints} className="space-y-2">
-            <h2 id={headings.joints} className="text-lg font-semibold">Joints and servos</h2>
+            <h2 id={headings.joints} className="text-lg font-semibold">
+              Joints and servos
+            </h2>
             <p className="text-sm text-ink-muted">
-              Limits are in servo degrees; servo angle = geometric angle − zero offset. Pulse = centre ± µs/° × servo angle, the sign
-              flipped when reversed.
+              Limits are in servo degrees; servo angle = geometric angle − zero offset. Pulse = centre ± µs/° × servo angle, the sign flipped when reversed.
             </p>
             <JointTable />
           </section>
 
           <section aria-labelledby={headings.rest} className="space-y-2">
-            <h2 id={headings.rest} className="text-lg font-semibold">Rest pose</h2>
+            <h2 id={headings.rest} className="text-lg font-semibold">
+              Rest pose
+            </h2>
             <RestPoseSection
               onToggle={(on) => {
                 if (!on) replaceAll(setAt(document, ["rest"], undefined), "Removed the rest pose.");
-                else if (check.robot) replaceAll({ ...check.robot, rest: defaultRest(check.robot) }, "Added a rest pose: every joint at 0° or its nearest limit.");
+                else if (check.robot)
+                  replaceAll({ ...check.robot, rest: defaultRest(check.robot) }, "Added a rest pose: every joint at 0° or its nearest limit.");
                 else setToolNote("Fix the problems listed above before adding a rest pose.");
               }}
             />
@@ -181,7 +191,11 @@ function SaveBar({
   const latest = stale?.details?.latest;
   const saved = result && "ok" in result && result.number === baseRevision && !dirty ? result : null;
   const failure = refusal && !stale && dirty ? refusal : null;
-  const blocked = !dirty ? "No changes to save." : problemCount > 0 ? `Fix ${problemCount === 1 ? "the problem" : `the ${problemCount} problems`} first.` : null;
+  const blocked = !dirty
+    ? "No changes to save."
+    : problemCount > 0
+      ? `Fix ${problemCount === 1 ? "the problem" : `the ${problemCount} problems`} first.`
+      : null;
 
   return (
     <section aria-label="Save" className="sticky bottom-0 z-10 space-y-2 rounded-lg border border-line bg-surface px-4 py-3 shadow-sm">
@@ -192,7 +206,11 @@ function SaveBar({
           </p>
           <p className="mt-1">{stale.error} Your edits are still in the form.</p>
           <div className="mt-2 flex flex-wrap gap-2">
-            <Link to={`/robots/${robotId}/revisions/${latest.number}`} target="_blank" className="rounded-md border border-line bg-surface px-3 py-1 font-medium hover:bg-sunken">
+            <Link
+              to={`/robots/${robotId}/revisions/${latest.number}`}
+              target="_blank"
+              className="rounded-md border border-line bg-surface px-3 py-1 font-medium hover:bg-sunken"
+            >
               Open revision {latest.number} in a new tab
             </Link>
             <button
@@ -200,10 +218,7 @@ function SaveBar({
               disabled={busy}
               className="rounded-md border border-line bg-surface px-3 py-1 font-medium hover:bg-sunken"
               onClick={() =>
-                fetcher.submit(
-                  { intent: "save", baseRevision: String(latest.number), definition, message },
-                  { method: "post", action: `/robots/${robotId}` },
-                )
+                fetcher.submit({ intent: "save", baseRevision: String(latest.number), definition, message }, { method: "post", action: `/robots/${robotId}` })
               }
             >
               Save mine as revision {latest.number + 1} anyway
@@ -236,7 +251,7 @@ function SaveBar({
         <input type="hidden" name="baseRevision" value={baseRevision} />
         <input type="hidden" name="definition" value={definition} />
         <p role="status" aria-live="polite" className="w-40 text-sm text-ink-muted">
-          {busy ? "Saving…" : saved ? <span className="text-ok">✓ Saved as revision {saved.number}.</span> : blocked ?? "Unsaved changes."}
+          {busy ? "Saving…" : saved ? <span className="text-ok">✓ Saved as revision {saved.number}.</span> : (blocked ?? "Unsaved changes.")}
         </p>
         <input
           name="message"

@@ -41,19 +41,19 @@ export function AppShell({ data, children }: { data: ShellData | null; children:
       </header>
       <nav aria-label="Sections" className="border-r border-line bg-surface px-3 py-4">
         <ul className="space-y-1">
-          {sections.filter((section) => !section.needs || !data?.role || can(data.role, section.needs)).map((section) => (
-            <li key={section.to}>
-              <NavLink
-                to={section.to}
-                className={({ isActive }) =>
-                  `block rounded-md px-3 py-2 ${isActive ? "bg-accent-soft text-accent-strong" : "hover:bg-sunken"}`
-                }
-              >
-                <span className="block font-medium">{section.label}</span>
-                <span className="block text-xs text-ink-muted">{section.hint}</span>
-              </NavLink>
-            </li>
-          ))}
+          {sections
+            .filter((section) => !section.needs || !data?.role || can(data.role, section.needs))
+            .map((section) => (
+              <li key={section.to}>
+                <NavLink
+                  to={section.to}
+                  className={({ isActive }) => `block rounded-md px-3 py-2 ${isActive ? "bg-accent-soft text-accent-strong" : "hover:bg-sunken"}`}
+                >
+                  <span className="block font-medium">{section.label}</span>
+                  <span className="block text-xs text-ink-muted">{section.hint}</span>
+                </NavLink>
+              </li>
+            ))}
         </ul>
         <p className="mt-6 px-3 text-xs text-ink-muted">
           <Link to="/api-docs" className="hover:text-ink">

@@ -7,7 +7,15 @@ import { FLAG_LABELS, FLAG_TAGS } from "~/features/gaits/flag-labels";
 
 export const SEVERITY_GLYPH = { error: "▲", warning: "◆" } as const;
 
-export const FlagLane = memo(function FlagLane({ runs, cycleFrames, onJump }: { runs: readonly FlagRun[]; cycleFrames: number; onJump: (frame: number) => void }) {
+export const FlagLane = memo(function FlagLane({
+  runs,
+  cycleFrames,
+  onJump,
+}: {
+  runs: readonly FlagRun[];
+  cycleFrames: number;
+  onJump: (frame: number) => void;
+}) {
   if (runs.length === 0) return null;
   return (
     <div aria-hidden className="pointer-events-none absolute inset-x-0 bottom-0 h-3.5">

@@ -50,7 +50,11 @@ export const KeyMarker = memo(function KeyMarker({ keyRef, t, contact, legIndex,
       style={{ left: `${t * 100}%` }}
     >
       <span aria-hidden className={shape} />
-      {contact === "swing" ? <span aria-hidden className="absolute -top-0.5 text-[9px] leading-none text-ink">▴</span> : null}
+      {contact === "swing" ? (
+        <span aria-hidden className="absolute -top-0.5 text-[9px] leading-none text-ink">
+          ▴
+        </span>
+      ) : null}
     </button>
   );
 });

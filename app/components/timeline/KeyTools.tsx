@@ -27,7 +27,12 @@ export function KeyTools() {
         <label className="sr-only" htmlFor="add-key-track">
           Track to add the key to
         </label>
-        <select id="add-key-track" value={addTo} onChange={(event) => setAddTo(event.currentTarget.value as "focus" | "body")} className="rounded-md border border-line bg-surface px-1 py-1 text-sm">
+        <select
+          id="add-key-track"
+          value={addTo}
+          onChange={(event) => setAddTo(event.currentTarget.value as "focus" | "body")}
+          className="rounded-md border border-line bg-surface px-1 py-1 text-sm"
+        >
           <option value="focus">{`on ${focusLegId} at the playhead`}</option>
           <option value="body">{"on the body at the playhead"}</option>
         </select>
@@ -39,7 +44,13 @@ export function KeyTools() {
         Delete key
       </button>
       <CopyToLegs disabled={selectedLeg === null} />
-      <button type="button" className={toolButton} disabled={!partner} onClick={() => actions.mirrorLeg(mirrorFrom)} title="Writes this leg's keys, mirrored, onto the leg opposite, at that leg's own phase">
+      <button
+        type="button"
+        className={toolButton}
+        disabled={!partner}
+        onClick={() => actions.mirrorLeg(mirrorFrom)}
+        title="Writes this leg's keys, mirrored, onto the leg opposite, at that leg's own phase"
+      >
         {partner ? `Mirror ${mirrorFrom} onto ${partner}` : "Mirror onto the other side"}
       </button>
     </div>
@@ -61,7 +72,12 @@ function CopyToLegs({ disabled }: { disabled: boolean }) {
         Copy key to legs…
       </button>
       {open && !disabled ? (
-        <div id={id} role="group" aria-label={`Copy the ${source} key to`} className="absolute z-30 mt-1 w-64 rounded-md border border-line bg-surface p-3 shadow-lg">
+        <div
+          id={id}
+          role="group"
+          aria-label={`Copy the ${source} key to`}
+          className="absolute z-30 mt-1 w-64 rounded-md border border-line bg-surface p-3 shadow-lg"
+        >
           <fieldset>
             <legend className="text-sm font-medium">Copy the {source} key to</legend>
             <div className="mt-1 grid grid-cols-3 gap-1">

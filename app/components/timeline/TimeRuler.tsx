@@ -109,7 +109,11 @@ export function TimeRuler() {
       }}
     >
       <RulerTicks cycleFrames={cycleFrames} fps={fps} widthPx={widthPx} />
-      <div aria-hidden className="pointer-events-none absolute -top-0.5 h-2 w-2 -translate-x-1/2 rotate-45 bg-accent" style={{ left: `${(frame / cycleFrames) * 100}%` }} />
+      <div
+        aria-hidden
+        className="pointer-events-none absolute -top-0.5 h-2 w-2 -translate-x-1/2 rotate-45 bg-accent"
+        style={{ left: `${(frame / cycleFrames) * 100}%` }}
+      />
     </div>
   );
 }
@@ -118,5 +122,12 @@ export function TimeRuler() {
 export function PlayheadLine() {
   const frame = useEditor((state) => state.frame);
   const cycleFrames = useEditor((state) => state.cycleFrames);
-  return <div aria-hidden data-testid="playhead" className="pointer-events-none absolute inset-y-0 z-20 w-0 border-l-2 border-accent" style={{ left: `${(frame / cycleFrames) * 100}%` }} />;
+  return (
+    <div
+      aria-hidden
+      data-testid="playhead"
+      className="pointer-events-none absolute inset-y-0 z-20 w-0 border-l-2 border-accent"
+      style={{ left: `${(frame / cycleFrames) * 100}%` }}
+    />
+  );
 }

@@ -55,14 +55,17 @@ export function Timeline() {
   }, []);
 
   // Keyboard drags move a frame per arrow press (a tenth with Shift).
-  const keyboardStep = useCallback<KeyboardCoordinateGetter>((event, { currentCoordinates }) => {
-    const { cycleFrames } = store.getState();
-    const width = lanes.current?.getBoundingClientRect().width ?? 600;
-    const step = width / cycleFrames / (event.shiftKey ? FINE_STEPS_PER_FRAME : 1);
-    if (event.code === "ArrowRight") return { ...currentCoordinates, x: currentCoordinates.x + step };
-    if (event.code === "ArrowLeft") return { ...currentCoordinates, x: currentCoordinates.x - step };
-    return undefined;
-  }, [store]);
+  const keyboardStep = useCallback<KeyboardCoordinateGetter>(
+    (event, { currentCoordinates }) => {
+      const { cycleFrames } = store.getState();
+      const width = lanes.current?.getBoundingClientRect().width ?? 600;
+      const step = width / cycleFrames / (event.shiftKey ? FINE_STEPS_PER_FRAME : 1);
+      if (event.code === "ArrowRight") return { ...currentCoordinates, x: currentCoordinates.x + step };
+      if (event.code === "ArrowLeft") return { ...currentCoordinates, x: currentCoordinates.x - step };
+      return undefined;
+    },
+    [store],
+  );
 
   const sensors = useSensors(
     useSensor(PointerSensor, { activationConstraint: { distance: 4 } }),
@@ -112,7 +115,8 @@ export function Timeline() {
     return `${ref.legId ?? "body"} key at frame ${Math.round(key.t * state.cycleFrames)}`;
   };
   const announcements: Announcements = {
-    onDragStart: ({ active }) => `Picked up ${describe(active.data.current)}. Left and right arrows move it a frame, Shift for a tenth; Space drops it, Escape puts it back.`,
+    onDragStart: ({ active }) =>
+      `Picked up ${describe(active.data.current)}. Left and right arrows move it a frame, Shift for a tenth; Space drops it, Escape puts it back.`,
     onDragMove: ({ active }) => `Moved to ${describe(active.data.current)}.`,
     onDragOver: () => undefined,
     onDragEnd: ({ active }) => `Dropped: ${describe(active.data.current)}.`,
@@ -137,7 +141,9 @@ export function Timeline() {
         onDragCancel={() => finish(true)}
         accessibility={{
           announcements,
-          screenReaderInstructions: { draggable: "To move a key in time, press Space, then the left and right arrows; Space again to drop it, Escape to put it back." },
+          screenReaderInstructions: {
+            draggable: "To move a key in time, press Space, then the left and right arrows; Space again to drop it, Escape to put it back.",
+          },
         }}
       >
         <div className="flex px-3 pt-1 pb-3">
@@ -190,10 +196,16 @@ function TimelineLegend() {
         touch-down key
       </span>
       <span>
-        <span aria-hidden className="mr-1 text-danger">▲</span>error
+        <span aria-hidden className="mr-1 text-danger">
+          ▲
+        </span>
+        error
       </span>
       <span>
-        <span aria-hidden className="mr-1 text-warning">◆</span>warning
+        <span aria-hidden className="mr-1 text-warning">
+          ◆
+        </span>
+        warning
       </span>
       <span>Drag keys to move them (Shift: tenths of a frame); double-click a track to add a key.</span>
     </p>

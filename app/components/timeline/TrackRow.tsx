@@ -25,7 +25,7 @@ export function keyLabel(legId: string | null, index: number, count: number, key
 }
 
 export const TrackLane = memo(function TrackLane({ legId, legIndex }: { legId: string | null; legIndex: number }) {
-  const keys = useEditor((state) => (legId === null ? state.sequence.body.keys : state.sequence.legs[legId]?.keys ?? EMPTY)) as readonly (LegKey | BodyKey)[];
+  const keys = useEditor((state) => (legId === null ? state.sequence.body.keys : (state.sequence.legs[legId]?.keys ?? EMPTY))) as readonly (LegKey | BodyKey)[];
   const preview = useEditor((state) => state.preview);
   const cycleFrames = useEditor((state) => state.cycleFrames);
   const fps = useEditor((state) => state.sequence.fps);

@@ -57,7 +57,9 @@ export function ReviewActions({ version, reviewers, others, defaultCompareWith, 
         {heading}
         {formError}
         <input type="hidden" name="intent" value="request-review" />
-        {version.state === "sent-back" ? <p className="text-ink-muted">This version was sent back. Ask again once the comments are answered, or commit a new version.</p> : null}
+        {version.state === "sent-back" ? (
+          <p className="text-ink-muted">This version was sent back. Ask again once the comments are answered, or commit a new version.</p>
+        ) : null}
         {reviewers.length === 0 ? (
           <p className="text-warning">No lead or owner other than the author can review this version; an owner can invite a lead.</p>
         ) : (
@@ -82,7 +84,13 @@ export function ReviewActions({ version, reviewers, others, defaultCompareWith, 
               <label htmlFor={`${id}-compare`} className="block font-medium">
                 Compare with
               </label>
-              <select id={`${id}-compare`} name="compareWithId" className={input} defaultValue={defaultCompareWith ?? ""} aria-describedby={`${id}-compare-hint`}>
+              <select
+                id={`${id}-compare`}
+                name="compareWithId"
+                className={input}
+                defaultValue={defaultCompareWith ?? ""}
+                aria-describedby={`${id}-compare-hint`}
+              >
                 <option value="">No comparison link</option>
                 {others.map((other) => (
                   <option key={other.id} value={other.id}>
@@ -162,7 +170,14 @@ export function ReviewActions({ version, reviewers, others, defaultCompareWith, 
             <label htmlFor={`${id}-send-back`} className="block font-medium">
               What needs to change
             </label>
-            <textarea id={`${id}-send-back`} name="comment" rows={3} maxLength={2000} className={input} aria-describedby={error?.field === "comment" ? "comment-error" : undefined} />
+            <textarea
+              id={`${id}-send-back`}
+              name="comment"
+              rows={3}
+              maxLength={2000}
+              className={input}
+              aria-describedby={error?.field === "comment" ? "comment-error" : undefined}
+            />
           </div>
           <FieldError error={error} field="comment" />
           <button type="submit" className={secondary} disabled={busy === "send-back"}>

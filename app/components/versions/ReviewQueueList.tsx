@@ -23,7 +23,19 @@ export type QueueListItem = {
   previousVersionId: string | null;
 };
 
-export function ReviewQueueList({ id, title, empty, items, show }: { id: string; title: string; empty: string; items: readonly QueueListItem[]; show: "author" | "decision" }) {
+export function ReviewQueueList({
+  id,
+  title,
+  empty,
+  items,
+  show,
+}: {
+  id: string;
+  title: string;
+  empty: string;
+  items: readonly QueueListItem[];
+  show: "author" | "decision";
+}) {
   return (
     <section aria-labelledby={`${id}-heading`} className="space-y-2">
       <h2 id={`${id}-heading`} className="text-lg font-semibold">
@@ -59,7 +71,10 @@ export function ReviewQueueList({ id, title, empty, items, show }: { id: string;
               </p>
               {item.lastStep?.overrideReason ? <p className="mt-1 text-warning">Override: {item.lastStep.overrideReason}</p> : null}
               {item.previousVersionId ? (
-                <Link to={`/gaits/compare?a=${item.previousVersionId}&b=${item.versionId}`} className="mt-1 inline-block text-accent underline underline-offset-2">
+                <Link
+                  to={`/gaits/compare?a=${item.previousVersionId}&b=${item.versionId}`}
+                  className="mt-1 inline-block text-accent underline underline-offset-2"
+                >
                   Compare with the version before
                 </Link>
               ) : null}

@@ -39,7 +39,11 @@ function SortHeader({ query, sort, align = "left" }: { query: VersionQueryValues
   const active = query.sort === sort;
   const arrow = active ? (query.dir === "asc" ? "▲" : "▼") : "";
   return (
-    <th scope="col" className={`px-3 py-2 font-medium ${align === "right" ? "text-right" : ""}`} aria-sort={active ? (query.dir === "asc" ? "ascending" : "descending") : undefined}>
+    <th
+      scope="col"
+      className={`px-3 py-2 font-medium ${align === "right" ? "text-right" : ""}`}
+      aria-sort={active ? (query.dir === "asc" ? "ascending" : "descending") : undefined}
+    >
       <Link to={sortHref(query, sort)} className="inline-flex items-center gap-1 hover:text-ink" preventScrollReset>
         {SORT_LABELS[sort]}
         <span aria-hidden="true" className="text-[10px]">
@@ -97,7 +101,11 @@ export function VersionTable({ gaitId, rows, allVersions, query, canRestore, dra
             {rows.map((row) => (
               <tr key={row.id} className="border-b border-line last:border-0" data-version={row.number}>
                 <td className="px-3 py-2 text-right font-mono tabular-nums">
-                  <Link to={`/gaits/${gaitId}/versions/${row.number}`} className="text-accent underline underline-offset-2" aria-label={`Open version ${row.number}`}>
+                  <Link
+                    to={`/gaits/${gaitId}/versions/${row.number}`}
+                    className="text-accent underline underline-offset-2"
+                    aria-label={`Open version ${row.number}`}
+                  >
                     v{row.number}
                   </Link>
                 </td>
@@ -114,10 +122,24 @@ export function VersionTable({ gaitId, rows, allVersions, query, canRestore, dra
                 </td>
                 <td className="px-3 py-2 text-right font-mono whitespace-nowrap tabular-nums">{formatNumber(row.worstMarginMm, 1, "mm")}</td>
                 <td className="px-2 py-2 text-center">
-                  <input type="radio" name="a" value={row.id} form={COMPARE_FORM} defaultChecked={row.id === defaultA} aria-label={`Compare version ${row.number} as A`} />
+                  <input
+                    type="radio"
+                    name="a"
+                    value={row.id}
+                    form={COMPARE_FORM}
+                    defaultChecked={row.id === defaultA}
+                    aria-label={`Compare version ${row.number} as A`}
+                  />
                 </td>
                 <td className="px-2 py-2 text-center">
-                  <input type="radio" name="b" value={row.id} form={COMPARE_FORM} defaultChecked={row.id === defaultB} aria-label={`Compare version ${row.number} as B`} />
+                  <input
+                    type="radio"
+                    name="b"
+                    value={row.id}
+                    form={COMPARE_FORM}
+                    defaultChecked={row.id === defaultB}
+                    aria-label={`Compare version ${row.number} as B`}
+                  />
                 </td>
                 <td className="px-3 py-2 whitespace-nowrap">
                   {canRestore ? (

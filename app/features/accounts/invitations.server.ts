@@ -81,7 +81,14 @@ export async function invite(actor: Member, email: string, role: Role): Promise<
       .values({ workspaceId: actor.workspace.id, email: address, role, tokenHash: link.tokenHash, invitedById: actor.user.id, expiresAt: link.expiresAt })
       .returning();
     await recordAudit(
-      { workspaceId: actor.workspace.id, actorId: actor.user.id, action: "invitation.created", targetType: "invitation", targetId: row.id, details: { email: address, role } },
+      {
+        workspaceId: actor.workspace.id,
+        actorId: actor.user.id,
+        action: "invitation.created",
+        targetType: "invitation",
+        targetId: row.id,
+        details: { email: address, role },
+      },
       tx,
     );
     return row;
@@ -113,7 +120,17 @@ export async function resendInvitation(actor: Member, invitationId: string): Pro
       .set({ tokenHash: link.tokenHash, expiresAt: link.expiresAt, lastSentAt: new Date(), sendCount: row.sendCount + 1 })
       .where(eq(invitations.id, row.id))
       .returning();
-    await recordAudit({ workspaceId: actor.workspace.id, actorId: actor.user.id, action: "invitation.resent", targetType: "invitation", targetId: row.id, details: { email: row.email } }, tx);
+    await recordAudit(
+      {
+        workspaceId: actor.workspace.id,
+        actorId: actor.user.id,
+        action: "invitation.resent",
+        targetType: "invitation",
+        targetId: row.id,
+        details: { email: row.email },
+      },
+      tx,
+    );
     return result;
   });
   await mailInvitation(updated, link.token, actor.user, actor.workspace.name);
@@ -123,7 +140,17 @@ export async function revokeInvitation(actor: Member, invitationId: string): Pro
   const row = await pendingInvitation(actor, invitationId);
   await database().transaction(async (tx) => {
     await tx.update(invitations).set({ revokedAt: new Date() }).where(eq(invitations.id, row.id));
-    await recordAudit({ workspaceId: actor.workspace.id, actorId: actor.user.id, action: "invitation.revoked", targetType: "invitation", targetId: row.id, details: { email: row.email } }, tx);
+    await recordAudit(
+      {
+        workspaceId: actor.workspace.id,
+        actorId: actor.user.id,
+        action: "invitation.revoked",
+        targetType: "invitation",
+        targetId: row.id,
+        details: { email: row.email },
+      },
+      tx,
+    );
   });
 }
 
@@ -155,7 +182,9 @@ export async function invitationsForEmail(email: string): Promise<InvitationView
     .from(invitations)
     .innerJoin(workspaces, eq(workspaces.id, invitations.workspaceId))
     .leftJoin(users, eq(users.id, invitations.invitedById))
-    .where(and(eq(invitations.email, email.toLowerCase()), isNull(invitations.acceptedAt), isNull(invitations.revokedAt), gt(invitations.expiresAt, new Date())));
+    .where(
+      and(eq(invitations.email, email.toLowerCase()), isNull(invitations.acceptedAt), isNull(invitations.revokedAt), gt(invitations.expiresAt, new Date())),
+    );
   return rows.map(({ invitation, workspaceName, invitedBy }) => ({
     id: invitation.id,
     email: invitation.email,
@@ -188,7 +217,14 @@ export async function acceptInvitation(user: User, by: { token: string } | { id:
     if (!existing) await tx.insert(memberships).values({ workspaceId: row.workspaceId, userId: user.id, role: row.role });
     await tx.update(invitations).set({ acceptedAt: new Date(), acceptedById: user.id }).where(eq(invitations.id, row.id));
     await recordAudit(
-      { workspaceId: row.workspaceId, actorId: user.id, action: "invitation.accepted", targetType: "invitation", targetId: row.id, details: { role: existing?.role ?? row.role, email: row.email } },
+      {
+        workspaceId: row.workspaceId,
+        actorId: user.id,
+        action: "invitation.accepted",
+        targetType: "invitation",
+        targetId: row.id,
+        details: { role: existing?.role ?? row.role, email: row.email },
+      },
       tx,
     );
     return { workspaceId: row.workspaceId, role: existing?.role ?? row.role };

@@ -91,7 +91,14 @@ export async function removeMember(actor: Member, userId: string): Promise<void>
     }
     await tx.delete(memberships).where(and(eq(memberships.workspaceId, actor.workspace.id), eq(memberships.userId, userId)));
     await recordAudit(
-      { workspaceId: actor.workspace.id, actorId: actor.user.id, action: "member.removed", targetType: "user", targetId: userId, details: { role: current.role } },
+      {
+        workspaceId: actor.workspace.id,
+        actorId: actor.user.id,
+        action: "member.removed",
+        targetType: "user",
+        targetId: userId,
+        details: { role: current.role },
+      },
       tx,
     );
   });
@@ -126,10 +133,7 @@ export async function listAudit(workspaceId: string, limit = 200): Promise<Audit
         // Sign-ins belong to no workspace; show those of this workspace's members.
         and(
           isNull(auditLog.workspaceId),
-          inArray(
-            auditLog.actorId,
-            database().select({ id: memberships.userId }).from(memberships).where(eq(memberships.workspaceId, workspaceId)),
-          ),
+          inArray(auditLog.actorId, database().select({ id: memberships.userId }).from(memberships).where(eq(memberships.workspaceId, workspaceId))),
         ),
       ),
     )

@@ -33,7 +33,10 @@ export async function createToken(member: Member, name: string): Promise<{ token
       .insert(apiTokens)
       .values({ workspaceId: member.workspace.id, userId: member.user.id, name: trimmed, tokenHash: hashToken(token), prefix: token.slice(0, 9) })
       .returning();
-    await recordAudit({ workspaceId: member.workspace.id, actorId: member.user.id, action: "token.created", targetType: "token", targetId: row.id, details: { name: trimmed } }, tx);
+    await recordAudit(
+      { workspaceId: member.workspace.id, actorId: member.user.id, action: "token.created", targetType: "token", targetId: row.id, details: { name: trimmed } },
+      tx,
+    );
     return { token, row };
   });
 }
@@ -46,6 +49,16 @@ export async function revokeToken(member: Member, tokenId: string): Promise<void
       .where(and(eq(apiTokens.id, tokenId), eq(apiTokens.userId, member.user.id), eq(apiTokens.workspaceId, member.workspace.id), isNull(apiTokens.revokedAt)))
       .returning();
     if (!row) throw new ServiceError(404, "not-found", "No active token of yours with that id.");
-    await recordAudit({ workspaceId: member.workspace.id, actorId: member.user.id, action: "token.revoked", targetType: "token", targetId: row.id, details: { name: row.name } }, tx);
+    await recordAudit(
+      {
+        workspaceId: member.workspace.id,
+        actorId: member.user.id,
+        action: "token.revoked",
+        targetType: "token",
+        targetId: row.id,
+        details: { name: row.name },
+      },
+      tx,
+    );
   });
 }

@@ -48,9 +48,6 @@ export async function renameWorkspace(actor: User, workspace: Workspace, name: s
   if (trimmed.length < 2 || trimmed.length > 80) throw new ServiceError(422, "invalid", "A workspace name needs 2 to 80 characters.", { field: "name" });
   await database().transaction(async (tx) => {
     await tx.update(workspaces).set({ name: trimmed }).where(eq(workspaces.id, workspace.id));
-    await recordAudit(
-      { workspaceId: workspace.id, actorId: actor.id, action: "workspace.renamed", details: { from: workspace.name, to: trimmed } },
-      tx,
-    );
+    await recordAudit({ workspaceId: workspace.id, actorId: actor.id, action: "workspace.renamed", details: { from: workspace.name, to: trimmed } }, tx);
   });
 }

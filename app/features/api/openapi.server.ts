@@ -86,7 +86,6 @@ function buildDocument(publicUrl: string): OpenApiDocument {
   };
 }
 
-
 // ---------------------------------------------------------------------------
 // Serving
 

@@ -6,7 +6,12 @@ import { JOINT_NAMES, type JointName } from "../../kinematics/index";
 import { FLAG_LABELS } from "../gaits/flag-labels";
 
 /** What a version keeps of its solve (app/features/versions/versions.server.ts VersionSummary); older rows may lack fields. */
-export type MetricSummary = Partial<Pick<SolveSummary, "frames" | "fps" | "flagsByKind" | "errors" | "warnings" | "worstMarginMm" | "peakSpeedDegS" | "strideMm" | "bodySpeedMmS" | "speedHeadroom">> & {
+export type MetricSummary = Partial<
+  Pick<
+    SolveSummary,
+    "frames" | "fps" | "flagsByKind" | "errors" | "warnings" | "worstMarginMm" | "peakSpeedDegS" | "strideMm" | "bodySpeedMmS" | "speedHeadroom"
+  >
+> & {
   cycleMs?: number;
 };
 
@@ -42,10 +47,7 @@ export type MetricRow = {
 type Direction = "higher" | "lower" | null;
 
 /** The fastest joint over every leg: its speed and where it is. */
-export function peakJointSpeed(
-  peaks: SolveSummary["peakSpeedDegS"] | undefined,
-  joint?: JointName,
-): { degS: number; legId: string; joint: JointName } | null {
+export function peakJointSpeed(peaks: SolveSummary["peakSpeedDegS"] | undefined, joint?: JointName): { degS: number; legId: string; joint: JointName } | null {
   let best: { degS: number; legId: string; joint: JointName } | null = null;
   for (const [legId, speeds] of Object.entries(peaks ?? {})) {
     for (const name of joint ? [joint] : JOINT_NAMES) {
@@ -58,7 +60,15 @@ export function peakJointSpeed(
 
 const EQUAL = 1e-9;
 
-function row(id: MetricId, label: string, unit: string, digits: number, a: number | null | undefined, b: number | null | undefined, direction: Direction): MetricRow {
+function row(
+  id: MetricId,
+  label: string,
+  unit: string,
+  digits: number,
+  a: number | null | undefined,
+  b: number | null | undefined,
+  direction: Direction,
+): MetricRow {
   const valueA = typeof a === "number" && Number.isFinite(a) ? a : null;
   const valueB = typeof b === "number" && Number.isFinite(b) ? b : null;
   const delta = valueA !== null && valueB !== null ? valueB - valueA : null;

@@ -12,10 +12,7 @@ export type RobotRevisionDiff = {
 };
 
 /** Null when both pin the same revision. */
-export function robotRevisionDiff(
-  a: { number: number; definition: unknown },
-  b: { number: number; definition: unknown },
-): RobotRevisionDiff | null {
+export function robotRevisionDiff(a: { number: number; definition: unknown }, b: { number: number; definition: unknown }): RobotRevisionDiff | null {
   if (a.number === b.number) return null;
   const changes = changedFields(a.definition, b.definition);
   return { a: a.number, b: b.number, changes, described: changes.map(describeChange) };

@@ -127,7 +127,11 @@ const POSE_FIELDS = ["x", "y", "z", "roll", "pitch", "yaw"] as const;
 function bodyKeyChanges(a: BodyKey, b: BodyKey): KeyChange[] {
   const changes: KeyChange[] = [];
   if (!near(a.t, b.t, DIFF_TOLERANCE.t)) changes.push("time");
-  if (!POSE_FIELDS.every((field) => near(a.pose[field] ?? 0, b.pose[field] ?? 0, field === "x" || field === "y" || field === "z" ? DIFF_TOLERANCE.mm : DIFF_TOLERANCE.deg))) {
+  if (
+    !POSE_FIELDS.every((field) =>
+      near(a.pose[field] ?? 0, b.pose[field] ?? 0, field === "x" || field === "y" || field === "z" ? DIFF_TOLERANCE.mm : DIFF_TOLERANCE.deg),
+    )
+  ) {
     changes.push("pose");
   }
   if (!sameNumbers(easeOf(a), easeOf(b), DIFF_TOLERANCE.ease)) changes.push("ease");
@@ -180,7 +184,7 @@ export function alignKeys<K extends { t: number; contact?: string }>(a: readonly
   pairs.reverse();
   // Within a run of unpaired keys, list them in time order, removed before added at equal times.
   const timeOf = ([i, j]: [number | null, number | null]) => (i !== null ? a[i].t : b[j!].t);
-  for (let start = 0; start < pairs.length; ) {
+  for (let start = 0; start < pairs.length;) {
     let end = start;
     while (end < pairs.length && (pairs[end][0] === null || pairs[end][1] === null)) end += 1;
     if (end - start > 1) {
@@ -192,12 +196,7 @@ export function alignKeys<K extends { t: number; contact?: string }>(a: readonly
   return pairs;
 }
 
-function diffTrack<K extends LegKey | BodyKey>(
-  a: readonly K[],
-  b: readonly K[],
-  loop: boolean,
-  changesOf: (a: K, b: K) => KeyChange[],
-): KeyDiff[] {
+function diffTrack<K extends LegKey | BodyKey>(a: readonly K[], b: readonly K[], loop: boolean, changesOf: (a: K, b: K) => KeyChange[]): KeyDiff[] {
   return alignKeys(a as readonly (K & { contact?: string })[], b as readonly (K & { contact?: string })[], loop).map(([i, j]): KeyDiff => {
     if (i === null) return { status: "added", a: null, b: { index: j!, key: b[j!] }, changes: [] };
     if (j === null) return { status: "removed", a: { index: i, key: a[i] }, b: null, changes: [] };

@@ -100,14 +100,18 @@ export async function readDraft(workspaceId: string, gaitId: string, db: Databas
       .set({ draftSequence: initial.sequence, draftRobotRevisionId: gait.draftRobotRevisionId ?? initial.robotRevisionId })
       .where(and(eq(gaits.id, gait.id), isNull(gaits.draftSequence)));
     if (gait.draftRobotRevisionId === null && gait.draftSequence !== null) {
-      await db.update(gaits).set({ draftRobotRevisionId: initial.robotRevisionId }).where(and(eq(gaits.id, gait.id), isNull(gaits.draftRobotRevisionId)));
+      await db
+        .update(gaits)
+        .set({ draftRobotRevisionId: initial.robotRevisionId })
+        .where(and(eq(gaits.id, gait.id), isNull(gaits.draftRobotRevisionId)));
     }
     ({ gait, robotName } = await gaitRow(db, workspaceId, gaitId));
   }
   const [pinned] = await db.select().from(robotRevisions).where(eq(robotRevisions.id, gait.draftRobotRevisionId!));
   const newest = await newestRevision(db, gait.robotId);
   const parsed = parseSequence(gait.draftSequence);
-  if (!parsed.ok) throw new ServiceError(409, "conflict", `The stored draft is not a valid sequence: ${parsed.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`);
+  if (!parsed.ok)
+    throw new ServiceError(409, "conflict", `The stored draft is not a valid sequence: ${parsed.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`);
   return {
     gaitId: gait.id,
     sequence: parsed.sequence,
@@ -126,7 +130,10 @@ export function checkSequenceFor(robot: Robot, json: unknown): Sequence {
   const parsed = parseSequence(json);
   const prefix = (issues: SequenceIssue[]) => issues.map((issue) => ({ path: issue.path ? `sequence.${issue.path}` : "sequence", message: issue.message }));
   if (!parsed.ok) {
-    throw invalidDraft(`The sequence is invalid (${parsed.issues.length} problem${parsed.issues.length === 1 ? "" : "s"}); nothing was saved.`, prefix(parsed.issues));
+    throw invalidDraft(
+      `The sequence is invalid (${parsed.issues.length} problem${parsed.issues.length === 1 ? "" : "s"}); nothing was saved.`,
+      prefix(parsed.issues),
+    );
   }
   const fit = sequenceIssuesForRobot(robot, parsed.sequence);
   if (fit.length > 0) throw invalidDraft(`The sequence does not fit robot "${robot.name}"; nothing was saved.`, prefix(fit));
@@ -134,7 +141,10 @@ export function checkSequenceFor(robot: Robot, json: unknown): Sequence {
 }
 
 async function conflict(db: Reader, gaitId: string, baseRevision: number): Promise<never> {
-  const [row] = await db.select({ revision: gaits.draftRevision, updatedAt: gaits.draftUpdatedAt, updatedById: gaits.draftUpdatedById }).from(gaits).where(eq(gaits.id, gaitId));
+  const [row] = await db
+    .select({ revision: gaits.draftRevision, updatedAt: gaits.draftUpdatedAt, updatedById: gaits.draftUpdatedById })
+    .from(gaits)
+    .where(eq(gaits.id, gaitId));
   const updatedBy = await authorOf(db, row.updatedById);
   const details: DraftConflictDetails = { baseRevision, currentRevision: row.revision, updatedAt: row.updatedAt.toISOString(), updatedBy };
   throw new ServiceError(

@@ -92,7 +92,8 @@ async function newestRobot(db: Database, workspaceId: string, robotId: string): 
   return { revisionId: row.revisionId, robot };
 }
 
-const nameTaken = (name: string) => new ServiceError(409, "name-taken", `This robot already has a gait named “${name}”; choose another name.`, { field: "name" });
+const nameTaken = (name: string) =>
+  new ServiceError(409, "name-taken", `This robot already has a gait named “${name}”; choose another name.`, { field: "name" });
 
 async function insertGait(
   db: Database,
@@ -100,7 +101,10 @@ async function insertGait(
   row: { robotId: string; name: string; description: string; sequence: unknown; robotRevisionId: string },
   audit: Record<string, unknown>,
 ): Promise<{ id: string }> {
-  const taken = await db.select({ id: gaits.id }).from(gaits).where(and(eq(gaits.robotId, row.robotId), eq(gaits.name, row.name)));
+  const taken = await db
+    .select({ id: gaits.id })
+    .from(gaits)
+    .where(and(eq(gaits.robotId, row.robotId), eq(gaits.name, row.name)));
   if (taken.length > 0) throw nameTaken(row.name);
   try {
     return await db.transaction(async (tx) => {
@@ -118,7 +122,17 @@ async function insertGait(
           createdById: actor.userId,
         })
         .returning({ id: gaits.id });
-      await recordAudit({ workspaceId: actor.workspaceId, actorId: actor.userId, action: "gait.created", targetType: "gait", targetId: gait.id, details: { name: row.name, ...audit } }, tx);
+      await recordAudit(
+        {
+          workspaceId: actor.workspaceId,
+          actorId: actor.userId,
+          action: "gait.created",
+          targetType: "gait",
+          targetId: gait.id,
+          details: { name: row.name, ...audit },
+        },
+        tx,
+      );
       return gait;
     });
   } catch (error) {
@@ -148,7 +162,12 @@ export async function createGait(actor: DraftActor, input: NewGaitInput, db: Dat
   } catch (error) {
     if (error instanceof GaitInputError) {
       const first = error.issues[0];
-      throw new ServiceError(422, "invalid", first ? `${first.path}: ${first.message}` : error.message, first ? { field: first.path.split(".")[0] } : undefined);
+      throw new ServiceError(
+        422,
+        "invalid",
+        first ? `${first.path}: ${first.message}` : error.message,
+        first ? { field: first.path.split(".")[0] } : undefined,
+      );
     }
     throw error;
   }
@@ -168,7 +187,10 @@ export const copyForm = z.object({
 
 /** A new gait holding someone's edits, on the same robot revision as the draft they edited. */
 export async function createGaitCopy(actor: DraftActor, input: z.output<typeof copyForm>, db: Database = database()): Promise<{ id: string }> {
-  const [source] = await db.select().from(gaits).where(and(eq(gaits.id, input.sourceGaitId), eq(gaits.workspaceId, actor.workspaceId)));
+  const [source] = await db
+    .select()
+    .from(gaits)
+    .where(and(eq(gaits.id, input.sourceGaitId), eq(gaits.workspaceId, actor.workspaceId)));
   if (!source) throw new ServiceError(404, "not-found", "No such gait in this workspace.");
   const revisionId = source.draftRobotRevisionId;
   if (!revisionId) throw new ServiceError(409, "conflict", "The gait to copy has no draft.");

@@ -22,7 +22,11 @@ const badRequest = (message: string) => new ServiceError(400, "bad-request", mes
 export async function addRobot(body: LimitedForm, member: Pick<Member, "user" | "workspace">): Promise<Added> {
   if (!body.ok) {
     if (!body.tooLarge) throw badRequest(body.message);
-    throw new ServiceError(413, "too-large", `The upload is ${formatBytes(body.bytes)}: a robot definition may be up to 256 KB and a URDF file up to 1 MB. Nothing was saved.`);
+    throw new ServiceError(
+      413,
+      "too-large",
+      `The upload is ${formatBytes(body.bytes)}: a robot definition may be up to 256 KB and a URDF file up to 1 MB. Nothing was saved.`,
+    );
   }
   const form = body.form;
   const intent = form.get("intent");
@@ -43,7 +47,9 @@ export async function addRobot(body: LimitedForm, member: Pick<Member, "user" | 
     const file = form.get("file");
     const kind = intent === "upload" ? "robot definition (JSON)" : "URDF file";
     if (!file || typeof file === "string" || file.size === 0) {
-      throw badRequest(`Choose a ${kind} to ${intent === "upload" ? "upload" : "import"}${file && typeof file !== "string" && file.name ? `: ${file.name} is empty` : ""}.`);
+      throw badRequest(
+        `Choose a ${kind} to ${intent === "upload" ? "upload" : "import"}${file && typeof file !== "string" && file.name ? `: ${file.name} is empty` : ""}.`,
+      );
     }
     const limit = intent === "upload" ? DEFINITION_LIMIT_BYTES : URDF_LIMIT_BYTES;
     if (file.size > limit) {

@@ -64,7 +64,16 @@ const profileColumns = {
   updaterName: users.name,
 };
 
-type ProfileRow = { id: string; robotId: string; name: string; profile: unknown; revision: number; updatedAt: Date; updaterLogin: string | null; updaterName: string | null };
+type ProfileRow = {
+  id: string;
+  robotId: string;
+  name: string;
+  profile: unknown;
+  revision: number;
+  updatedAt: Date;
+  updaterLogin: string | null;
+  updaterName: string | null;
+};
 
 const storedProfile = (row: ProfileRow): StoredProfile => ({
   id: row.id,
@@ -159,12 +168,17 @@ export function profileFromForm(robot: Robot, form: FormData): { json: unknown; 
 // Changing
 
 async function nameTaken(db: Reader, robotId: string, name: string, exceptId?: string): Promise<boolean> {
-  const rows = await db.select({ id: calibrationProfiles.id }).from(calibrationProfiles).where(and(eq(calibrationProfiles.robotId, robotId), eq(calibrationProfiles.name, name)));
+  const rows = await db
+    .select({ id: calibrationProfiles.id })
+    .from(calibrationProfiles)
+    .where(and(eq(calibrationProfiles.robotId, robotId), eq(calibrationProfiles.name, name)));
   return rows.some((row) => row.id !== exceptId);
 }
 
 const nameTakenError = (name: string, robot: string) =>
-  new ServiceError(409, "name-taken", `${robot} already has a calibration profile named "${name}"; choose another name (e.g. the unit's serial number).`, { field: "name" });
+  new ServiceError(409, "name-taken", `${robot} already has a calibration profile named "${name}"; choose another name (e.g. the unit's serial number).`, {
+    field: "name",
+  });
 
 export async function createProfile(actor: CalibrationActor, robotId: string, json: unknown, db: Database = database()): Promise<StoredProfile> {
   const target = await calibrationRobot(actor.workspaceId, robotId, db);
@@ -177,7 +191,14 @@ export async function createProfile(actor: CalibrationActor, robotId: string, js
         .values({ robotId, name: profile.name, profile, revision: 1, updatedById: actor.userId })
         .returning({ id: calibrationProfiles.id });
       await recordAudit(
-        { workspaceId: actor.workspaceId, actorId: actor.userId, action: "calibration.created", targetType: "robot", targetId: robotId, details: { profileId: row.id, name: profile.name, revision: 1 } },
+        {
+          workspaceId: actor.workspaceId,
+          actorId: actor.userId,
+          action: "calibration.created",
+          targetType: "robot",
+          targetId: robotId,
+          details: { profileId: row.id, name: profile.name, revision: 1 },
+        },
         tx,
       );
       const [stored] = await selectProfiles(tx).where(eq(calibrationProfiles.id, row.id));
@@ -243,7 +264,13 @@ export async function updateProfile(
 }
 
 /** Deletes the profile as it was at `baseRevision`; 409 when someone saved since. */
-export async function deleteProfile(actor: CalibrationActor, robotId: string, profileId: string, baseRevision: number, db: Database = database()): Promise<{ name: string }> {
+export async function deleteProfile(
+  actor: CalibrationActor,
+  robotId: string,
+  profileId: string,
+  baseRevision: number,
+  db: Database = database(),
+): Promise<{ name: string }> {
   await calibrationRobot(actor.workspaceId, robotId, db);
   return db.transaction(async (tx) => {
     const deleted = await tx
@@ -252,7 +279,14 @@ export async function deleteProfile(actor: CalibrationActor, robotId: string, pr
       .returning({ name: calibrationProfiles.name });
     if (deleted.length === 0) await staleOrMissing(tx, robotId, profileId, baseRevision);
     await recordAudit(
-      { workspaceId: actor.workspaceId, actorId: actor.userId, action: "calibration.deleted", targetType: "robot", targetId: robotId, details: { profileId, name: deleted[0].name, revision: baseRevision } },
+      {
+        workspaceId: actor.workspaceId,
+        actorId: actor.userId,
+        action: "calibration.deleted",
+        targetType: "robot",
+        targetId: robotId,
+        details: { profileId, name: deleted[0].name, revision: baseRevision },
+      },
       tx,
     );
     return { name: deleted[0].name };

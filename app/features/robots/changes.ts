@@ -12,8 +12,7 @@ export function isCalibrationPath(path: FieldPath): boolean {
   return (path[4] === "zeroOffsetDeg" && path.length === 5) || path[4] === "servo";
 }
 
-const isPlainObject = (value: unknown): value is Record<string, unknown> =>
-  value !== null && typeof value === "object" && !Array.isArray(value);
+const isPlainObject = (value: unknown): value is Record<string, unknown> => value !== null && typeof value === "object" && !Array.isArray(value);
 
 /**
  * Every field that differs between two definitions, in document order. Arrays

@@ -52,7 +52,11 @@ export function removeLegAt(document: RobotDocument, index: number): RobotDocume
   const legs = getAt(document, ["legs"]);
   if (!Array.isArray(legs)) return document;
   const id = getAt(legs, [index, "id"]);
-  let next = setAt(document, ["legs"], legs.filter((_, position) => position !== index));
+  let next = setAt(
+    document,
+    ["legs"],
+    legs.filter((_, position) => position !== index),
+  );
   const rest = getAt(next, ["rest"]);
   if (rest && typeof rest === "object" && typeof id === "string" && id in rest) {
     const { [id]: _removed, ...others } = rest as Record<string, unknown>;

@@ -89,9 +89,7 @@ export function copyGeometryTo(robot: Robot, sourceId: string, targetIds: readon
   const targets = new Set(targetIds.filter((id) => id !== sourceId));
   return {
     ...robot,
-    legs: robot.legs.map((leg) =>
-      targets.has(leg.id) ? copyLegGeometry(source, leg, { mirror: legSide(robot, leg) !== side }) : leg,
-    ),
+    legs: robot.legs.map((leg) => (targets.has(leg.id) ? copyLegGeometry(source, leg, { mirror: legSide(robot, leg) !== side }) : leg)),
   };
 }
 

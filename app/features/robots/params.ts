@@ -25,13 +25,9 @@ export const robotName = z.string().trim().min(1, "give the robot a name").max(1
 export const createForm = z.object({
   intent: z.literal("create"),
   name: robotName,
-  source: z.union(
-    [
-      z.templateLiteral(["starter-", z.enum(STARTER_LEG_COUNTS.map(String) as ["4", "6", "8"])]),
-      z.templateLiteral(["robot-", id()]),
-    ],
-    { error: "choose what the new robot starts from" },
-  ),
+  source: z.union([z.templateLiteral(["starter-", z.enum(STARTER_LEG_COUNTS.map(String) as ["4", "6", "8"])]), z.templateLiteral(["robot-", id()])], {
+    error: "choose what the new robot starts from",
+  }),
 });
 
 export const optionalName = z

@@ -149,7 +149,12 @@ const invalidDefinition = (issues: DefinitionIssue[]) =>
 
 /** The URDF importer's report goes with a refusal too, so the person sees what was mapped. */
 const nameTakenError = (name: string, report?: string[]) =>
-  new ServiceError(409, "name-taken", `Another robot in this workspace is already called "${name}": give this one another name. Nothing was saved.`, report ? { report } : undefined);
+  new ServiceError(
+    409,
+    "name-taken",
+    `Another robot in this workspace is already called "${name}": give this one another name. Nothing was saved.`,
+    report ? { report } : undefined,
+  );
 
 function staleError(baseRevision: number, latest: RevisionSummary): ServiceError {
   const details: SaveRefusalDetails = {
@@ -166,8 +171,18 @@ function staleError(baseRevision: number, latest: RevisionSummary): ServiceError
 
 function calibrationOnlyError(role: Role, changes: FieldChange[]): ServiceError {
   const [first, ...others] = changes;
-  const more = others.length === 0 ? "" : ` and ${others.length} more field${others.length === 1 ? "" : "s"} (${others.slice(0, 3).map((change) => change.path).join(", ")}${others.length > 3 ? ", …" : ""})`;
-  return new ServiceError(403, "forbidden", `${ROLE_LABELS[role]} can change only zero offsets and servo mapping; this save also changes ${describeChange(first)}${more}. Nothing was saved.`);
+  const more =
+    others.length === 0
+      ? ""
+      : ` and ${others.length} more field${others.length === 1 ? "" : "s"} (${others
+          .slice(0, 3)
+          .map((change) => change.path)
+          .join(", ")}${others.length > 3 ? ", …" : ""})`;
+  return new ServiceError(
+    403,
+    "forbidden",
+    `${ROLE_LABELS[role]} can change only zero offsets and servo mapping; this save also changes ${describeChange(first)}${more}. Nothing was saved.`,
+  );
 }
 
 // ---------------------------------------------------------------------------
@@ -177,22 +192,11 @@ export type CreatedRobot = { robotId: string; name: string };
 
 type Creation = { workspaceId: string; authorId: string; message: string; source: string; report?: string[] };
 
-async function nameTaken(
-  db: Reader,
-  workspaceId: string,
-  name: string,
-  exceptRobotId?: string,
-): Promise<boolean> {
+async function nameTaken(db: Reader, workspaceId: string, name: string, exceptRobotId?: string): Promise<boolean> {
   const rows = await db
     .select({ id: robots.id })
     .from(robots)
-    .where(
-      and(
-        eq(robots.workspaceId, workspaceId),
-        sql`lower(${robots.name}) = lower(${name})`,
-        exceptRobotId ? ne(robots.id, exceptRobotId) : undefined,
-      ),
-    );
+    .where(and(eq(robots.workspaceId, workspaceId), sql`lower(${robots.name}) = lower(${name})`, exceptRobotId ? ne(robots.id, exceptRobotId) : undefined));
   return rows.length > 0;
 }
 
@@ -236,8 +240,7 @@ export async function createRobotFromDefinition(
   json: unknown,
   options: { workspaceId: string; authorId: string; fileName: string; name?: string },
 ): Promise<CreatedRobot> {
-  const renamed =
-    options.name && json !== null && typeof json === "object" && !Array.isArray(json) ? { ...json, name: options.name } : json;
+  const renamed = options.name && json !== null && typeof json === "object" && !Array.isArray(json) ? { ...json, name: options.name } : json;
   const parsed = parseRobot(renamed);
   if (!parsed.ok) throw invalidDefinition(parsed.issues);
   return insertRobot(parsed.robot, {
@@ -268,10 +271,7 @@ export async function createRobotFromUrdf(
 export type NewRobotSource = { kind: "robot"; robotId: string } | { kind: "starter"; legCount: StarterLegCount };
 
 /** A new robot from a copy of another robot's newest definition, or from the starter template. */
-export async function createRobotFrom(
-  source: NewRobotSource,
-  options: { workspaceId: string; authorId: string; name: string },
-): Promise<CreatedRobot> {
+export async function createRobotFrom(source: NewRobotSource, options: { workspaceId: string; authorId: string; name: string }): Promise<CreatedRobot> {
   if (source.kind === "starter") {
     return insertRobot(starterRobot(options.name, source.legCount), {
       ...options,

@@ -42,7 +42,9 @@ export async function prepareBenchTable(workspaceId: string, robotId: string, qu
     query.kind === "centre"
       ? { kind: "centre", seconds: query.seconds, fps: query.fps }
       : { kind: "sweep", leg: query.leg, joint: query.joint, speed: query.speed, dwell: query.dwell, fps: query.fps, hold: query.hold };
-  const contentHash = createHash("sha256").update(canonicalJson({ format: "gaitloom.bench/1", robot: row.definition, options })).digest("hex");
+  const contentHash = createHash("sha256")
+    .update(canonicalJson({ format: "gaitloom.bench/1", robot: row.definition, options }))
+    .digest("hex");
   const etag = tableEtag({
     contentHash,
     gaitName: benchName(query),
@@ -67,11 +69,22 @@ export function renderBenchTable(prepared: PreparedBench): RenderedTable & { ben
     bench =
       query.kind === "centre"
         ? centreTable(robot, { seconds: query.seconds, fps: query.fps })
-        : sweepTable(robot, { legId: query.leg!, joint: query.joint as JointName, fps: query.fps, speedFraction: query.speed, dwellMs: query.dwell, hold: query.hold });
+        : sweepTable(robot, {
+            legId: query.leg!,
+            joint: query.joint as JointName,
+            fps: query.fps,
+            speedFraction: query.speed,
+            dwellMs: query.dwell,
+            hold: query.hold,
+          });
   } catch (error) {
     if (error instanceof TableExportError) {
-      const parameter = { fps: "fps", seconds: "seconds", speedFraction: "speed", dwellMs: "dwell", legId: "leg", joint: "joint" }[error.issues[0]?.path ?? ""] ?? undefined;
-      throw new ServiceError(400, "bad-request", `The bench table cannot be made: ${error.message}.`, { ...(parameter ? { parameter } : {}), issues: error.issues });
+      const parameter =
+        { fps: "fps", seconds: "seconds", speedFraction: "speed", dwellMs: "dwell", legId: "leg", joint: "joint" }[error.issues[0]?.path ?? ""] ?? undefined;
+      throw new ServiceError(400, "bad-request", `The bench table cannot be made: ${error.message}.`, {
+        ...(parameter ? { parameter } : {}),
+        issues: error.issues,
+      });
     }
     throw error;
   }

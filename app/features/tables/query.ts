@@ -76,7 +76,13 @@ export const benchQuerySchema = z.strictObject({
     .enum(["centre", "sweep"], { error: "kind must be centre or sweep" })
     .default("centre")
     .describe("centre: every servo at 0 servo degrees; sweep: one joint slowly through its range."),
-  leg: z.string().trim().min(1, "leg must name a leg, e.g. LF").max(16, "leg must be at most 16 characters").optional().describe("The leg of the swept joint (sweep only), e.g. LF."),
+  leg: z
+    .string()
+    .trim()
+    .min(1, "leg must name a leg, e.g. LF")
+    .max(16, "leg must be at most 16 characters")
+    .optional()
+    .describe("The leg of the swept joint (sweep only), e.g. LF."),
   joint: z
     .enum(JOINT_NAMES, { error: `joint must be one of ${JOINT_NAMES.join(", ")}` })
     .optional()
@@ -87,7 +93,10 @@ export const benchQuerySchema = z.strictObject({
   dwell: number("dwell", { value: 0, inclusive: true }, 10_000).default(500).describe("Pause at each end of the sweep, ms."),
   seconds: number("seconds", { value: 0, inclusive: false }, 600).default(2).describe("How long the centre table holds the pose, s."),
   fps: number("fps", { value: 0, inclusive: false }, 1000).default(50).describe("Frames per second."),
-  hold: z.enum(["stance", "centre"], { error: "hold must be stance or centre" }).default("stance").describe("What the other joints hold during a sweep: the neutral stance or 0 servo degrees."),
+  hold: z
+    .enum(["stance", "centre"], { error: "hold must be stance or centre" })
+    .default("stance")
+    .describe("What the other joints hold during a sweep: the neutral stance or 0 servo degrees."),
   format: formatParameter,
   units: unitsParameter,
   profile: profileParameter,

@@ -32,7 +32,10 @@ export type ReleaseRecord = {
  * given, else the newest override reason of its review history (its approval
  * over the flags); none at all refuses the release (409).
  */
-export async function recordReleaseTable(tx: Writer, input: { versionId: string; releasedById: string | null; overrideReason?: string | null }): Promise<ReleaseRecord> {
+export async function recordReleaseTable(
+  tx: Writer,
+  input: { versionId: string; releasedById: string | null; overrideReason?: string | null },
+): Promise<ReleaseRecord> {
   const version = await tableVersionById(input.versionId, tx);
   if (!version) throw new ServiceError(404, "not-found", `No version ${input.versionId} to record a release table for.`);
   let overrideReason = input.overrideReason?.trim() || null;
@@ -49,7 +52,11 @@ export async function recordReleaseTable(tx: Writer, input: { versionId: string;
       .orderBy(desc(reviewEvents.createdAt), desc(reviewEvents.id))
       .limit(1);
     if (!event?.reason) {
-      throw new ServiceError(409, "conflict", `Version ${version.number} of "${version.gait.name}" has error flags and no override reason in its review history; its release table cannot be made.`);
+      throw new ServiceError(
+        409,
+        "conflict",
+        `Version ${version.number} of "${version.gait.name}" has error flags and no override reason in its review history; its release table cannot be made.`,
+      );
     }
     overrideReason = event.reason;
     rendered = make(overrideReason);

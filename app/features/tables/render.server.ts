@@ -32,7 +32,10 @@ export type RenderedTable = {
 export type Downloader = { workspaceId: string; userId: string; tokenId: string | null };
 
 /** The calibration as the table's header names it: the profile's name and the revision applied. */
-const headerProfile = (stored: StoredProfile): CalibrationProfile => ({ ...(stored.profile as CalibrationProfile), name: `${stored.name} (revision ${stored.revision})` });
+const headerProfile = (stored: StoredProfile): CalibrationProfile => ({
+  ...(stored.profile as CalibrationProfile),
+  name: `${stored.name} (revision ${stored.revision})`,
+});
 
 /** The robot's profile called `name` (none asked: null); 422 naming the ones there are otherwise. */
 export async function tableCalibration(robotId: string, name: string | undefined, db: Reader): Promise<TableCalibration> {
@@ -62,15 +65,24 @@ function sentenceOf(error: TableExportError): string {
 function refusalOf(error: TableExportError, solved: SolvedSequence | null): ServiceError {
   const summary = sentenceOf(error);
   if (error.code === "override-required") {
-    return new ServiceError(409, error.code, `${summary}. To export it anyway, give the reason with the \`override\` parameter; it is written into the table's header.`, {
-      parameter: "override",
-      summary,
-      errorFlags: solved ? describeFlags(solved.flags) : {},
-      issues: error.issues,
-    });
+    return new ServiceError(
+      409,
+      error.code,
+      `${summary}. To export it anyway, give the reason with the \`override\` parameter; it is written into the table's header.`,
+      {
+        parameter: "override",
+        summary,
+        errorFlags: solved ? describeFlags(solved.flags) : {},
+        issues: error.issues,
+      },
+    );
   }
   const parameter = error.code === "calibration-mismatch" || error.code === "duplicate-channel" ? "profile" : undefined;
-  return new ServiceError(422, error.code, `The table cannot be made: ${error.message}.`, { ...(parameter ? { parameter } : {}), summary, issues: error.issues });
+  return new ServiceError(422, error.code, `The table cannot be made: ${error.message}.`, {
+    ...(parameter ? { parameter } : {}),
+    summary,
+    issues: error.issues,
+  });
 }
 
 /** Prints a solved result as a table in `format`; the exporter's refusals become ServiceErrors. */

@@ -72,9 +72,16 @@ export async function findTableVersion(workspaceId: string, gaitId: string, numb
   const which = number === "released" ? eq(gaitVersions.state, "released") : eq(gaitVersions.number, number);
   const [row] = await selectVersions(db).where(and(eq(gaits.workspaceId, workspaceId), eq(gaitVersions.gaitId, gaitId), which));
   if (row) return tableVersion(row);
-  const [gait] = await db.select({ name: gaits.name }).from(gaits).where(and(eq(gaits.id, gaitId), eq(gaits.workspaceId, workspaceId)));
+  const [gait] = await db
+    .select({ name: gaits.name })
+    .from(gaits)
+    .where(and(eq(gaits.id, gaitId), eq(gaits.workspaceId, workspaceId)));
   if (!gait) throw new ServiceError(404, "not-found", `No gait ${gaitId} in this workspace.`);
-  throw new ServiceError(404, "not-found", number === "released" ? `Gait "${gait.name}" has no released version yet.` : `Gait "${gait.name}" has no version ${number}.`);
+  throw new ServiceError(
+    404,
+    "not-found",
+    number === "released" ? `Gait "${gait.name}" has no released version yet.` : `Gait "${gait.name}" has no version ${number}.`,
+  );
 }
 
 /** A version by id, whichever workspace it is in (the caller has checked); null when there is none. */
@@ -84,7 +91,10 @@ export async function tableVersionById(versionId: string, db: Reader): Promise<T
 }
 
 /** The versions of a gait for the export page's picker, newest first. */
-export async function tableVersionsOf(workspaceId: string, gaitId: string): Promise<{ number: number; state: VersionState; message: string; errors: number; warnings: number }[]> {
+export async function tableVersionsOf(
+  workspaceId: string,
+  gaitId: string,
+): Promise<{ number: number; state: VersionState; message: string; errors: number; warnings: number }[]> {
   const rows = await database()
     .select({ number: gaitVersions.number, state: gaitVersions.state, message: gaitVersions.message, summary: gaitVersions.summary })
     .from(gaitVersions)
@@ -124,7 +134,9 @@ export type PreparedTable = {
 function checkRate(sequence: Sequence, rateHz: number): void {
   const frames = Math.round((sequence.cycleMs * rateHz) / 1000);
   if (frames < 1 || frames > MAX_FRAMES) {
-    throw new ServiceError(400, "bad-request", `rate ${rateHz} Hz gives ${frames} frames for a ${sequence.cycleMs} ms cycle; 1 to ${MAX_FRAMES} allowed.`, { parameter: "rate" });
+    throw new ServiceError(400, "bad-request", `rate ${rateHz} Hz gives ${frames} frames for a ${sequence.cycleMs} ms cycle; 1 to ${MAX_FRAMES} allowed.`, {
+      parameter: "rate",
+    });
   }
 }
 
@@ -143,7 +155,17 @@ export async function prepareVersionTable(
   checkRate(sequence, rateHz);
   const calibration = await tableCalibration(version.robot.id, query.profile, db);
   const overrideReason = query.override ?? null;
-  return { version, robot, sequence, format: query.format, units: query.units, rateHz, calibration, overrideReason, etag: versionTableEtag(version, { format: query.format, units: query.units, rateHz, calibration, overrideReason }) };
+  return {
+    version,
+    robot,
+    sequence,
+    format: query.format,
+    units: query.units,
+    rateHz,
+    calibration,
+    overrideReason,
+    etag: versionTableEtag(version, { format: query.format, units: query.units, rateHz, calibration, overrideReason }),
+  };
 }
 
 /** A version's table with the release's settings (no profile, no database read): the release record's. */
@@ -174,7 +196,8 @@ export function renderVersionTable(prepared: PreparedTable): RenderedTable {
   try {
     solved = solveForTable(prepared.robot, prepared.sequence, prepared.rateHz);
   } catch (error) {
-    if (error instanceof GaitInputError) throw new ServiceError(422, "invalid", `Version ${prepared.version.number} cannot be solved: ${error.message}`, { issues: error.issues });
+    if (error instanceof GaitInputError)
+      throw new ServiceError(422, "invalid", `Version ${prepared.version.number} cannot be solved: ${error.message}`, { issues: error.issues });
     throw error;
   }
   const { version } = prepared;
@@ -195,7 +218,12 @@ export function renderVersionTable(prepared: PreparedTable): RenderedTable {
   });
 }
 
-export async function recordTableDownload(downloader: Downloader, prepared: PreparedTable, rendered: RenderedTable, requested: number | "released"): Promise<void> {
+export async function recordTableDownload(
+  downloader: Downloader,
+  prepared: PreparedTable,
+  rendered: RenderedTable,
+  requested: number | "released",
+): Promise<void> {
   const { version } = prepared;
   await recordAudit({
     workspaceId: downloader.workspaceId,

@@ -79,7 +79,11 @@ async function moveState(tx: Tx, version: LoadedVersion, from: VersionState[], t
     .returning({ id: gaitVersions.id });
   if (moved.length === 0) {
     const [now] = await tx.select({ state: gaitVersions.state }).from(gaitVersions).where(eq(gaitVersions.id, version.id));
-    throw new ServiceError(409, "conflict", `Version ${version.number} is ${stateWord(now?.state ?? version.state)} now, not ${from.map(stateWord).join(" or ")}; reload to see what changed.`);
+    throw new ServiceError(
+      409,
+      "conflict",
+      `Version ${version.number} is ${stateWord(now?.state ?? version.state)} now, not ${from.map(stateWord).join(" or ")}; reload to see what changed.`,
+    );
   }
 }
 
@@ -100,7 +104,10 @@ const versionUrl = (version: { gaitId: string; number: number }) => `${config().
 export const compareUrl = (a: string, b: string) => `${config().publicUrl}/gaits/compare?a=${a}&b=${b}`;
 
 function checksLine(summary: Partial<VersionSummary>): string {
-  const margin = summary.worstMarginMm === null || summary.worstMarginMm === undefined ? "no margin (fewer than three feet down)" : `worst stability margin ${summary.worstMarginMm.toFixed(1)} mm`;
+  const margin =
+    summary.worstMarginMm === null || summary.worstMarginMm === undefined
+      ? "no margin (fewer than three feet down)"
+      : `worst stability margin ${summary.worstMarginMm.toFixed(1)} mm`;
   return `Checks: ${summary.errors ?? 0} error flag(s), ${summary.warnings ?? 0} warning flag(s), ${margin}.`;
 }
 
@@ -115,7 +122,12 @@ async function deliver(mail: { to: string; subject: string; text: string }): Pro
   }
 }
 
-async function mailAuthor(version: LoadedVersion, actor: Member, decided: Extract<VersionState, "approved" | "sent-back" | "released">, lines: string[]): Promise<boolean> {
+async function mailAuthor(
+  version: LoadedVersion,
+  actor: Member,
+  decided: Extract<VersionState, "approved" | "sent-back" | "released">,
+  lines: string[],
+): Promise<boolean> {
   // No mail to oneself: the author who decides sees the outcome on the page.
   if (!version.author || version.author.id === actor.user.id || !version.author.email) return false;
   const decision = stateWord(decided);
@@ -188,7 +200,10 @@ export async function requestReview(
       .innerJoin(users, eq(users.id, memberships.userId))
       .where(and(eq(memberships.workspaceId, actor.workspace.id), eq(memberships.userId, input.reviewerId)));
     if (!reviewer) throw new ServiceError(422, "invalid", "Choose a reviewer from this workspace.", { field: "reviewerId" });
-    if (!can(reviewer.role, "versions.decide")) throw new ServiceError(422, "invalid", `${reviewer.name} is ${reviewer.role} and cannot approve versions; choose a lead or an owner.`, { field: "reviewerId" });
+    if (!can(reviewer.role, "versions.decide"))
+      throw new ServiceError(422, "invalid", `${reviewer.name} is ${reviewer.role} and cannot approve versions; choose a lead or an owner.`, {
+        field: "reviewerId",
+      });
     if (version.author?.id === reviewer.id && reviewer.role !== "owner") {
       throw new ServiceError(422, "invalid", `${reviewer.name} wrote this version and cannot approve it; choose another reviewer.`, { field: "reviewerId" });
     }
@@ -235,25 +250,38 @@ export async function requestReview(
 }
 
 /** in-review → approved. Not one's own version (an owner may, with a reason); error flags need a reason too. */
-export async function approveVersion(actor: Member, versionId: string, input: { comment?: string; overrideReason?: string | null }): Promise<StepOutcome & { override: OverrideNeed[] }> {
+export async function approveVersion(
+  actor: Member,
+  versionId: string,
+  input: { comment?: string; overrideReason?: string | null },
+): Promise<StepOutcome & { override: OverrideNeed[] }> {
   requirePermission(actor, "versions.decide", "approve versions");
   const comment = cleanText(input.comment, COMMENT_LIMIT, "comment", "The comment");
   const reason = cleanText(input.overrideReason, REASON_LIMIT, "overrideReason", "The override reason");
   const db = database();
   const { version, needs } = await db.transaction(async (tx) => {
     const version = await loadVersion(tx, actor.workspace.id, versionId);
-    if (version.state !== "in-review") throw new ServiceError(409, "conflict", `Version ${version.number} is ${stateWord(version.state)}, not in review; only a version in review can be approved.`);
+    if (version.state !== "in-review")
+      throw new ServiceError(
+        409,
+        "conflict",
+        `Version ${version.number} is ${stateWord(version.state)}, not in review; only a version in review can be approved.`,
+      );
     const rules = approvalRules({ authorId: version.author?.id ?? null, errors: version.summary.errors ?? 0 }, { userId: actor.user.id, role: actor.role });
     if (!rules.allowed) throw new ServiceError(403, "forbidden", rules.refusal!);
     if (rules.needsReason.length > 0 && reason.length === 0) {
       const why = rules.needsReason
         .map((need) => (need === "own-version" ? "it is your own version" : `it has ${version.summary.errors} error flag(s)`))
         .join(" and ");
-      throw new ServiceError(422, "invalid", `Approving needs an override reason because ${why}; the reason goes into the review history and the audit log.`, { field: "overrideReason" });
+      throw new ServiceError(422, "invalid", `Approving needs an override reason because ${why}; the reason goes into the review history and the audit log.`, {
+        field: "overrideReason",
+      });
     }
     await moveState(tx, version, ["in-review"], "approved");
     const overrideReason = rules.needsReason.length > 0 ? reason : null;
-    await tx.insert(reviewEvents).values({ versionId: version.id, actorId: actor.user.id, fromState: "in-review", toState: "approved", comment, overrideReason });
+    await tx
+      .insert(reviewEvents)
+      .values({ versionId: version.id, actorId: actor.user.id, fromState: "in-review", toState: "approved", comment, overrideReason });
     await recordAudit(
       {
         workspaceId: actor.workspace.id,
@@ -302,7 +330,10 @@ export async function sendBackVersion(actor: Member, versionId: string, input: {
     );
     return version;
   });
-  const mailed = await mailAuthor(version, actor, "sent-back", [`Comment: ${comment}`, "Start a new draft from it, change what the comment asks, commit and request review again."]);
+  const mailed = await mailAuthor(version, actor, "sent-back", [
+    `Comment: ${comment}`,
+    "Start a new draft from it, change what the comment asks, commit and request review again.",
+  ]);
   return { state: "sent-back", mailed };
 }
 
@@ -328,7 +359,9 @@ export async function releaseVersion(actor: Member, versionId: string, input: { 
       .where(and(eq(gaitVersions.gaitId, version.gaitId), eq(gaitVersions.state, "released")))
       .returning({ id: gaitVersions.id, number: gaitVersions.number });
     for (const old of retiredRows) {
-      await tx.insert(reviewEvents).values({ versionId: old.id, actorId: actor.user.id, fromState: "released", toState: "retired", comment: `Replaced by version ${version.number}.` });
+      await tx
+        .insert(reviewEvents)
+        .values({ versionId: old.id, actorId: actor.user.id, fromState: "released", toState: "retired", comment: `Replaced by version ${version.number}.` });
       await recordAudit(
         {
           workspaceId: actor.workspace.id,
@@ -459,7 +492,10 @@ export async function reviewQueue(member: Member): Promise<ReviewQueue> {
   const numbers =
     gaitIds.length === 0
       ? []
-      : await db.select({ id: gaitVersions.id, gaitId: gaitVersions.gaitId, number: gaitVersions.number }).from(gaitVersions).where(inArray(gaitVersions.gaitId, gaitIds));
+      : await db
+          .select({ id: gaitVersions.id, gaitId: gaitVersions.gaitId, number: gaitVersions.number })
+          .from(gaitVersions)
+          .where(inArray(gaitVersions.gaitId, gaitIds));
   const previousOf = (gaitId: string, number: number) =>
     numbers.filter((row) => row.gaitId === gaitId && row.number < number).sort((x, y) => y.number - x.number)[0]?.id ?? null;
   const item = (row: (typeof rows)[number]): QueueItem => {

@@ -78,7 +78,8 @@ export async function commitDraft(
       );
     }
     const [revision] = await tx.select().from(robotRevisions).where(eq(robotRevisions.id, gait.draftRobotRevisionId));
-    if (!revision || revision.robotId !== gait.robotId) throw new ServiceError(409, "conflict", "The draft pins a revision of another robot; pin one of this gait's robot.");
+    if (!revision || revision.robotId !== gait.robotId)
+      throw new ServiceError(409, "conflict", "The draft pins a revision of another robot; pin one of this gait's robot.");
     const robot = robotOfRevision(revision, { remedy: "move the draft to a newer revision" });
     const sequence = parseSequence(gait.draftSequence);
     if (!sequence.ok) throw new ServiceError(422, "invalid", `The draft is invalid: ${issuesText(sequence.issues)}`);
@@ -92,7 +93,10 @@ export async function commitDraft(
       throw error;
     }
     const summary: VersionSummary = { ...solved.summary, cycleMs: sequence.sequence.cycleMs, loop: sequence.sequence.loop };
-    const [{ latest }] = await tx.select({ latest: max(gaitVersions.number) }).from(gaitVersions).where(eq(gaitVersions.gaitId, gaitId));
+    const [{ latest }] = await tx
+      .select({ latest: max(gaitVersions.number) })
+      .from(gaitVersions)
+      .where(eq(gaitVersions.gaitId, gaitId));
     const number = (latest ?? 0) + 1;
     const contentHash = versionContentHash(sequence.sequence, revision.definition);
     const [row] = await tx
@@ -117,7 +121,15 @@ export async function commitDraft(
         action: "version.committed",
         targetType: "gait",
         targetId: gaitId,
-        details: { versionId: row.id, number, contentHash, robotRevision: revision.number, draftRevision: gait.draftRevision, errors: summary.errors, warnings: summary.warnings },
+        details: {
+          versionId: row.id,
+          number,
+          contentHash,
+          robotRevision: revision.number,
+          draftRevision: gait.draftRevision,
+          errors: summary.errors,
+          warnings: summary.warnings,
+        },
       },
       tx,
     );
@@ -226,7 +238,10 @@ export async function getGait(workspaceId: string, gaitId: string): Promise<Gait
     .where(and(eq(gaits.id, gaitId), eq(gaits.workspaceId, workspaceId)));
   if (!row) return null;
   const [[latestRobot], [counts]] = await Promise.all([
-    db.select({ number: max(robotRevisions.number) }).from(robotRevisions).where(eq(robotRevisions.robotId, row.gait.robotId)),
+    db
+      .select({ number: max(robotRevisions.number) })
+      .from(robotRevisions)
+      .where(eq(robotRevisions.robotId, row.gait.robotId)),
     db
       .select({
         versionCount: sql<number>`count(*)`.mapWith(Number),
@@ -449,7 +464,15 @@ async function versionEvents(versionId: string): Promise<ReviewEvent[]> {
 async function versionDetail(where: SQL): Promise<VersionDetail | null> {
   const db = database();
   const [row] = await db
-    .select({ ...versionColumns, sequence: gaitVersions.sequence, robotRevisionId: gaitVersions.robotRevisionId, gaitId: gaits.id, gaitName: gaits.name, robotId: robots.id, robotName: robots.name })
+    .select({
+      ...versionColumns,
+      sequence: gaitVersions.sequence,
+      robotRevisionId: gaitVersions.robotRevisionId,
+      gaitId: gaits.id,
+      gaitName: gaits.name,
+      robotId: robots.id,
+      robotName: robots.name,
+    })
     .from(gaitVersions)
     .innerJoin(gaits, eq(gaits.id, gaitVersions.gaitId))
     .innerJoin(robots, eq(robots.id, gaits.robotId))
@@ -478,9 +501,9 @@ export function getVersionById(workspaceId: string, versionId: string): Promise<
 }
 
 /** Every version in the workspace, grouped as robot › gait › number, for the comparison picker. */
-export async function listComparableVersions(workspaceId: string): Promise<
-  { id: string; number: number; message: string; state: VersionState; gaitId: string; gaitName: string; robotId: string; robotName: string }[]
-> {
+export async function listComparableVersions(
+  workspaceId: string,
+): Promise<{ id: string; number: number; message: string; state: VersionState; gaitId: string; gaitName: string; robotId: string; robotName: string }[]> {
   return database()
     .select({
       id: gaitVersions.id,
@@ -509,10 +532,14 @@ export type SolvedVersion = { robot: Robot; sequence: Sequence; solved: SolvedSe
 
 /** Solves a version with the robot revision it pins (the same engine that committed it). */
 export async function solveVersion(version: Pick<VersionDetail, "sequence" | "robotRevisionId" | "number">): Promise<SolvedVersion> {
-  const [revision] = await database().select({ definition: robotRevisions.definition, number: robotRevisions.number }).from(robotRevisions).where(eq(robotRevisions.id, version.robotRevisionId));
+  const [revision] = await database()
+    .select({ definition: robotRevisions.definition, number: robotRevisions.number })
+    .from(robotRevisions)
+    .where(eq(robotRevisions.id, version.robotRevisionId));
   const robot = robotOfRevision(revision, { version: version.number });
   const sequence = parseSequence(version.sequence);
-  if (!sequence.ok) throw new ServiceError(409, "conflict", `Version ${version.number} holds a sequence this engine cannot read: ${issuesText(sequence.issues)}`);
+  if (!sequence.ok)
+    throw new ServiceError(409, "conflict", `Version ${version.number} holds a sequence this engine cannot read: ${issuesText(sequence.issues)}`);
   const solved = solveSequence(robot, sequence.sequence);
   const frames = solved.frames.length;
   const display =
@@ -543,12 +570,19 @@ export async function compareVersions(workspaceId: string, aId: string, bId: str
   const [a, b] = await Promise.all([getVersionById(workspaceId, aId), getVersionById(workspaceId, bId)]);
   if (!a || !b) throw new ServiceError(404, "not-found", "One or both versions of this comparison are not in your workspace.");
   if (a.gait.robotId !== b.gait.robotId) {
-    throw new ServiceError(422, "invalid", `These versions belong to gaits of different robots (${a.gait.robotName} and ${b.gait.robotName}); compare versions of one robot.`);
+    throw new ServiceError(
+      422,
+      "invalid",
+      `These versions belong to gaits of different robots (${a.gait.robotName} and ${b.gait.robotName}); compare versions of one robot.`,
+    );
   }
   const [solvedA, solvedB] = await Promise.all([solveVersion(a), solveVersion(b)]);
   const [revisionA, revisionB] = await Promise.all(
     [a, b].map(async (version) => {
-      const [row] = await database().select({ number: robotRevisions.number, definition: robotRevisions.definition }).from(robotRevisions).where(eq(robotRevisions.id, version.robotRevisionId));
+      const [row] = await database()
+        .select({ number: robotRevisions.number, definition: robotRevisions.definition })
+        .from(robotRevisions)
+        .where(eq(robotRevisions.id, version.robotRevisionId));
       return row;
     }),
   );

@@ -73,4 +73,3 @@ export function formatNumber(value: number, decimals = 1): string {
   const text = value.toFixed(decimals);
   return /^-0(\.0+)?$/.test(text) ? text.slice(1) : text;
 }
-

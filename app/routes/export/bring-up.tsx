@@ -25,7 +25,6 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export const meta: Route.MetaFunction = () => [{ title: "Bring-up tables · Gaitloom" }];
 
-
 export default function BringUp({ loaderData }: Route.ComponentProps) {
   const { robots, robot, legs, profiles, query, problem, table, checks, download } = loaderData;
   const submit = useSubmit();
@@ -47,7 +46,8 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
     if (target.tagName !== "SELECT" && (target as HTMLInputElement).type !== "radio") return;
     const search = new URLSearchParams();
     const dropped = target.getAttribute("name") === "robot" ? ["leg", "profile"] : [];
-    for (const [key, value] of new FormData(event.currentTarget)) if (typeof value === "string" && value !== "" && !dropped.includes(key)) search.set(key, value);
+    for (const [key, value] of new FormData(event.currentTarget))
+      if (typeof value === "string" && value !== "" && !dropped.includes(key)) search.set(key, value);
     submit(search, { method: "get", replace: true, preventScrollReset: true });
   };
   return (
@@ -58,7 +58,12 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
         </Link>
       </PageHeader>
       <SafetyNotice />
-      <Form method="get" onChange={onChange} aria-label="Bench table options" className="grid grid-cols-2 gap-4 rounded-lg border border-line bg-surface p-5 lg:grid-cols-4">
+      <Form
+        method="get"
+        onChange={onChange}
+        aria-label="Bench table options"
+        className="grid grid-cols-2 gap-4 rounded-lg border border-line bg-surface p-5 lg:grid-cols-4"
+      >
         <div className="col-span-2">
           <label htmlFor="bench-robot" className={labelClass}>
             Robot (newest revision)
@@ -88,7 +93,14 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
               <label htmlFor="bench-leg" className={labelClass}>
                 Leg
               </label>
-              <select id="bench-leg" name="leg" defaultValue={query.leg ?? ""} key={`leg-${robot.id}-${query.leg}`} className={fieldClass} aria-invalid={problem?.parameter === "leg" || undefined}>
+              <select
+                id="bench-leg"
+                name="leg"
+                defaultValue={query.leg ?? ""}
+                key={`leg-${robot.id}-${query.leg}`}
+                className={fieldClass}
+                aria-invalid={problem?.parameter === "leg" || undefined}
+              >
                 <option value="">Choose…</option>
                 {legs.map((entry) => (
                   <option key={entry.id} value={entry.id}>
@@ -101,7 +113,14 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
               <label htmlFor="bench-joint" className={labelClass}>
                 Joint
               </label>
-              <select id="bench-joint" name="joint" defaultValue={query.joint ?? ""} key={`joint-${query.joint}`} className={fieldClass} aria-invalid={problem?.parameter === "joint" || undefined}>
+              <select
+                id="bench-joint"
+                name="joint"
+                defaultValue={query.joint ?? ""}
+                key={`joint-${query.joint}`}
+                className={fieldClass}
+                aria-invalid={problem?.parameter === "joint" || undefined}
+              >
                 <option value="">Choose…</option>
                 <option value="coxa">coxa</option>
                 <option value="femur">femur</option>
@@ -112,13 +131,31 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
               <label htmlFor="bench-speed" className={labelClass}>
                 Speed (fraction of the joint's limit)
               </label>
-              <input id="bench-speed" name="speed" type="number" step="any" min="0.01" max="10" defaultValue={query.speed} className={`${fieldClass} text-right`} />
+              <input
+                id="bench-speed"
+                name="speed"
+                type="number"
+                step="any"
+                min="0.01"
+                max="10"
+                defaultValue={query.speed}
+                className={`${fieldClass} text-right`}
+              />
             </div>
             <div>
               <label htmlFor="bench-dwell" className={labelClass}>
                 Pause at each end (ms)
               </label>
-              <input id="bench-dwell" name="dwell" type="number" step="1" min="0" max="10000" defaultValue={query.dwell} className={`${fieldClass} text-right`} />
+              <input
+                id="bench-dwell"
+                name="dwell"
+                type="number"
+                step="1"
+                min="0"
+                max="10000"
+                defaultValue={query.dwell}
+                className={`${fieldClass} text-right`}
+              />
             </div>
             <div>
               <label htmlFor="bench-hold" className={labelClass}>
@@ -135,7 +172,16 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
             <label htmlFor="bench-seconds" className={labelClass}>
               Hold for (s)
             </label>
-            <input id="bench-seconds" name="seconds" type="number" step="any" min="0.1" max="600" defaultValue={query.seconds} className={`${fieldClass} text-right`} />
+            <input
+              id="bench-seconds"
+              name="seconds"
+              type="number"
+              step="any"
+              min="0.1"
+              max="600"
+              defaultValue={query.seconds}
+              className={`${fieldClass} text-right`}
+            />
           </div>
         )}
         <div>

@@ -9,14 +9,7 @@ import { Notice } from "~/components/common/Notice";
 import { PageHeader } from "~/components/common/PageHeader";
 import { ProfileEditor, type ProfileIssues } from "~/components/export/ProfileEditor";
 import { requireAccess } from "~/platform/access.server";
-import {
-  calibrationRobot,
-  createProfile,
-  deleteProfile,
-  listProfiles,
-  profileFromForm,
-  updateProfile,
-} from "~/features/robots/calibration.server";
+import { calibrationRobot, createProfile, deleteProfile, listProfiles, profileFromForm, updateProfile } from "~/features/robots/calibration.server";
 import { ServiceError, formAction, pageGuard, type FormError } from "~/platform/errors.server";
 import { can } from "~/platform/permissions";
 import { id, revisionNumber } from "~/platform/params";
@@ -42,7 +35,11 @@ export async function loader({ request, params: raw }: Route.LoaderArgs) {
       revision: target.revision,
       legs: target.robot.legs.map((leg) => ({
         id: leg.id,
-        joints: (["coxa", "femur", "tibia"] as const).map((joint) => ({ joint, channel: leg.joints[joint].servo.channel, reversed: leg.joints[joint].servo.reversed })),
+        joints: (["coxa", "femur", "tibia"] as const).map((joint) => ({
+          joint,
+          channel: leg.joints[joint].servo.channel,
+          reversed: leg.joints[joint].servo.reversed,
+        })),
       })),
     },
     profiles: profiles.map((entry) => ({ ...entry, updatedAt: entry.updatedAt.toISOString() })),

@@ -25,7 +25,13 @@ export function previewOf(rendered: RenderedTable, limit = PREVIEW_ROWS) {
   const shownRows = Math.min(limit, meta.frameCount);
   return {
     preview: {
-      channels: data.channels.map((channel) => ({ column: channel.column, channel: channel.channel, name: channel.name, reversed: channel.reversed, trimDeg: channel.trimDeg })),
+      channels: data.channels.map((channel) => ({
+        column: channel.column,
+        channel: channel.channel,
+        name: channel.name,
+        reversed: channel.reversed,
+        trimDeg: channel.trimDeg,
+      })),
       frameIndex: Array.from(data.frameIndex.subarray(0, shownRows)),
       timeUs: Array.from(data.timeUs.subarray(0, shownRows)),
       values: Array.from(data.values.subarray(0, shownRows * meta.channelCount)),
@@ -63,7 +69,9 @@ function problemOf(refusal: ServiceError): PageProblem {
   const needsOverride = refusal.code === "override-required";
   return {
     // The API's sentence names its query parameter; the page names its field.
-    message: needsOverride ? `${String(details.summary)}. To export it anyway, give an override reason; it is written into the table's header and the audit log.` : refusal.message,
+    message: needsOverride
+      ? `${String(details.summary)}. To export it anyway, give an override reason; it is written into the table's header and the audit log.`
+      : refusal.message,
     parameter: typeof details.parameter === "string" ? details.parameter : (refusal.field ?? null),
     needsOverride,
     issues: details.issues ? [...details.issues] : [],
@@ -108,11 +116,17 @@ export async function exportPageData(workspaceId: string, search: URLSearchParam
   const parsed = await attempt(() => parseQuery(exportPageSchema, formQuery(search, EXPORT_FORM_KEYS)));
   if (!parsed.ok) problem = problemOf(parsed.refusal);
   const query: z.output<typeof exportPageSchema> = parsed.ok ? parsed.value : { format: "csv", units: "deg" };
-  const gait = gaitsWithVersions.find((entry) => entry.id === query.gait) ?? gaitsWithVersions.find((entry) => entry.releasedVersion !== null) ?? gaitsWithVersions[0];
-  const base = { gaits: gaitsWithVersions, problem, query: { format: query.format, units: query.units, rate: query.rate ?? null, profile: query.profile ?? null, override: query.override ?? null } };
+  const gait =
+    gaitsWithVersions.find((entry) => entry.id === query.gait) ?? gaitsWithVersions.find((entry) => entry.releasedVersion !== null) ?? gaitsWithVersions[0];
+  const base = {
+    gaits: gaitsWithVersions,
+    problem,
+    query: { format: query.format, units: query.units, rate: query.rate ?? null, profile: query.profile ?? null, override: query.override ?? null },
+  };
   if (!gait) return { ...base, gait: null, version: null, versions: [], profiles: [], sequence: null, table: null, download: null, release: null };
 
-  const version: number | "released" = query.gait === gait.id && query.version !== undefined ? query.version : gait.releasedVersion !== null ? "released" : gait.latestVersion!;
+  const version: number | "released" =
+    query.gait === gait.id && query.version !== undefined ? query.version : gait.releasedVersion !== null ? "released" : gait.latestVersion!;
   const [versions, profiles] = await Promise.all([tableVersionsOf(workspaceId, gait.id), listProfiles(gait.robotId)]);
   const profile = query.gait === gait.id ? query.profile : undefined;
   const tableQuery: TableQuery = { format: query.format, units: query.units, rate: query.rate, profile, override: query.override };
@@ -131,7 +145,16 @@ export async function exportPageData(workspaceId: string, search: URLSearchParam
     const rendered = renderVersionTable(prepared);
     table = previewOf(rendered);
     // The page's table is the release's canonical one when its query is the recorded one: then the hashes must agree.
-    if (release && apiQueryString({ format: prepared.format, units: prepared.units, rate: query.rate === prepared.sequence.fps ? undefined : query.rate, profile, override: query.override }) === record!.tableFormat) {
+    if (
+      release &&
+      apiQueryString({
+        format: prepared.format,
+        units: prepared.units,
+        rate: query.rate === prepared.sequence.fps ? undefined : query.rate,
+        profile,
+        override: query.override,
+      }) === record!.tableFormat
+    ) {
       release.matches = release.tableSha256 === rendered.sha256;
     }
     download = { path: apiPath, fileName: rendered.fileName, command: curlCommand(`${publicUrl}${apiPath}`, rendered.fileName) };
@@ -165,7 +188,17 @@ export async function benchPageData(workspaceId: string, search: URLSearchParams
   const query = parsed.ok ? parsed.value : parseQuery(benchPageSchema, new URLSearchParams());
   const robotChoice = robotChoices.find((entry) => entry.id === query.robot) ?? robotChoices[0];
   const { robot: _robot, ...benchQuery } = query;
-  const base = { robots: robotChoices, problem, query: { ...benchQuery, leg: benchQuery.leg ?? null, joint: benchQuery.joint ?? null, profile: benchQuery.profile ?? null, override: benchQuery.override ?? null } };
+  const base = {
+    robots: robotChoices,
+    problem,
+    query: {
+      ...benchQuery,
+      leg: benchQuery.leg ?? null,
+      joint: benchQuery.joint ?? null,
+      profile: benchQuery.profile ?? null,
+      override: benchQuery.override ?? null,
+    },
+  };
   if (!robotChoice) return { ...base, robot: null, legs: [], profiles: [], table: null, checks: null, download: null };
 
   const [row, profiles] = await Promise.all([newestRevisionInWorkspace(workspaceId, robotChoice.id), listProfiles(robotChoice.id)]);
@@ -174,7 +207,13 @@ export async function benchPageData(workspaceId: string, search: URLSearchParams
   const legs = parsedRobot.ok
     ? parsedRobot.robot.legs.map((leg) => ({
         id: leg.id,
-        joints: JOINT_NAMES.map((joint) => ({ joint, minDeg: leg.joints[joint].minDeg, maxDeg: leg.joints[joint].maxDeg, maxSpeedDegS: leg.joints[joint].maxSpeedDegS, channel: leg.joints[joint].servo.channel })),
+        joints: JOINT_NAMES.map((joint) => ({
+          joint,
+          minDeg: leg.joints[joint].minDeg,
+          maxDeg: leg.joints[joint].maxDeg,
+          maxSpeedDegS: leg.joints[joint].maxSpeedDegS,
+          channel: leg.joints[joint].servo.channel,
+        })),
       }))
     : [];
   // A sweep starts from the first leg's coxa, so the page has a table to show at once.
@@ -188,10 +227,28 @@ export async function benchPageData(workspaceId: string, search: URLSearchParams
   const apiPath = `/api/v1/robots/${robotChoice.id}/bench-table?${apiQueryString(
     query.kind === "centre"
       ? { kind: "centre", seconds: query.seconds, fps: query.fps, format: query.format, units: query.units, profile: query.profile, override: query.override }
-      : { kind: "sweep", leg: query.leg, joint: query.joint, speed: query.speed, dwell: query.dwell, fps: query.fps, hold: query.hold, format: query.format, units: query.units, profile: query.profile, override: query.override },
+      : {
+          kind: "sweep",
+          leg: query.leg,
+          joint: query.joint,
+          speed: query.speed,
+          dwell: query.dwell,
+          fps: query.fps,
+          hold: query.hold,
+          format: query.format,
+          units: query.units,
+          profile: query.profile,
+          override: query.override,
+        },
   )}`;
   let table = null as ReturnType<typeof previewOf> | null;
-  let checks = null as { flags: { frame: number; kind: string; severity: string; message: string }[]; totalFlags: number; peakSpeedDegS: number | null; limitDegS: number | null; durationS: number } | null;
+  let checks = null as {
+    flags: { frame: number; kind: string; severity: string; message: string }[];
+    totalFlags: number;
+    peakSpeedDegS: number | null;
+    limitDegS: number | null;
+    durationS: number;
+  } | null;
   let download = null as { path: string; fileName: string; command: string } | null;
   if (query.kind === "sweep" && (!query.leg || !query.joint)) {
     problem ??= { message: "Choose the leg and the joint to sweep.", parameter: query.leg ? "joint" : "leg", needsOverride: false, issues: [] };
@@ -235,5 +292,12 @@ function benchOnly(prepared: PreparedBench): BenchTable {
   const { query, robot } = prepared;
   return query.kind === "centre"
     ? centreTable(robot, { seconds: query.seconds, fps: query.fps })
-    : sweepTable(robot, { legId: query.leg!, joint: query.joint as JointName, fps: query.fps, speedFraction: query.speed, dwellMs: query.dwell, hold: query.hold });
+    : sweepTable(robot, {
+        legId: query.leg!,
+        joint: query.joint as JointName,
+        fps: query.fps,
+        speedFraction: query.speed,
+        dwellMs: query.dwell,
+        hold: query.hold,
+      });
 }

@@ -62,7 +62,12 @@ export default function ExportPage({ loaderData }: Route.ComponentProps) {
         </Link>
       </PageHeader>
       <SafetyNotice />
-      <Form method="get" onChange={onChange} className="grid grid-cols-2 gap-4 rounded-lg border border-line bg-surface p-5 lg:grid-cols-4" aria-label="Table options">
+      <Form
+        method="get"
+        onChange={onChange}
+        className="grid grid-cols-2 gap-4 rounded-lg border border-line bg-surface p-5 lg:grid-cols-4"
+        aria-label="Table options"
+      >
         <div className="col-span-2">
           <label htmlFor="export-gait" className={labelClass}>
             Gait
@@ -152,11 +157,7 @@ export default function ExportPage({ loaderData }: Route.ComponentProps) {
               <h2 id="preview-heading" className="text-lg font-semibold">
                 Preview
               </h2>
-              <a
-                href={download.path}
-                download={download.fileName}
-                className="rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover:bg-accent-strong"
-              >
+              <a href={download.path} download={download.fileName} className="rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover:bg-accent-strong">
                 Download {download.fileName}
               </a>
             </div>
@@ -175,11 +176,13 @@ export default function ExportPage({ loaderData }: Route.ComponentProps) {
                   Release record
                 </h2>
                 <p>
-                  Released table <code className="font-mono text-xs break-all">{release.tableSha256}</code>, made with exporter {release.exporterVersion} and solver{" "}
-                  {release.solverVersion} from <code className="font-mono text-xs">{release.tableFormat}</code>.
+                  Released table <code className="font-mono text-xs break-all">{release.tableSha256}</code>, made with exporter {release.exporterVersion} and
+                  solver {release.solverVersion} from <code className="font-mono text-xs">{release.tableFormat}</code>.
                 </p>
                 {release.matches === true ? <p className="mt-1 text-ok">✓ This table is the released one, byte for byte.</p> : null}
-                {release.matches === false ? <p className="mt-1 text-danger">✕ This table differs from the released one: the exporter or solver changed since.</p> : null}
+                {release.matches === false ? (
+                  <p className="mt-1 text-danger">✕ This table differs from the released one: the exporter or solver changed since.</p>
+                ) : null}
                 {release.matches === null ? (
                   <a href={release.path} className="mt-1 inline-block text-accent underline underline-offset-2">
                     Download the released table as recorded

@@ -83,7 +83,10 @@ export default function ComparePage({ loaderData }: Route.ComponentProps) {
   const onFraction = useCallback((value: number) => setFraction(value), []);
   return (
     <>
-      <PageHeader title="Compare versions" lead="Any two versions of one robot's gaits, side by side. The address of this page is the comparison: paste it into a review comment." />
+      <PageHeader
+        title="Compare versions"
+        lead="Any two versions of one robot's gaits, side by side. The address of this page is the comparison: paste it into a review comment."
+      />
       <ComparePicker versions={versions} a={a} b={b} />
       <div className="mt-4">
         <Notice error={problem} />

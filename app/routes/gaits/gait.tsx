@@ -62,7 +62,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   };
 }
 
-export type GaitActionData = { ok: true; intent: "commit" | "restore"; notice: string; version?: { id: string; number: number; contentHash: string }; draftRevision?: number } | FormError;
+export type GaitActionData =
+  { ok: true; intent: "commit" | "restore"; notice: string; version?: { id: string; number: number; contentHash: string }; draftRevision?: number } | FormError;
 
 /**
  * POST /gaits/:gaitId

@@ -26,20 +26,24 @@ export async function loader({ request }: Route.LoaderArgs) {
   };
 }
 
-export const meta: Route.MetaFunction = ({ loaderData }) => [{ title: loaderData?.robot ? `Gaits of ${loaderData.robot.name} · Gaitloom` : "Gaits · Gaitloom" }];
+export const meta: Route.MetaFunction = ({ loaderData }) => [
+  { title: loaderData?.robot ? `Gaits of ${loaderData.robot.name} · Gaitloom` : "Gaits · Gaitloom" },
+];
 
 export default function GaitList({ loaderData }: Route.ComponentProps) {
   const { gaits, robots, robot, unknownRobot, canCreate } = loaderData;
   return (
     <>
-      <PageHeader
-        title={robot ? `Gaits of ${robot.name}` : "Gaits"}
-        lead="Walks, turns and body moves, each with its newest and its released version."
-      >
+      <PageHeader title={robot ? `Gaits of ${robot.name}` : "Gaits"} lead="Walks, turns and body moves, each with its newest and its released version.">
         <Form method="get" className="flex items-end gap-2" key={robot?.id ?? "all"}>
           <div className="flex flex-col gap-0.5 text-xs text-ink-muted">
             <label htmlFor="gaits-robot-filter">Robot</label>
-            <select id="gaits-robot-filter" name="robot" defaultValue={robot?.id ?? ""} className="rounded-md border border-line bg-canvas px-2 py-1 text-sm text-ink">
+            <select
+              id="gaits-robot-filter"
+              name="robot"
+              defaultValue={robot?.id ?? ""}
+              className="rounded-md border border-line bg-canvas px-2 py-1 text-sm text-ink"
+            >
               <option value="">All robots</option>
               {robots.map((candidate) => (
                 <option key={candidate.id} value={candidate.id}>
@@ -63,7 +67,9 @@ export default function GaitList({ loaderData }: Route.ComponentProps) {
       </PageHeader>
       {unknownRobot ? <p className="mb-4 rounded-md bg-sunken px-4 py-2 text-sm">That robot is not in this workspace; showing every robot's gaits.</p> : null}
       {gaits.length === 0 ? (
-        <EmptyState title={robot ? `No gaits for ${robot.name} yet` : "No gaits yet"}>Pick a robot and start a gait from a template such as tripod or wave.</EmptyState>
+        <EmptyState title={robot ? `No gaits for ${robot.name} yet` : "No gaits yet"}>
+          Pick a robot and start a gait from a template such as tripod or wave.
+        </EmptyState>
       ) : (
         <table className="w-full border-collapse rounded-lg bg-surface text-left" aria-label={robot ? `Gaits of ${robot.name}` : "Gaits"}>
           <thead className="border-b border-line text-sm text-ink-muted">
@@ -94,7 +100,11 @@ export default function GaitList({ loaderData }: Route.ComponentProps) {
                 <td className="px-4 py-2 whitespace-nowrap">
                   {gait.latestVersion ? (
                     <span className="inline-flex items-center gap-2">
-                      <Link to={`/gaits/${gait.id}/versions/${gait.latestVersion}`} className="font-mono text-accent underline underline-offset-2" aria-label={`${gait.name} newest version ${gait.latestVersion}`}>
+                      <Link
+                        to={`/gaits/${gait.id}/versions/${gait.latestVersion}`}
+                        className="font-mono text-accent underline underline-offset-2"
+                        aria-label={`${gait.name} newest version ${gait.latestVersion}`}
+                      >
                         v{gait.latestVersion}
                       </Link>
                       {gait.latestState ? <StateBadge state={gait.latestState} /> : null}
@@ -105,7 +115,11 @@ export default function GaitList({ loaderData }: Route.ComponentProps) {
                 </td>
                 <td className="px-4 py-2 whitespace-nowrap">
                   {gait.releasedVersion ? (
-                    <Link to={`/gaits/${gait.id}/versions/${gait.releasedVersion}`} className="font-mono text-accent underline underline-offset-2" aria-label={`${gait.name} released version ${gait.releasedVersion}`}>
+                    <Link
+                      to={`/gaits/${gait.id}/versions/${gait.releasedVersion}`}
+                      className="font-mono text-accent underline underline-offset-2"
+                      aria-label={`${gait.name} released version ${gait.releasedVersion}`}
+                    >
                       v{gait.releasedVersion}
                     </Link>
                   ) : (

@@ -57,7 +57,19 @@ const FIELD_LABELS: Record<string, string> = {
 
 const inputClass = "w-full rounded-md border border-line bg-surface px-2 py-1.5 focus-visible:border-accent";
 
-function NumberInput({ name, placeholder, defaultValue, error, hint }: { name: string; placeholder?: string; defaultValue?: number; error?: boolean; hint?: string }) {
+function NumberInput({
+  name,
+  placeholder,
+  defaultValue,
+  error,
+  hint,
+}: {
+  name: string;
+  placeholder?: string;
+  defaultValue?: number;
+  error?: boolean;
+  hint?: string;
+}) {
   const id = `new-gait-${name}`;
   return (
     <div>
@@ -139,15 +151,33 @@ export default function NewGait({ loaderData, actionData }: Route.ComponentProps
             <label htmlFor="new-gait-name" className="block text-sm font-medium">
               Name
             </label>
-            <input id="new-gait-name" name="name" required maxLength={120} autoComplete="off" aria-invalid={error?.field === "name" || undefined} className={inputClass} />
+            <input
+              id="new-gait-name"
+              name="name"
+              required
+              maxLength={120}
+              autoComplete="off"
+              aria-invalid={error?.field === "name" || undefined}
+              className={inputClass}
+            />
           </div>
         </div>
         <fieldset>
           <legend className="text-sm font-medium">Template (for {robot.legCount} legs)</legend>
           <div className="mt-2 grid gap-2 sm:grid-cols-2">
             {robot.templates.map((candidate) => (
-              <label key={candidate.name} className="flex cursor-pointer items-start gap-2 rounded-md border border-line px-3 py-2 has-[:checked]:border-accent has-[:checked]:bg-accent-soft">
-                <input type="radio" name="template" value={candidate.name} checked={chosen?.name === candidate.name} onChange={() => setTemplate(candidate.name)} className="mt-1 accent-accent" />
+              <label
+                key={candidate.name}
+                className="flex cursor-pointer items-start gap-2 rounded-md border border-line px-3 py-2 has-[:checked]:border-accent has-[:checked]:bg-accent-soft"
+              >
+                <input
+                  type="radio"
+                  name="template"
+                  value={candidate.name}
+                  checked={chosen?.name === candidate.name}
+                  onChange={() => setTemplate(candidate.name)}
+                  className="mt-1 accent-accent"
+                />
                 <span>
                   <span className="block font-mono text-sm">{candidate.name}</span>
                   <span className="block text-sm text-ink-muted">{candidate.label}</span>
@@ -168,7 +198,12 @@ export default function NewGait({ loaderData, actionData }: Route.ComponentProps
             <NumberInput name="stepHeightMm" defaultValue={DEFAULT_PARAMS.stepHeightMm} error={error?.field === "stepHeightMm"} />
             <NumberInput name="directionDeg" defaultValue={DEFAULT_PARAMS.directionDeg} error={error?.field === "directionDeg"} hint="0 forward, 90 left" />
             <NumberInput name="turnDegPerCycle" defaultValue={DEFAULT_PARAMS.turnDegPerCycle} error={error?.field === "turnDegPerCycle"} />
-            <NumberInput name="bodyHeightMm" placeholder={String(robot.standHeightMm)} error={error?.field === "bodyHeightMm"} hint="Empty: the robot's stand height" />
+            <NumberInput
+              name="bodyHeightMm"
+              placeholder={String(robot.standHeightMm)}
+              error={error?.field === "bodyHeightMm"}
+              hint="Empty: the robot's stand height"
+            />
             <NumberInput
               name="dutyFactor"
               placeholder={chosen?.dutyFactor !== null && chosen?.dutyFactor !== undefined ? chosen.dutyFactor.toFixed(3) : ""}
@@ -184,7 +219,11 @@ export default function NewGait({ loaderData, actionData }: Route.ComponentProps
           <textarea id="new-gait-description" name="description" rows={2} maxLength={2000} className={inputClass} />
         </div>
         <div className="flex items-center gap-3">
-          <button type="submit" disabled={busy} className="rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover:bg-accent-strong disabled:opacity-60">
+          <button
+            type="submit"
+            disabled={busy}
+            className="rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover:bg-accent-strong disabled:opacity-60"
+          >
             {busy ? "Creating…" : "Create and open the editor"}
           </button>
           <Link to="/gaits" className="text-ink-muted hover:text-ink">

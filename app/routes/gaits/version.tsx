@@ -32,7 +32,10 @@ const actionForm = z.discriminatedUnion("intent", [
   z.object({
     intent: z.literal("request-review"),
     reviewerId: id("Choose who should review this version."),
-    compareWithId: z.union([id(), z.literal("")]).optional().default(""),
+    compareWithId: z
+      .union([id(), z.literal("")])
+      .optional()
+      .default(""),
     comment: text,
   }),
   z.object({ intent: z.literal("approve"), comment: text, overrideReason: text }),
@@ -55,7 +58,11 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   if (!parsed.success) throw notFound();
   const [version, gait] = await Promise.all([getVersion(workspace.id, parsed.data.gaitId, parsed.data.number), getGait(workspace.id, parsed.data.gaitId)]);
   if (!version || !gait) throw notFound();
-  const [solved, reviewers, siblings] = await Promise.all([solveVersion(version), reviewersFor(workspace.id, version.author?.id ?? null), listVersions(workspace.id, gait.id)]);
+  const [solved, reviewers, siblings] = await Promise.all([
+    solveVersion(version),
+    reviewersFor(workspace.id, version.author?.id ?? null),
+    listVersions(workspace.id, gait.id),
+  ]);
   const others = siblings.filter((sibling) => sibling.id !== version.id).map(({ id, number, message, state }) => ({ id, number, message, state }));
   const previous = others.filter((other) => other.number < version.number).sort((x, y) => y.number - x.number)[0] ?? null;
   const released = others.find((other) => other.state === "released") ?? null;
@@ -96,7 +103,11 @@ export async function action({ request, params }: Route.ActionArgs) {
     if (!version) throw new ServiceError(404, "not-found", "There is no such version of a gait in your workspace.");
     switch (input.intent) {
       case "request-review": {
-        const outcome = await requestReview(member, version.id, { reviewerId: input.reviewerId, comment: input.comment, compareWithId: input.compareWithId || null });
+        const outcome = await requestReview(member, version.id, {
+          reviewerId: input.reviewerId,
+          comment: input.comment,
+          compareWithId: input.compareWithId || null,
+        });
         return { ok: true, intent: input.intent, notice: `Review requested from ${outcome.reviewer}.${mailNote(outcome.mailed, outcome.reviewer)}` };
       }
       case "approve": {
@@ -138,12 +149,18 @@ export default function VersionPage({ loaderData, actionData }: Route.ComponentP
           All versions
         </Link>
         {previousId ? (
-          <Link to={`/gaits/compare?a=${previousId}&b=${version.id}`} className="rounded-md border border-line bg-surface px-3 py-1.5 text-sm font-medium hover:bg-sunken">
+          <Link
+            to={`/gaits/compare?a=${previousId}&b=${version.id}`}
+            className="rounded-md border border-line bg-surface px-3 py-1.5 text-sm font-medium hover:bg-sunken"
+          >
             Compare with the previous version
           </Link>
         ) : null}
         {releasedId ? (
-          <Link to={`/gaits/compare?a=${releasedId}&b=${version.id}`} className="rounded-md border border-line bg-surface px-3 py-1.5 text-sm font-medium hover:bg-sunken">
+          <Link
+            to={`/gaits/compare?a=${releasedId}&b=${version.id}`}
+            className="rounded-md border border-line bg-surface px-3 py-1.5 text-sm font-medium hover:bg-sunken"
+          >
             Compare with the released version
           </Link>
         ) : null}
@@ -191,7 +208,11 @@ export default function VersionPage({ loaderData, actionData }: Route.ComponentP
               <input type="hidden" name="versionId" value={version.id} />
               <input type="hidden" name="draftRevision" value={gait.draftRevision} />
               <p className="mb-2 text-ink-muted">Copies this version's sequence and robot revision into the working draft, to edit or commit again.</p>
-              <button type="submit" disabled={busy === "restore"} className="rounded-md border border-line bg-surface px-3 py-1.5 font-medium hover:bg-sunken disabled:opacity-60">
+              <button
+                type="submit"
+                disabled={busy === "restore"}
+                className="rounded-md border border-line bg-surface px-3 py-1.5 font-medium hover:bg-sunken disabled:opacity-60"
+              >
                 Start a new draft from v{version.number}
               </button>
             </Form>

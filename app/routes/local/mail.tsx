@@ -16,7 +16,19 @@ export const meta: Route.MetaFunction = () => [{ title: "Local inbox · Gaitloom
 // Makes the links in a plain-text mail clickable.
 function Linked({ text }: { text: string }) {
   const parts = text.split(/(https?:\/\/\S+)/g);
-  return <>{parts.map((part, i) => (/^https?:\/\//.test(part) ? <a key={i} href={part} className="text-accent underline">{part}</a> : part))}</>;
+  return (
+    <>
+      {parts.map((part, i) =>
+        /^https?:\/\//.test(part) ? (
+          <a key={i} href={part} className="text-accent underline">
+            {part}
+          </a>
+        ) : (
+          part
+        ),
+      )}
+    </>
+  );
 }
 
 export default function LocalMail({ loaderData }: Route.ComponentProps) {

@@ -57,9 +57,7 @@ export default function RobotList({ loaderData, actionData }: Route.ComponentPro
             ))
           : null}
       </PageHeader>
-      {canEdit && open ? (
-        <AddRobotPanel panel={open} robots={robots} result={actionData ?? null} />
-      ) : null}
+      {canEdit && open ? <AddRobotPanel panel={open} robots={robots} result={actionData ?? null} /> : null}
       {robots.length === 0 ? (
         <EmptyState title="No robots yet">Add a robot by uploading its definition or importing a URDF file.</EmptyState>
       ) : (

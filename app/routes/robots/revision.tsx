@@ -19,12 +19,15 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   const { workspace, role } = await requireAccess(request, "robots.read");
   const parsed = revisionParams.safeParse(params);
   if (!parsed.success) throw notFound();
-  const [found, robot] = await Promise.all([
-    getRevision(workspace.id, parsed.data.robotId, parsed.data.number),
-    getRobot(workspace.id, parsed.data.robotId),
-  ]);
+  const [found, robot] = await Promise.all([getRevision(workspace.id, parsed.data.robotId, parsed.data.number), getRobot(workspace.id, parsed.data.robotId)]);
   if (!found || !robot) throw notFound();
-  return { robot: found.robot, revision: found.revision, latestNumber: found.latestNumber, revisions: robot.revisions, canRestore: can(role, "robots.calibrate") };
+  return {
+    robot: found.robot,
+    revision: found.revision,
+    latestNumber: found.latestNumber,
+    revisions: robot.revisions,
+    canRestore: can(role, "robots.calibrate"),
+  };
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
@@ -71,7 +74,11 @@ export default function RevisionPage({ loaderData, actionData }: Route.Component
           <Form method="post">
             <input type="hidden" name="intent" value="restore" />
             <input type="hidden" name="baseRevision" value={latestNumber} />
-            <button type="submit" disabled={restoring} className="rounded-md bg-accent px-3 py-1 font-medium text-on-accent hover:bg-accent-strong disabled:opacity-50">
+            <button
+              type="submit"
+              disabled={restoring}
+              className="rounded-md bg-accent px-3 py-1 font-medium text-on-accent hover:bg-accent-strong disabled:opacity-50"
+            >
               {restoring ? "Restoring…" : `Restore as revision ${latestNumber + 1}`}
             </button>
           </Form>

@@ -58,9 +58,7 @@ export default function RobotPage({ loaderData }: Route.ComponentProps) {
         </a>
       </PageHeader>
       {mode === "read" ? (
-        <p className="mb-4 rounded-lg border border-line bg-sunken px-4 py-3 text-sm text-ink-muted">
-          You can read this robot; your role cannot change it.
-        </p>
+        <p className="mb-4 rounded-lg border border-line bg-sunken px-4 py-3 text-sm text-ink-muted">You can read this robot; your role cannot change it.</p>
       ) : null}
       {/* A new revision (our save or someone else's, on reload) starts a fresh working copy. */}
       <RobotEditor key={latest.number} robotId={robot.id} initial={latest.definition} baseRevision={latest.number} mode={mode} saveFetcher={saveFetcher} />

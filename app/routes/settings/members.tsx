@@ -90,7 +90,11 @@ export default function Members({ loaderData, actionData }: Route.ComponentProps
             <th className="px-4 py-2 font-medium">E-mail</th>
             <th className="px-4 py-2 font-medium">Role</th>
             <th className="px-4 py-2 text-right font-medium">Joined</th>
-            {canRemove ? <th className="px-4 py-2 font-medium"><span className="sr-only">Remove</span></th> : null}
+            {canRemove ? (
+              <th className="px-4 py-2 font-medium">
+                <span className="sr-only">Remove</span>
+              </th>
+            ) : null}
           </tr>
         </thead>
         <tbody>
@@ -184,7 +188,9 @@ export default function Members({ loaderData, actionData }: Route.ComponentProps
                   <th className="py-2 font-medium">Role</th>
                   <th className="py-2 font-medium">Invited by</th>
                   <th className="py-2 text-right font-medium">Expires</th>
-                  <th className="py-2"><span className="sr-only">Actions</span></th>
+                  <th className="py-2">
+                    <span className="sr-only">Actions</span>
+                  </th>
                 </tr>
               </thead>
               <tbody>
@@ -194,18 +200,18 @@ export default function Members({ loaderData, actionData }: Route.ComponentProps
                     <td className="py-2">{ROLE_LABELS[invitation.role]}</td>
                     <td className="py-2">{invitation.invitedBy ?? "—"}</td>
                     <td className="py-2 text-right">
-                      {new Date(invitation.expiresAt) < new Date() ? (
-                        <span className="text-warning">expired</span>
-                      ) : (
-                        formatDate(invitation.expiresAt)
-                      )}
+                      {new Date(invitation.expiresAt) < new Date() ? <span className="text-warning">expired</span> : formatDate(invitation.expiresAt)}
                     </td>
                     <td className="flex justify-end gap-2 py-2">
                       {(["resend", "revoke"] as const).map((intent) => (
                         <Form method="post" key={intent}>
                           <input type="hidden" name="intent" value={intent} />
                           <input type="hidden" name="invitationId" value={invitation.id} />
-                          <button type="submit" className={button} aria-label={`${intent === "resend" ? "Resend" : "Revoke"} the invitation for ${invitation.email}`}>
+                          <button
+                            type="submit"
+                            className={button}
+                            aria-label={`${intent === "resend" ? "Resend" : "Revoke"} the invitation for ${invitation.email}`}
+                          >
                             {intent === "resend" ? "Resend" : "Revoke"}
                           </button>
                         </Form>

@@ -63,7 +63,13 @@ export default function Tokens({ loaderData, actionData }: Route.ComponentProps)
         <input type="hidden" name="intent" value="create" />
         <label className="flex-1">
           <span className="block text-sm font-medium">Token name</span>
-          <input name="name" required maxLength={60} placeholder="e.g. firmware build server" className="mt-1 w-full rounded-md border border-line bg-surface px-3 py-2" />
+          <input
+            name="name"
+            required
+            maxLength={60}
+            placeholder="e.g. firmware build server"
+            className="mt-1 w-full rounded-md border border-line bg-surface px-3 py-2"
+          />
         </label>
         <button type="submit" className="rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover:bg-accent-strong">
           Create token
@@ -80,7 +86,9 @@ export default function Tokens({ loaderData, actionData }: Route.ComponentProps)
               <th className="px-4 py-2 font-medium">Starts with</th>
               <th className="px-4 py-2 text-right font-medium">Created</th>
               <th className="px-4 py-2 text-right font-medium">Last used</th>
-              <th className="px-4 py-2"><span className="sr-only">State</span></th>
+              <th className="px-4 py-2">
+                <span className="sr-only">State</span>
+              </th>
             </tr>
           </thead>
           <tbody>

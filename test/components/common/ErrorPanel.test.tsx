@@ -22,7 +22,6 @@ function renderFailingRoute(fail: () => never) {
   render(<Stub initialEntries={["/"]} />);
 }
 
-
 function RouteError() {
   return <ErrorPanel error={useRouteError()} />;
 }

@@ -11,7 +11,8 @@ import { renderWithStore } from "../../support/editor";
 afterEach(cleanup);
 
 type Reference = ReturnType<typeof useServerReference>;
-const reference = (data: Partial<Reference>): Reference => ({ data: undefined, isError: false, error: null, isFetching: false, current: true, ...data }) as unknown as Reference;
+const reference = (data: Partial<Reference>): Reference =>
+  ({ data: undefined, isError: false, error: null, isFetching: false, current: true, ...data }) as unknown as Reference;
 
 test("with no server answer yet the list says so and shows the preview's flags", () => {
   const { store } = renderWithStore(<ChecksList reference={reference({})} />);
@@ -36,7 +37,9 @@ test("the server's reference, labelled; agreeing with the preview or not; a run 
   expect(store.getState().frame).toBe(30);
 
   rerender(<ChecksList reference={reference({ data: { ...agreeing.data!, flags: flags.slice(1) } })} />);
-  expect(screen.getByTestId("checks-status").textContent).toBe(`Server reference differs from the browser preview (server ${flags.length - 1} flags, preview ${flags.length}).`);
+  expect(screen.getByTestId("checks-status").textContent).toBe(
+    `Server reference differs from the browser preview (server ${flags.length - 1} flags, preview ${flags.length}).`,
+  );
   fireEvent.click(screen.getByRole("radio", { name: "Browser preview" }));
   expect(screen.getByRole("list", { name: "Flags (browser preview)" })).toBeTruthy();
 });

@@ -7,7 +7,17 @@ afterEach(cleanup);
 
 describe("the fields both angle-table forms share", () => {
   it("offers the robot definition first, then each profile with its revision, the chosen one selected", () => {
-    render(<ProfileField idPrefix="export" profiles={[{ name: "bench rig", revision: 3 }, { name: "field", revision: 1 }]} value="field" resetKey="g1" />);
+    render(
+      <ProfileField
+        idPrefix="export"
+        profiles={[
+          { name: "bench rig", revision: 3 },
+          { name: "field", revision: 1 },
+        ]}
+        value="field"
+        resetKey="g1"
+      />,
+    );
     const select = screen.getByLabelText("Calibration profile") as HTMLSelectElement;
     expect(select.name).toBe("profile");
     expect(Array.from(select.options, (option) => option.textContent)).toEqual(["None — the robot definition", "bench rig (revision 3)", "field (revision 1)"]);

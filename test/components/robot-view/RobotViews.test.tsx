@@ -24,7 +24,9 @@ describe("robot views", () => {
     const top = screen.getByRole("img", { name: `Top view of ${robot.name}` });
     const side = screen.getByRole("img", { name: `Side view of ${robot.name}, from the right` });
     for (const view of [top, side]) {
-      expect([...view.querySelectorAll("[data-leg]")].map((element) => element.getAttribute("data-leg")).sort()).toEqual(robot.legs.map((leg) => leg.id).sort());
+      expect([...view.querySelectorAll("[data-leg]")].map((element) => element.getAttribute("data-leg")).sort()).toEqual(
+        robot.legs.map((leg) => leg.id).sort(),
+      );
     }
     expect(top.querySelectorAll("[data-ring]")).toHaveLength(robot.legs.length);
     expect(container.querySelectorAll("[data-flag]")).toHaveLength(0);

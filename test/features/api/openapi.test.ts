@@ -29,7 +29,9 @@ function routesOf(entries: ConfigEntry[], parent = ""): { path: string; file: st
 const apiRoutes = routesOf(routeConfig as ConfigEntry[]).filter((route) => route.path.startsWith("api/v1/"));
 const toOpenApiPath = (path: string) => `/${path.replace(/:([A-Za-z0-9_]+)/g, "{$1}")}`;
 const document = openApiDocument();
-const operations = Object.entries(document.paths).flatMap(([path, methods]) => Object.entries(methods).map(([method, operation]) => ({ path, method, operation: operation as OpenApiOperation })));
+const operations = Object.entries(document.paths).flatMap(([path, methods]) =>
+  Object.entries(methods).map(([method, operation]) => ({ path, method, operation: operation as OpenApiOperation })),
+);
 
 describe("every /api/v1 route of app/routes.ts is in the OpenAPI document", () => {
   test("the route table has /api/v1 routes to check", () => {
@@ -41,7 +43,10 @@ describe("every /api/v1 route of app/routes.ts is in the OpenAPI document", () =
     const module = await import(/* @vite-ignore */ `../../../app/${file}`);
     const methods = Object.keys(document.paths[path]);
     if (typeof module.action === "function") {
-      expect(methods.some((method) => method !== "get"), `${file} has an action; describe its POST/PUT/DELETE`).toBe(true);
+      expect(
+        methods.some((method) => method !== "get"),
+        `${file} has an action; describe its POST/PUT/DELETE`,
+      ).toBe(true);
     }
     if (typeof module.loader === "function" && typeof module.action !== "function") expect(methods).toContain("get");
   });
@@ -58,7 +63,10 @@ describe("the document holds together", () => {
     expect(document.openapi).toBe("3.1.0");
     expect(document.jsonSchemaDialect).toBe("https://json-schema.org/draft/2020-12/schema");
     expect(document.servers[0].url).toBe("http://127.0.0.1:3000");
-    expect(document.components.securitySchemes).toMatchObject({ bearerToken: { type: "http", scheme: "bearer" }, sessionCookie: { type: "apiKey", in: "cookie" } });
+    expect(document.components.securitySchemes).toMatchObject({
+      bearerToken: { type: "http", scheme: "bearer" },
+      sessionCookie: { type: "apiKey", in: "cookie" },
+    });
     expect(document.security).toEqual([{ bearerToken: [] }, { sessionCookie: [] }]);
   });
 
@@ -69,8 +77,14 @@ describe("the document holds together", () => {
     for (const { path, method, operation } of operations) {
       const label = `${method.toUpperCase()} ${path}`;
       expect(operation.summary, label).toBeTruthy();
-      expect(operation.tags.every((tag) => tags.has(tag)), label).toBe(true);
-      expect(Object.keys(operation.responses).some((status) => /^2/.test(status)), label).toBe(true);
+      expect(
+        operation.tags.every((tag) => tags.has(tag)),
+        label,
+      ).toBe(true);
+      expect(
+        Object.keys(operation.responses).some((status) => /^2/.test(status)),
+        label,
+      ).toBe(true);
       const { action, roles } = operation["x-permission"];
       if (action === "public") {
         expect(operation.security, `${label} is public, so it must say security: []`).toEqual([]);
@@ -149,7 +163,8 @@ describe("schemas come from the zod schemas", () => {
   });
 });
 
-const get = (path: string, headers: Record<string, string> = {}) => ({ request: new Request(`http://127.0.0.1:3000${path}`, { headers }), params: {}, context: {} }) as never;
+const get = (path: string, headers: Record<string, string> = {}) =>
+  ({ request: new Request(`http://127.0.0.1:3000${path}`, { headers }), params: {}, context: {} }) as never;
 
 describe.each([
   ["/api/v1/openapi.json", openapi, "application/json; charset=utf-8"],

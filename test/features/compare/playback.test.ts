@@ -16,7 +16,12 @@ describe("playbackOf", () => {
     for (const [legId, leg] of Object.entries(solved.frames[0].legs)) {
       expect(Math.abs(first.angles[legId].femur - leg.angles.femur)).toBeLessThanOrEqual(0.0005);
     }
-    expect(first.stance.sort()).toEqual(Object.entries(solved.frames[0].legs).filter(([, leg]) => leg.contact === "stance").map(([id]) => id).sort());
+    expect(first.stance.sort()).toEqual(
+      Object.entries(solved.frames[0].legs)
+        .filter(([, leg]) => leg.contact === "stance")
+        .map(([id]) => id)
+        .sort(),
+    );
   });
 });
 

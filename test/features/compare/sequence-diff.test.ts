@@ -5,7 +5,10 @@ import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
 
 const robot = loadDemoRobot(DEMO_ROBOTS.six);
 
-function sequence(legs: Record<string, { t: number; contact: "stance" | "swing"; foot?: [number, number, number]; ease?: [number, number, number, number]; apexMm?: number }[]>, extra: Record<string, unknown> = {}): Sequence {
+function sequence(
+  legs: Record<string, { t: number; contact: "stance" | "swing"; foot?: [number, number, number]; ease?: [number, number, number, number]; apexMm?: number }[]>,
+  extra: Record<string, unknown> = {},
+): Sequence {
   const parsed = parseSequence({
     format: "gaitloom.sequence/1",
     cycleMs: 1000,
@@ -31,8 +34,19 @@ describe("diffSequences: key by key", () => {
   });
 
   it("reports a key added and a key removed, pairing the others", () => {
-    const a = sequence({ LF: [{ t: 0, contact: "swing" }, { t: 0.5, contact: "stance" }] });
-    const b = sequence({ LF: [{ t: 0, contact: "swing" }, { t: 0.25, contact: "swing", foot: [100, 50, -60] }, { t: 0.5, contact: "stance" }] });
+    const a = sequence({
+      LF: [
+        { t: 0, contact: "swing" },
+        { t: 0.5, contact: "stance" },
+      ],
+    });
+    const b = sequence({
+      LF: [
+        { t: 0, contact: "swing" },
+        { t: 0.25, contact: "swing", foot: [100, 50, -60] },
+        { t: 0.5, contact: "stance" },
+      ],
+    });
     const diff = diffSequences(a, b);
     expect(diff.tracks[0].keys.map((key) => key.status)).toEqual(["same", "added", "same"]);
     expect(diff.tracks[0].keys[1].b?.index).toBe(1);
@@ -42,8 +56,18 @@ describe("diffSequences: key by key", () => {
   });
 
   it("calls a key moved when its time shifts (a touch-down 0.05 of a cycle later) and names a changed easing", () => {
-    const a = sequence({ LF: [{ t: 0, contact: "swing", ease: [0.25, 0.1, 0.25, 1] }, { t: 0.5, contact: "stance" }] });
-    const b = sequence({ LF: [{ t: 0, contact: "swing", ease: [0.42, 0, 0.58, 1] }, { t: 0.55, contact: "stance" }] });
+    const a = sequence({
+      LF: [
+        { t: 0, contact: "swing", ease: [0.25, 0.1, 0.25, 1] },
+        { t: 0.5, contact: "stance" },
+      ],
+    });
+    const b = sequence({
+      LF: [
+        { t: 0, contact: "swing", ease: [0.42, 0, 0.58, 1] },
+        { t: 0.55, contact: "stance" },
+      ],
+    });
     const [first, second] = diffSequences(a, b).tracks[0].keys;
     expect(first).toMatchObject({ status: "changed", changes: ["ease"] });
     expect(second).toMatchObject({ status: "changed", changes: ["time"] });
@@ -59,8 +83,24 @@ describe("diffSequences: key by key", () => {
   });
 
   it("compares a swing's height with the generator's step height as its default, and ignores it on stance keys", () => {
-    const a = sequence({ LF: [{ t: 0, contact: "swing" }, { t: 0.5, contact: "stance" }] }, { generator: { stepHeightMm: 25 } });
-    const b = sequence({ LF: [{ t: 0, contact: "swing", apexMm: 25 }, { t: 0.5, contact: "stance" }] }, { generator: { stepHeightMm: 30 } });
+    const a = sequence(
+      {
+        LF: [
+          { t: 0, contact: "swing" },
+          { t: 0.5, contact: "stance" },
+        ],
+      },
+      { generator: { stepHeightMm: 25 } },
+    );
+    const b = sequence(
+      {
+        LF: [
+          { t: 0, contact: "swing", apexMm: 25 },
+          { t: 0.5, contact: "stance" },
+        ],
+      },
+      { generator: { stepHeightMm: 30 } },
+    );
     const diff = diffSequences(a, b);
     expect(diff.tracks[0].keys.map((key) => key.status)).toEqual(["same", "same"]);
     expect(diff.settings).toEqual([{ path: "generator.stepHeightMm", before: 25, after: 30 }]);
@@ -75,8 +115,18 @@ describe("diffSequences: key by key", () => {
   });
 
   it("pairs keys round the seam of a loop by the shorter way (t 0.98 is 0.04 of a cycle from t 0.02)", () => {
-    const a = sequence({ LF: [{ t: 0.02, contact: "swing" }, { t: 0.5, contact: "stance" }] });
-    const b = sequence({ LF: [{ t: 0, contact: "swing" }, { t: 0.52, contact: "stance" }] });
+    const a = sequence({
+      LF: [
+        { t: 0.02, contact: "swing" },
+        { t: 0.5, contact: "stance" },
+      ],
+    });
+    const b = sequence({
+      LF: [
+        { t: 0, contact: "swing" },
+        { t: 0.52, contact: "stance" },
+      ],
+    });
     const keys = diffSequences(a, b).tracks[0].keys;
     expect(keys.map((key) => key.status)).toEqual(["changed", "changed"]);
     expect(keys.every((key) => key.changes.join() === "time")).toBe(true);
@@ -90,7 +140,13 @@ describe("diffSequences: key by key", () => {
 
   it("lists a leg only one side has with all its keys added or removed", () => {
     const a = sequence({ LF: [{ t: 0, contact: "swing" }] });
-    const b = sequence({ LF: [{ t: 0, contact: "swing" }], RF: [{ t: 0, contact: "stance" }, { t: 0.5, contact: "swing" }] });
+    const b = sequence({
+      LF: [{ t: 0, contact: "swing" }],
+      RF: [
+        { t: 0, contact: "stance" },
+        { t: 0.5, contact: "swing" },
+      ],
+    });
     const diff = diffSequences(a, b);
     expect(diff.tracks.find((track) => track.track === "RF")).toMatchObject({ presence: "only-b", counts: { added: 2 } });
     expect(diffSequences(b, a).tracks.find((track) => track.track === "RF")).toMatchObject({ presence: "only-a", counts: { removed: 2 } });
@@ -99,7 +155,17 @@ describe("diffSequences: key by key", () => {
   it("diffs the body track: a pitch added to a pose is a changed pose", () => {
     const pose = { x: 0, y: 0, z: 0, roll: 0, pitch: 0, yaw: 0 };
     const a = sequence({ LF: [{ t: 0, contact: "stance" }] }, { body: { keys: [{ t: 0, pose }] } });
-    const b = sequence({ LF: [{ t: 0, contact: "stance" }] }, { body: { keys: [{ t: 0, pose: { ...pose, pitch: 5 } }, { t: 0.5, pose }] } });
+    const b = sequence(
+      { LF: [{ t: 0, contact: "stance" }] },
+      {
+        body: {
+          keys: [
+            { t: 0, pose: { ...pose, pitch: 5 } },
+            { t: 0.5, pose },
+          ],
+        },
+      },
+    );
     const body = diffSequences(a, b).tracks.find((track) => track.kind === "body")!;
     expect(body.keys.map((key) => [key.status, key.changes.join()])).toEqual([
       ["changed", "pose"],
@@ -132,7 +198,11 @@ describe("diffSequences: key by key", () => {
 
 describe("alignKeys", () => {
   it("pairs equal tracks one to one, in order", () => {
-    const keys = [{ t: 0, contact: "swing" }, { t: 0.3, contact: "stance" }, { t: 0.6, contact: "swing" }];
+    const keys = [
+      { t: 0, contact: "swing" },
+      { t: 0.3, contact: "stance" },
+      { t: 0.6, contact: "swing" },
+    ];
     expect(alignKeys(keys, keys, true)).toEqual([
       [0, 0],
       [1, 1],

@@ -33,7 +33,10 @@ describe("which fields firmware may change", () => {
     after.legs[1].joints.femur.maxDeg = 80;
     after.legs[0].joints.coxa.zeroOffsetDeg = 2;
     const changes = nonCalibrationChanges(before, after);
-    expect(changes.map(describeChange)).toEqual([`legs[0].femur (${before.legs[0].femur} → 70)`, `legs[1].joints.femur.maxDeg (${before.legs[1].joints.femur.maxDeg} → 80)`]);
+    expect(changes.map(describeChange)).toEqual([
+      `legs[0].femur (${before.legs[0].femur} → 70)`,
+      `legs[1].joints.femur.maxDeg (${before.legs[1].joints.femur.maxDeg} → 80)`,
+    ]);
 
     const fewer = { ...before, legs: before.legs.slice(0, 5) };
     expect(nonCalibrationChanges(before, fewer).map(describeChange)).toEqual(["legs (6 items → 5 items)"]);

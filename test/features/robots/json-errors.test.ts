@@ -18,7 +18,7 @@ describe("where JSON goes wrong (RFC 8259 grammar)", () => {
     ["{ legs: ", 2],
     ['{"a": 1,}', 8],
     ['{"a": 01}', 7],
-    ['[1, 2', 5],
+    ["[1, 2", 5],
     ['{"a": "line\nbreak"}', 11],
     ['{"a": 1} x', 9],
     ["", 0],

@@ -22,7 +22,9 @@ describe("robotOfRevision", () => {
   });
 
   test("one that no longer parses: 409 revision-unparseable with the revision, the remedy and the field", () => {
-    const error = refusal(() => robotOfRevision({ number: 4, definition: { legs: "none" } }, { robotName: "Quay walker", remedy: "fix the robot first", field: "robotId" }));
+    const error = refusal(() =>
+      robotOfRevision({ number: 4, definition: { legs: "none" } }, { robotName: "Quay walker", remedy: "fix the robot first", field: "robotId" }),
+    );
     expect(error).toMatchObject({ status: 409, code: "revision-unparseable", details: { robotRevision: 4, field: "robotId" } });
     expect(error.message).toBe("Robot revision 4 of Quay walker no longer parses; fix the robot first.");
   });

@@ -10,7 +10,16 @@ export type ExpectedFlag = { kind: string; frame: number; leg: string; joint?: s
 
 export function expectedStraightWalkFlags(
   robot: Robot,
-  walk: { phase: Record<string, number>; dutyFactor: number; strideMm: number; stepHeightMm: number; bodyHeightMm: number; frames: number; fps: number; ease: (s: number) => number },
+  walk: {
+    phase: Record<string, number>;
+    dutyFactor: number;
+    strideMm: number;
+    stepHeightMm: number;
+    bodyHeightMm: number;
+    frames: number;
+    fps: number;
+    ease: (s: number) => number;
+  },
 ): { flags: ExpectedFlag[]; unreachable: number } {
   const neutral = neutralStance(robot, walk.bodyHeightMm);
   const flags: ExpectedFlag[] = [];
@@ -21,7 +30,14 @@ export function expectedStraightWalkFlags(
         robot,
         leg.id,
         straightWalkFoot(
-          { neutral: neutral[leg.id], liftOff: walk.phase[leg.id], dutyFactor: walk.dutyFactor, strideMm: walk.strideMm, stepHeightMm: walk.stepHeightMm, ease: walk.ease },
+          {
+            neutral: neutral[leg.id],
+            liftOff: walk.phase[leg.id],
+            dutyFactor: walk.dutyFactor,
+            strideMm: walk.strideMm,
+            stepHeightMm: walk.stepHeightMm,
+            ease: walk.ease,
+          },
           frame / walk.frames,
         ),
       ),
@@ -30,7 +46,14 @@ export function expectedStraightWalkFlags(
       if (!solution.reachable) unreachable += 1;
       for (const violation of solution.violations) {
         const above = violation.valueDeg > violation.maxDeg;
-        flags.push({ kind: "joint-limit", frame, leg: leg.id, joint: violation.joint, value: violation.valueDeg, limit: above ? violation.maxDeg : violation.minDeg });
+        flags.push({
+          kind: "joint-limit",
+          frame,
+          leg: leg.id,
+          joint: violation.joint,
+          value: violation.valueDeg,
+          limit: above ? violation.maxDeg : violation.minDeg,
+        });
       }
       const previous = solutions[(frame - 1 + walk.frames) % walk.frames];
       for (const joint of JOINT_NAMES) {

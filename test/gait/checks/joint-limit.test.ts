@@ -29,8 +29,14 @@ describe("too-long stride: joint-limit flags exactly where DESIGN.md's foot path
 
   for (const kind of ["joint-limit", "joint-speed", "loop-jump"]) {
     it(`${kind}: the same frames, legs and joints as worked out independently`, () => {
-      const want = expected.flags.filter((flag) => flag.kind === kind).map(flagKey).sort();
-      const got = solved.flags.filter((flag) => flag.kind === kind).map(flagKey).sort();
+      const want = expected.flags
+        .filter((flag) => flag.kind === kind)
+        .map(flagKey)
+        .sort();
+      const got = solved.flags
+        .filter((flag) => flag.kind === kind)
+        .map(flagKey)
+        .sort();
       expect(got, `expected ${want.length} ${kind} flags: ${want.join("; ")}`).toEqual(want);
     });
   }

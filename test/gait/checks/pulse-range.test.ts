@@ -33,7 +33,9 @@ describe("pulse-range: flagged where angleToPulse clamps, and the table holds th
     const { servo } = robot.legs[0].joints.femur;
     expect(flag.severity).toBe("error");
     expect(flag.message).toMatch(
-      new RegExp(`^LF femur at -?\\d+\\.\\d° at frame ${flag.frame} needs a pulse outside ${servo.minUs}–${servo.maxUs} µs \\(the range ends at -?\\d+\\.\\d°\\); clamped to (${servo.minUs}|${servo.maxUs}) µs$`),
+      new RegExp(
+        `^LF femur at -?\\d+\\.\\d° at frame ${flag.frame} needs a pulse outside ${servo.minUs}–${servo.maxUs} µs \\(the range ends at -?\\d+\\.\\d°\\); clamped to (${servo.minUs}|${servo.maxUs}) µs$`,
+      ),
     );
   });
 });

@@ -14,7 +14,14 @@ describe("wave lifting too many legs: support-count exactly where fewer than thr
   const frames = 60;
   const sequence = generateGait(robot, { template: "wave", dutyFactor: beta, strideMm: 40, cycleMs: 1200, fps: 50 });
   const solved = solveSequence(robot, sequence);
-  const rows: Record<string, [number, "left" | "right"]> = { LF: [0, "left"], LM: [1, "left"], LR: [2, "left"], RF: [0, "right"], RM: [1, "right"], RR: [2, "right"] };
+  const rows: Record<string, [number, "left" | "right"]> = {
+    LF: [0, "left"],
+    LM: [1, "left"],
+    LR: [2, "left"],
+    RF: [0, "right"],
+    RM: [1, "right"],
+    RR: [2, "right"],
+  };
   const liftOff = Object.fromEntries(
     Object.entries(rows).map(([legId, [row, side]]) => [legId, cycleFraction(row * beta + (side === "right" ? 0.5 : 0) + beta)]),
   );

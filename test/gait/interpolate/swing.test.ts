@@ -40,7 +40,9 @@ describe("swing path (DESIGN.md; easing per W3C CSS Easing Functions Level 1)", 
       ];
       const got = worldFoot(frames[frame], "LF");
       expect(frames[frame].legs.LF.contact).toBe("swing");
-      expect(distance(got, expected), `frame ${frame}: expected ${expected.map((v) => v.toFixed(4))}, got ${got.map((v) => v.toFixed(4))} (mm)`).toBeLessThan(1e-6);
+      expect(distance(got, expected), `frame ${frame}: expected ${expected.map((v) => v.toFixed(4))}, got ${got.map((v) => v.toFixed(4))} (mm)`).toBeLessThan(
+        1e-6,
+      );
     }
   });
 

@@ -16,7 +16,28 @@ describe("custom template", () => {
     ]);
     // Swing lasts 0.2 of the cycle, 4 frames of 20: LF up in frames 0..3, RR in 5..8, RF in 10..13, LR in 15..18.
     const up = swingingLegs(solveSequence(robot, sequence, { checks: [] }).frames);
-    expect(up.map((legs) => legs.join(""))).toEqual(["LF", "LF", "LF", "LF", "", "RR", "RR", "RR", "RR", "", "RF", "RF", "RF", "RF", "", "LR", "LR", "LR", "LR", ""]);
+    expect(up.map((legs) => legs.join(""))).toEqual([
+      "LF",
+      "LF",
+      "LF",
+      "LF",
+      "",
+      "RR",
+      "RR",
+      "RR",
+      "RR",
+      "",
+      "RF",
+      "RF",
+      "RF",
+      "RF",
+      "",
+      "LR",
+      "LR",
+      "LR",
+      "LR",
+      "",
+    ]);
   });
 
   it("refuses a missing duty factor or phase, naming the fields", () => {

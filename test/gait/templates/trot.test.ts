@@ -19,6 +19,8 @@ describe("trot template (Hildebrand 1965: diagonal pairs together)", () => {
 
   it("is only for four legs", () => {
     expect(() => generateGait(loadDemoRobot(DEMO_ROBOTS.six), { template: "trot" })).toThrow(GaitInputError);
-    expect(() => generateGait(loadDemoRobot(DEMO_ROBOTS.six), { template: "trot" })).toThrow(/trot needs 4 legs, 2 a side \(this robot has 3 left and 3 right\)/);
+    expect(() => generateGait(loadDemoRobot(DEMO_ROBOTS.six), { template: "trot" })).toThrow(
+      /trot needs 4 legs, 2 a side \(this robot has 3 left and 3 right\)/,
+    );
   });
 });

@@ -30,7 +30,9 @@ async function fingerprint(): Promise<string> {
   const tables = await db.execute<{ name: string }>(
     sql`select tablename as name from pg_tables where schemaname = 'public' and tablename not like '__drizzle%' order by 1`,
   );
-  const parts = tables.map(({ name }) => sql`select ${name}::text || ':' || coalesce(md5(string_agg(t::text, '|' order by t::text)), '') as h from ${sql.identifier(name)} t`);
+  const parts = tables.map(
+    ({ name }) => sql`select ${name}::text || ':' || coalesce(md5(string_agg(t::text, '|' order by t::text)), '') as h from ${sql.identifier(name)} t`,
+  );
   const [row] = await db.execute<{ h: string }>(sql`select md5(string_agg(h, ',')) as h from (${sql.join(parts, sql` union all `)}) parts`);
   return row.h;
 }

@@ -15,7 +15,10 @@ let owner: Member;
 let lead: Member;
 
 async function newPerson(login: string): Promise<User> {
-  const [user] = await database().insert(users).values({ login, name: login, email: `${login}@example.test` }).returning();
+  const [user] = await database()
+    .insert(users)
+    .values({ login, name: login, email: `${login}@example.test` })
+    .returning();
   return user;
 }
 
@@ -78,7 +81,10 @@ describe("invitations", () => {
     const person = await newPerson(uniqueName("late"));
     const row = await invite(owner, person.email, "viewer");
     const token = await linkTokenFor(person.email);
-    await database().update(invitations).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(invitations.id, row.id));
+    await database()
+      .update(invitations)
+      .set({ expiresAt: new Date(Date.now() - 1000) })
+      .where(eq(invitations.id, row.id));
     const expired = await refusal(() => acceptInvitation(person, { token }));
     expect(expired.status).toBe(410);
     expect(expired.message).toContain("expired");

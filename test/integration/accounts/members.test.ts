@@ -34,7 +34,10 @@ describe("members and roles", () => {
     expect(row.role).toBe("lead");
     const entries = await database().select().from(auditLog).where(eq(auditLog.action, "member.role-changed"));
     expect(entries.map((entry) => entry.details)).toEqual(
-      expect.arrayContaining([{ from: "lead", to: "owner" }, { from: "owner", to: "lead" }]),
+      expect.arrayContaining([
+        { from: "lead", to: "owner" },
+        { from: "owner", to: "lead" },
+      ]),
     );
   });
 
@@ -42,10 +45,7 @@ describe("members and roles", () => {
     // The lead is an owner now (previous test); the original owner is back to owner first.
     const newOwner = { ...owner, user: { ...owner.user, id: ids.userIds.lead } };
     await changeRole(newOwner, ids.userIds.owner, "owner");
-    const results = await Promise.allSettled([
-      changeRole(owner, ids.userIds.lead, "viewer"),
-      changeRole(newOwner, ids.userIds.owner, "viewer"),
-    ]);
+    const results = await Promise.allSettled([changeRole(owner, ids.userIds.lead, "viewer"), changeRole(newOwner, ids.userIds.owner, "viewer")]);
     expect(results.filter((r) => r.status === "fulfilled")).toHaveLength(1);
     const owners = await database().select().from(memberships).where(eq(memberships.role, "owner"));
     expect(owners.filter((m) => m.workspaceId === ids.workspaceId)).toHaveLength(1);

@@ -60,7 +60,9 @@ describe("API tokens", () => {
   });
 
   test("a malformed Authorization header gets a 401 that says how to send the token", async () => {
-    const refusal = await outcome(() => requireApiAccess(new Request("http://127.0.0.1:3000/api/v1/workspace", { headers: { Authorization: "Token abc" } }), "workspace.read"));
+    const refusal = await outcome(() =>
+      requireApiAccess(new Request("http://127.0.0.1:3000/api/v1/workspace", { headers: { Authorization: "Token abc" } }), "workspace.read"),
+    );
     expect(refusal.status).toBe(401);
     expect(refusal.body.error.message).toContain("Bearer <token>");
   });

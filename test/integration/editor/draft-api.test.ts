@@ -59,7 +59,10 @@ describe("reading the draft", () => {
   test("a gait without a draft gets one on first read: from its newest version, else from the robot's first suitable template", async () => {
     const db = database();
     const crawler = ids.robotIds["Pier crawler"];
-    const [fresh] = await db.insert(gaits).values({ workspaceId: ids.workspaceId, robotId: crawler, name: `No draft ${randomUUID()}` }).returning();
+    const [fresh] = await db
+      .insert(gaits)
+      .values({ workspaceId: ids.workspaceId, robotId: crawler, name: `No draft ${randomUUID()}` })
+      .returning();
     const answer = await getDraft("animator", fresh.id);
     expect(answer.status).toBe(200);
     expect(answer.body.revision).toBe(0);
@@ -69,9 +72,14 @@ describe("reading the draft", () => {
     expect(row.draftRobotRevisionId).not.toBeNull();
 
     const versioned = await stored(ids.gaitIds["Wave creep"]);
-    const [copy] = await db.insert(gaits).values({ workspaceId: ids.workspaceId, robotId: crawler, name: `From version ${randomUUID()}` }).returning();
+    const [copy] = await db
+      .insert(gaits)
+      .values({ workspaceId: ids.workspaceId, robotId: crawler, name: `From version ${randomUUID()}` })
+      .returning();
     const [version] = await db.select().from(gaitVersions).where(eq(gaitVersions.gaitId, versioned.id)).orderBy(desc(gaitVersions.number)).limit(1);
-    await db.insert(gaitVersions).values({ ...version, id: undefined, gaitId: copy.id, number: 1, createdAt: undefined, stateChangedAt: undefined, state: "committed" });
+    await db
+      .insert(gaitVersions)
+      .values({ ...version, id: undefined, gaitId: copy.id, number: 1, createdAt: undefined, stateChangedAt: undefined, state: "committed" });
     const fromVersion = await getDraft("animator", copy.id);
     expect(fromVersion.body.sequence).toEqual(version.sequence);
   });
@@ -83,7 +91,10 @@ describe("reading the draft", () => {
     expect(malformed.body.error).toMatchObject({ code: "bad_request", message: 'gaitId must be a UUID (got "not-a-uuid")' });
 
     const db = database();
-    const [other] = await db.insert(workspaces).values({ slug: `other-${randomUUID()}`, name: "Another lab" }).returning();
+    const [other] = await db
+      .insert(workspaces)
+      .values({ slug: `other-${randomUUID()}`, name: "Another lab" })
+      .returning();
     const [robot] = await db.insert(robots).values({ workspaceId: other.id, name: "Their crawler" }).returning();
     const [crawlerRevision] = await db.select().from(robotRevisions).where(eq(robotRevisions.robotId, ids.robotIds["Pier crawler"]));
     await db.insert(robotRevisions).values({ robotId: robot.id, number: 1, definition: crawlerRevision.definition });
@@ -126,7 +137,9 @@ describe("saving the draft", () => {
       details: { baseRevision: base, currentRevision: base + 1, updatedBy: { login: winner.login, name: winner.name } },
     });
     expect(lost.body.error.message).toMatch(
-      new RegExp(`^Revision ${base + 1} of the draft was saved by ${winner.name} at \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d UTC while you were editing revision ${base}\\. Nothing was saved\\.$`),
+      new RegExp(
+        `^Revision ${base + 1} of the draft was saved by ${winner.name} at \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d UTC while you were editing revision ${base}\\. Nothing was saved\\.$`,
+      ),
     );
     const after = await stored();
     expect(after.draftRevision).toBe(base + 1);
@@ -184,7 +197,9 @@ describe("saving the draft", () => {
     expect(badJson.status).toBe(400);
     expect(badJson.body.error.code).toBe("bad_request");
 
-    const huge = await outcome(async () => act(draftApi, new Request(base.url, { method: "PUT", headers: base.headers, body: JSON.stringify({ pad: "x".repeat(1024 * 1024 + 10) }) }), { gaitId }));
+    const huge = await outcome(async () =>
+      act(draftApi, new Request(base.url, { method: "PUT", headers: base.headers, body: JSON.stringify({ pad: "x".repeat(1024 * 1024 + 10) }) }), { gaitId }),
+    );
     expect(huge.status).toBe(413);
     expect(huge.body.error.code).toBe("payload_too_large");
 
@@ -209,13 +224,20 @@ describe("saving the draft", () => {
 describe("moving the draft to the robot's newest revision", () => {
   async function move(caller: Caller, baseRevision: number, id: string) {
     const request = await requestsAs(caller, ids);
-    return outcome(async () => act(editor, await request("POST", `/gaits/${id}/edit`, { form: { intent: "move-to-newest-robot", baseRevision: String(baseRevision) } }), { gaitId: id }));
+    return outcome(async () =>
+      act(editor, await request("POST", `/gaits/${id}/edit`, { form: { intent: "move-to-newest-robot", baseRevision: String(baseRevision) } }), { gaitId: id }),
+    );
   }
 
   test("pins the newest revision, bumps the draft revision, writes the audit log; a second move is refused as already done", async () => {
     const id = ids.gaitIds["Crawl"];
     const before = await stored(id);
-    const [latest] = await database().select().from(robotRevisions).where(eq(robotRevisions.robotId, before.robotId)).orderBy(desc(robotRevisions.number)).limit(1);
+    const [latest] = await database()
+      .select()
+      .from(robotRevisions)
+      .where(eq(robotRevisions.robotId, before.robotId))
+      .orderBy(desc(robotRevisions.number))
+      .limit(1);
     const [newer] = await database()
       .insert(robotRevisions)
       .values({ robotId: before.robotId, number: latest.number + 1, definition: latest.definition, message: "re-measured" })
@@ -226,7 +248,10 @@ describe("moving the draft to the robot's newest revision", () => {
     const after = await stored(id);
     expect(after.draftRobotRevisionId).toBe(newer.id);
     expect(after.draftSequence).toEqual(before.draftSequence);
-    const [entry] = await database().select().from(auditLog).where(and(eq(auditLog.action, "gait.draft.robot-moved"), eq(auditLog.targetId, id)));
+    const [entry] = await database()
+      .select()
+      .from(auditLog)
+      .where(and(eq(auditLog.action, "gait.draft.robot-moved"), eq(auditLog.targetId, id)));
     expect(entry.details).toEqual({ fromRobotRevision: latest.number, toRobotRevision: newer.number });
 
     const again = await move("animator", after.draftRevision, id);
@@ -240,7 +265,12 @@ describe("moving the draft to the robot's newest revision", () => {
   test("a newest revision the draft does not fit (a leg renamed) is refused with 422 and nothing moves; a stale base gets 409", async () => {
     const id = ids.gaitIds["Trot"];
     const before = await stored(id);
-    const [latest] = await database().select().from(robotRevisions).where(eq(robotRevisions.robotId, before.robotId)).orderBy(desc(robotRevisions.number)).limit(1);
+    const [latest] = await database()
+      .select()
+      .from(robotRevisions)
+      .where(eq(robotRevisions.robotId, before.robotId))
+      .orderBy(desc(robotRevisions.number))
+      .limit(1);
     const renamed = structuredClone(latest.definition) as any;
     const oldId = renamed.legs[0].id;
     renamed.legs[0].id = "XF";
@@ -248,13 +278,17 @@ describe("moving the draft to the robot's newest revision", () => {
       renamed.rest.XF = renamed.rest[oldId];
       delete renamed.rest[oldId];
     }
-    await database().insert(robotRevisions).values({ robotId: before.robotId, number: latest.number + 1, definition: renamed });
+    await database()
+      .insert(robotRevisions)
+      .values({ robotId: before.robotId, number: latest.number + 1, definition: renamed });
     const refused = await move("lead", before.draftRevision, id);
     expect(refused.status).toBe(422);
     expect(refused.body.error).toMatch(/^The draft does not fit robot revision \d+: legs\.XF is missing/);
     expect((await stored(id)).draftRobotRevisionId).toBe(before.draftRobotRevisionId);
 
-    await database().insert(robotRevisions).values({ robotId: before.robotId, number: latest.number + 2, definition: latest.definition });
+    await database()
+      .insert(robotRevisions)
+      .values({ robotId: before.robotId, number: latest.number + 2, definition: latest.definition });
     const stale = await move("lead", before.draftRevision - 1, id);
     expect(stale.status).toBe(409);
     expect((await stored(id)).draftRobotRevisionId).toBe(before.draftRobotRevisionId);
@@ -269,7 +303,9 @@ describe("the editor page", () => {
     expect(answer.body.gait.name).toBe("Tripod cruise");
     expect(parseSequence(answer.body.sequence).ok).toBe(true);
     expect(answer.body.robot.legs).toHaveLength(6);
-    const missing = await outcome(async () => load(editor, await (await requestsAs("animator", ids))("GET", `/gaits/${randomUUID()}/edit`), { gaitId: randomUUID() }));
+    const missing = await outcome(async () =>
+      load(editor, await (await requestsAs("animator", ids))("GET", `/gaits/${randomUUID()}/edit`), { gaitId: randomUUID() }),
+    );
     expect(missing.status).toBe(404);
   });
 });

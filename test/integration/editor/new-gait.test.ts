@@ -36,14 +36,34 @@ describe("the new-gait page", () => {
 
   test("creates the gait with a generated draft on the newest robot revision and opens the editor", async () => {
     const name = uniqueName("Quick tripod");
-    const answer = await post("animator", { intent: "create", robotId: ids.robotIds["Pier crawler"], name, template: "tripod", cycleMs: "1000", fps: "50", strideMm: "50", stepHeightMm: "30" });
+    const answer = await post("animator", {
+      intent: "create",
+      robotId: ids.robotIds["Pier crawler"],
+      name,
+      template: "tripod",
+      cycleMs: "1000",
+      fps: "50",
+      strideMm: "50",
+      stepHeightMm: "30",
+    });
     expect(answer.status).toBe(302);
     const gaitId = answer.location!.match(/^\/gaits\/([0-9a-f-]{36})\/edit$/)![1];
     const [row] = await database().select().from(gaits).where(eq(gaits.id, gaitId));
-    expect(row).toMatchObject({ name, workspaceId: ids.workspaceId, robotId: ids.robotIds["Pier crawler"], createdById: ids.userIds.animator, draftRevision: 1 });
+    expect(row).toMatchObject({
+      name,
+      workspaceId: ids.workspaceId,
+      robotId: ids.robotIds["Pier crawler"],
+      createdById: ids.userIds.animator,
+      draftRevision: 1,
+    });
     const sequence = parseSequence(row.draftSequence);
     if (!sequence.ok) throw new Error("stored draft invalid");
-    expect(sequence.sequence).toMatchObject({ name, cycleMs: 1000, fps: 50, generator: { template: "tripod", strideMm: 50, stepHeightMm: 30, dutyFactor: 0.5 } });
+    expect(sequence.sequence).toMatchObject({
+      name,
+      cycleMs: 1000,
+      fps: 50,
+      generator: { template: "tripod", strideMm: 50, stepHeightMm: 30, dutyFactor: 0.5 },
+    });
     const [revision] = await database().select().from(robotRevisions).where(eq(robotRevisions.id, row.draftRobotRevisionId!));
     expect(revision.robotId).toBe(ids.robotIds["Pier crawler"]);
     const [entry] = await database().select().from(auditLog).where(eq(auditLog.targetId, gaitId));
@@ -60,7 +80,13 @@ describe("the new-gait page", () => {
     expect(unsuited.body.field).toBe("template");
     expect(unsuited.body.error).toMatch(/^template: trot needs 4 legs/);
 
-    const badNumber = await post("lead", { intent: "create", robotId: ids.robotIds["Pier crawler"], name: uniqueName("Odd"), template: "wave", cycleMs: "fast" });
+    const badNumber = await post("lead", {
+      intent: "create",
+      robotId: ids.robotIds["Pier crawler"],
+      name: uniqueName("Odd"),
+      template: "wave",
+      cycleMs: "fast",
+    });
     expect(badNumber.status).toBe(422);
     expect(badNumber.body).toMatchObject({ error: "Cycle time (ms): must be a number", code: "invalid", field: "cycleMs" });
   });

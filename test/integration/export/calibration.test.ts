@@ -87,7 +87,10 @@ describe("through the page's form", () => {
   });
 
   test("a pasted JSON profile naming a leg the robot lacks: the issue at joints.<leg>", async () => {
-    const outcome = await post("firmware", { intent: "import", json: JSON.stringify({ name: uniqueName("SN-json"), joints: { LM: { coxa: { trimDeg: 1 } } } }) });
+    const outcome = await post("firmware", {
+      intent: "import",
+      json: JSON.stringify({ name: uniqueName("SN-json"), joints: { LM: { coxa: { trimDeg: 1 } } } }),
+    });
     expect(outcome.status).toBe(422);
     expect(outcome.body.details.issues[0].path).toBe("joints.LM");
     expect((await post("firmware", { intent: "import", json: "{ nope" })).body.error).toMatch(/not JSON/);
@@ -161,7 +164,7 @@ describe("the service", () => {
     await lockHeld;
     const creates = [1, 2].map(() => createProfile(actor, robotId, { name, joints: {} }));
     const settled = Promise.allSettled(creates);
-    for (let waiting = 0; waiting < 2; ) {
+    for (let waiting = 0; waiting < 2;) {
       await new Promise((resolve) => setTimeout(resolve, 20));
       const [row] = await database().execute<{ count: number }>(
         sql`select count(*)::int as count from pg_locks where relation = 'calibration_profiles'::regclass and not granted`,
@@ -179,7 +182,9 @@ describe("the service", () => {
   });
 
   test("another workspace's actor cannot touch the robot (404)", async () => {
-    const error = await thrown(() => createProfile({ userId: actor.userId, workspaceId: "00000000-0000-4000-8000-000000000000" }, robotId, { name: "x", joints: {} }));
+    const error = await thrown(() =>
+      createProfile({ userId: actor.userId, workspaceId: "00000000-0000-4000-8000-000000000000" }, robotId, { name: "x", joints: {} }),
+    );
     expect((error as ServiceError).status).toBe(404);
   });
 

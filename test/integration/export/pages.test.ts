@@ -108,7 +108,9 @@ describe("bench tables", () => {
   test("ETag and 304 as for gait tables", async () => {
     const first = await get("kind=sweep&leg=RM&joint=tibia");
     const again = await responseOf(() =>
-      load(benchTable, bearer(`/api/v1/robots/${crawler}/bench-table?kind=sweep&leg=RM&joint=tibia`, token, { "If-None-Match": first.headers.get("ETag")! }), { robotId: crawler }),
+      load(benchTable, bearer(`/api/v1/robots/${crawler}/bench-table?kind=sweep&leg=RM&joint=tibia`, token, { "If-None-Match": first.headers.get("ETag")! }), {
+        robotId: crawler,
+      }),
     );
     expect(again.status).toBe(304);
   });
@@ -134,7 +136,9 @@ describe("bench tables", () => {
     const slow = await page(bringUp, `/export/bring-up?robot=${crawler}&kind=sweep&leg=LF&joint=coxa`);
     expect(slow.problem).toBe(null);
     expect(slow.checks.peakSpeedDegS).toBeLessThanOrEqual(slow.checks.limitDegS * 0.25 + 1e-6);
-    expect(slow.download.path).toBe(`/api/v1/robots/${crawler}/bench-table?kind=sweep&leg=LF&joint=coxa&speed=0.25&dwell=500&fps=50&hold=stance&format=csv&units=deg`);
+    expect(slow.download.path).toBe(
+      `/api/v1/robots/${crawler}/bench-table?kind=sweep&leg=LF&joint=coxa&speed=0.25&dwell=500&fps=50&hold=stance&format=csv&units=deg`,
+    );
   });
 
   test("choosing a sweep without a leg starts at the first leg's coxa", async () => {

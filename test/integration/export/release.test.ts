@@ -76,7 +76,9 @@ describe("recordReleaseTable", () => {
     const gaitId = ids.gaitIds["Crawl"];
     const version = await storedVersion(gaitId, 1);
     const reason = "Approved over com-outside: the crawl is played on the stand only";
-    await database().insert(reviewEvents).values({ versionId: version.id, actorId: ids.userIds.lead, fromState: "in-review", toState: "approved", overrideReason: reason });
+    await database()
+      .insert(reviewEvents)
+      .values({ versionId: version.id, actorId: ids.userIds.lead, fromState: "in-review", toState: "approved", overrideReason: reason });
     const record = await database().transaction((tx) => recordReleaseTable(tx, { versionId: version.id, releasedById: ids.userIds.lead }));
     expect(record.tableFormat).toBe(`format=csv&units=deg&override=${new URLSearchParams({ o: reason }).toString().slice(2)}`);
     const again = await getTable(bearer(tablePath(gaitId, 1, record.tableFormat), token), gaitId, 1);
@@ -87,7 +89,9 @@ describe("recordReleaseTable", () => {
 
   test("an override reason given by the caller wins over the review history", async () => {
     const version = await storedVersion(ids.gaitIds["Crawl"], 2);
-    const record = await database().transaction((tx) => recordReleaseTable(tx, { versionId: version.id, releasedById: null, overrideReason: "Released for the stand rig" }));
+    const record = await database().transaction((tx) =>
+      recordReleaseTable(tx, { versionId: version.id, releasedById: null, overrideReason: "Released for the stand rig" }),
+    );
     expect(new URLSearchParams(record.tableFormat).get("override")).toBe("Released for the stand rig");
   });
 

@@ -14,16 +14,24 @@ import { load, responseOf, type Outcome } from "../../support/routes";
 /** A token of `userId` in `workspaceId`, stored as the app stores one. */
 export async function tokenFor(workspaceId: string, userId: string): Promise<string> {
   const token = `gl_export_test_${uniqueName("t")}_0123456789abcdef`;
-  await database().insert(apiTokens).values({ workspaceId, userId, name: uniqueName("export test"), tokenHash: hashToken(token), prefix: token.slice(0, 8) });
+  await database()
+    .insert(apiTokens)
+    .values({ workspaceId, userId, name: uniqueName("export test"), tokenHash: hashToken(token), prefix: token.slice(0, 8) });
   return token;
 }
 
 /** Another workspace with an owner who holds a token there. */
 export async function foreignOwnerToken(): Promise<string> {
   const db = database();
-  const [workspace] = await db.insert(workspaces).values({ slug: uniqueName("other-lab"), name: "Other lab" }).returning();
+  const [workspace] = await db
+    .insert(workspaces)
+    .values({ slug: uniqueName("other-lab"), name: "Other lab" })
+    .returning();
   const login = uniqueName("other-owner");
-  const [user] = await db.insert(users).values({ login, name: "Other Owner", email: `${login}@other.test` }).returning();
+  const [user] = await db
+    .insert(users)
+    .values({ login, name: "Other Owner", email: `${login}@other.test` })
+    .returning();
   await db.insert(memberships).values({ workspaceId: workspace.id, userId: user.id, role: "owner" satisfies Role });
   return tokenFor(workspace.id, user.id);
 }
@@ -38,9 +46,20 @@ export function getTable(request: Request, gaitId: string, number: string | numb
 export const sha256 = (text: string) => createHash("sha256").update(text, "utf8").digest("hex");
 
 /** A stored version with its parsed sequence and the robot revision it pins. */
-export async function storedVersion(gaitId: string, number: number): Promise<{ id: string; contentHash: string; sequence: Sequence; robot: Robot; robotRevision: number; gaitName: string; robotName: string }> {
+export async function storedVersion(
+  gaitId: string,
+  number: number,
+): Promise<{ id: string; contentHash: string; sequence: Sequence; robot: Robot; robotRevision: number; gaitName: string; robotName: string }> {
   const [row] = await database()
-    .select({ id: gaitVersions.id, contentHash: gaitVersions.contentHash, sequence: gaitVersions.sequence, definition: robotRevisions.definition, robotRevision: robotRevisions.number, gaitName: gaits.name, robotName: robots.name })
+    .select({
+      id: gaitVersions.id,
+      contentHash: gaitVersions.contentHash,
+      sequence: gaitVersions.sequence,
+      definition: robotRevisions.definition,
+      robotRevision: robotRevisions.number,
+      gaitName: gaits.name,
+      robotName: robots.name,
+    })
     .from(gaitVersions)
     .innerJoin(gaits, eq(gaits.id, gaitVersions.gaitId))
     .innerJoin(robotRevisions, eq(robotRevisions.id, gaitVersions.robotRevisionId))
@@ -49,7 +68,15 @@ export async function storedVersion(gaitId: string, number: number): Promise<{ i
   const sequence = parseSequence(row.sequence);
   const robot = parseRobot(row.definition);
   if (!sequence.ok || !robot.ok) throw new Error("stored version does not parse");
-  return { id: row.id, contentHash: row.contentHash, sequence: sequence.sequence, robot: robot.robot, robotRevision: row.robotRevision, gaitName: row.gaitName, robotName: row.robotName };
+  return {
+    id: row.id,
+    contentHash: row.contentHash,
+    sequence: sequence.sequence,
+    robot: robot.robot,
+    robotRevision: row.robotRevision,
+    gaitName: row.gaitName,
+    robotName: row.robotName,
+  };
 }
 
 /** The newest audit entries of an action. */

@@ -30,10 +30,15 @@ beforeAll(async () => {
 });
 beforeEach(() => resetRateLimits());
 
-const get = (gaitId: string, number: string | number, query = "", headers: Record<string, string> = {}) => getTable(bearer(tablePath(gaitId, number, query), token, headers), gaitId, number);
+const get = (gaitId: string, number: string | number, query = "", headers: Record<string, string> = {}) =>
+  getTable(bearer(tablePath(gaitId, number, query), token, headers), gaitId, number);
 
 /** The pure exporter's bytes for a stored version: what the route must answer. */
-async function expectedTable(gaitId: string, number: number, options: { format: "csv" | "json" | "c"; units: "deg" | "rad" | "us"; rateHz?: number; overrideReason?: string }) {
+async function expectedTable(
+  gaitId: string,
+  number: number,
+  options: { format: "csv" | "json" | "c"; units: "deg" | "rad" | "us"; rateHz?: number; overrideReason?: string },
+) {
   const version = await storedVersion(gaitId, number);
   return buildAngleTable(version.robot, version.sequence, {
     ...options,
@@ -247,7 +252,13 @@ describe("calibration profiles", () => {
 
   test("saving the profile again changes the tag (its revision is part of it)", async () => {
     const before = (await get(tripod, 1, `profile=${encodeURIComponent(name)}`)).headers.get("ETag");
-    await updateProfile({ userId: ids.userIds.firmware, workspaceId: ids.workspaceId }, robotId, profileId, { name, joints: { LF: { coxa: { trimDeg: 3 } } } }, 1);
+    await updateProfile(
+      { userId: ids.userIds.firmware, workspaceId: ids.workspaceId },
+      robotId,
+      profileId,
+      { name, joints: { LF: { coxa: { trimDeg: 3 } } } },
+      1,
+    );
     const after = await get(tripod, 1, `profile=${encodeURIComponent(name)}`, { "If-None-Match": before! });
     expect(after.status).toBe(200);
     expect(after.headers.get("ETag")).not.toBe(before);

@@ -30,7 +30,9 @@ beforeAll(async () => {
   const [foreign] = await db.insert(robots).values({ workspaceId: other.id, name: "Their walker" }).returning();
   await db.insert(robotRevisions).values({ robotId: foreign.id, number: 1, definition: demoRobotJson("quay-walker") });
   foreignId = foreign.id;
-  await db.insert(apiTokens).values({ workspaceId: ids.workspaceId, userId: ids.userIds.firmware, name: "build script", tokenHash: hashToken(TOKEN), prefix: TOKEN.slice(0, 8) });
+  await db
+    .insert(apiTokens)
+    .values({ workspaceId: ids.workspaceId, userId: ids.userIds.firmware, name: "build script", tokenHash: hashToken(TOKEN), prefix: TOKEN.slice(0, 8) });
 
   // A second revision of the walker, saved through the form.
   const [first] = await revisionsOf(walkerId);
@@ -38,18 +40,23 @@ beforeAll(async () => {
   edited.legs[0].joints.coxa.zeroOffsetDeg = 1.5;
   const request = await requestsAs("firmware", ids);
   const saved = await outcome(async () =>
-    act(robotPage, await request("POST", `/robots/${walkerId}`, { form: { intent: "save", baseRevision: "1", definition: JSON.stringify(edited), message: "Coxa trim" } }), {
-      robotId: walkerId,
-    }),
+    act(
+      robotPage,
+      await request("POST", `/robots/${walkerId}`, { form: { intent: "save", baseRevision: "1", definition: JSON.stringify(edited), message: "Coxa trim" } }),
+      {
+        robotId: walkerId,
+      },
+    ),
   );
   expect(saved.status).toBe(200);
 });
 
-
 describe("download a revision's JSON", () => {
   test.each([1, 2])("revision %i comes as a file named after the robot and revision, the definition as stored", async (number) => {
     const request = await requestsAs("viewer", ids);
-    const answer = await outcome(async () => load(download, await request("GET", `/robots/${walkerId}/revisions/${number}/download`), { robotId: walkerId, number: String(number) }));
+    const answer = await outcome(async () =>
+      load(download, await request("GET", `/robots/${walkerId}/revisions/${number}/download`), { robotId: walkerId, number: String(number) }),
+    );
     expect(answer.status).toBe(200);
     expect(answer.headers?.get("Content-Disposition")).toBe(`attachment; filename="quay-walker-r${number}.robot.json"`);
     expect(answer.headers?.get("Content-Type")).toBe("application/json; charset=utf-8");
@@ -59,7 +66,13 @@ describe("download a revision's JSON", () => {
 
   test("a revision that does not exist, a malformed number, another workspace's robot: 404", async () => {
     const request = await requestsAs("owner", ids);
-    for (const [robotId, number] of [[walkerId, "3"], [walkerId, "one"], [walkerId, "0"], [foreignId, "1"], ["nope", "1"]]) {
+    for (const [robotId, number] of [
+      [walkerId, "3"],
+      [walkerId, "one"],
+      [walkerId, "0"],
+      [foreignId, "1"],
+      ["nope", "1"],
+    ]) {
       const answer = await outcome(async () => load(download, await request("GET", `/robots/${robotId}/revisions/${number}/download`), { robotId, number }));
       expect(answer.status, `${robotId} ${number}`).toBe(404);
     }
@@ -67,7 +80,9 @@ describe("download a revision's JSON", () => {
 
   test("signed out: sent to sign in", async () => {
     const request = await requestsAs("signed-out", ids);
-    const answer = await outcome(async () => load(download, await request("GET", `/robots/${walkerId}/revisions/1/download`), { robotId: walkerId, number: "1" }));
+    const answer = await outcome(async () =>
+      load(download, await request("GET", `/robots/${walkerId}/revisions/1/download`), { robotId: walkerId, number: "1" }),
+    );
     expect(answer.status).toBe(302);
     expect(answer.location).toMatch(/^\/sign-in\?returnTo=/);
   });
@@ -99,7 +114,11 @@ describe("GET /api/v1/robots/:robotId", () => {
     const answer = await outcome(async () => load(apiRobot, bearer(`/api/v1/robots/${walkerId}`, TOKEN), { robotId: walkerId }));
     expect(answer.status).toBe(200);
     const revisions = await revisionsOf(walkerId);
-    expect(answer.body).toMatchObject({ id: walkerId, name: "Quay walker", latest: { number: 2, message: "Coxa trim", author: { login: "priya-sandoval", name: "Priya Sandoval" } } });
+    expect(answer.body).toMatchObject({
+      id: walkerId,
+      name: "Quay walker",
+      latest: { number: 2, message: "Coxa trim", author: { login: "priya-sandoval", name: "Priya Sandoval" } },
+    });
     expect(answer.body.latest.definition).toEqual(revisions[1].definition);
     expect(answer.body.revisions.map((revision: any) => revision.number)).toEqual([2, 1]);
     expect(answer.body.revisions[1]).toEqual({
@@ -147,7 +166,9 @@ describe("GET /api/v1/schema/robot.json", () => {
     expect($id).toMatch(/\/api\/v1\/schema\/robot\.json$/);
     expect(schema).toEqual(robotJsonSchema());
     const etag = answer.headers!.get("ETag")!;
-    const again = await outcome(async () => load(apiSchema, new Request("http://127.0.0.1:3000/api/v1/schema/robot.json", { headers: { "If-None-Match": etag } })));
+    const again = await outcome(async () =>
+      load(apiSchema, new Request("http://127.0.0.1:3000/api/v1/schema/robot.json", { headers: { "If-None-Match": etag } })),
+    );
     expect(again.status).toBe(304);
   });
 });

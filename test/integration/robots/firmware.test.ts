@@ -23,9 +23,13 @@ async function saveAsFirmware(change: (copy: any) => void) {
   change(copy);
   const request = await requestsAs("firmware", ids);
   return outcome(async () =>
-    act(robotPage, await request("POST", `/robots/${walkerId}`, { form: { intent: "save", baseRevision: String(latest.number), definition: JSON.stringify(copy) } }), {
-      robotId: walkerId,
-    }),
+    act(
+      robotPage,
+      await request("POST", `/robots/${walkerId}`, { form: { intent: "save", baseRevision: String(latest.number), definition: JSON.stringify(copy) } }),
+      {
+        robotId: walkerId,
+      },
+    ),
   );
 }
 
@@ -94,9 +98,13 @@ describe("firmware saves calibration only", () => {
     copy.legs[0].femur = 84;
     const request = await requestsAs("animator", ids);
     const answer = await outcome(async () =>
-      act(robotPage, await request("POST", `/robots/${walkerId}`, { form: { intent: "save", baseRevision: String(latest.number), definition: JSON.stringify(copy) } }), {
-        robotId: walkerId,
-      }),
+      act(
+        robotPage,
+        await request("POST", `/robots/${walkerId}`, { form: { intent: "save", baseRevision: String(latest.number), definition: JSON.stringify(copy) } }),
+        {
+          robotId: walkerId,
+        },
+      ),
     );
     expect(answer.status).toBe(200);
   });

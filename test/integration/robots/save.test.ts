@@ -77,7 +77,9 @@ describe("saving a robot", () => {
     const winner = a.status === 409 ? "Mara Lindqvist" : "Theo Brandt";
     expect(lost.body).toMatchObject({ code: "stale", details: { baseRevision: base.number, latest: { number: base.number + 1, authorName: winner } } });
     expect(lost.body.error).toMatch(
-      new RegExp(`^Revision ${base.number + 1} was saved by ${winner} at \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d UTC while you were editing revision ${base.number}\\. Nothing was saved\\.$`),
+      new RegExp(
+        `^Revision ${base.number + 1} was saved by ${winner} at \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d UTC while you were editing revision ${base.number}\\. Nothing was saved\\.$`,
+      ),
     );
     expect(await revisionCount()).toBe(count + 1);
   });
@@ -102,15 +104,24 @@ describe("saving a robot", () => {
 
   test("renaming the robot renames it in the list; a name another robot has is 409", async () => {
     const latest = await latestOf(crawlerId);
-    const renamed = await save("animator", crawlerId, { baseRevision: String(latest.number), definition: edited(latest.definition, (copy) => (copy.name = "Pier crawler Mk2")) });
+    const renamed = await save("animator", crawlerId, {
+      baseRevision: String(latest.number),
+      definition: edited(latest.definition, (copy) => (copy.name = "Pier crawler Mk2")),
+    });
     expect(renamed.status).toBe(200);
     const [row] = await database().select().from(robots).where(eq(robots.id, crawlerId));
     expect(row.name).toBe("Pier crawler Mk2");
     const next = await latestOf(crawlerId);
     const count = await revisionCount();
-    const taken = await save("animator", crawlerId, { baseRevision: String(next.number), definition: edited(next.definition, (copy) => (copy.name = "Quay walker")) });
+    const taken = await save("animator", crawlerId, {
+      baseRevision: String(next.number),
+      definition: edited(next.definition, (copy) => (copy.name = "Quay walker")),
+    });
     expect(taken.status).toBe(409);
-    expect(taken.body).toMatchObject({ code: "name-taken", error: 'Another robot in this workspace is already called "Quay walker": give this one another name. Nothing was saved.' });
+    expect(taken.body).toMatchObject({
+      code: "name-taken",
+      error: 'Another robot in this workspace is already called "Quay walker": give this one another name. Nothing was saved.',
+    });
     expect(await revisionCount()).toBe(count);
   });
 });
@@ -142,7 +153,7 @@ describe("bad saves are refused with what and where, and write nothing", () => {
     const latest = await latestOf(crawlerId);
     const notJson = await save("animator", crawlerId, { baseRevision: String(latest.number), definition: "{ legs: " });
     expect(notJson.status).toBe(400);
-    expect(notJson.body.error).toBe("Cannot save: the definition is not valid JSON: unexpected \"l\" at line 1, column 3.");
+    expect(notJson.body.error).toBe('Cannot save: the definition is not valid JSON: unexpected "l" at line 1, column 3.');
     const noBase = await save("animator", crawlerId, { definition: JSON.stringify(latest.definition) });
     expect(noBase.status).toBe(400);
     expect(noBase.body.error).toBe("Cannot save: baseRevision is required: the revision the edits started from.");
@@ -164,7 +175,9 @@ describe("bad saves are refused with what and where, and write nothing", () => {
   test("an unknown robot, a malformed id and another workspace's robot are all 404", async () => {
     const [other] = await database().insert(workspaces).values({ slug: "other-lab-save", name: "Other lab" }).returning();
     const [foreign] = await database().insert(robots).values({ workspaceId: other.id, name: "Theirs" }).returning();
-    await database().insert(robotRevisions).values({ robotId: foreign.id, number: 1, definition: demoRobotJson("quay-walker") });
+    await database()
+      .insert(robotRevisions)
+      .values({ robotId: foreign.id, number: 1, definition: demoRobotJson("quay-walker") });
     const definition = JSON.stringify(demoRobotJson("quay-walker"));
     for (const robotId of [foreign.id, "00000000-0000-4000-8000-000000000000", "not-a-uuid"]) {
       const answer = await save("owner", robotId, { baseRevision: "1", definition });
@@ -177,7 +190,10 @@ describe("bad saves are refused with what and where, and write nothing", () => {
 
   test("a viewer is refused with 403 before anything is read", async () => {
     const latest = await latestOf(crawlerId);
-    const answer = await save("viewer", crawlerId, { baseRevision: String(latest.number), definition: edited(latest.definition, (copy) => (copy.legs[0].femur = 70)) });
+    const answer = await save("viewer", crawlerId, {
+      baseRevision: String(latest.number),
+      definition: edited(latest.definition, (copy) => (copy.legs[0].femur = 70)),
+    });
     expect(answer.status).toBe(403);
     expect(answer.body).toEqual({ message: refusal("viewer", "robots.calibrate") });
   });
@@ -206,7 +222,9 @@ describe("old revisions", () => {
     const [row] = await database().select().from(robots).where(eq(robots.id, crawlerId));
     expect(row.name).toBe("Pier crawler");
 
-    const missing = await outcome(async () => load(revisionPage, await request("GET", `/robots/${crawlerId}/revisions/999`), { robotId: crawlerId, number: "999" }));
+    const missing = await outcome(async () =>
+      load(revisionPage, await request("GET", `/robots/${crawlerId}/revisions/999`), { robotId: crawlerId, number: "999" }),
+    );
     expect(missing.status).toBe(404);
     const zero = await outcome(async () => load(revisionPage, await request("GET", `/robots/${crawlerId}/revisions/0`), { robotId: crawlerId, number: "0" }));
     expect(zero.status).toBe(404);

@@ -19,7 +19,8 @@ beforeAll(async () => {
   ids = await demoIds(database());
 });
 
-const jsonFile = (value: unknown, name = "robot.json") => new File([typeof value === "string" ? value : JSON.stringify(value, null, 2)], name, { type: "application/json" });
+const jsonFile = (value: unknown, name = "robot.json") =>
+  new File([typeof value === "string" ? value : JSON.stringify(value, null, 2)], name, { type: "application/json" });
 
 async function upload(fields: Record<string, string | File>, caller: Caller = "animator") {
   const request = await requestsAs(caller, ids);

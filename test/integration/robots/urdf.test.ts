@@ -22,7 +22,10 @@ beforeAll(async () => {
 async function importFile(xml: string, fields: Record<string, string> = {}) {
   const request = await requestsAs("animator", ids);
   return outcome(async () =>
-    act(list, await multipart(request, "/robots?index", { intent: "import-urdf", file: new File([xml], "test-crab.urdf", { type: "application/xml" }), ...fields })),
+    act(
+      list,
+      await multipart(request, "/robots?index", { intent: "import-urdf", file: new File([xml], "test-crab.urdf", { type: "application/xml" }), ...fields }),
+    ),
   );
 }
 
@@ -60,7 +63,7 @@ describe("URDF import", () => {
     expect(answer.status).toBe(422);
     expect(answer.body).toMatchObject({ code: "invalid", error: "test-crab.urdf cannot be imported. Nothing was saved." });
     expect(answer.body.details.issues).toEqual([
-      { path: 'joint.fr_femur.type', message: 'joint "fr_femur" (femur) is continuous: a leg joint must be revolute, with limits' },
+      { path: "joint.fr_femur.type", message: 'joint "fr_femur" (femur) is continuous: a leg joint must be revolute, with limits' },
     ]);
     expect([await robotCount(), await revisionCount()]).toEqual([robotsBefore, revisionsBefore]);
   });

@@ -38,12 +38,21 @@ describe("commitDraft", () => {
     expect(row).toMatchObject({ number: 3, message, authorId: animator.user.id, robotRevisionId: revision.id, state: "committed" });
     expect(row.sequence).toEqual(sequence.sequence);
     expect(row.summary).toEqual({ ...solved.summary, cycleMs: sequence.sequence.cycleMs, loop: true });
-    expect(row.summary).toMatchObject({ flagsByKind: expect.any(Object), worstMarginMm: expect.any(Number), peakSpeedDegS: expect.any(Object), bodySpeedMmS: expect.any(Number) });
+    expect(row.summary).toMatchObject({
+      flagsByKind: expect.any(Object),
+      worstMarginMm: expect.any(Number),
+      peakSpeedDegS: expect.any(Object),
+      bodySpeedMmS: expect.any(Number),
+    });
     expect(row.contentHash).toBe(versionContentHash(sequence.sequence, revision.definition));
     expect(committed).toEqual({ id: row.id, number: 3, contentHash: row.contentHash });
     const events = await database().select().from(reviewEvents).where(eq(reviewEvents.versionId, row.id));
     expect(events).toMatchObject([{ fromState: null, toState: "committed", actorId: animator.user.id }]);
-    const [audit] = await database().select().from(auditLog).where(and(eq(auditLog.action, "version.committed"), eq(auditLog.targetId, gaitId))).orderBy(asc(auditLog.id));
+    const [audit] = await database()
+      .select()
+      .from(auditLog)
+      .where(and(eq(auditLog.action, "version.committed"), eq(auditLog.targetId, gaitId)))
+      .orderBy(asc(auditLog.id));
     expect(audit).toBeDefined();
   });
 
@@ -54,7 +63,12 @@ describe("commitDraft", () => {
     expect(new Set(results.map((result) => result.number)).size).toBe(3);
     const rows = await database().select().from(gaitVersions).where(eq(gaitVersions.gaitId, gaitId)).orderBy(asc(gaitVersions.number));
     expect(rows.map((row) => row.number)).toEqual([1, 2, 3, 4, 5]);
-    expect(rows.slice(2).map((row) => row.message).sort()).toEqual([...messages].sort());
+    expect(
+      rows
+        .slice(2)
+        .map((row) => row.message)
+        .sort(),
+    ).toEqual([...messages].sort());
   });
 
   test("refuses an empty message, a gait of another workspace, and a draft that moved on since the page was loaded", async () => {
@@ -65,13 +79,17 @@ describe("commitDraft", () => {
     const stale = await refusal(() => commitDraft(committer(), gaitId, "stale", undefined, { draftRevision: current - 1 }));
     expect(stale.status).toBe(409);
     expect(stale.message).toMatch(/draft changed/);
-    await expect(commitDraft(committer(), gaitId, uniqueName("Fresh"), undefined, { draftRevision: current })).resolves.toMatchObject({ number: expect.any(Number) });
+    await expect(commitDraft(committer(), gaitId, uniqueName("Fresh"), undefined, { draftRevision: current })).resolves.toMatchObject({
+      number: expect.any(Number),
+    });
   });
 
   test("the gait page's commit action answers with the new version, or the message field's error", async () => {
     const gaitId = ids.gaitIds["Crawl"];
     const request = await requestsAs("animator", ids);
-    const done = await outcome(async () => act(gaitPage, await request("POST", `/gaits/${gaitId}`, { form: { intent: "commit", message: uniqueName("From the page") } }), { gaitId }));
+    const done = await outcome(async () =>
+      act(gaitPage, await request("POST", `/gaits/${gaitId}`, { form: { intent: "commit", message: uniqueName("From the page") } }), { gaitId }),
+    );
     expect(done.status).toBe(200);
     expect(done.body).toMatchObject({ ok: true, intent: "commit", version: { number: 3 } });
     const empty = await outcome(async () => act(gaitPage, await request("POST", `/gaits/${gaitId}`, { form: { intent: "commit", message: "" } }), { gaitId }));
@@ -82,7 +100,10 @@ describe("commitDraft", () => {
 describe("a new draft from any version (restore / branch)", () => {
   test("copies the version's sequence and robot revision into the draft and bumps the draft revision", async () => {
     const gaitId = ids.gaitIds["Trot"];
-    const [first] = await database().select().from(gaitVersions).where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.number, 1)));
+    const [first] = await database()
+      .select()
+      .from(gaitVersions)
+      .where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.number, 1)));
     const before = await draftRevisionOf(gaitId);
     const restored = await restoreDraft(committer(), gaitId, first.id, before);
     expect(restored).toEqual({ draftRevision: before + 1, number: 1 });
@@ -94,13 +115,19 @@ describe("a new draft from any version (restore / branch)", () => {
     const again = await commitDraft(committer(), gaitId, uniqueName("Back to the first trot"));
     expect(again.contentHash).toBe(first.contentHash);
     expect(again.number).toBe(3);
-    const [audit] = await database().select().from(auditLog).where(and(eq(auditLog.action, "draft.restored"), eq(auditLog.targetId, gaitId)));
+    const [audit] = await database()
+      .select()
+      .from(auditLog)
+      .where(and(eq(auditLog.action, "draft.restored"), eq(auditLog.targetId, gaitId)));
     expect(audit.details).toMatchObject({ fromVersion: 1 });
   });
 
   test("refuses with 409 when the draft changed in between (optimistic concurrency), leaving the draft as it was", async () => {
     const gaitId = ids.gaitIds["Alternating tetrapod"];
-    const [first] = await database().select().from(gaitVersions).where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.number, 1)));
+    const [first] = await database()
+      .select()
+      .from(gaitVersions)
+      .where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.number, 1)));
     const seen = await draftRevisionOf(gaitId);
     const [winner, loser] = await Promise.allSettled([restoreDraft(committer(), gaitId, first.id, seen), restoreDraft(committer(), gaitId, first.id, seen)]);
     const outcomes = [winner, loser].map((result) => result.status);
@@ -112,14 +139,23 @@ describe("a new draft from any version (restore / branch)", () => {
 
   test("the page action branches from an older version; a version of another gait is not found", async () => {
     const gaitId = ids.gaitIds["Wave climb"];
-    const [first] = await database().select().from(gaitVersions).where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.number, 1)));
+    const [first] = await database()
+      .select()
+      .from(gaitVersions)
+      .where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.number, 1)));
     const [other] = await database().select().from(gaitVersions).where(eq(gaitVersions.gaitId, ids.gaitIds["Trot"])).limit(1);
     const request = await requestsAs("lead", ids);
     const draftRevision = String(await draftRevisionOf(gaitId));
-    const done = await outcome(async () => act(gaitPage, await request("POST", `/gaits/${gaitId}`, { form: { intent: "restore", versionId: first.id, draftRevision } }), { gaitId }));
+    const done = await outcome(async () =>
+      act(gaitPage, await request("POST", `/gaits/${gaitId}`, { form: { intent: "restore", versionId: first.id, draftRevision } }), { gaitId }),
+    );
     expect(done.body).toMatchObject({ ok: true, intent: "restore", draftRevision: Number(draftRevision) + 1 });
     const foreign = await outcome(async () =>
-      act(gaitPage, await request("POST", `/gaits/${gaitId}`, { form: { intent: "restore", versionId: other.id, draftRevision: String(Number(draftRevision) + 1) } }), { gaitId }),
+      act(
+        gaitPage,
+        await request("POST", `/gaits/${gaitId}`, { form: { intent: "restore", versionId: other.id, draftRevision: String(Number(draftRevision) + 1) } }),
+        { gaitId },
+      ),
     );
     expect(foreign.status).toBe(404);
   });

@@ -46,13 +46,18 @@ describe("a committed version is immutable at the database", () => {
   });
 
   test("raw SQL is refused the same way", async () => {
-    const error = await databaseError(() => database().execute(sql`update gait_versions set sequence = sequence || '{"cycleMs": 2}'::jsonb where id = ${versionId}`));
+    const error = await databaseError(() =>
+      database().execute(sql`update gait_versions set sequence = sequence || '{"cycleMs": 2}'::jsonb where id = ${versionId}`),
+    );
     expect(error.code).toBe("23000");
   });
 
   test("the review state, the reviewer and the state time may change", async () => {
     const changedAt = new Date("2030-01-01T00:00:00Z");
-    await database().update(gaitVersions).set({ state: "in-review", reviewerId: ids.userIds.lead, stateChangedAt: changedAt }).where(eq(gaitVersions.id, versionId));
+    await database()
+      .update(gaitVersions)
+      .set({ state: "in-review", reviewerId: ids.userIds.lead, stateChangedAt: changedAt })
+      .where(eq(gaitVersions.id, versionId));
     const [row] = await database().select().from(gaitVersions).where(eq(gaitVersions.id, versionId));
     expect(row).toMatchObject({ state: "in-review", reviewerId: ids.userIds.lead, stateChangedAt: changedAt });
   });

@@ -28,7 +28,9 @@ beforeAll(async () => {
   const [revision] = await db.insert(robotRevisions).values({ robotId: robot.id, number: 1, definition: mine.definition }).returning();
   const [gait] = await db.insert(gaits).values({ workspaceId: other.id, robotId: robot.id, name: "Their walk", draftRobotRevisionId: revision.id }).returning();
   foreignGaitId = gait.id;
-  await db.insert(apiTokens).values({ workspaceId: ids.workspaceId, userId: ids.userIds.firmware, name: "build script", tokenHash: hashToken(TOKEN), prefix: TOKEN.slice(0, 8) });
+  await db
+    .insert(apiTokens)
+    .values({ workspaceId: ids.workspaceId, userId: ids.userIds.firmware, name: "build script", tokenHash: hashToken(TOKEN), prefix: TOKEN.slice(0, 8) });
 });
 
 const gaitLoad = async (gaitName: string, query = "") => {
@@ -45,7 +47,12 @@ describe("the gait page", () => {
       [2, "in-review", "Theo Brandt"],
       [1, "released", "Theo Brandt"],
     ]);
-    expect(body.versions[0]).toMatchObject({ message: "Longer, quicker steps for the open deck", errors: 0, worstMarginMm: expect.any(Number), createdAt: expect.any(Date) });
+    expect(body.versions[0]).toMatchObject({
+      message: "Longer, quicker steps for the open deck",
+      errors: 0,
+      worstMarginMm: expect.any(Number),
+      createdAt: expect.any(Date),
+    });
     expect(body.gait).toMatchObject({ name: "Tripod cruise", releasedVersion: 1, latestVersion: 2, draft: { hasSequence: true, sameAsVersion: 2 } });
   });
 
@@ -90,7 +97,8 @@ describe("the comparison", () => {
     const request = await requestsAs("viewer", ids);
     return outcome<any>(async () => load(compare, await request("GET", `/gaits/compare?a=${a}&b=${b}`)));
   };
-  const versionsOf = (gaitName: string) => database().select().from(gaitVersions).where(eq(gaitVersions.gaitId, ids.gaitIds[gaitName])).orderBy(gaitVersions.number);
+  const versionsOf = (gaitName: string) =>
+    database().select().from(gaitVersions).where(eq(gaitVersions.gaitId, ids.gaitIds[gaitName])).orderBy(gaitVersions.number);
 
   test("of two versions of a gait: metric deltas, the key diff, joint overlays and playback from solving both with their pinned revision", async () => {
     const [first, second] = await versionsOf("Tripod cruise");
@@ -134,12 +142,17 @@ describe("the comparison", () => {
     const newer = await versionIn(ids, "Wave creep", "committed", lead, { message: uniqueName("On revision 2") });
     const [first] = await versionsOf("Wave creep");
     const { body } = await compareLoad(first.id, newer.id);
-    expect(body.comparison.robotDiff).toMatchObject({ a: 1, b: 2, changes: [{ path: "legs[0].femur", before: definition.legs[0].femur - 4, after: definition.legs[0].femur }] });
+    expect(body.comparison.robotDiff).toMatchObject({
+      a: 1,
+      b: 2,
+      changes: [{ path: "legs[0].femur", before: definition.legs[0].femur - 4, after: definition.legs[0].femur }],
+    });
   });
 });
 
 describe("GET /api/v1/gaits/:gaitId/versions", () => {
-  const call = (gaitId: string, init?: RequestInit) => outcome<any>(() => load(apiVersions, new Request(`http://127.0.0.1:3000/api/v1/gaits/${gaitId}/versions`, init), { gaitId }));
+  const call = (gaitId: string, init?: RequestInit) =>
+    outcome<any>(() => load(apiVersions, new Request(`http://127.0.0.1:3000/api/v1/gaits/${gaitId}/versions`, init), { gaitId }));
 
   test("lists number, state, message, author, time, content hash and summary, newest first, with a bearer token", async () => {
     const { status, body } = await call(ids.gaitIds["Trot"], { headers: { Authorization: `Bearer ${TOKEN}` } });

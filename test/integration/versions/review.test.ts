@@ -33,7 +33,12 @@ describe("requesting a review", () => {
     expect(outcome).toMatchObject({ state: "in-review", mailed: true, reviewer: lead.user.name });
     const [row] = await database().select().from(gaitVersions).where(eq(gaitVersions.id, version.id));
     expect(row).toMatchObject({ state: "in-review", reviewerId: lead.user.id });
-    expect((await eventsOf(version.id)).at(-1)).toMatchObject({ fromState: "committed", toState: "in-review", actorId: animator.user.id, comment: "Check the front legs" });
+    expect((await eventsOf(version.id)).at(-1)).toMatchObject({
+      fromState: "committed",
+      toState: "in-review",
+      actorId: animator.user.id,
+      comment: "Check the front legs",
+    });
     expect((await auditFor(version.id)).map((entry) => entry.action)).toEqual(["version.review-requested"]);
     const [mail] = await mailsTo(email("lead"), version.message);
     expect(mail.subject).toBe(`Review requested: Tripod cruise v${version.number} (Pier crawler)`);
@@ -57,7 +62,7 @@ describe("deciding", () => {
     const version = await versionIn(ids, "Wave creep", "in-review", animator);
     const results = await Promise.allSettled([approveVersion(lead, version.id, {}), approveVersion(lead, version.id, {})]);
     expect(results.map((result) => result.status).sort()).toEqual(["fulfilled", "rejected"]);
-    expect(((results.find((result) => result.status === "rejected") as PromiseRejectedResult).reason).status).toBe(409);
+    expect((results.find((result) => result.status === "rejected") as PromiseRejectedResult).reason.status).toBe(409);
     expect(await stateOf(version.id)).toBe("approved");
     expect((await eventsOf(version.id)).filter((event) => event.toState === "approved")).toHaveLength(1);
     const [mail] = await mailsTo(email("animator"), version.message);
@@ -106,7 +111,11 @@ describe("deciding", () => {
     expect(mail.text).toContain("The rear legs drag at the start of the turn");
     await requestReview(animator, version.id, { reviewerId: lead.user.id });
     expect(await stateOf(version.id)).toBe("in-review");
-    expect((await eventsOf(version.id)).map((event) => `${event.fromState}→${event.toState}`)).toEqual(["null→committed", "in-review→sent-back", "sent-back→in-review"]);
+    expect((await eventsOf(version.id)).map((event) => `${event.fromState}→${event.toState}`)).toEqual([
+      "null→committed",
+      "in-review→sent-back",
+      "sent-back→in-review",
+    ]);
   });
 
   test("animators and viewers cannot decide, even by calling the service", async () => {
@@ -119,7 +128,10 @@ describe("deciding", () => {
 describe("releasing", () => {
   test("only an approved version is released; it retires the gait's previous release in the same step, and the author hears of it", async () => {
     const gaitId = ids.gaitIds["Trot"];
-    const [previous] = await database().select().from(gaitVersions).where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.state, "released")));
+    const [previous] = await database()
+      .select()
+      .from(gaitVersions)
+      .where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.state, "released")));
     const committed = await versionIn(ids, "Trot", "committed", animator);
     expect((await refusal(() => releaseVersion(lead, committed.id))).status).toBe(409);
     const version = await versionIn(ids, "Trot", "approved", animator);
@@ -127,7 +139,10 @@ describe("releasing", () => {
     expect(released).toMatchObject({ state: "released", retired: previous.number });
     expect(await stateOf(version.id)).toBe("released");
     expect(await stateOf(previous.id)).toBe("retired");
-    const releasedRows = await database().select().from(gaitVersions).where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.state, "released")));
+    const releasedRows = await database()
+      .select()
+      .from(gaitVersions)
+      .where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.state, "released")));
     expect(releasedRows.map((row) => row.id)).toEqual([version.id]);
     expect((await eventsOf(previous.id)).at(-1)).toMatchObject({ fromState: "released", toState: "retired", actorId: lead.user.id });
     expect((await auditFor(previous.id)).map((entry) => entry.action)).toContain("version.retired");
@@ -144,7 +159,10 @@ describe("releasing", () => {
     expect(results.every((result) => result.status === "fulfilled")).toBe(true);
     const states = [await stateOf(first.id), await stateOf(second.id)].sort();
     expect(states).toEqual(["released", "retired"]);
-    const released = await database().select().from(gaitVersions).where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.state, "released")));
+    const released = await database()
+      .select()
+      .from(gaitVersions)
+      .where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.state, "released")));
     expect(released).toHaveLength(1);
   });
 
@@ -160,7 +178,10 @@ describe("releasing", () => {
         (error: { code?: string; cause?: { code?: string } }) => error.code ?? error.cause?.code,
       );
     expect(code).toBe("23505"); // unique_violation of gait_versions_one_released
-    const released = await database().select().from(gaitVersions).where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.state, "released")));
+    const released = await database()
+      .select()
+      .from(gaitVersions)
+      .where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.state, "released")));
     expect(released).toHaveLength(1);
   });
 });
@@ -172,7 +193,9 @@ describe("the version page's review actions and the Reviews page", () => {
     const path = `/gaits/${version.gaitId}/versions/${version.number}`;
     const asAnimator = await requestsAs("animator", ids);
     const asLead = await requestsAs("lead", ids);
-    const requested = await outcome(async () => act(versionPage, await asAnimator("POST", path, { form: { intent: "request-review", reviewerId: lead.user.id, compareWithId: "" } }), params));
+    const requested = await outcome(async () =>
+      act(versionPage, await asAnimator("POST", path, { form: { intent: "request-review", reviewerId: lead.user.id, compareWithId: "" } }), params),
+    );
     expect(requested.body).toMatchObject({ ok: true, intent: "request-review" });
 
     const leadQueue = await reviewQueue(lead);

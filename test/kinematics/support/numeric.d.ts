@@ -9,13 +9,7 @@ declare module "numeric" {
     message: string;
   };
   const numeric: {
-    uncmin(
-      objective: (x: number[]) => number,
-      x0: number[],
-      tol?: number,
-      gradient?: (x: number[]) => number[],
-      maxit?: number,
-    ): UncminResult;
+    uncmin(objective: (x: number[]) => number, x0: number[], tol?: number, gradient?: (x: number[]) => number[], maxit?: number): UncminResult;
   };
   export default numeric;
 }

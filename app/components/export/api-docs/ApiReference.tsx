@@ -22,7 +22,11 @@ export type ApiDocument = {
   servers: { url: string }[];
   tags: { name: string; description: string }[];
   paths: Record<string, Record<string, Operation>>;
-  components: { securitySchemes: Record<string, { type: string; scheme?: string; in?: string; name?: string; description?: string }>; schemas: Record<string, Schema>; responses: Record<string, Response> };
+  components: {
+    securitySchemes: Record<string, { type: string; scheme?: string; in?: string; name?: string; description?: string }>;
+    schemas: Record<string, Schema>;
+    responses: Record<string, Response>;
+  };
 };
 
 const METHOD_STYLES: Record<string, string> = {
@@ -57,7 +61,11 @@ function operationsOf(document: ApiDocument) {
 }
 
 function Method({ method }: { method: string }) {
-  return <span className={`inline-block w-14 rounded px-1.5 py-0.5 text-center font-mono text-xs font-semibold uppercase ${METHOD_STYLES[method] ?? "bg-sunken"}`}>{method}</span>;
+  return (
+    <span className={`inline-block w-14 rounded px-1.5 py-0.5 text-center font-mono text-xs font-semibold uppercase ${METHOD_STYLES[method] ?? "bg-sunken"}`}>
+      {method}
+    </span>
+  );
 }
 
 function ResponseRow({ status, response, document }: { status: string; response: Response; document: ApiDocument }) {
@@ -102,7 +110,11 @@ function ResponseRow({ status, response, document }: { status: string; response:
 function OperationCard({ path, method, operation, document }: { path: string; method: string; operation: Operation; document: ApiDocument }) {
   const permission = operation["x-permission"];
   return (
-    <article id={operation.operationId ? `op-${operation.operationId}` : undefined} aria-labelledby={`op-${operation.operationId}-title`} className="scroll-mt-4 rounded-lg border border-line bg-surface p-5">
+    <article
+      id={operation.operationId ? `op-${operation.operationId}` : undefined}
+      aria-labelledby={`op-${operation.operationId}-title`}
+      className="scroll-mt-4 rounded-lg border border-line bg-surface p-5"
+    >
       <h3 id={`op-${operation.operationId}-title`} className="flex flex-wrap items-center gap-3">
         <Method method={method} />
         <code className="font-mono text-sm font-semibold break-all">{path}</code>
@@ -143,7 +155,9 @@ function OperationCard({ path, method, operation, document }: { path: string; me
                 <td className="py-1 pr-3 text-ink-muted">{parameter.in}</td>
                 <td className="py-1 pr-3 font-mono text-xs">
                   {typeText(parameter.schema, { root: parameter.schema, componentHref: schemaHref })}
-                  {constraintsText(parameter.schema).length ? <span className="block text-ink-muted">{constraintsText(parameter.schema).join(" · ")}</span> : null}
+                  {constraintsText(parameter.schema).length ? (
+                    <span className="block text-ink-muted">{constraintsText(parameter.schema).join(" · ")}</span>
+                  ) : null}
                 </td>
                 <td className="py-1 text-ink-muted">
                   <Prose text={parameter.description ?? ""} />
@@ -224,7 +238,12 @@ export function ApiReference({ document }: { document: ApiDocument }) {
               <div key={name} className="contents">
                 <dt className="text-ink-muted">{scheme.type === "http" ? "Bearer token" : "Session"}</dt>
                 <dd>
-                  {scheme.type === "http" ? <code className="font-mono">Authorization: Bearer &lt;token&gt;</code> : <code className="font-mono">Cookie: {scheme.name}=…</code>} — {scheme.description}
+                  {scheme.type === "http" ? (
+                    <code className="font-mono">Authorization: Bearer &lt;token&gt;</code>
+                  ) : (
+                    <code className="font-mono">Cookie: {scheme.name}=…</code>
+                  )}{" "}
+                  — {scheme.description}
                 </dd>
               </div>
             ))}

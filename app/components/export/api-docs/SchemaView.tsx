@@ -83,12 +83,17 @@ function children(schema: Schema, context: SchemaContext): { schema: Schema; nam
     const extra = isSchema(schema.additionalProperties) ? [{ schema: schema.additionalProperties, name: "<any name>", required: false }] : [];
     return [...listed.map(([name, child]) => ({ schema: child, name, required: required.has(name) })), ...extra];
   }
-  if (isSchema(schema.additionalProperties)) return children(schema.additionalProperties, context).length ? [{ schema: schema.additionalProperties, name: "<any name>" }] : [];
+  if (isSchema(schema.additionalProperties))
+    return children(schema.additionalProperties, context).length ? [{ schema: schema.additionalProperties, name: "<any name>" }] : [];
   if (isSchema(schema.items)) return children(schema.items, context);
   for (const key of ["anyOf", "oneOf", "allOf"] as const) {
     const options = schema[key];
     if (Array.isArray(options)) {
-      return options.filter(isSchema).flatMap((option, index) => (children(option, context).length ? [{ schema: option, label: `${key === "allOf" ? "part" : "option"} ${index + 1}` }] : []));
+      return options
+        .filter(isSchema)
+        .flatMap((option, index) =>
+          children(option, context).length ? [{ schema: option, label: `${key === "allOf" ? "part" : "option"} ${index + 1}` }] : [],
+        );
     }
   }
   return [];
@@ -106,7 +111,21 @@ function TypeLine({ schema, context }: { schema: Schema; context: SchemaContext 
   );
 }
 
-function Node({ schema, context, name, required, label, depth }: { schema: Schema; context: SchemaContext; name?: string; required?: boolean; label?: string; depth: number }) {
+function Node({
+  schema,
+  context,
+  name,
+  required,
+  label,
+  depth,
+}: {
+  schema: Schema;
+  context: SchemaContext;
+  name?: string;
+  required?: boolean;
+  label?: string;
+  depth: number;
+}) {
   const nested = depth < MAX_DEPTH ? children(schema, context) : [];
   const description = typeof schema.description === "string" ? schema.description : null;
   const constraints = constraintsText(schema);

@@ -7,7 +7,11 @@ import { PERMISSIONS, type Action } from "../../../platform/permissions";
 export type Json = Record<string, unknown>;
 
 export type OpenApiParameter = { name: string; in: "path" | "query" | "header"; required: boolean; description?: string; schema: Json };
-export type OpenApiResponse = { description: string; headers?: Record<string, { description: string; schema: Json }>; content?: Record<string, { schema: Json }> };
+export type OpenApiResponse = {
+  description: string;
+  headers?: Record<string, { description: string; schema: Json }>;
+  content?: Record<string, { schema: Json }>;
+};
 export type OpenApiOperation = {
   operationId: string;
   summary: string;
@@ -46,7 +50,13 @@ export function queryParameters(schema: z.ZodType): OpenApiParameter[] {
   const generated = z.toJSONSchema(schema, { io: "input", target: "draft-2020-12" }) as { properties?: Record<string, Json>; required?: string[] };
   return Object.entries(generated.properties ?? {}).map(([name, property]) => {
     const { description, ...rest } = property;
-    return { name, in: "query", required: (generated.required ?? []).includes(name), ...(typeof description === "string" ? { description } : {}), schema: rest };
+    return {
+      name,
+      in: "query",
+      required: (generated.required ?? []).includes(name),
+      ...(typeof description === "string" ? { description } : {}),
+      schema: rest,
+    };
   });
 }
 
@@ -65,7 +75,8 @@ const STATUS_RESPONSES = {
 
 type Status = keyof typeof STATUS_RESPONSES;
 
-export const errorsFor = (...statuses: Status[]) => Object.fromEntries(statuses.map((status) => [String(status), { $ref: `#/components/responses/${STATUS_RESPONSES[status][0]}` }]));
+export const errorsFor = (...statuses: Status[]) =>
+  Object.fromEntries(statuses.map((status) => [String(status), { $ref: `#/components/responses/${STATUS_RESPONSES[status][0]}` }]));
 
 /** The statuses every authenticated route may answer. */
 export const AUTH: Status[] = [401, 403, 429];
@@ -75,7 +86,10 @@ export function errorResponses(): Record<string, OpenApiResponse> {
   const responses: Record<string, OpenApiResponse> = Object.fromEntries(
     Object.values(STATUS_RESPONSES).map(([name, description]) => [name, { description, content: json(ref("Error")) }]),
   );
-  responses.TooManyRequests = { ...responses.TooManyRequests, headers: { "Retry-After": { description: "Seconds until the next minute's allowance.", schema: { type: "integer" } } } };
+  responses.TooManyRequests = {
+    ...responses.TooManyRequests,
+    headers: { "Retry-After": { description: "Seconds until the next minute's allowance.", schema: { type: "integer" } } },
+  };
   return responses;
 }
 
@@ -102,12 +116,24 @@ export function errorSchemas(): Record<string, Json> {
 
 export const PUBLIC = [] as Record<string, string[]>[];
 
-export const permission = (action: Action | "public"): OpenApiOperation["x-permission"] => ({ action, roles: action === "public" ? ["anyone"] : [...PERMISSIONS[action]] });
+export const permission = (action: Action | "public"): OpenApiOperation["x-permission"] => ({
+  action,
+  roles: action === "public" ? ["anyone"] : [...PERMISSIONS[action]],
+});
 
-export const uuidPath = (name: string, what: string): OpenApiParameter => ({ name, in: "path", required: true, description: what, schema: { type: "string", format: "uuid" } });
+export const uuidPath = (name: string, what: string): OpenApiParameter => ({
+  name,
+  in: "path",
+  required: true,
+  description: what,
+  schema: { type: "string", format: "uuid" },
+});
 
 export const etagResponses = (description: string) => ({
-  "304": { description: `${description} unchanged: the If-None-Match tag matches.`, headers: { ETag: { description: "The representation's tag.", schema: { type: "string" } } } },
+  "304": {
+    description: `${description} unchanged: the If-None-Match tag matches.`,
+    headers: { ETag: { description: "The representation's tag.", schema: { type: "string" } } },
+  },
 });
 
 export const ifNoneMatch: OpenApiParameter = {

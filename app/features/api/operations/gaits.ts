@@ -19,7 +19,8 @@ export function draftPaths(): OpenApiPaths {
       put: {
         operationId: "saveDraft",
         summary: "Save the working draft",
-        description: "Refused with 409 when someone saved since `baseRevision`, and with 422 (issues in details) when the sequence is invalid or does not fit the robot; nothing is saved on either refusal.",
+        description:
+          "Refused with 409 when someone saved since `baseRevision`, and with 422 (issues in details) when the sequence is invalid or does not fit the robot; nothing is saved on either refusal.",
         tags: ["Gaits"],
         parameters: [uuidPath("gaitId", "The gait.")],
         requestBody: { required: true, content: json({ ...draftSaveSchema, properties: { ...draftSave.properties, sequence: ref("Sequence") } }) },
@@ -40,7 +41,10 @@ export function draftSchemas(): Record<string, Json> {
         revision: { type: "integer", description: "Send it back as baseRevision when saving." },
         updatedAt: { type: "string" },
         updatedBy: person,
-        robot: { type: "object", properties: { id: { type: "string" }, name: { type: "string" }, revision: { type: "integer" }, newestRevision: { type: "integer" } } },
+        robot: {
+          type: "object",
+          properties: { id: { type: "string" }, name: { type: "string" }, revision: { type: "integer" }, newestRevision: { type: "integer" } },
+        },
         sequence: ref("Sequence"),
       },
     },

@@ -27,7 +27,10 @@ export function robotPaths(): OpenApiPaths {
         operationId: "getRobotRevision",
         summary: "One revision's definition, for build scripts that pin one",
         tags: ["Robots"],
-        parameters: [uuidPath("robotId", "The robot."), { name: "number", in: "path", required: true, description: "The revision number.", schema: { type: "integer", minimum: 1 } }],
+        parameters: [
+          uuidPath("robotId", "The robot."),
+          { name: "number", in: "path", required: true, description: "The revision number.", schema: { type: "integer", minimum: 1 } },
+        ],
         responses: { "200": { description: "The revision.", content: json(ref("RobotRevision")) }, ...errorsFor(400, ...AUTH, 404) },
         "x-permission": permission("robots.read"),
       },

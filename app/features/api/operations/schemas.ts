@@ -12,7 +12,10 @@ function schemaOperation(operationId: string, summary: string, schema: string): 
     summary,
     tags: ["Schemas"],
     security: PUBLIC,
-    responses: { "200": { description: "JSON Schema (draft 2020-12).", content: { "application/schema+json": { schema: ref(schema) } } }, ...etagResponses("The schema is") },
+    responses: {
+      "200": { description: "JSON Schema (draft 2020-12).", content: { "application/schema+json": { schema: ref(schema) } } },
+      ...etagResponses("The schema is"),
+    },
     "x-permission": permission("public"),
   };
 }

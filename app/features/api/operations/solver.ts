@@ -9,11 +9,15 @@ export function solverPaths(): OpenApiPaths {
       post: {
         operationId: "solveSequence",
         summary: "Solve a gait sequence for a robot",
-        description: "Every frame's foot positions, joint angles and pulses, the flags of every check, and a summary. Bodies up to 2 MiB; recent answers are cached (send `Cache-Control: no-cache` for a fresh solve).",
+        description:
+          "Every frame's foot positions, joint angles and pulses, the flags of every check, and a summary. Bodies up to 2 MiB; recent answers are cached (send `Cache-Control: no-cache` for a fresh solve).",
         tags: ["Solver"],
         requestBody: { required: true, content: json(ref("SolveRequest")) },
         responses: {
-          "200": { description: "The solved sequence in the layout asked for.", content: json({ oneOf: [ref("SolveResult"), ref("SolveColumns"), ref("SolveChecks")] }) },
+          "200": {
+            description: "The solved sequence in the layout asked for.",
+            content: json({ oneOf: [ref("SolveResult"), ref("SolveColumns"), ref("SolveChecks")] }),
+          },
           ...errorsFor(400, ...AUTH, 413, 422),
         },
         "x-permission": permission("solver.use"),
@@ -58,7 +62,11 @@ export function solverSchemas(): Record<string, Json> {
       type: "object",
       required: ["robot", "feet"],
       additionalProperties: false,
-      properties: { robot: ref("Robot"), feet: { type: "object", additionalProperties: vec3, description: "Per leg id, the foot target in the neutral body frame." }, bodyPose },
+      properties: {
+        robot: ref("Robot"),
+        feet: { type: "object", additionalProperties: vec3, description: "Per leg id, the foot target in the neutral body frame." },
+        bodyPose,
+      },
     },
     IkResult: {
       type: "object",
@@ -121,7 +129,7 @@ export function solverSchemas(): Record<string, Json> {
     },
     SolveResult: {
       type: "object",
-      description: "options.layout \"frames\" (the default).",
+      description: 'options.layout "frames" (the default).',
       required: ["frames", "flags", "summary"],
       properties: {
         frames: {
@@ -136,7 +144,13 @@ export function solverSchemas(): Record<string, Json> {
                 type: "object",
                 additionalProperties: {
                   type: "object",
-                  properties: { contact: { type: "string", enum: ["stance", "swing"] }, foot: vec3, reachable: { type: "boolean" }, angles: jointAngles, pulses: jointAngles },
+                  properties: {
+                    contact: { type: "string", enum: ["stance", "swing"] },
+                    foot: vec3,
+                    reachable: { type: "boolean" },
+                    angles: jointAngles,
+                    pulses: jointAngles,
+                  },
                 },
               },
               support: { type: "array", items: { type: "array", items: { type: "number" } } },
@@ -156,7 +170,22 @@ export function solverSchemas(): Record<string, Json> {
     SolveColumns: {
       type: "object",
       description: `options.layout "columns": every per-frame quantity as one column, the base64 of ${COLUMNS_ENCODING} values (one a frame; marginMm is NaN where fewer than three feet are down).`,
-      required: ["layout", "encoding", "frames", "fps", "legs", "joints", "body", "leg", "supportPolygons", "supportIndex", "com", "marginMm", "flags", "summary"],
+      required: [
+        "layout",
+        "encoding",
+        "frames",
+        "fps",
+        "legs",
+        "joints",
+        "body",
+        "leg",
+        "supportPolygons",
+        "supportIndex",
+        "com",
+        "marginMm",
+        "flags",
+        "summary",
+      ],
       properties: {
         layout: { const: COLUMNS_LAYOUT },
         encoding: { const: COLUMNS_ENCODING },
@@ -188,7 +217,7 @@ export function solverSchemas(): Record<string, Json> {
     },
     SolveChecks: {
       type: "object",
-      description: "options.layout \"checks\": the flags and summary without the frames.",
+      description: 'options.layout "checks": the flags and summary without the frames.',
       required: ["flags", "summary"],
       properties: { flags: { type: "array", items: ref("Flag") }, summary: ref("SolveSummary") },
     },

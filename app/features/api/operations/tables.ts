@@ -5,17 +5,29 @@ import { RELEASE_TABLE, benchQuerySchema, tableQuerySchema } from "../../tables/
 import { AUTH, errorsFor, etagResponses, ifNoneMatch, permission, queryParameters, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
 
 const tableHeadersDoc = {
-  ETag: { description: "The representation's tag: version content hash, format, units, rate, calibration profile and revision, override, exporter and solver versions.", schema: { type: "string" } },
-  "Content-Disposition": { description: "attachment; filename=\"<gait>_v<version>_<units>_<rate>hz.<csv|json|h>\"", schema: { type: "string" } },
+  ETag: {
+    description:
+      "The representation's tag: version content hash, format, units, rate, calibration profile and revision, override, exporter and solver versions.",
+    schema: { type: "string" },
+  },
+  "Content-Disposition": { description: 'attachment; filename="<gait>_v<version>_<units>_<rate>hz.<csv|json|h>"', schema: { type: "string" } },
   "Repr-Digest": { description: "RFC 9530: sha-256 of the bytes (a release record stores the same hash in hex).", schema: { type: "string" } },
   "Gaitloom-Gait": { description: "Gait name (percent-encoded), version and content hash: the metadata a CSV cannot hold.", schema: { type: "string" } },
   "Gaitloom-Flags": { description: "errors=…; warnings=…; clamped=…", schema: { type: "string" } },
 };
 
 const tableContent = {
-  "text/csv": { schema: { type: "string", description: `${TABLE_MEDIA_TYPES.csv}: header record frame,time_ms,<leg>.<joint>… in channel order, CRLF line ends.` } },
+  "text/csv": {
+    schema: { type: "string", description: `${TABLE_MEDIA_TYPES.csv}: header record frame,time_ms,<leg>.<joint>… in channel order, CRLF line ends.` },
+  },
   "application/json": { schema: ref("AngleTable") },
-  "text/x-c": { schema: { type: "string", description: "A C99 header: the frame count, frame period, channel map and a static const fixed-point array, with a comment block naming robot, revision, gait version and content hash." } },
+  "text/x-c": {
+    schema: {
+      type: "string",
+      description:
+        "A C99 header: the frame count, frame period, channel map and a static const fixed-point array, with a comment block naming robot, revision, gait version and content hash.",
+    },
+  },
 };
 
 export function benchTablePaths(): OpenApiPaths {
@@ -91,7 +103,15 @@ export function tableSchemas(): Record<string, Json> {
             exporterVersion: { type: "string" },
             solverVersion: { type: ["string", "null"] },
             robot: { type: "object", properties: { name: { type: "string" }, revision: { type: ["integer", "string"] } } },
-            gait: { type: "object", properties: { name: { type: "string" }, version: { type: ["integer", "string"] }, contentHash: { type: "string" }, loop: { type: ["boolean", "null"] } } },
+            gait: {
+              type: "object",
+              properties: {
+                name: { type: "string" },
+                version: { type: ["integer", "string"] },
+                contentHash: { type: "string" },
+                loop: { type: ["boolean", "null"] },
+              },
+            },
             units: { type: "string", enum: ["deg", "rad", "us"] },
             rateHz: { type: "number" },
             framePeriodMs: { type: "number" },
@@ -104,8 +124,26 @@ export function tableSchemas(): Record<string, Json> {
             safety: { type: "array", items: { type: "string" } },
           },
         },
-        channels: { type: "array", items: { type: "object", properties: { column: { type: "integer" }, channel: { type: "integer" }, leg: { type: "string" }, joint: { type: "string" }, name: { type: "string" } } } },
-        frames: { type: "array", items: { type: "object", properties: { index: { type: "integer" }, timeMs: { type: "number" }, values: { type: "array", items: { type: "number" } } } } },
+        channels: {
+          type: "array",
+          items: {
+            type: "object",
+            properties: {
+              column: { type: "integer" },
+              channel: { type: "integer" },
+              leg: { type: "string" },
+              joint: { type: "string" },
+              name: { type: "string" },
+            },
+          },
+        },
+        frames: {
+          type: "array",
+          items: {
+            type: "object",
+            properties: { index: { type: "integer" }, timeMs: { type: "number" }, values: { type: "array", items: { type: "number" } } },
+          },
+        },
       },
     },
   };

@@ -131,7 +131,11 @@ export function deleteKey(sequence: Sequence, ref: KeyRef): Sequence {
   const keys = keysOf(sequence, ref.legId);
   if (!keys[ref.index]) throw new EditRefusal("That key no longer exists.");
   if (ref.legId !== null && keys.length <= 1) throw new EditRefusal(`${ref.legId} needs at least one key; change this one instead.`);
-  return withKeys(sequence, ref.legId, keys.filter((_, index) => index !== ref.index));
+  return withKeys(
+    sequence,
+    ref.legId,
+    keys.filter((_, index) => index !== ref.index),
+  );
 }
 
 /** The leg's lift-off time: its first swing key (the generator's phase), or null. */

@@ -40,7 +40,16 @@ export function paramsOfSequence(sequence: {
   cycleMs: number;
   fps: number;
   name?: string;
-  generator: { template?: TemplateName; dutyFactor?: number; phase?: Record<string, number>; strideMm: number; directionDeg: number; turnDegPerCycle: number; stepHeightMm: number; bodyHeightMm?: number };
+  generator: {
+    template?: TemplateName;
+    dutyFactor?: number;
+    phase?: Record<string, number>;
+    strideMm: number;
+    directionDeg: number;
+    turnDegPerCycle: number;
+    stepHeightMm: number;
+    bodyHeightMm?: number;
+  };
 }): GaitParams | null {
   const g = sequence.generator;
   if (!g.template) return null;

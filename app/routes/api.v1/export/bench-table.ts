@@ -18,7 +18,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     }
     const rendered = renderBenchTable(prepared);
     // A HEAD asks about the file without taking it: not a download.
-    if (request.method !== "HEAD") await recordBenchDownload({ workspaceId: member.workspace.id, userId: member.user.id, tokenId: member.tokenId }, prepared, rendered);
+    if (request.method !== "HEAD")
+      await recordBenchDownload({ workspaceId: member.workspace.id, userId: member.user.id, tokenId: member.tokenId }, prepared, rendered);
     return new Response(rendered.body, { headers: tableHeaders(prepared.etag, rendered) });
   });
 }

@@ -20,7 +20,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     }
     const rendered = renderVersionTable(prepared);
     // A HEAD asks about the file without taking it: not a download.
-    if (request.method !== "HEAD") await recordTableDownload({ workspaceId: member.workspace.id, userId: member.user.id, tokenId: member.tokenId }, prepared, rendered, number);
+    if (request.method !== "HEAD")
+      await recordTableDownload({ workspaceId: member.workspace.id, userId: member.user.id, tokenId: member.tokenId }, prepared, rendered, number);
     return new Response(rendered.body, { headers: tableHeaders(prepared.etag, rendered) });
   });
 }

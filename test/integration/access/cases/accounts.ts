@@ -29,7 +29,10 @@ import * as apiWorkspace from "~/routes/api.v1/workspace";
 
 async function throwawayMember(db: Parameters<NonNullable<RouteCase["prepare"]>>[0], workspaceId: string) {
   const login = uniqueName("throwaway");
-  const [user] = await db.insert(users).values({ login, name: login, email: `${login}@example.test` }).returning();
+  const [user] = await db
+    .insert(users)
+    .values({ login, name: login, email: `${login}@example.test` })
+    .returning();
   await db.insert(memberships).values({ workspaceId, userId: user.id, role: "viewer" });
   return { userId: user.id };
 }
@@ -48,7 +51,13 @@ export const cases: RouteCase[] = [
   { name: "GET /healthz", route: "routes/healthz.ts", kind: "loader", needs: "public", run: () => healthz.loader() },
   { name: "GET (shell)", route: "routes/shell.tsx", kind: "loader", needs: "public", run: (req) => req("GET", "/").then((r) => load(shell, r)) },
   { name: "GET /", route: "routes/home.tsx", kind: "loader", needs: "public", run: (req) => req("GET", "/").then((r) => load(home, r)) },
-  { name: "GET /sign-in", route: "routes/auth/sign-in.tsx", kind: "loader", needs: "public", run: (req) => req("GET", "/sign-in").then((r) => load(signIn, r)) },
+  {
+    name: "GET /sign-in",
+    route: "routes/auth/sign-in.tsx",
+    kind: "loader",
+    needs: "public",
+    run: (req) => req("GET", "/sign-in").then((r) => load(signIn, r)),
+  },
   {
     name: "POST /auth/github",
     route: "routes/auth/github.ts",
@@ -63,7 +72,13 @@ export const cases: RouteCase[] = [
     needs: "public",
     run: (req) => req("GET", "/auth/github/callback").then((r) => load(githubCallback, r)),
   },
-  { name: "POST /sign-out", route: "routes/auth/sign-out.ts", kind: "action", needs: "public", run: (req) => req("POST", "/sign-out").then((r) => act(signOut, r)) },
+  {
+    name: "POST /sign-out",
+    route: "routes/auth/sign-out.ts",
+    kind: "action",
+    needs: "public",
+    run: (req) => req("POST", "/sign-out").then((r) => act(signOut, r)),
+  },
   {
     name: "POST /workspace (switch)",
     route: "routes/workspace-switch.ts",
@@ -95,8 +110,20 @@ export const cases: RouteCase[] = [
     prepare: (db, ids) => pendingInvitation(db, ids.workspaceId),
     run: (req, _ids, { token }) => req("POST", `/invitations/${token}`).then((r) => act(acceptInvitation, r, { token })),
   },
-  { name: "GET /settings (layout)", route: "routes/settings/layout.tsx", kind: "loader", needs: "workspace.read", run: (req) => req("GET", "/settings").then((r) => load(settingsLayout, r)) },
-  { name: "GET /settings", route: "routes/settings/workspace.tsx", kind: "loader", needs: "workspace.read", run: (req) => req("GET", "/settings").then((r) => load(workspaceSettings, r)) },
+  {
+    name: "GET /settings (layout)",
+    route: "routes/settings/layout.tsx",
+    kind: "loader",
+    needs: "workspace.read",
+    run: (req) => req("GET", "/settings").then((r) => load(settingsLayout, r)),
+  },
+  {
+    name: "GET /settings",
+    route: "routes/settings/workspace.tsx",
+    kind: "loader",
+    needs: "workspace.read",
+    run: (req) => req("GET", "/settings").then((r) => load(workspaceSettings, r)),
+  },
   {
     name: "POST /settings (rename)",
     route: "routes/settings/workspace.tsx",
@@ -104,7 +131,13 @@ export const cases: RouteCase[] = [
     needs: "workspace.manage",
     run: (req) => req("POST", "/settings", { form: { name: "Breakwater Robotics Lab" } }).then((r) => act(workspaceSettings, r)),
   },
-  { name: "GET /settings/members", route: "routes/settings/members.tsx", kind: "loader", needs: "members.read", run: (req) => req("GET", "/settings/members").then((r) => load(members, r)) },
+  {
+    name: "GET /settings/members",
+    route: "routes/settings/members.tsx",
+    kind: "loader",
+    needs: "members.read",
+    run: (req) => req("GET", "/settings/members").then((r) => load(members, r)),
+  },
   {
     name: "POST /settings/members (change a role)",
     route: "routes/settings/members.tsx",
@@ -146,7 +179,13 @@ export const cases: RouteCase[] = [
     prepare: (db, ids) => pendingInvitation(db, ids.workspaceId),
     run: (req, _ids, { invitationId }) => req("POST", "/settings/members", { form: { intent: "revoke", invitationId } }).then((r) => act(members, r)),
   },
-  { name: "GET /settings/tokens", route: "routes/settings/tokens.tsx", kind: "loader", needs: "tokens.manage", run: (req) => req("GET", "/settings/tokens").then((r) => load(tokens, r)) },
+  {
+    name: "GET /settings/tokens",
+    route: "routes/settings/tokens.tsx",
+    kind: "loader",
+    needs: "tokens.manage",
+    run: (req) => req("GET", "/settings/tokens").then((r) => load(tokens, r)),
+  },
   {
     name: "POST /settings/tokens (create)",
     route: "routes/settings/tokens.tsx",
@@ -169,10 +208,41 @@ export const cases: RouteCase[] = [
     },
     run: (req, _ids, { tokenId }) => req("POST", "/settings/tokens", { form: { intent: "revoke", tokenId } }).then((r) => act(tokens, r)),
   },
-  { name: "GET /settings/audit", route: "routes/settings/audit.tsx", kind: "loader", needs: "audit.read", run: (req) => req("GET", "/settings/audit").then((r) => load(audit, r)) },
+  {
+    name: "GET /settings/audit",
+    route: "routes/settings/audit.tsx",
+    kind: "loader",
+    needs: "audit.read",
+    run: (req) => req("GET", "/settings/audit").then((r) => load(audit, r)),
+  },
   { name: "GET /local/mail", route: "routes/local/mail.tsx", kind: "loader", needs: "public", run: () => localMail.loader() },
-  { name: "GET /gaits", route: "routes/gaits/list.tsx", kind: "loader", needs: "gaits.read", run: (req) => req("GET", "/gaits").then((r) => load(gaitList, r)) },
-  { name: "GET /reviews", route: "routes/reviews.tsx", kind: "loader", needs: "reviews.read", run: (req) => req("GET", "/reviews").then((r) => load(reviews, r)) },
-  { name: "GET /no/such/page", route: "routes/not-found.tsx", kind: "loader", needs: "public", allowedStatus: 404, run: () => Promise.resolve(notFound.loader()) },
-  { name: "GET /api/v1/workspace", route: "routes/api.v1/workspace.ts", kind: "loader", needs: "workspace.read", run: (req) => req("GET", "/api/v1/workspace").then((r) => load(apiWorkspace, r)) },
+  {
+    name: "GET /gaits",
+    route: "routes/gaits/list.tsx",
+    kind: "loader",
+    needs: "gaits.read",
+    run: (req) => req("GET", "/gaits").then((r) => load(gaitList, r)),
+  },
+  {
+    name: "GET /reviews",
+    route: "routes/reviews.tsx",
+    kind: "loader",
+    needs: "reviews.read",
+    run: (req) => req("GET", "/reviews").then((r) => load(reviews, r)),
+  },
+  {
+    name: "GET /no/such/page",
+    route: "routes/not-found.tsx",
+    kind: "loader",
+    needs: "public",
+    allowedStatus: 404,
+    run: () => Promise.resolve(notFound.loader()),
+  },
+  {
+    name: "GET /api/v1/workspace",
+    route: "routes/api.v1/workspace.ts",
+    kind: "loader",
+    needs: "workspace.read",
+    run: (req) => req("GET", "/api/v1/workspace").then((r) => load(apiWorkspace, r)),
+  },
 ];

@@ -33,7 +33,9 @@ export const cases: RouteCase[] = [
     kind: "action",
     needs: "gaits.edit",
     run: (req, ids) =>
-      req("POST", "/gaits/new", { form: { intent: "create", robotId: ids.robotIds[CRAWLER], name: uniqueName("Matrix tripod"), template: "tripod" } }).then((r) => act(newGait, r)),
+      req("POST", "/gaits/new", { form: { intent: "create", robotId: ids.robotIds[CRAWLER], name: uniqueName("Matrix tripod"), template: "tripod" } }).then(
+        (r) => act(newGait, r),
+      ),
   },
   {
     name: "POST /gaits/new (keep edits as a copy)",
@@ -42,7 +44,9 @@ export const cases: RouteCase[] = [
     needs: "gaits.edit",
     prepare: async (db, ids) => ({ sequence: JSON.stringify((await draftOf(db, ids.gaitIds["Tripod cruise"])).draftSequence) }),
     run: (req, ids, prepared) =>
-      req("POST", "/gaits/new", { form: { intent: "copy", sourceGaitId: ids.gaitIds["Tripod cruise"], name: uniqueName("Matrix copy"), sequence: prepared.sequence } }).then((r) => act(newGait, r)),
+      req("POST", "/gaits/new", {
+        form: { intent: "copy", sourceGaitId: ids.gaitIds["Tripod cruise"], name: uniqueName("Matrix copy"), sequence: prepared.sequence },
+      }).then((r) => act(newGait, r)),
   },
   {
     name: "GET /gaits/:gaitId/edit",
@@ -60,11 +64,15 @@ export const cases: RouteCase[] = [
     prepare: async (db, ids) => {
       const gait = await draftOf(db, ids.gaitIds[EDITED]);
       const [latest] = await db.select().from(robotRevisions).where(eq(robotRevisions.robotId, gait.robotId)).orderBy(desc(robotRevisions.number)).limit(1);
-      await db.insert(robotRevisions).values({ robotId: gait.robotId, number: latest.number + 1, definition: latest.definition, message: "matrix: same robot again" });
+      await db
+        .insert(robotRevisions)
+        .values({ robotId: gait.robotId, number: latest.number + 1, definition: latest.definition, message: "matrix: same robot again" });
       return { baseRevision: String(gait.draftRevision) };
     },
     run: (req, ids, prepared) =>
-      req("POST", `/gaits/${ids.gaitIds[EDITED]}/edit`, { form: { intent: "move-to-newest-robot", baseRevision: prepared.baseRevision } }).then((r) => act(editor, r, { gaitId: ids.gaitIds[EDITED] })),
+      req("POST", `/gaits/${ids.gaitIds[EDITED]}/edit`, { form: { intent: "move-to-newest-robot", baseRevision: prepared.baseRevision } }).then((r) =>
+        act(editor, r, { gaitId: ids.gaitIds[EDITED] }),
+      ),
   },
   {
     name: "GET /api/v1/gaits/:gaitId/draft",
@@ -83,8 +91,8 @@ export const cases: RouteCase[] = [
       return { baseRevision: String(gait.draftRevision), sequence: JSON.stringify(gait.draftSequence) };
     },
     run: (req, ids, prepared) =>
-      req("PUT", `/api/v1/gaits/${ids.gaitIds[EDITED]}/draft`, { json: { sequence: JSON.parse(prepared.sequence), baseRevision: Number(prepared.baseRevision) } }).then((r) =>
-        act(draftApi, r, { gaitId: ids.gaitIds[EDITED] }),
-      ),
+      req("PUT", `/api/v1/gaits/${ids.gaitIds[EDITED]}/draft`, {
+        json: { sequence: JSON.parse(prepared.sequence), baseRevision: Number(prepared.baseRevision) },
+      }).then((r) => act(draftApi, r, { gaitId: ids.gaitIds[EDITED] })),
   },
 ];

@@ -26,7 +26,9 @@ export const cases: RouteCase[] = [
     kind: "loader",
     needs: "tables.download",
     run: (req, ids) =>
-      req("GET", `/api/v1/gaits/${ids.gaitIds[GAIT]}/versions/released/table?format=csv&units=us`).then((r) => load(table, r, { gaitId: ids.gaitIds[GAIT], number: "released" })),
+      req("GET", `/api/v1/gaits/${ids.gaitIds[GAIT]}/versions/released/table?format=csv&units=us`).then((r) =>
+        load(table, r, { gaitId: ids.gaitIds[GAIT], number: "released" }),
+      ),
   },
   {
     name: "GET /api/v1/robots/:robotId/bench-table (sweep)",
@@ -34,16 +36,25 @@ export const cases: RouteCase[] = [
     kind: "loader",
     needs: "tables.download",
     run: (req, ids) =>
-      req("GET", `/api/v1/robots/${ids.robotIds[ROBOT]}/bench-table?kind=sweep&leg=LF&joint=femur`).then((r) => load(benchTable, r, { robotId: ids.robotIds[ROBOT] })),
+      req("GET", `/api/v1/robots/${ids.robotIds[ROBOT]}/bench-table?kind=sweep&leg=LF&joint=femur`).then((r) =>
+        load(benchTable, r, { robotId: ids.robotIds[ROBOT] }),
+      ),
   },
   {
     name: "GET /api/v1/robots/:robotId/calibration-profiles",
     route: "routes/api.v1/export/calibration-profiles.ts",
     kind: "loader",
     needs: "robots.read",
-    run: (req, ids) => req("GET", `/api/v1/robots/${ids.robotIds[ROBOT]}/calibration-profiles`).then((r) => load(calibrationProfiles, r, { robotId: ids.robotIds[ROBOT] })),
+    run: (req, ids) =>
+      req("GET", `/api/v1/robots/${ids.robotIds[ROBOT]}/calibration-profiles`).then((r) => load(calibrationProfiles, r, { robotId: ids.robotIds[ROBOT] })),
   },
-  { name: "GET /api/v1/openapi.json", route: "routes/api.v1/export/openapi.ts", kind: "loader", needs: "public", run: (req) => req("GET", "/api/v1/openapi.json").then((r) => load(openapi, r)) },
+  {
+    name: "GET /api/v1/openapi.json",
+    route: "routes/api.v1/export/openapi.ts",
+    kind: "loader",
+    needs: "public",
+    run: (req) => req("GET", "/api/v1/openapi.json").then((r) => load(openapi, r)),
+  },
   {
     name: "GET /api/v1/schema/sequence.json",
     route: "routes/api.v1/export/sequence-schema.ts",
@@ -58,7 +69,13 @@ export const cases: RouteCase[] = [
     needs: "public",
     run: (req) => req("GET", "/api/v1/schema/calibration.json").then((r) => load(calibrationSchema, r)),
   },
-  { name: "GET /export", route: "routes/export/page.tsx", kind: "loader", needs: "tables.download", run: (req) => req("GET", "/export").then((r) => load(exportPage, r)) },
+  {
+    name: "GET /export",
+    route: "routes/export/page.tsx",
+    kind: "loader",
+    needs: "tables.download",
+    run: (req) => req("GET", "/export").then((r) => load(exportPage, r)),
+  },
   {
     name: "GET /export/bring-up",
     route: "routes/export/bring-up.tsx",
@@ -66,7 +83,13 @@ export const cases: RouteCase[] = [
     needs: "tables.download",
     run: (req, ids) => req("GET", `/export/bring-up?robot=${ids.robotIds[ROBOT]}&kind=sweep&leg=LM&joint=tibia`).then((r) => load(bringUp, r)),
   },
-  { name: "GET /export/calibration", route: "routes/export/calibration-list.tsx", kind: "loader", needs: "robots.read", run: (req) => req("GET", "/export/calibration").then((r) => load(calibrationList, r)) },
+  {
+    name: "GET /export/calibration",
+    route: "routes/export/calibration-list.tsx",
+    kind: "loader",
+    needs: "robots.read",
+    run: (req) => req("GET", "/export/calibration").then((r) => load(calibrationList, r)),
+  },
   {
     name: "GET /export/calibration/:robotId",
     route: "routes/export/calibration.tsx",
@@ -80,9 +103,15 @@ export const cases: RouteCase[] = [
     kind: "action",
     needs: "robots.calibrate",
     run: (req, ids) =>
-      req("POST", `/export/calibration/${ids.robotIds[ROBOT]}`, { form: { intent: "create", name: uniqueName("SN matrix"), "joints.LF.femur.trimDeg": "1.5" } }).then((r) =>
-        act(calibration, r, { robotId: ids.robotIds[ROBOT] }),
-      ),
+      req("POST", `/export/calibration/${ids.robotIds[ROBOT]}`, {
+        form: { intent: "create", name: uniqueName("SN matrix"), "joints.LF.femur.trimDeg": "1.5" },
+      }).then((r) => act(calibration, r, { robotId: ids.robotIds[ROBOT] })),
   },
-  { name: "GET /api-docs", route: "routes/export/api-docs.tsx", kind: "loader", needs: "public", run: (req) => req("GET", "/api-docs").then((r) => load(apiDocs, r)) },
+  {
+    name: "GET /api-docs",
+    route: "routes/export/api-docs.tsx",
+    kind: "loader",
+    needs: "public",
+    run: (req) => req("GET", "/api-docs").then((r) => load(apiDocs, r)),
+  },
 ];

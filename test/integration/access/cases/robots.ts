@@ -31,13 +31,20 @@ async function calibrationEdit(db: Db, robotId: string) {
 }
 
 export const cases: RouteCase[] = [
-  { name: "GET /robots", route: "routes/robots/list.tsx", kind: "loader", needs: "robots.read", run: (req) => req("GET", "/robots").then((r) => load(list, r)) },
+  {
+    name: "GET /robots",
+    route: "routes/robots/list.tsx",
+    kind: "loader",
+    needs: "robots.read",
+    run: (req) => req("GET", "/robots").then((r) => load(list, r)),
+  },
   {
     name: "POST /robots (create from the starter)",
     route: "routes/robots/list.tsx",
     kind: "action",
     needs: "robots.edit",
-    run: (req) => req("POST", "/robots?index", { form: { intent: "create", name: uniqueName("Matrix starter"), source: "starter-4" } }).then((r) => act(list, r)),
+    run: (req) =>
+      req("POST", "/robots?index", { form: { intent: "create", name: uniqueName("Matrix starter"), source: "starter-4" } }).then((r) => act(list, r)),
   },
   {
     name: "POST /robots (upload a definition)",
@@ -73,7 +80,9 @@ export const cases: RouteCase[] = [
     needs: "robots.calibrate",
     prepare: (db, ids) => calibrationEdit(db, ids.robotIds[ROBOT]),
     run: (req, ids, prepared) =>
-      req("POST", `/robots/${ids.robotIds[ROBOT]}`, { form: { intent: "save", message: "matrix", ...prepared } }).then((r) => act(robot, r, { robotId: ids.robotIds[ROBOT] })),
+      req("POST", `/robots/${ids.robotIds[ROBOT]}`, { form: { intent: "save", message: "matrix", ...prepared } }).then((r) =>
+        act(robot, r, { robotId: ids.robotIds[ROBOT] }),
+      ),
   },
   {
     name: "GET /robots/:robotId/revisions/:number",
@@ -107,7 +116,13 @@ export const cases: RouteCase[] = [
     run: (req, ids) =>
       req("GET", `/robots/${ids.robotIds[ROBOT]}/revisions/1/download`).then((r) => load(download, r, { robotId: ids.robotIds[ROBOT], number: "1" })),
   },
-  { name: "GET /api/v1/robots", route: "routes/api.v1/robots/list.ts", kind: "loader", needs: "robots.read", run: (req) => req("GET", "/api/v1/robots").then((r) => load(apiList, r)) },
+  {
+    name: "GET /api/v1/robots",
+    route: "routes/api.v1/robots/list.ts",
+    kind: "loader",
+    needs: "robots.read",
+    run: (req) => req("GET", "/api/v1/robots").then((r) => load(apiList, r)),
+  },
   {
     name: "GET /api/v1/robots/:robotId",
     route: "routes/api.v1/robots/robot.ts",
@@ -123,5 +138,11 @@ export const cases: RouteCase[] = [
     run: (req, ids) =>
       req("GET", `/api/v1/robots/${ids.robotIds[ROBOT]}/revisions/1`).then((r) => load(apiRevision, r, { robotId: ids.robotIds[ROBOT], number: "1" })),
   },
-  { name: "GET /api/v1/schema/robot.json", route: "routes/api.v1/robots/schema.ts", kind: "loader", needs: "public", run: (req) => req("GET", "/api/v1/schema/robot.json").then((r) => load(apiSchema, r)) },
+  {
+    name: "GET /api/v1/schema/robot.json",
+    route: "routes/api.v1/robots/schema.ts",
+    kind: "loader",
+    needs: "public",
+    run: (req) => req("GET", "/api/v1/schema/robot.json").then((r) => load(apiSchema, r)),
+  },
 ];

@@ -19,7 +19,14 @@ export const cases: RouteCase[] = [
     needs: "solver.use",
     run: (req) => req("POST", "/api/v1/solve", { json: { robot: robotJson, sequence } }).then((r) => act(solve, r)),
   },
-  { name: "GET /api/v1/solve (asks for POST)", route: "routes/api.v1/solver/solve.ts", kind: "loader", needs: "public", allowedStatus: 400, run: () => Promise.resolve(solve.loader()) },
+  {
+    name: "GET /api/v1/solve (asks for POST)",
+    route: "routes/api.v1/solver/solve.ts",
+    kind: "loader",
+    needs: "public",
+    allowedStatus: 400,
+    run: () => Promise.resolve(solve.loader()),
+  },
   {
     name: "POST /api/v1/ik",
     route: "routes/api.v1/solver/ik.ts",
@@ -27,5 +34,12 @@ export const cases: RouteCase[] = [
     needs: "solver.use",
     run: (req) => req("POST", "/api/v1/ik", { json: { robot: robotJson, feet: neutralStance(robot) } }).then((r) => act(ik, r)),
   },
-  { name: "GET /api/v1/ik (asks for POST)", route: "routes/api.v1/solver/ik.ts", kind: "loader", needs: "public", allowedStatus: 400, run: () => Promise.resolve(ik.loader()) },
+  {
+    name: "GET /api/v1/ik (asks for POST)",
+    route: "routes/api.v1/solver/ik.ts",
+    kind: "loader",
+    needs: "public",
+    allowedStatus: 400,
+    run: () => Promise.resolve(ik.loader()),
+  },
 ];

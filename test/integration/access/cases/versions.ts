@@ -27,12 +27,20 @@ async function versionIn(db: Db, ids: DemoIds, state: VersionState) {
 async function draftState(db: Db, ids: DemoIds) {
   const gaitId = ids.gaitIds[GAIT];
   const [gait] = await db.select({ draftRevision: gaits.draftRevision }).from(gaits).where(eq(gaits.id, gaitId));
-  const [first] = await db.select({ id: gaitVersions.id }).from(gaitVersions).where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.number, 1)));
+  const [first] = await db
+    .select({ id: gaitVersions.id })
+    .from(gaitVersions)
+    .where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.number, 1)));
   return { gaitId, draftRevision: String(gait.draftRevision), versionId: first.id };
 }
 
 async function twoVersions(db: Db, ids: DemoIds) {
-  const rows = await db.select({ id: gaitVersions.id }).from(gaitVersions).where(eq(gaitVersions.gaitId, ids.gaitIds[GAIT])).orderBy(desc(gaitVersions.number)).limit(2);
+  const rows = await db
+    .select({ id: gaitVersions.id })
+    .from(gaitVersions)
+    .where(eq(gaitVersions.gaitId, ids.gaitIds[GAIT]))
+    .orderBy(desc(gaitVersions.number))
+    .limit(2);
   return { a: rows[1].id, b: rows[0].id };
 }
 
@@ -66,7 +74,9 @@ export const cases: RouteCase[] = [
     kind: "action",
     needs: "versions.commit",
     run: (req, ids) =>
-      req("POST", `/gaits/${ids.gaitIds[GAIT]}`, { form: { intent: "commit", message: uniqueName("Matrix commit") } }).then((r) => act(gaitPage, r, { gaitId: ids.gaitIds[GAIT] })),
+      req("POST", `/gaits/${ids.gaitIds[GAIT]}`, { form: { intent: "commit", message: uniqueName("Matrix commit") } }).then((r) =>
+        act(gaitPage, r, { gaitId: ids.gaitIds[GAIT] }),
+      ),
   },
   {
     name: "POST /gaits/:gaitId (start a new draft from a version)",
