@@ -8,7 +8,8 @@ export default defineConfig({
   fullyParallel: false,
   workers: 2,
   retries: 0,
-  timeout: 30_000,
+  // Whole journeys (commit, review, release) take 20–30 s on a 2-core machine running the app and its database too.
+  timeout: 60_000,
   expect: { timeout: 7_000 },
   use: {
     baseURL: process.env.GAITLOOM_E2E_URL ?? "http://127.0.0.1:3100",
