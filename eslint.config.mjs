@@ -38,12 +38,40 @@ function crossFeatureImports(self) {
   ];
 }
 
+/**
+ * Node's globals for the plain JavaScript files (server.js, the scripts), listed
+ * here as the `globals` package is not installed; TypeScript files get theirs
+ * from @types/node.
+ */
+const nodeGlobals = Object.fromEntries(
+  [
+    "process",
+    "console",
+    "Buffer",
+    "URL",
+    "URLSearchParams",
+    "fetch",
+    "setTimeout",
+    "clearTimeout",
+    "setInterval",
+    "clearInterval",
+    "setImmediate",
+    "clearImmediate",
+    "queueMicrotask",
+    "structuredClone",
+    "AbortController",
+    "TextEncoder",
+    "TextDecoder",
+  ].map((name) => [name, "readonly"]),
+);
+
 export default tseslint.config(
   {
     ignores: ["build/**", ".react-router/**", "node_modules/**", ".data/**", "test-results/**", "playwright-report/**", "db/migrations/**", "public/**"],
   },
   js.configs.recommended,
   tseslint.configs.recommended,
+  { files: ["**/*.{js,mjs,cjs}"], languageOptions: { globals: nodeGlobals } },
   {
     plugins: { "react-hooks": reactHooks },
     rules: {
