@@ -27,13 +27,17 @@ function coreDeepImports(self) {
   }));
 }
 
-/** A feature reaches another feature only through its index. */
+/**
+ * A feature reaches another feature only through its index: `index.ts` for
+ * what may run in the browser, `index.server.ts` for services, kept apart so
+ * a component's import chain never reaches a server module.
+ */
 function crossFeatureImports(self) {
   const others = FEATURES.filter((feature) => feature !== self).join("|");
   return [
     {
-      regex: `^~/features/(${others})/.+|^\\.\\./(${others})/.+`,
-      message: "Another feature is reached only through its index (~/features/<feature>).",
+      regex: `^(~/features/|(\\.\\./)+)(${others})/(?!index(\\.server)?$).+`,
+      message: "Another feature is reached only through its index (~/features/<feature> or ~/features/<feature>/index.server).",
     },
   ];
 }

@@ -10,7 +10,7 @@ import { createHash } from "node:crypto";
 import { EXPORTER_VERSION, calibrationProfileJsonSchema } from "../../export/index";
 import { SOLVER_VERSION, sequenceJsonSchema } from "../../gait/index";
 import { config } from "../../platform/config.server";
-import { matchesIfNoneMatch } from "../tables/query";
+import { matchesIfNoneMatch } from "../tables/index.server";
 import { accountPaths, accountSchemas } from "./operations/account";
 import { calibrationPaths, calibrationSchemas } from "./operations/calibration";
 import { errorResponses, errorSchemas, type OpenApiDocument } from "./operations/common";

@@ -3,7 +3,7 @@
 // is better where "better" has a direction. Pure.
 import { FLAG_KINDS, type FlagKind, type SolveSummary } from "../../gait/index";
 import { JOINT_NAMES, type JointName } from "../../kinematics/index";
-import { FLAG_LABELS } from "../gaits/flag-labels";
+import { FLAG_LABELS } from "../gaits/index";
 
 /** What a version keeps of its solve (app/features/versions/versions.server.ts VersionSummary); older rows may lack fields. */
 export type MetricSummary = Partial<

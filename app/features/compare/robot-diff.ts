@@ -1,6 +1,6 @@
 // What differs between the robot revisions two versions pin: every changed
 // field of the definition, with the same field walk the robot editor uses. Pure.
-import { changedFields, describeChange, type FieldChange } from "../robots/changes";
+import { changedFields, describeChange, type FieldChange } from "../robots/index";
 
 export type RobotRevisionDiff = {
   /** The revision numbers A and B pin. */

@@ -11,7 +11,7 @@
 // other added. A key dragged across the seam of a loop (t 0.95 → 0.02) changes
 // its place in the order and shows as removed and added.
 import { CSS_EASE, type BodyKey, type Ease, type LegKey, type Sequence } from "../../gait/index";
-import { changedFields, type FieldChange } from "../robots/changes";
+import { changedFields, type FieldChange } from "../robots/index";
 
 export type KeyChange = "time" | "contact" | "foot" | "ease" | "apex" | "pose" | "resting";
 export type KeyStatus = "added" | "removed" | "changed" | "same";

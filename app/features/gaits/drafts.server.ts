@@ -10,7 +10,7 @@ import { parseSequence, sequenceIssuesForRobot, type Sequence, type SequenceIssu
 import type { Robot } from "../../kinematics/index";
 import { recordAudit } from "../../platform/audit.server";
 import { database, type Reader } from "../../platform/db.server";
-import { robotOfRevision } from "../robots/revision-robot.server";
+import { robotOfRevision } from "../robots/index.server";
 import { starterSequence } from "./editor/starter-sequence";
 import { ServiceError } from "../../platform/errors.server";
 import { formatTime } from "../../platform/format";

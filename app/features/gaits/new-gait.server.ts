@@ -12,8 +12,7 @@ import { database, isUniqueViolation } from "../../platform/db.server";
 import { checkSequenceFor, type DraftActor } from "./drafts.server";
 import { ServiceError } from "../../platform/errors.server";
 import { id } from "../../platform/params";
-import { robotOfRevision } from "../robots/revision-robot.server";
-import { newestRevisionInWorkspace } from "../robots/robots.server";
+import { newestRevisionInWorkspace, robotOfRevision } from "../robots/index.server";
 import { suitableTemplates, type TemplateChoice } from "./editor/templates";
 
 export type RobotChoice = {

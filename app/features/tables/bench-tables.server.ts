@@ -9,9 +9,8 @@ import { JOINT_NAMES, type JointName, type Robot } from "../../kinematics/index"
 import { recordAudit } from "../../platform/audit.server";
 import { database, type Reader } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
-import { robotOfRevision } from "../robots/revision-robot.server";
-import { newestRevisionInWorkspace } from "../robots/robots.server";
-import { canonicalJson } from "../versions/content-hash.server";
+import { newestRevisionInWorkspace, robotOfRevision } from "../robots/index.server";
+import { canonicalJson } from "../versions/index.server";
 import { tableEtag, type BenchQuery, type TableCalibration } from "./query";
 import { renderTable, tableCalibration, type Downloader, type RenderedTable } from "./render.server";
 

@@ -9,7 +9,7 @@ import { MAX_FPS, SOLVER_VERSION } from "../../gait/index";
 import { JOINT_NAMES } from "../../kinematics/index";
 import { ServiceError } from "../../platform/errors.server";
 import { idParam, versionOrReleased } from "../../platform/params";
-import { canonicalJson } from "../versions/content-hash.server";
+import { canonicalJson } from "../versions/index.server";
 import type { RenderedTable } from "./render.server";
 
 /** The canonical table of a release: degrees as CSV at the sequence's own rate, no calibration profile. */

@@ -16,7 +16,7 @@ import type { Flag, SolvedSequence } from "../../gait/index";
 import type { Robot } from "../../kinematics/index";
 import type { Reader } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
-import { findProfileByName, type StoredProfile } from "../robots/calibration.server";
+import { findProfileByName, type StoredProfile } from "../robots/index.server";
 import type { TableCalibration } from "./query";
 
 export type RenderedTable = {

@@ -12,7 +12,7 @@ import type { Robot } from "../../kinematics/index";
 import { recordAudit } from "../../platform/audit.server";
 import { database, type Reader } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
-import { robotOfRevision } from "../robots/revision-robot.server";
+import { robotOfRevision } from "../robots/index.server";
 import { tableEtag, type TableCalibration, type TableQuery } from "./query";
 import { renderTable, tableCalibration, type Downloader, type RenderedTable } from "./render.server";
 

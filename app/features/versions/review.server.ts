@@ -14,7 +14,7 @@ import { database, type Reader, type Tx } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
 import { sendMail } from "../../platform/mail.server";
 import { isId } from "../../platform/params";
-import { recordReleaseTable } from "../tables/releases.server";
+import { recordReleaseTable } from "../tables/index.server";
 import { can, type Action } from "../../platform/permissions";
 import { stateWord } from "./state-labels";
 import type { Person, VersionSummary } from "./versions.server";

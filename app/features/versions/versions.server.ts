@@ -27,7 +27,7 @@ import {
 import { versionContentHash } from "./content-hash.server";
 import { database } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
-import { robotOfRevision } from "../robots/revision-robot.server";
+import { robotOfRevision } from "../robots/index.server";
 
 /** What a version keeps of its solve: enough for tables, lists and comparisons without solving again. */
 export type VersionSummary = SolveSummary & { cycleMs: number; loop: boolean };

@@ -1,6 +1,6 @@
 // /api/v1/gaits/{gaitId}/draft: a gait's working draft, read and saved.
 import { z } from "zod";
-import { draftSaveBody } from "../../gaits/drafts.server";
+import { draftSaveBody } from "../../gaits/index.server";
 import { AUTH, errorsFor, json, permission, person, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
 
 export function draftPaths(): OpenApiPaths {

@@ -1,6 +1,6 @@
 // /api/v1/solve and /api/v1/ik: the gait engine, stateless.
 import { COLUMNS_ENCODING, COLUMNS_LAYOUT, FLAG_KINDS } from "../../../gait/index";
-import { SOLVE_LAYOUTS } from "../../solver/solve.server";
+import { SOLVE_LAYOUTS } from "../../solver/index.server";
 import { AUTH, errorsFor, json, permission, ref, type Json, type OpenApiPaths } from "./common";
 
 export function solverPaths(): OpenApiPaths {

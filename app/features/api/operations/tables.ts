@@ -1,7 +1,7 @@
 // The firmware angle tables and the bring-up tables: files with ETags, audited downloads.
 import { TABLE_FORMAT, TABLE_MEDIA_TYPES } from "../../../export/index";
 import { NUMBER_PATTERN } from "../../../platform/params";
-import { RELEASE_TABLE, benchQuerySchema, tableQuerySchema } from "../../tables/query";
+import { RELEASE_TABLE, benchQuerySchema, tableQuerySchema } from "../../tables/index.server";
 import { AUTH, errorsFor, etagResponses, ifNoneMatch, permission, queryParameters, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
 
 const tableHeadersDoc = {

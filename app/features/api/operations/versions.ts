@@ -1,5 +1,5 @@
 // /api/v1/gaits/{gaitId}/versions: a gait's committed versions.
-import { VERSION_STATES } from "../../versions/state-labels";
+import { VERSION_STATES } from "../../versions/index";
 import { AUTH, errorsFor, json, permission, person, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
 
 export function versionPaths(): OpenApiPaths {

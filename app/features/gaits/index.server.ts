@@ -1,0 +1,2 @@
+// The gait services other features use.
+export { draftSaveBody } from "./drafts.server";

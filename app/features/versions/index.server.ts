@@ -1,0 +1,2 @@
+// The version services other features use.
+export { canonicalJson } from "./content-hash.server";
