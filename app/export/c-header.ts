@@ -38,6 +38,11 @@ export function cIdentifier(name: string): string {
   return ascii || "gait";
 }
 
+// Control characters and the Unicode line separators would break a comment's
+// line in the C header, so they become spaces.
+// eslint-disable-next-line no-control-regex -- matching control characters is this pattern's purpose
+const CONTROL_CHARACTERS = /[\u0000-\u001f\u007f-\u009f\u2028\u2029]+/g;
+
 /**
  * Text safe inside a C block comment on one line: no control characters or
  * line breaks, no comment delimiters (gcc's -Wcomment warns of a nested "/*"),
@@ -50,7 +55,7 @@ export function cCommentText(text: string): string {
     .replace(/µ/g, "u")
     .replace(/[·×]/g, "x")
     .replace(/[−–—]/g, "-")
-    .replace(/[\u0000-\u001f\u007f-\u009f\u2028\u2029]+/g, " ")
+    .replace(CONTROL_CHARACTERS, " ")
     .replace(/\*\//g, "* /")
     .replace(/\/\*/g, "/ *")
     .replace(/\?\?/g, "? ?")

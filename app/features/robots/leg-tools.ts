@@ -48,7 +48,7 @@ export function mirrorSide(robot: Robot, from: LegSide): MirrorResult {
   const replaced: string[] = [];
   const added: string[] = [];
   let legs = [...robot.legs];
-  let rest = robot.rest ? { ...robot.rest } : undefined;
+  const rest = robot.rest ? { ...robot.rest } : undefined;
   const negate = (value: number) => (value === 0 ? 0 : -value);
   for (const source of robot.legs) {
     if (legSide(robot, source) !== from) continue;
