@@ -1,5 +1,5 @@
 // Access cases for the solver API.
-import { act, load } from "../../../support/routes";
+import { act } from "../../../support/routes";
 import { demoRobotJson, loadDemoRobot } from "../../../support/robots";
 import type { RouteCase } from "../support";
 import * as solve from "~/routes/api.v1/solver/solve";
