@@ -18,12 +18,12 @@ export const PERMISSIONS = {
   "gaits.read": everyone,
   "reviews.read": everyone,
   "members.read": everyone,
+  "audit.read": everyone,
   // The workspace itself.
   "workspace.manage": ["owner"],
   "members.changeRole": ["owner"],
   "members.remove": ["owner"],
   "invitations.manage": leads,
-  "audit.read": ["owner"],
   // API tokens act with the holder's role; only these roles may hold one.
   "tokens.manage": ["owner", "lead", "firmware"],
   // Robots: geometry and limits by editors; servo mapping and calibration also by firmware.
@@ -35,9 +35,11 @@ export const PERMISSIONS = {
   "versions.requestReview": editors,
   "versions.decide": leads,
   "versions.release": leads,
-  // Firmware output and the solver.
+  // Firmware output, the solver, tuning and the bench.
   "tables.download": ["owner", "lead", "animator", "firmware"],
   "solver.use": everyone,
+  "tuning.run": editors,
+  "bench.stream": ["owner", "lead", "firmware"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Action = keyof typeof PERMISSIONS;
@@ -49,11 +51,11 @@ const ACTION_PHRASES: Record<Action, string> = {
   "gaits.read": "see gaits",
   "reviews.read": "see reviews",
   "members.read": "see the members",
+  "audit.read": "read the audit log",
   "workspace.manage": "change the workspace settings",
   "members.changeRole": "change members' roles",
   "members.remove": "remove members",
   "invitations.manage": "invite people",
-  "audit.read": "read the audit log",
   "tokens.manage": "hold API tokens",
   "robots.edit": "edit robots",
   "robots.calibrate": "edit servo mapping and calibration",
@@ -64,6 +66,8 @@ const ACTION_PHRASES: Record<Action, string> = {
   "versions.release": "release versions",
   "tables.download": "download angle tables",
   "solver.use": "use the solver",
+  "tuning.run": "run tuning jobs",
+  "bench.stream": "stream to a robot on the bench",
 };
 
 export function refusal(role: Role, action: Action): string {
