@@ -55,16 +55,7 @@ export function metaFor(gait: { robot: Robot; params?: GaitParams }, extra: Part
 
 export const OVERRIDE = "Bench run on the stand, speed flags reviewed by the lead";
 
-export type JsonTable = {
-  format: string;
-  meta: Record<string, any>;
-  channels: { column: number; channel: number; leg: string; joint: string; name: string; reversed: boolean; trimDeg: number }[];
-  frames: { index: number; timeMs: number; values: number[] }[];
-};
-
-export function readJsonTable(text: string): JsonTable {
-  return JSON.parse(text) as JsonTable;
-}
+export { readJsonTable, type JsonTable } from "../support/tables";
 
 /** The records of a CSV file as papaparse reads it (RFC 4180), no type conversion. */
 export function readCsv(text: string): string[][] {

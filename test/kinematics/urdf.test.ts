@@ -9,6 +9,15 @@ import { distanceMm } from "./support/reference-fk";
 const urdf = fixtureText("test-crab.urdf");
 const twinJson = JSON.parse(fixtureText("test-crab.json"));
 
+/** A URDF <joint> as fast-xml-parser reads it: attributes as text; a fixed joint has no axis or limits. */
+type UrdfJoint = {
+  name: string;
+  type: string;
+  origin: { xyz: string; rpy: string };
+  axis?: { xyz: string };
+  limit?: { lower: string; upper: string };
+};
+
 function imported(xml = urdf): Robot {
   const result = importUrdf(xml, { standHeightMm: 80 });
   if (!result.ok) throw new Error(JSON.stringify(result.issues));
@@ -56,16 +65,25 @@ describe("importUrdf (URDF XML specification: joint origin xyz/rpy in m/rad, axi
   it("maps joint angles so that forwardLeg matches the URDF chain composed with three.js Matrix4 (reference library)", () => {
     // The URDF chain read straight from the XML: T = Trans(xyz)·Rz·Ry·Rx(rpy)·Rot(axis, q) per joint.
     const document = new XMLParser({ ignoreAttributes: false, attributeNamePrefix: "" }).parse(urdf);
-    const joints: any[] = document.robot.joint;
+    const joints: UrdfJoint[] = document.robot.joint;
     const byName = new Map(joints.map((joint) => [joint.name, joint]));
     const numbers = (text: string) => text.split(/\s+/).map(Number) as [number, number, number];
-    const jointMatrix = (joint: any, q: number) => {
+    const jointNamed = (name: string) => {
+      const joint = byName.get(name);
+      if (!joint) throw new Error(`the URDF has no joint ${name}`);
+      return joint;
+    };
+    const axisOf = (joint: UrdfJoint) => {
+      if (!joint.axis) throw new Error(`joint ${joint.name} has no axis`);
+      return numbers(joint.axis.xyz);
+    };
+    const jointMatrix = (joint: UrdfJoint, q: number) => {
       const [x, y, z] = numbers(joint.origin.xyz);
       const [roll, pitch, yaw] = numbers(joint.origin.rpy);
       const matrix = new Matrix4()
         .makeTranslation(x * 1000, y * 1000, z * 1000)
         .multiply(new Matrix4().makeRotationFromEuler(new Euler(roll, pitch, yaw, "ZYX")));
-      if (joint.type === "revolute") matrix.multiply(new Matrix4().makeRotationAxis(new Vector3(...numbers(joint.axis.xyz)).normalize(), q));
+      if (joint.type === "revolute") matrix.multiply(new Matrix4().makeRotationAxis(new Vector3(...axisOf(joint)).normalize(), q));
       return matrix;
     };
     const robot = imported();
@@ -75,14 +93,17 @@ describe("importUrdf (URDF XML specification: joint origin xyz/rpy in m/rad, axi
     for (let sample = 0; sample < 2000; sample += 1) {
       const prefix = ["fl", "fr", "rl", "rr"][sample % 4];
       const legId = prefix.toUpperCase();
-      const chain = ["coxa", "femur", "tibia"].map((part) => byName.get(`${prefix}_${part}`));
-      const q = chain.map((joint) => random.between(Number(joint.limit.lower), Number(joint.limit.upper)));
+      const chain = ["coxa", "femur", "tibia"].map((part) => jointNamed(`${prefix}_${part}`));
+      const q = chain.map((joint) => {
+        if (!joint.limit) throw new Error(`joint ${joint.name} has no limits`);
+        return random.between(Number(joint.limit.lower), Number(joint.limit.upper));
+      });
       const matrix = new Matrix4();
       chain.forEach((joint, index) => matrix.multiply(jointMatrix(joint, q[index])));
-      matrix.multiply(jointMatrix(byName.get(`${prefix}_foot`), 0));
+      matrix.multiply(jointMatrix(jointNamed(`${prefix}_foot`), 0));
       const foot = new Vector3().setFromMatrixPosition(matrix);
       // DESIGN.md: our coxa turns about +z; our femur and tibia about −y, so a URDF axis (0, ±1, 0) has the opposite sign.
-      const axisSign = (joint: any, index: number) => Math.sign(numbers(joint.axis.xyz)[index]);
+      const axisSign = (joint: UrdfJoint, index: number) => Math.sign(axisOf(joint)[index]);
       const ours = {
         coxa: (q[0] * axisSign(chain[0], 2) * 180) / Math.PI,
         femur: (-q[1] * axisSign(chain[1], 1) * 180) / Math.PI,

@@ -17,15 +17,28 @@ export const DEMO_ROBOTS = { six: "pier-crawler", four: "quay-walker", eight: "h
 
 const DEMO_JSON: Record<DemoRobotFile, unknown> = { "pier-crawler": pierCrawler, "quay-walker": quayWalker, "hull-climber": hullClimber };
 
-/** The demo robot's file as JSON, a fresh copy every call so a test may change it. */
-export function demoRobotJson(file: DemoRobotFile): any {
-  return structuredClone(DEMO_JSON[file]);
+/**
+ * The demo robot's file as JSON, a fresh copy every call so a test may change it.
+ * Typed as the robot it describes: the file has every field and no defaults are
+ * filled in, and test/kinematics/robot.test.ts holds each file to the schema.
+ */
+export function demoRobotJson(file: DemoRobotFile): Robot {
+  return structuredClone(DEMO_JSON[file]) as Robot;
 }
 
 /** The demo robot as the app reads it, a fresh copy every call. */
 export function loadDemoRobot(file: DemoRobotFile): Robot {
-  const parsed = parseRobot(demoRobotJson(file));
-  if (!parsed.ok) throw new Error(`${file}.json does not parse: ${parsed.issues.map((issue) => `${issue.path}: ${issue.message}`).join("; ")}`);
+  return robotOf(demoRobotJson(file), `${file}.json`);
+}
+
+/**
+ * A robot definition read as the app reads it, such as a revision's `definition`
+ * column (JSON, so `unknown` to Drizzle); a definition that does not parse fails
+ * the test with its issues.
+ */
+export function robotOf(json: unknown, what = "the definition"): Robot {
+  const parsed = parseRobot(json);
+  if (!parsed.ok) throw new Error(`${what} does not parse: ${parsed.issues.map((issue) => `${issue.path}: ${issue.message}`).join("; ")}`);
   return parsed.robot;
 }
 

@@ -8,7 +8,7 @@ import type { Database } from "../../db/client";
 import { demoPeople, demoWorkspace } from "../../db/demo/scenario";
 import { gaits, robots, users, workspaces, type Role } from "../../db/schema";
 import { currentMember, type Member } from "~/platform/access.server";
-import { ServiceError } from "~/platform/errors.server";
+import { ServiceError, type ApiErrorCode, type DetailRecord, type ErrorDetails, type FormError } from "~/platform/errors.server";
 import { commitSession, sessionStorage } from "~/platform/session.server";
 
 /** The origin the app's pages are served from in tests; mutations must name it. */
@@ -90,13 +90,46 @@ export function load(module: RouteModule, request: Request, params: Record<strin
   return Promise.resolve(module.loader({ request, params, context: {} } as never));
 }
 
+/**
+ * A page's loader data, typed from its route module: the loader called as the
+ * framework would, `data()` unwrapped; a Response (a redirect, a refusal) fails the test.
+ */
+export async function loaderData<M extends { loader: (args: never) => unknown }>(
+  module: M,
+  request: Request,
+  params: Record<string, string> = {},
+): Promise<LoaderData<M>> {
+  const value = await load(module, request, params);
+  if (value instanceof Response) throw new Error(`expected the page's data, got a ${value.status} response`);
+  // The loader's own return type, less the Response ruled out above.
+  return (isData(value) ? value.data : value) as LoaderData<M>;
+}
+
+const isData = (value: unknown): value is { data: unknown; init?: ResponseInit | null } =>
+  !!value && typeof value === "object" && "type" in value && value.type === "DataWithResponseInit";
+
 /** Calls a route module's action as the framework would. */
 export function act(module: RouteModule, request: Request, params: Record<string, string> = {}) {
   if (!module.action) throw new Error("this route module has no action");
   return Promise.resolve(module.action({ request, params, context: {} } as never));
 }
 
-export type Outcome<T = any> = {
+/** The JSON API's refusal, as `apiError` in app/platform/errors.server.ts sends it. */
+export type ApiRefusal<Details extends ErrorDetails = DetailRecord> = { error: { code: ApiErrorCode; message: string; details?: Details } };
+
+/** A form action's inline refusal, as `formAction` in app/platform/errors.server.ts returns it. */
+export type FormRefusal<Details extends ErrorDetails = DetailRecord> = FormError<Details>;
+
+/** What a route module's loader gives its page, `data()` unwrapped and redirects left out: the body `outcome()` reads back. */
+export type LoaderData<M extends { loader: (args: never) => unknown }> = Unwrapped<Awaited<ReturnType<M["loader"]>>>;
+
+type Unwrapped<T> = T extends Response ? never : T extends { data: infer D; init: ResponseInit | null } ? D : T;
+
+/**
+ * A route's answer read back. `T` is the body the test expects (an answer type,
+ * LoaderData, ApiRefusal, FormRefusal); a test that reads no body leaves it unknown.
+ */
+export type Outcome<T = unknown> = {
   status: number;
   /** Where a redirect points. */
   location?: string;
@@ -108,12 +141,12 @@ export type Outcome<T = any> = {
 };
 
 /** What a loader or action produced, returned or thrown: a Response, `data()`, or plain data. */
-export function outcome<T = any>(run: () => Promise<unknown>): Promise<Outcome<T>> {
+export function outcome<T = unknown>(run: () => Promise<unknown>): Promise<Outcome<T>> {
   return settle<T>(run, false);
 }
 
 /** What a resource route (an API, a download) answered; anything but a Response of its own fails the test. */
-export function responseOf<T = any>(run: () => Promise<unknown>): Promise<Outcome<T>> {
+export function responseOf<T = unknown>(run: () => Promise<unknown>): Promise<Outcome<T>> {
   return settle<T>(run, true);
 }
 
@@ -131,12 +164,11 @@ async function settle<T>(run: () => Promise<unknown>, responseOnly: boolean): Pr
     const body = /json/.test(value.headers.get("Content-Type") ?? "") && text ? JSON.parse(text) : text;
     return { status: value.status, location: value.headers.get("Location") ?? undefined, headers: value.headers, text, body };
   }
-  const isData = !!value && typeof value === "object" && "type" in value && value.type === "DataWithResponseInit";
-  if (thrown && !isData) throw value;
-  if (responseOnly) throw new Error(`expected a Response, got ${isData ? "data()" : JSON.stringify(value)?.slice(0, 200)}`);
-  if (isData) {
-    const { data, init } = value as { data: T; init?: ResponseInit | null };
-    return { status: init?.status ?? 200, headers: new Headers(init?.headers), text: "", body: data };
+  if (thrown && !isData(value)) throw value;
+  if (responseOnly) throw new Error(`expected a Response, got ${isData(value) ? "data()" : JSON.stringify(value)?.slice(0, 200)}`);
+  if (isData(value)) {
+    const { data, init } = value;
+    return { status: init?.status ?? 200, headers: new Headers(init?.headers), text: "", body: data as T };
   }
   return { status: 200, headers: new Headers(), text: "", body: value as T };
 }

@@ -15,6 +15,7 @@ import { PERMISSIONS } from "~/platform/permissions";
 import { loader as calibrationSchema } from "~/routes/api.v1/export/calibration-schema";
 import { loader as openapi } from "~/routes/api.v1/export/openapi";
 import { loader as sequenceSchema } from "~/routes/api.v1/export/sequence-schema";
+import { isBounded, numberSchemas } from "../../support/numbers";
 
 type ConfigEntry = { path?: string; file: string; children?: ConfigEntry[] };
 
@@ -125,8 +126,7 @@ describe("the document holds together", () => {
   });
 
   test("the error shape and all eight error statuses are there", () => {
-    const error = document.components.schemas.Error as any;
-    expect(error.properties.error.required).toEqual(["code", "message"]);
+    expect(document.components.schemas.Error).toHaveProperty("properties.error.required", ["code", "message"]);
     const statuses = new Set(operations.flatMap(({ operation }) => Object.keys(operation.responses)));
     for (const status of ["400", "401", "403", "404", "409", "413", "422", "429"]) expect(statuses, status).toContain(status);
   });
@@ -152,14 +152,15 @@ describe("schemas come from the zod schemas", () => {
     expect(query.rate.schema).toEqual({ type: "number", exclusiveMinimum: 0, maximum: 1000 });
     expect(Object.values(query).every((parameter) => !parameter.required && parameter.description)).toBe(true);
     expect(Object.keys(table.responses).sort()).toEqual(["200", "304", "400", "401", "403", "404", "409", "422", "429"]);
-    expect(Object.keys((table.responses["200"] as any).content)).toEqual(["text/csv", "application/json", "text/x-c"]);
+    const ok = table.responses["200"];
+    expect(Object.keys("content" in ok ? (ok.content ?? {}) : {})).toEqual(["text/csv", "application/json", "text/x-c"]);
   });
 
   test("the draft PUT body is draftSaveBody's, its sequence the Sequence schema", () => {
-    const body = document.paths["/api/v1/gaits/{gaitId}/draft"].put!.requestBody!.content["application/json"].schema as any;
+    const body = document.paths["/api/v1/gaits/{gaitId}/draft"].put!.requestBody!.content["application/json"].schema;
     expect(body.required).toEqual(["sequence", "baseRevision"]);
-    expect(body.properties.sequence).toEqual({ $ref: "#/components/schemas/Sequence" });
-    expect(body.properties.baseRevision.type).toBe("integer");
+    expect(body).toHaveProperty("properties.sequence", { $ref: "#/components/schemas/Sequence" });
+    expect(body).toHaveProperty("properties.baseRevision.type", "integer");
   });
 });
 
@@ -195,5 +196,25 @@ describe("the schemas are the zod schemas'", () => {
   test("calibration.json is calibrationProfileJsonSchema() with its $id", async () => {
     const body = await calibrationSchema(get("/api/v1/schema/calibration.json")).json();
     expect(body).toEqual({ $id: "http://127.0.0.1:3000/api/v1/schema/calibration.json", ...calibrationProfileJsonSchema() });
+  });
+});
+
+describe("the published schemas say every number's physical range", () => {
+  test.each([
+    ["Robot", "robot.json"],
+    ["Sequence", "sequence.json"],
+  ])("every number of %s (%s) has a lower and an upper bound", (name) => {
+    const found = numberSchemas(document.components.schemas[name]);
+    expect(found.length).toBeGreaterThan(15);
+    expect(found.filter(({ schema }) => !isBounded(schema)).map(({ pointer }) => pointer)).toEqual([]);
+  });
+
+  test("a leg's links are 1 to 2 000 mm; a sequence's stride ±10 000 mm, its feet ±20 000 mm", async () => {
+    expect(document.components.schemas.Robot).toHaveProperty("properties.legs.items.properties.femur.maximum", 2000);
+    expect(document.components.schemas.Robot).toHaveProperty("properties.legs.items.properties.tibia.minimum", 1);
+    const served = numberSchemas(await sequenceSchema(get("/api/v1/schema/sequence.json")).json());
+    const field = (ending: string) => served.filter(({ pointer }) => pointer.endsWith(ending)).map(({ schema }) => [schema.minimum, schema.maximum]);
+    expect(field("/strideMm")).toEqual([[-10000, 10000]]);
+    expect(field("/foot/prefixItems/0")).toEqual([[-20000, 20000]]);
   });
 });

@@ -1,6 +1,6 @@
 import { beforeAll, beforeEach, describe, expect, test } from "vitest";
 import { seedDemo } from "../../../db/seed";
-import { bearer, demoIds, memberAs, outcome, type DemoIds } from "../../support/routes";
+import { bearer, demoIds, memberAs, outcome, type ApiRefusal, type DemoIds } from "../../support/routes";
 import { type Member, requireApiAccess } from "~/platform/access.server";
 import { database } from "~/platform/db.server";
 import { resetRateLimits } from "~/platform/rate-limit.server";
@@ -37,7 +37,7 @@ describe("API tokens", () => {
   test("a revoked token is refused with 401", async () => {
     const { token, row } = await createToken(firmware, "to revoke");
     await revokeToken(firmware, row.id);
-    const refusal = await outcome(() => requireApiAccess(withToken(token), "workspace.read"));
+    const refusal = await outcome<ApiRefusal>(() => requireApiAccess(withToken(token), "workspace.read"));
     expect(refusal.status).toBe(401);
     expect(refusal.body.error.code).toBe("unauthorized");
   });
@@ -55,12 +55,12 @@ describe("API tokens", () => {
     const viewer = await memberAs("viewer", ids);
     // Made while the holder was allowed, then the role changed.
     const { token } = await createToken({ ...viewer, role: "firmware" }, "was firmware");
-    const refusal = await outcome(() => requireApiAccess(withToken(token), "workspace.read"));
+    const refusal = await outcome<ApiRefusal>(() => requireApiAccess(withToken(token), "workspace.read"));
     expect(refusal.status).toBe(401);
   });
 
   test("a malformed Authorization header gets a 401 that says how to send the token", async () => {
-    const refusal = await outcome(() =>
+    const refusal = await outcome<ApiRefusal>(() =>
       requireApiAccess(new Request("http://127.0.0.1:3000/api/v1/workspace", { headers: { Authorization: "Token abc" } }), "workspace.read"),
     );
     expect(refusal.status).toBe(401);
@@ -70,7 +70,7 @@ describe("API tokens", () => {
   test("each token has a rate limit: past it, 429 with Retry-After", async () => {
     const { token } = await createToken(firmware, "busy script");
     for (let i = 0; i < 120; i++) await requireApiAccess(withToken(token), "workspace.read");
-    const refusal = await outcome(() => requireApiAccess(withToken(token), "workspace.read"));
+    const refusal = await outcome<ApiRefusal>(() => requireApiAccess(withToken(token), "workspace.read"));
     expect(refusal.status).toBe(429);
     expect(Number(refusal.headers.get("Retry-After"))).toBeGreaterThan(0);
     expect(refusal.body.error.code).toBe("rate_limited");
@@ -78,7 +78,7 @@ describe("API tokens", () => {
 
   test("a token acts within its role: firmware cannot approve versions", async () => {
     const { token } = await createToken(firmware, "limited");
-    const refusal = await outcome(() => requireApiAccess(withToken(token), "versions.decide"));
+    const refusal = await outcome<ApiRefusal>(() => requireApiAccess(withToken(token), "versions.decide"));
     expect(refusal.status).toBe(403);
     expect(refusal.body.error.message).toBe("The firmware role cannot approve or send back versions.");
   });

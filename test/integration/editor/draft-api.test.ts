@@ -7,9 +7,13 @@ import { and, desc, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { auditLog, gaitVersions, gaits, robotRevisions, robots, workspaces } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
-import { act, demoIds, load, outcome, requestsAs, type Caller, type DemoIds } from "../../support/routes";
+import { act, demoIds, load, outcome, requestsAs, type ApiRefusal, type Caller, type DemoIds, type FormRefusal, type LoaderData } from "../../support/routes";
+import { robotOf } from "../../support/robots";
+import { sequenceOf } from "./support";
 import { generateGait, parseSequence } from "~/gait";
 import { parseRobot } from "~/kinematics";
+import type { DraftConflictDetails, SavedDraft } from "~/features/gaits/drafts.server";
+import type { Issue } from "~/platform/errors";
 import { database } from "~/platform/db.server";
 import * as draftApi from "~/routes/api.v1/gaits/draft";
 import * as editor from "~/routes/gaits/editor";
@@ -23,14 +27,17 @@ beforeAll(async () => {
   gaitId = ids.gaitIds["Tripod cruise"];
 });
 
-async function getDraft(caller: Caller, id = gaitId) {
+/** GET's answer: the draft as the API shows it. */
+type DraftAnswer = ReturnType<typeof draftApi.draftJson>;
+
+async function getDraft<Answer = DraftAnswer>(caller: Caller, id = gaitId) {
   const request = await requestsAs(caller, ids);
-  return outcome(async () => load(draftApi, await request("GET", `/api/v1/gaits/${id}/draft`), { gaitId: id }));
+  return outcome<Answer>(async () => load(draftApi, await request("GET", `/api/v1/gaits/${id}/draft`), { gaitId: id }));
 }
 
-async function putDraft(caller: Caller, body: unknown, id = gaitId) {
+async function putDraft<Answer = SavedDraft>(caller: Caller, body: unknown, id = gaitId) {
   const request = await requestsAs(caller, ids);
-  return outcome(async () => act(draftApi, await request("PUT", `/api/v1/gaits/${id}/draft`, { json: body }), { gaitId: id }));
+  return outcome<Answer>(async () => act(draftApi, await request("PUT", `/api/v1/gaits/${id}/draft`, { json: body }), { gaitId: id }));
 }
 
 async function stored(id = gaitId) {
@@ -40,7 +47,7 @@ async function stored(id = gaitId) {
 
 /** The stored draft with LF's touch-down moved to t (a hand edit). */
 async function editedSequence(t: number, id = gaitId) {
-  const sequence = structuredClone((await stored(id)).draftSequence) as any;
+  const sequence = sequenceOf((await stored(id)).draftSequence);
   sequence.legs.LF.keys[1].t = t;
   return sequence;
 }
@@ -86,7 +93,7 @@ describe("reading the draft", () => {
 
   test("unknown, malformed and other workspaces' gait ids: 404, 400, 404", async () => {
     expect((await getDraft("owner", randomUUID())).status).toBe(404);
-    const malformed = await getDraft("owner", "not-a-uuid");
+    const malformed = await getDraft<ApiRefusal>("owner", "not-a-uuid");
     expect(malformed.status).toBe(400);
     expect(malformed.body.error).toMatchObject({ code: "bad_request", message: 'gaitId must be a UUID (got "not-a-uuid")' });
 
@@ -99,7 +106,7 @@ describe("reading the draft", () => {
     const [crawlerRevision] = await db.select().from(robotRevisions).where(eq(robotRevisions.robotId, ids.robotIds["Pier crawler"]));
     await db.insert(robotRevisions).values({ robotId: robot.id, number: 1, definition: crawlerRevision.definition });
     const [theirs] = await db.insert(gaits).values({ workspaceId: other.id, robotId: robot.id, name: "Their walk" }).returning();
-    const answer = await getDraft("owner", theirs.id);
+    const answer = await getDraft<ApiRefusal>("owner", theirs.id);
     expect(answer.status).toBe(404);
     expect(answer.body.error.message).toBe("No such gait in this workspace.");
     expect((await putDraft("owner", { sequence: {}, baseRevision: 0 }, theirs.id)).status).toBe(404);
@@ -114,7 +121,7 @@ describe("saving the draft", () => {
     expect(answer.status).toBe(200);
     expect(answer.body.revision).toBe(before.draftRevision + 1);
     const after = await stored();
-    expect((after.draftSequence as any).legs.LF.keys[1].t).toBe(0.55);
+    expect(sequenceOf(after.draftSequence).legs.LF.keys[1].t).toBe(0.55);
     expect(after.draftRevision).toBe(before.draftRevision + 1);
     expect(after.draftUpdatedById).toBe(ids.userIds.animator);
     expect(new Date(answer.body.updatedAt).getTime()).toBe(after.draftUpdatedAt.getTime());
@@ -124,41 +131,44 @@ describe("saving the draft", () => {
 
   test("two saves from the same base: one wins, the other gets 409 with the current revision and who saved it; nothing of the loser is stored", async () => {
     const base = (await stored()).draftRevision;
+    // Either may win, so the answers are read by their status.
     const [a, b] = await Promise.all([
-      putDraft("animator", { sequence: await editedSequence(0.6), baseRevision: base }),
-      putDraft("lead", { sequence: await editedSequence(0.65), baseRevision: base }),
+      putDraft<unknown>("animator", { sequence: await editedSequence(0.6), baseRevision: base }),
+      putDraft<unknown>("lead", { sequence: await editedSequence(0.65), baseRevision: base }),
     ]);
     expect([a.status, b.status].sort()).toEqual([200, 409]);
     const [won, lost] = a.status === 200 ? [a, b] : [b, a];
     const winner = a.status === 200 ? { login: "theo-brandt", name: "Theo Brandt", t: 0.6 } : { login: "mara-lindqvist", name: "Mara Lindqvist", t: 0.65 };
-    expect(won.body.revision).toBe(base + 1);
-    expect(lost.body.error).toMatchObject({
-      code: "conflict",
-      details: { baseRevision: base, currentRevision: base + 1, updatedBy: { login: winner.login, name: winner.name } },
+    expect(won.body).toMatchObject({ revision: base + 1 });
+    expect(lost.body).toMatchObject({
+      error: {
+        code: "conflict",
+        details: { baseRevision: base, currentRevision: base + 1, updatedBy: { login: winner.login, name: winner.name } },
+        message: expect.stringMatching(
+          new RegExp(
+            `^Revision ${base + 1} of the draft was saved by ${winner.name} at \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d UTC while you were editing revision ${base}\\. Nothing was saved\\.$`,
+          ),
+        ),
+      },
     });
-    expect(lost.body.error.message).toMatch(
-      new RegExp(
-        `^Revision ${base + 1} of the draft was saved by ${winner.name} at \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d UTC while you were editing revision ${base}\\. Nothing was saved\\.$`,
-      ),
-    );
     const after = await stored();
     expect(after.draftRevision).toBe(base + 1);
-    expect((after.draftSequence as any).legs.LF.keys[1].t).toBe(winner.t);
+    expect(sequenceOf(after.draftSequence).legs.LF.keys[1].t).toBe(winner.t);
   });
 
   test("a stale base (an older revision) is refused with 409 even when nobody saves at the same moment", async () => {
     const current = (await stored()).draftRevision;
-    const answer = await putDraft("animator", { sequence: await editedSequence(0.52), baseRevision: current - 1 });
+    const answer = await putDraft<ApiRefusal<DraftConflictDetails>>("animator", { sequence: await editedSequence(0.52), baseRevision: current - 1 });
     expect(answer.status).toBe(409);
-    expect(answer.body.error.details.currentRevision).toBe(current);
+    expect(answer.body.error.details?.currentRevision).toBe(current);
     expect((await stored()).draftRevision).toBe(current);
   });
 
   test("an invalid sequence gets 422 with the path of each problem, and nothing is saved", async () => {
     const before = await stored();
     const sequence = await editedSequence(1.2);
-    sequence.legs.RM.keys[0].contact = "hover";
-    const answer = await putDraft("animator", { sequence, baseRevision: before.draftRevision });
+    Object.assign(sequence.legs.RM.keys[0], { contact: "hover" }); // not a contact the type allows
+    const answer = await putDraft<ApiRefusal<Issue[]>>("animator", { sequence, baseRevision: before.draftRevision });
     expect(answer.status).toBe(422);
     expect(answer.body.error.code).toBe("invalid");
     expect(answer.body.error.message).toBe("The sequence is invalid (2 problems); nothing was saved.");
@@ -178,32 +188,34 @@ describe("saving the draft", () => {
     const walker = parseRobot((await database().select().from(robotRevisions).where(eq(robotRevisions.robotId, ids.robotIds["Quay walker"])))[0].definition);
     if (!walker.ok) throw new Error("demo walker invalid");
     const sequence = generateGait(walker.robot, { template: "trot" });
-    const answer = await putDraft("animator", { sequence, baseRevision: before.draftRevision });
+    const answer = await putDraft<ApiRefusal<Issue[]>>("animator", { sequence, baseRevision: before.draftRevision });
     expect(answer.status).toBe(422);
-    const paths = answer.body.error.details.map((issue: { path: string }) => issue.path);
+    const paths = answer.body.error.details?.map((issue) => issue.path);
     expect(paths).toContain("sequence.legs.LM");
     expect(answer.body.error.message).toBe('The sequence does not fit robot "Pier crawler"; nothing was saved.');
     expect((await stored()).draftRevision).toBe(before.draftRevision);
   });
 
   test("a body without baseRevision gets 422 naming it; bad JSON 400; a body over the limit 413; a GET-only verb 400", async () => {
-    const missing = await putDraft("animator", { sequence: (await stored()).draftSequence });
+    const missing = await putDraft<ApiRefusal<Issue[]>>("animator", { sequence: (await stored()).draftSequence });
     expect(missing.status).toBe(422);
     expect(missing.body.error.details).toEqual([{ path: "baseRevision", message: "must be the draft revision the edits started from (a whole number)" }]);
 
     const request = await requestsAs("animator", ids);
     const base = await request("PUT", `/api/v1/gaits/${gaitId}/draft`);
-    const badJson = await outcome(async () => act(draftApi, new Request(base.url, { method: "PUT", headers: base.headers, body: "{not json" }), { gaitId }));
+    const badJson = await outcome<ApiRefusal>(async () =>
+      act(draftApi, new Request(base.url, { method: "PUT", headers: base.headers, body: "{not json" }), { gaitId }),
+    );
     expect(badJson.status).toBe(400);
     expect(badJson.body.error.code).toBe("bad_request");
 
-    const huge = await outcome(async () =>
+    const huge = await outcome<ApiRefusal>(async () =>
       act(draftApi, new Request(base.url, { method: "PUT", headers: base.headers, body: JSON.stringify({ pad: "x".repeat(1024 * 1024 + 10) }) }), { gaitId }),
     );
     expect(huge.status).toBe(413);
     expect(huge.body.error.code).toBe("payload_too_large");
 
-    const post = await outcome(async () => act(draftApi, await request("POST", `/api/v1/gaits/${gaitId}/draft`, { json: {} }), { gaitId }));
+    const post = await outcome<ApiRefusal>(async () => act(draftApi, await request("POST", `/api/v1/gaits/${gaitId}/draft`, { json: {} }), { gaitId }));
     expect(post.status).toBe(400);
     expect(post.body.error.message).toBe("Use PUT with a JSON body { sequence, baseRevision }.");
   });
@@ -212,7 +224,7 @@ describe("saving the draft", () => {
     const before = await stored();
     for (const caller of ["viewer", "firmware"] as const) {
       expect((await getDraft(caller)).status).toBe(200);
-      const answer = await putDraft(caller, { sequence: await editedSequence(0.51), baseRevision: before.draftRevision });
+      const answer = await putDraft<ApiRefusal>(caller, { sequence: await editedSequence(0.51), baseRevision: before.draftRevision });
       expect(answer.status).toBe(403);
       expect(answer.body.error.message).toBe(`The ${caller} role cannot edit gaits.`);
     }
@@ -222,9 +234,9 @@ describe("saving the draft", () => {
 });
 
 describe("moving the draft to the robot's newest revision", () => {
-  async function move(caller: Caller, baseRevision: number, id: string) {
+  async function move<Answer = unknown>(caller: Caller, baseRevision: number, id: string) {
     const request = await requestsAs(caller, ids);
-    return outcome(async () =>
+    return outcome<Answer>(async () =>
       act(editor, await request("POST", `/gaits/${id}/edit`, { form: { intent: "move-to-newest-robot", baseRevision: String(baseRevision) } }), { gaitId: id }),
     );
   }
@@ -254,10 +266,12 @@ describe("moving the draft to the robot's newest revision", () => {
       .where(and(eq(auditLog.action, "gait.draft.robot-moved"), eq(auditLog.targetId, id)));
     expect(entry.details).toEqual({ fromRobotRevision: latest.number, toRobotRevision: newer.number });
 
-    const again = await move("animator", after.draftRevision, id);
+    const again = await move<FormRefusal>("animator", after.draftRevision, id);
     expect(again.status).toBe(409);
     expect(again.body.error).toBe(`The draft already uses robot revision ${newer.number}, the newest.`);
-    const page = await outcome(async () => load(editor, await (await requestsAs("viewer", ids))("GET", `/gaits/${id}/edit`), { gaitId: id }));
+    const page = await outcome<LoaderData<typeof editor>>(async () =>
+      load(editor, await (await requestsAs("viewer", ids))("GET", `/gaits/${id}/edit`), { gaitId: id }),
+    );
     expect(page.body.robotRevision.number).toBe(newer.number);
     expect(page.body.can).toEqual({ edit: false, commit: false });
   });
@@ -271,7 +285,7 @@ describe("moving the draft to the robot's newest revision", () => {
       .where(eq(robotRevisions.robotId, before.robotId))
       .orderBy(desc(robotRevisions.number))
       .limit(1);
-    const renamed = structuredClone(latest.definition) as any;
+    const renamed = robotOf(latest.definition);
     const oldId = renamed.legs[0].id;
     renamed.legs[0].id = "XF";
     if (renamed.rest) {
@@ -281,7 +295,7 @@ describe("moving the draft to the robot's newest revision", () => {
     await database()
       .insert(robotRevisions)
       .values({ robotId: before.robotId, number: latest.number + 1, definition: renamed });
-    const refused = await move("lead", before.draftRevision, id);
+    const refused = await move<FormRefusal>("lead", before.draftRevision, id);
     expect(refused.status).toBe(422);
     expect(refused.body.error).toMatch(/^The draft does not fit robot revision \d+: legs\.XF is missing/);
     expect((await stored(id)).draftRobotRevisionId).toBe(before.draftRobotRevisionId);
@@ -297,7 +311,9 @@ describe("moving the draft to the robot's newest revision", () => {
 
 describe("the editor page", () => {
   test("loads the draft, the pinned robot and what the role may do", async () => {
-    const answer = await outcome(async () => load(editor, await (await requestsAs("animator", ids))("GET", `/gaits/${gaitId}/edit`), { gaitId }));
+    const answer = await outcome<LoaderData<typeof editor>>(async () =>
+      load(editor, await (await requestsAs("animator", ids))("GET", `/gaits/${gaitId}/edit`), { gaitId }),
+    );
     expect(answer.status).toBe(200);
     expect(answer.body.can).toEqual({ edit: true, commit: true });
     expect(answer.body.gait.name).toBe("Tripod cruise");

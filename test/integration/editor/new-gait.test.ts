@@ -5,8 +5,9 @@ import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { auditLog, gaits, robotRevisions } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
-import { act, demoIds, load, outcome, requestsAs, type Caller, type DemoIds } from "../../support/routes";
+import { act, demoIds, load, outcome, requestsAs, type Caller, type DemoIds, type FormRefusal, type LoaderData } from "../../support/routes";
 import { uniqueName } from "../../support/names";
+import { sequenceOf } from "./support";
 import { parseSequence } from "~/gait";
 import { database } from "~/platform/db.server";
 import * as newGait from "~/routes/gaits/new";
@@ -17,21 +18,21 @@ beforeAll(async () => {
   ids = await demoIds(database());
 });
 
-async function post(caller: Caller, form: Record<string, string>) {
+async function post<Answer = unknown>(caller: Caller, form: Record<string, string>) {
   const request = await requestsAs(caller, ids);
-  return outcome(async () => act(newGait, await request("POST", "/gaits/new", { form })));
+  return outcome<Answer>(async () => act(newGait, await request("POST", "/gaits/new", { form })));
 }
 
 describe("the new-gait page", () => {
   test("offers each robot with the templates its legs suit (six legs: tripod, tetrapod, ripple, wave; four: wave, trot; eight: wave, alternating tetrapod)", async () => {
-    const answer = await outcome(async () => load(newGait, await (await requestsAs("animator", ids))("GET", "/gaits/new")));
+    const answer = await outcome<LoaderData<typeof newGait>>(async () => load(newGait, await (await requestsAs("animator", ids))("GET", "/gaits/new")));
     expect(answer.status).toBe(200);
-    const byName = Object.fromEntries(answer.body.robots.map((robot: any) => [robot.name, robot.templates.map((template: any) => template.name)]));
+    const byName = Object.fromEntries(answer.body.robots.map((robot) => [robot.name, robot.templates.map((template) => template.name)]));
     expect(byName["Pier crawler"]).toEqual(["tripod", "tetrapod", "ripple", "wave"]);
     expect(byName["Quay walker"]).toEqual(["wave", "trot"]);
     expect(byName["Hull climber"]).toEqual(["wave", "alternating-tetrapod"]);
-    const crawler = answer.body.robots.find((robot: any) => robot.name === "Pier crawler");
-    expect(crawler.templates.find((template: any) => template.name === "wave").dutyFactor).toBeCloseTo(5 / 6, 9);
+    const crawler = answer.body.robots.find((robot) => robot.name === "Pier crawler");
+    expect(crawler?.templates.find((template) => template.name === "wave")?.dutyFactor).toBeCloseTo(5 / 6, 9);
   });
 
   test("creates the gait with a generated draft on the newest robot revision and opens the editor", async () => {
@@ -75,7 +76,7 @@ describe("the new-gait page", () => {
     expect(taken.status).toBe(409);
     expect(taken.body).toMatchObject({ error: "This robot already has a gait named “Tripod cruise”; choose another name.", code: "name-taken", field: "name" });
 
-    const unsuited = await post("lead", { intent: "create", robotId: ids.robotIds["Pier crawler"], name: uniqueName("Trot"), template: "trot" });
+    const unsuited = await post<FormRefusal>("lead", { intent: "create", robotId: ids.robotIds["Pier crawler"], name: uniqueName("Trot"), template: "trot" });
     expect(unsuited.status).toBe(422);
     expect(unsuited.body.field).toBe("template");
     expect(unsuited.body.error).toMatch(/^template: trot needs 4 legs/);
@@ -93,7 +94,7 @@ describe("the new-gait page", () => {
 
   test("keep mine as a copy: a new gait on the same robot revision holding the posted sequence", async () => {
     const [source] = await database().select().from(gaits).where(eq(gaits.id, ids.gaitIds["Wave creep"]));
-    const sequence = structuredClone(source.draftSequence) as any;
+    const sequence = sequenceOf(source.draftSequence);
     sequence.legs.LF.keys[0].apexMm = 44;
     const name = uniqueName("Wave creep (my copy)");
     const answer = await post("animator", { intent: "copy", sourceGaitId: source.id, name, sequence: JSON.stringify(sequence) });
@@ -101,10 +102,10 @@ describe("the new-gait page", () => {
     const copyId = answer.location!.split("/")[2];
     const [copy] = await database().select().from(gaits).where(eq(gaits.id, copyId));
     expect(copy).toMatchObject({ name, robotId: source.robotId, draftRobotRevisionId: source.draftRobotRevisionId, description: source.description });
-    expect((copy.draftSequence as any).legs.LF.keys[0].apexMm).toBe(44);
-    expect((copy.draftSequence as any).name).toBe(name);
+    expect(sequenceOf(copy.draftSequence).legs.LF.keys[0].apexMm).toBe(44);
+    expect(sequenceOf(copy.draftSequence).name).toBe(name);
 
-    const broken = await post("animator", { intent: "copy", sourceGaitId: source.id, name: uniqueName("Broken"), sequence: "{not json" });
+    const broken = await post<FormRefusal>("animator", { intent: "copy", sourceGaitId: source.id, name: uniqueName("Broken"), sequence: "{not json" });
     expect(broken.status).toBe(400);
     expect(broken.body.field).toBe("sequence");
   });

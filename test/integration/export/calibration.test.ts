@@ -7,7 +7,7 @@ import { beforeAll, describe, expect, test } from "vitest";
 import { calibrationProfiles } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
 import { uniqueName } from "../../support/names";
-import { act, bearer, demoIds, load, outcome, requestsAs, responseOf, type DemoIds, type Outcome } from "../../support/routes";
+import { act, bearer, demoIds, load, loaderData, outcome, requestsAs, responseOf, type DemoIds, type FormRefusal, type Outcome } from "../../support/routes";
 import { createProfile, deleteProfile, listProfiles, updateProfile } from "~/features/robots/calibration.server";
 import { database } from "~/platform/db.server";
 import { ServiceError } from "~/platform/errors.server";
@@ -26,8 +26,8 @@ beforeAll(async () => {
   actor = { userId: ids.userIds.firmware, workspaceId: ids.workspaceId };
 });
 
-/** What the page's action answered: a redirect, or data with a status. */
-async function post(role: "firmware" | "viewer" | "owner", form: Record<string, string>): Promise<Outcome> {
+/** What the page's action answered: a redirect, or a refusal with a status. */
+async function post(role: "firmware" | "viewer" | "owner", form: Record<string, string>): Promise<Outcome<FormRefusal>> {
   const request = await requestsAs(role, ids);
   return outcome(async () => act(page, await request("POST", `/export/calibration/${robotId}`, { form }), { robotId }));
 }
@@ -62,28 +62,28 @@ describe("through the page's form", () => {
     expect(entry).toMatchObject({ actorId: ids.userIds.firmware, targetType: "robot", targetId: robotId, details: { profileId: row.id, name, revision: 1 } });
 
     const request = await requestsAs("viewer", ids);
-    const loaded = (await load(page, await request("GET", `/export/calibration/${robotId}?edit=${row.id}&saved=1`), { robotId })) as any;
+    const loaded = await loaderData(page, await request("GET", `/export/calibration/${robotId}?edit=${row.id}&saved=1`), { robotId });
     expect(loaded.editing).toBe(row.id);
     expect(loaded.canEdit).toBe(false);
-    expect(loaded.profiles.find((entry: { id: string }) => entry.id === row.id).profile.joints.LF.femur.trimDeg).toBe(-1.5);
+    expect(loaded.profiles.find((entry) => entry.id === row.id)?.profile.joints.LF?.femur?.trimDeg).toBe(-1.5);
   });
 
   test("invalid fields come back by path, beside their inputs, and nothing is saved", async () => {
     const name = uniqueName("SN-bad");
     const outcome = await post("firmware", { intent: "create", name, "joints.LF.coxa.trimDeg": "50", "joints.RF.femur.channel": "two" });
     expect(outcome.status).toBe(422);
-    expect(outcome.body.details.issues).toEqual([{ path: "joints.RF.femur.channel", message: 'must be a whole channel number (got "two")' }]);
+    expect(outcome.body.details?.issues).toEqual([{ path: "joints.RF.femur.channel", message: 'must be a whole channel number (got "two")' }]);
     const schema = await post("firmware", { intent: "create", name, "joints.LF.coxa.trimDeg": "50" });
     expect(schema.status).toBe(422);
-    expect(schema.body.details.issues[0].path).toBe("joints.LF.coxa.trimDeg");
-    expect(schema.body.details.issues[0].message).toMatch(/45/);
+    expect(schema.body.details?.issues?.[0].path).toBe("joints.LF.coxa.trimDeg");
+    expect(schema.body.details?.issues?.[0].message).toMatch(/45/);
     expect(await database().select().from(calibrationProfiles).where(eq(calibrationProfiles.name, name))).toEqual([]);
   });
 
   test("two joints on one channel: refused, naming the channel", async () => {
     const outcome = await post("firmware", { intent: "create", name: uniqueName("SN-dup"), "joints.LF.coxa.channel": "1" });
     expect(outcome.status).toBe(422);
-    expect(JSON.stringify(outcome.body.details.issues)).toMatch(/channel 1/);
+    expect(JSON.stringify(outcome.body.details?.issues)).toMatch(/channel 1/);
   });
 
   test("a pasted JSON profile naming a leg the robot lacks: the issue at joints.<leg>", async () => {
@@ -92,7 +92,7 @@ describe("through the page's form", () => {
       json: JSON.stringify({ name: uniqueName("SN-json"), joints: { LM: { coxa: { trimDeg: 1 } } } }),
     });
     expect(outcome.status).toBe(422);
-    expect(outcome.body.details.issues[0].path).toBe("joints.LM");
+    expect(outcome.body.details?.issues?.[0].path).toBe("joints.LM");
     expect((await post("firmware", { intent: "import", json: "{ nope" })).body.error).toMatch(/not JSON/);
   });
 
@@ -145,7 +145,9 @@ describe("the service", () => {
     const refused = results.find((result) => result.status === "rejected") as PromiseRejectedResult;
     expect(refused.reason).toBeInstanceOf(ServiceError);
     expect(refused.reason.status).toBe(409);
-    expect((await auditEntries("calibration.updated", 5)).filter((entry) => (entry.details as any).profileId === created.id)).toHaveLength(1);
+    expect((await auditEntries("calibration.updated", 5)).filter((entry) => (entry.details as { profileId?: string }).profileId === created.id)).toHaveLength(
+      1,
+    );
   });
 
   test("two creates of one name that both pass the name check: one wins, the other is told (409), never a 500", async () => {
@@ -207,10 +209,12 @@ describe("GET /api/v1/robots/:robotId/calibration-profiles", () => {
   test("lists the robot's profiles with their revisions, with a token", async () => {
     const created = await createProfile(actor, robotId, { name: uniqueName("SN-api"), joints: { RR: { femur: { reversed: true } } } });
     const token = await tokenFor(ids.workspaceId, ids.userIds.firmware);
-    const answer = await responseOf(() => load(apiList, bearer(`/api/v1/robots/${robotId}/calibration-profiles`, token), { robotId }));
+    const answer = await responseOf<{ robot: unknown; profiles: { id: string }[] }>(() =>
+      load(apiList, bearer(`/api/v1/robots/${robotId}/calibration-profiles`, token), { robotId }),
+    );
     expect(answer.status).toBe(200);
     expect(answer.body.robot).toMatchObject({ id: robotId, name: "Quay walker" });
-    expect(answer.body.profiles.find((entry: { id: string }) => entry.id === created.id)).toMatchObject({
+    expect(answer.body.profiles.find((entry) => entry.id === created.id)).toMatchObject({
       name: created.name,
       revision: 1,
       updatedBy: { login: "priya-sandoval" },

@@ -7,7 +7,7 @@ import { eq } from "drizzle-orm";
 import { beforeAll, beforeEach, describe, expect, test } from "vitest";
 import { releases, reviewEvents } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
-import { bearer, demoIds, load, requestsAs, type DemoIds } from "../../support/routes";
+import { bearer, demoIds, loaderData, requestsAs, type DemoIds } from "../../support/routes";
 import { EXPORTER_VERSION } from "~/export";
 import { database } from "~/platform/db.server";
 import { ServiceError } from "~/platform/errors.server";
@@ -107,18 +107,18 @@ describe("the export page shows the release record", () => {
   test("the released table in the canonical query matches it byte for byte", async () => {
     const gaitId = ids.gaitIds["Tripod cruise"];
     const request = await requestsAs("firmware", ids);
-    const page = (await load(exportPage, await request("GET", `/export?gait=${gaitId}&version=released&format=csv&units=deg`))) as any;
+    const page = await loaderData(exportPage, await request("GET", `/export?gait=${gaitId}&version=released&format=csv&units=deg`));
     expect(page.release).toMatchObject({ matches: true, tableFormat: "format=csv&units=deg" });
-    const other = (await load(exportPage, await request("GET", `/export?gait=${gaitId}&version=released&format=json&units=us`))) as any;
-    expect(other.release.matches).toBe(null);
-    expect(other.release.path).toBe(`/api/v1/gaits/${gaitId}/versions/1/table?format=csv&units=deg`);
+    const other = await loaderData(exportPage, await request("GET", `/export?gait=${gaitId}&version=released&format=json&units=us`));
+    expect(other.release?.matches).toBe(null);
+    expect(other.release?.path).toBe(`/api/v1/gaits/${gaitId}/versions/1/table?format=csv&units=deg`);
   });
 
   test("a released version from before records were kept shows none", async () => {
     const released = await storedVersion(ids.gaitIds["Wave climb"], 1);
     await database().delete(releases).where(eq(releases.versionId, released.id));
     const request = await requestsAs("firmware", ids);
-    const page = (await load(exportPage, await request("GET", `/export?gait=${ids.gaitIds["Wave climb"]}`))) as any;
+    const page = await loaderData(exportPage, await request("GET", `/export?gait=${ids.gaitIds["Wave climb"]}`));
     expect(page.version).toBe("released");
     expect(page.release).toBe(null);
   });

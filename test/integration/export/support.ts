@@ -38,9 +38,9 @@ export async function foreignOwnerToken(): Promise<string> {
 
 export const tablePath = (gaitId: string, number: string | number, query = "") => `/api/v1/gaits/${gaitId}/versions/${number}/table${query ? `?${query}` : ""}`;
 
-/** GET the table route as the framework would call it. */
-export function getTable(request: Request, gaitId: string, number: string | number): Promise<Outcome> {
-  return responseOf(() => load(tableRoute, request, { gaitId, number: String(number) }));
+/** GET the table route as the framework would call it; `Answer` is the body expected (a JsonTable, an ApiRefusal), if one is read. */
+export function getTable<Answer = unknown>(request: Request, gaitId: string, number: string | number): Promise<Outcome<Answer>> {
+  return responseOf<Answer>(() => load(tableRoute, request, { gaitId, number: String(number) }));
 }
 
 export const sha256 = (text: string) => createHash("sha256").update(text, "utf8").digest("hex");

@@ -5,7 +5,8 @@ import { beforeAll, beforeEach, describe, expect, test } from "vitest";
 import Papa from "papaparse";
 import { seedDemo } from "../../../db/seed";
 import { uniqueName } from "../../support/names";
-import { bearer, demoIds, requestsAs, type DemoIds } from "../../support/routes";
+import { bearer, demoIds, requestsAs, type ApiRefusal, type DemoIds } from "../../support/routes";
+import type { JsonTable } from "../../support/tables";
 import { EXPORTER_VERSION, TABLE_MEDIA_TYPES, buildAngleTable } from "~/export";
 import { solveSequence } from "~/gait";
 import { createProfile, updateProfile } from "~/features/robots/calibration.server";
@@ -30,8 +31,8 @@ beforeAll(async () => {
 });
 beforeEach(() => resetRateLimits());
 
-const get = (gaitId: string, number: string | number, query = "", headers: Record<string, string> = {}) =>
-  getTable(bearer(tablePath(gaitId, number, query), token, headers), gaitId, number);
+const get = <Answer = unknown>(gaitId: string, number: string | number, query = "", headers: Record<string, string> = {}) =>
+  getTable<Answer>(bearer(tablePath(gaitId, number, query), token, headers), gaitId, number);
 
 /** The pure exporter's bytes for a stored version: what the route must answer. */
 async function expectedTable(
@@ -78,7 +79,7 @@ describe("formats and units", () => {
   });
 
   test("the JSON table names the robot revision, version, hash, solver and exporter", async () => {
-    const answer = await get(tripod, 1, "format=json");
+    const answer = await get<JsonTable>(tripod, 1, "format=json");
     const version = await storedVersion(tripod, 1);
     expect(answer.body.meta).toMatchObject({
       exporterVersion: EXPORTER_VERSION,
@@ -95,9 +96,9 @@ describe("formats and units", () => {
   });
 
   test("pulse widths lie inside each servo's minUs..maxUs", async () => {
-    const answer = await get(tripod, 1, "format=json&units=us");
+    const answer = await get<JsonTable>(tripod, 1, "format=json&units=us");
     for (const frame of answer.body.frames) {
-      frame.values.forEach((us: number, column: number) => {
+      frame.values.forEach((us, column) => {
         const channel = answer.body.channels[column];
         expect(us, `${channel.name} frame ${frame.index}`).toBeGreaterThanOrEqual(channel.minUs);
         expect(us, `${channel.name} frame ${frame.index}`).toBeLessThanOrEqual(channel.maxUs);
@@ -108,7 +109,7 @@ describe("formats and units", () => {
 
 describe("another rate solves the sequence again", () => {
   test("rate=20: round(1200 × 20 / 1000) = 24 frames, each a fresh solve at 20 Hz (not resampled from 50 Hz)", async () => {
-    const answer = await get(tripod, 1, "format=json&rate=20");
+    const answer = await get<JsonTable>(tripod, 1, "format=json&rate=20");
     expect(answer.status).toBe(200);
     expect(answer.headers.get("Content-Disposition")).toBe('attachment; filename="tripod_cruise_v1_deg10_20hz.json"');
     expect(answer.body.meta.rateHz).toBe(20);
@@ -125,9 +126,9 @@ describe("another rate solves the sequence again", () => {
 
   test("a rate giving too many frames, or none, is a 400 naming rate", async () => {
     for (const rate of ["0", "1000.5", "abc", "0.0001"]) {
-      const answer = await get(tripod, 1, `rate=${rate}`);
+      const answer = await get<ApiRefusal>(tripod, 1, `rate=${rate}`);
       expect(answer.status, rate).toBe(400);
-      expect(answer.body.error.details.parameter, rate).toBe("rate");
+      expect(answer.body.error.details?.parameter, rate).toBe("rate");
     }
   });
 });
@@ -143,13 +144,13 @@ describe("released", () => {
   });
 
   test("a gait with no released version: 404 JSON that says so", async () => {
-    const answer = await get(waveCreep, "released");
+    const answer = await get<ApiRefusal>(waveCreep, "released");
     expect(answer.status).toBe(404);
     expect(answer.body.error).toEqual({ code: "not_found", message: 'Gait "Wave creep" has no released version yet.' });
   });
 
   test("a version that does not exist: 404", async () => {
-    const answer = await get(tripod, 99);
+    const answer = await get<ApiRefusal>(tripod, 99);
     expect(answer.status).toBe(404);
     expect(answer.body.error.message).toBe('Gait "Tripod cruise" has no version 99.');
   });
@@ -195,7 +196,7 @@ describe("ETag and If-None-Match", () => {
 
 describe("error flags need an override reason", () => {
   test("Crawl v1 (com-outside errors) without override: 409 saying why and what to send", async () => {
-    const answer = await get(crawl, 1, "format=json");
+    const answer = await get<ApiRefusal>(crawl, 1, "format=json");
     expect(answer.status).toBe(409);
     expect(answer.body.error.code).toBe("conflict");
     expect(answer.body.error.message).toMatch(/error flags .*com-outside/);
@@ -206,7 +207,7 @@ describe("error flags need an override reason", () => {
   test("with override: the reason is in the JSON meta, the C comment and the CSV's headers", async () => {
     const reason = "Bench test on the stand: the support flags do not apply";
     const query = `override=${encodeURIComponent(reason)}`;
-    const json = await get(crawl, 1, `format=json&${query}`);
+    const json = await get<JsonTable>(crawl, 1, `format=json&${query}`);
     expect(json.status).toBe(200);
     expect(json.body.meta.overrideReason).toBe(reason);
     expect(json.body.meta.flags.errors).toBe(34);
@@ -218,9 +219,9 @@ describe("error flags need an override reason", () => {
   });
 
   test("a blank override is a 400 naming override", async () => {
-    const answer = await get(crawl, 1, "override=%20%20");
+    const answer = await get<ApiRefusal>(crawl, 1, "override=%20%20");
     expect(answer.status).toBe(400);
-    expect(answer.body.error.details.parameter).toBe("override");
+    expect(answer.body.error.details?.parameter).toBe("override");
   });
 });
 
@@ -238,11 +239,11 @@ describe("calibration profiles", () => {
   });
 
   test("the profile's trim is applied and its name and revision are in the header", async () => {
-    const plain = await get(tripod, 1, "format=json");
-    const trimmed = await get(tripod, 1, `format=json&profile=${encodeURIComponent(name)}`);
+    const plain = await get<JsonTable>(tripod, 1, "format=json");
+    const trimmed = await get<JsonTable>(tripod, 1, `format=json&profile=${encodeURIComponent(name)}`);
     expect(trimmed.status).toBe(200);
     expect(trimmed.body.meta.calibrationProfile).toBe(`${name} (revision 1)`);
-    const column = trimmed.body.channels.findIndex((channel: { name: string }) => channel.name === "LF.coxa");
+    const column = trimmed.body.channels.findIndex((channel) => channel.name === "LF.coxa");
     expect(trimmed.body.channels[column].trimDeg).toBe(2.5);
     for (let frame = 0; frame < 60; frame += 1) {
       expect(trimmed.body.frames[frame].values[column], `frame ${frame}, LF.coxa in degrees`).toBeCloseTo(plain.body.frames[frame].values[column] + 2.5, 6);
@@ -265,9 +266,9 @@ describe("calibration profiles", () => {
   });
 
   test("a profile the robot does not have: 422 naming profile and listing the ones there are", async () => {
-    const answer = await get(tripod, 1, "profile=SN-none");
+    const answer = await get<ApiRefusal>(tripod, 1, "profile=SN-none");
     expect(answer.status).toBe(422);
-    expect(answer.body.error.details.parameter).toBe("profile");
+    expect(answer.body.error.details?.parameter).toBe("profile");
     expect(answer.body.error.message).toContain(name);
   });
 });
@@ -279,14 +280,14 @@ describe("query and path checks", () => {
     ["unit=deg", "unit", "Unknown parameter unit (parameters: format, units, rate, profile, override)."],
     ["format=csv&format=json", "format", "The parameter format is given 2 times; give it once."],
   ])("%s: 400 naming %s", async (query, parameter, message) => {
-    const answer = await get(tripod, 1, query);
+    const answer = await get<ApiRefusal>(tripod, 1, query);
     expect(answer.status).toBe(400);
     expect(answer.body.error).toEqual({ code: "bad_request", message, details: { parameter } });
   });
 
   test("a malformed gait id or version number: 400", async () => {
     expect((await getTable(bearer("/api/v1/gaits/nope/versions/1/table", token), "nope", 1)).status).toBe(400);
-    const zero = await getTable(bearer(tablePath(tripod, 0), token), tripod, "0");
+    const zero = await getTable<ApiRefusal>(bearer(tablePath(tripod, 0), token), tripod, "0");
     expect(zero.status).toBe(400);
     expect(zero.body.error.message).toBe('the version must be a number from 1 or "released" (got "0")');
   });
@@ -303,14 +304,14 @@ describe("who may download", () => {
 
   test("another workspace's token: 404, as if the gait did not exist", async () => {
     const other = await foreignOwnerToken();
-    const answer = await getTable(bearer(tablePath(tripod, "released"), other), tripod, "released");
+    const answer = await getTable<ApiRefusal>(bearer(tablePath(tripod, "released"), other), tripod, "released");
     expect(answer.status).toBe(404);
     expect(answer.body.error.code).toBe("not_found");
   });
 
   test("a viewer's session: 403", async () => {
     const request = await requestsAs("viewer", ids);
-    const answer = await getTable(await request("GET", tablePath(tripod, 1)), tripod, 1);
+    const answer = await getTable<ApiRefusal>(await request("GET", tablePath(tripod, 1)), tripod, 1);
     expect(answer.status).toBe(403);
     expect(answer.body.error.message).toBe("The viewer role cannot download angle tables.");
   });

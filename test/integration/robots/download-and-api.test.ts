@@ -3,8 +3,8 @@
 import { beforeAll, describe, expect, test } from "vitest";
 import { apiTokens, robotRevisions, robots, workspaces } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
-import { act, bearer, demoIds, load, outcome, requestsAs, type DemoIds } from "../../support/routes";
-import { demoRobotJson } from "../../support/robots";
+import { act, bearer, demoIds, load, outcome, requestsAs, type ApiRefusal, type DemoIds } from "../../support/routes";
+import { demoRobotJson, robotOf } from "../../support/robots";
 import { robotJsonSchema } from "~/kinematics";
 import { hashToken } from "~/platform/access.server";
 import { database } from "~/platform/db.server";
@@ -15,6 +15,12 @@ import * as apiSchema from "~/routes/api.v1/robots/schema";
 import * as download from "~/routes/robots/download";
 import * as robotPage from "~/routes/robots/robot";
 import { revisionsOf } from "./support";
+
+/** The robot API's answers, as far as these tests read them; definitions are read back with robotOf. */
+type RevisionJson = ReturnType<typeof apiRobot.revisionJson>;
+type RobotListAnswer = { robots: { id: string; name: string; updatedAt: string }[] };
+type RobotAnswer = { latest: RevisionJson & { definition: unknown }; revisions: RevisionJson[] };
+type RevisionAnswer = { revision: RevisionJson & { definition: unknown } };
 
 let ids: DemoIds;
 let walkerId: string;
@@ -36,7 +42,7 @@ beforeAll(async () => {
 
   // A second revision of the walker, saved through the form.
   const [first] = await revisionsOf(walkerId);
-  const edited = structuredClone(first.definition) as any;
+  const edited = robotOf(first.definition);
   edited.legs[0].joints.coxa.zeroOffsetDeg = 1.5;
   const request = await requestsAs("firmware", ids);
   const saved = await outcome(async () =>
@@ -90,19 +96,19 @@ describe("download a revision's JSON", () => {
 
 describe("GET /api/v1/robots", () => {
   test("lists the workspace's robots, not another's, with a bearer token", async () => {
-    const answer = await outcome(async () => load(apiList, bearer("/api/v1/robots", TOKEN)));
+    const answer = await outcome<RobotListAnswer>(async () => load(apiList, bearer("/api/v1/robots", TOKEN)));
     expect(answer.status).toBe(200);
-    const names = answer.body.robots.map((robot: any) => robot.name);
+    const names = answer.body.robots.map((robot) => robot.name);
     expect(names).toEqual(["Hull climber", "Pier crawler", "Quay walker"]);
-    const walker = answer.body.robots.find((robot: any) => robot.id === walkerId);
+    const walker = answer.body.robots.find((robot) => robot.id === walkerId);
     expect(walker).toMatchObject({ legCount: 4, latestRevision: 2, url: `/api/v1/robots/${walkerId}` });
-    expect(new Date(walker.updatedAt).toISOString()).toBe(walker.updatedAt);
+    expect(new Date(walker?.updatedAt ?? "").toISOString()).toBe(walker?.updatedAt);
   });
 
   test("with the browser session, too; signed out is 401 JSON; a bad token is 401", async () => {
     const request = await requestsAs("viewer", ids);
     expect((await outcome(async () => load(apiList, await request("GET", "/api/v1/robots")))).status).toBe(200);
-    const signedOut = await outcome(async () => load(apiList, new Request("http://127.0.0.1:3000/api/v1/robots")));
+    const signedOut = await outcome<ApiRefusal>(async () => load(apiList, new Request("http://127.0.0.1:3000/api/v1/robots")));
     expect(signedOut.status).toBe(401);
     expect(signedOut.body.error.code).toBe("unauthorized");
     expect((await outcome(async () => load(apiList, bearer("/api/v1/robots", "gl_wrong")))).status).toBe(401);
@@ -111,7 +117,7 @@ describe("GET /api/v1/robots", () => {
 
 describe("GET /api/v1/robots/:robotId", () => {
   test("the newest definition and every revision, newest first", async () => {
-    const answer = await outcome(async () => load(apiRobot, bearer(`/api/v1/robots/${walkerId}`, TOKEN), { robotId: walkerId }));
+    const answer = await outcome<RobotAnswer>(async () => load(apiRobot, bearer(`/api/v1/robots/${walkerId}`, TOKEN), { robotId: walkerId }));
     expect(answer.status).toBe(200);
     const revisions = await revisionsOf(walkerId);
     expect(answer.body).toMatchObject({
@@ -120,7 +126,7 @@ describe("GET /api/v1/robots/:robotId", () => {
       latest: { number: 2, message: "Coxa trim", author: { login: "priya-sandoval", name: "Priya Sandoval" } },
     });
     expect(answer.body.latest.definition).toEqual(revisions[1].definition);
-    expect(answer.body.revisions.map((revision: any) => revision.number)).toEqual([2, 1]);
+    expect(answer.body.revisions.map((revision) => revision.number)).toEqual([2, 1]);
     expect(answer.body.revisions[1]).toEqual({
       number: 1,
       message: "Four-legged quay walker, links from the CAD model",
@@ -143,14 +149,20 @@ describe("GET /api/v1/robots/:robotId", () => {
 
 describe("GET /api/v1/robots/:robotId/revisions/:number", () => {
   test("one revision's definition; 404 for a number the robot does not have, 400 for one that is not a number", async () => {
-    const answer = await outcome(async () => load(apiRevision, bearer(`/api/v1/robots/${walkerId}/revisions/1`, TOKEN), { robotId: walkerId, number: "1" }));
+    const answer = await outcome<RevisionAnswer>(async () =>
+      load(apiRevision, bearer(`/api/v1/robots/${walkerId}/revisions/1`, TOKEN), { robotId: walkerId, number: "1" }),
+    );
     expect(answer.status).toBe(200);
     expect(answer.body).toMatchObject({ robot: { id: walkerId, name: "Quay walker" }, latestRevision: 2, revision: { number: 1 } });
-    expect(answer.body.revision.definition.legs[0].joints.coxa.zeroOffsetDeg).toBe(demoRobotJson("quay-walker").legs[0].joints.coxa.zeroOffsetDeg);
-    const missing = await outcome(async () => load(apiRevision, bearer(`/api/v1/robots/${walkerId}/revisions/9`, TOKEN), { robotId: walkerId, number: "9" }));
+    expect(robotOf(answer.body.revision.definition).legs[0].joints.coxa.zeroOffsetDeg).toBe(demoRobotJson("quay-walker").legs[0].joints.coxa.zeroOffsetDeg);
+    const missing = await outcome<ApiRefusal>(async () =>
+      load(apiRevision, bearer(`/api/v1/robots/${walkerId}/revisions/9`, TOKEN), { robotId: walkerId, number: "9" }),
+    );
     expect(missing.status).toBe(404);
     expect(missing.body.error.code).toBe("not_found");
-    const bad = await outcome(async () => load(apiRevision, bearer(`/api/v1/robots/${walkerId}/revisions/x`, TOKEN), { robotId: walkerId, number: "x" }));
+    const bad = await outcome<ApiRefusal>(async () =>
+      load(apiRevision, bearer(`/api/v1/robots/${walkerId}/revisions/x`, TOKEN), { robotId: walkerId, number: "x" }),
+    );
     expect(bad.status).toBe(400);
     expect(bad.body.error.message).toBe('the revision number must be a whole number from 1 (got "x")');
   });
@@ -158,7 +170,7 @@ describe("GET /api/v1/robots/:robotId/revisions/:number", () => {
 
 describe("GET /api/v1/schema/robot.json", () => {
   test("public, cacheable, generated from the zod schema", async () => {
-    const answer = await outcome(async () => load(apiSchema, new Request("http://127.0.0.1:3000/api/v1/schema/robot.json")));
+    const answer = await outcome<Record<string, unknown>>(async () => load(apiSchema, new Request("http://127.0.0.1:3000/api/v1/schema/robot.json")));
     expect(answer.status).toBe(200);
     expect(answer.headers?.get("Cache-Control")).toBe("public, max-age=3600");
     expect(answer.headers?.get("Content-Type")).toBe("application/schema+json; charset=utf-8");

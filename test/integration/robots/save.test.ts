@@ -4,8 +4,10 @@ import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { robotRevisions, robots, workspaces } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
-import { act, demoIds, load, outcome, requestsAs, type DemoIds } from "../../support/routes";
-import { demoRobotJson } from "../../support/robots";
+import { act, demoIds, load, outcome, requestsAs, type DemoIds, type FormRefusal, type LoaderData } from "../../support/routes";
+import { demoRobotJson, robotOf } from "../../support/robots";
+import type { SaveRefusalDetails, SavedRevision } from "~/features/robots/results";
+import type { Robot } from "~/kinematics";
 import { database } from "~/platform/db.server";
 import { refusal } from "~/platform/permissions";
 import * as robotPage from "~/routes/robots/robot";
@@ -26,13 +28,17 @@ async function latestOf(robotId: string) {
   return all[all.length - 1];
 }
 
-async function save(caller: Parameters<typeof requestsAs>[0], robotId: string, fields: Record<string, string>) {
+/** The robot form's save; `Answer` is what the test expects back: a SavedRevision or a SaveRefusal. */
+async function save<Answer = unknown>(caller: Parameters<typeof requestsAs>[0], robotId: string, fields: Record<string, string>) {
   const request = await requestsAs(caller, ids);
-  return outcome(async () => act(robotPage, await request("POST", `/robots/${robotId}`, { form: { intent: "save", ...fields } }), { robotId }));
+  return outcome<Answer>(async () => act(robotPage, await request("POST", `/robots/${robotId}`, { form: { intent: "save", ...fields } }), { robotId }));
 }
 
-function edited(definition: any, change: (copy: any) => void) {
-  const copy = structuredClone(definition);
+type SaveRefusal = FormRefusal<SaveRefusalDetails>;
+
+/** A stored definition with a change made, as the form posts it. */
+function edited(definition: unknown, change: (copy: Robot) => void) {
+  const copy = robotOf(definition);
   change(copy);
   return JSON.stringify(copy);
 }
@@ -52,13 +58,15 @@ describe("saving a robot", () => {
     const [first, second] = await revisionsOf(crawlerId);
     expect(first.definition).toEqual(before.definition);
     expect(second).toMatchObject({ number: 2, message: "Femur measured again", authorId: ids.userIds.animator });
-    expect((second.definition as any).legs[0].femur).toBe(63.5);
+    expect(robotOf(second.definition).legs[0].femur).toBe(63.5);
     expect(second.createdAt.getTime()).toBeGreaterThanOrEqual(started - 5_000);
 
-    const page = await outcome(async () => load(robotPage, await (await requestsAs("viewer", ids))("GET", `/robots/${crawlerId}`), { robotId: crawlerId }));
+    const page = await outcome<LoaderData<typeof robotPage>>(async () =>
+      load(robotPage, await (await requestsAs("viewer", ids))("GET", `/robots/${crawlerId}`), { robotId: crawlerId }),
+    );
     expect(page.status).toBe(200);
     expect(page.body.robot.latest.number).toBe(2);
-    expect(page.body.robot.revisions.map((revision: any) => [revision.number, revision.author?.login, revision.message])).toEqual([
+    expect(page.body.robot.revisions.map((revision) => [revision.number, revision.author?.login, revision.message])).toEqual([
       [2, "theo-brandt", "Femur measured again"],
       [1, "theo-brandt", "First measured build of the six-legged pier crawler"],
     ]);
@@ -68,6 +76,7 @@ describe("saving a robot", () => {
   test("two saves from the same base: one wins, the other gets 409 naming the newer revision, and only one revision is added", async () => {
     const base = await latestOf(crawlerId);
     const count = await revisionCount();
+    // Either may win, so the answers are read by their status.
     const [a, b] = await Promise.all([
       save("animator", crawlerId, { baseRevision: String(base.number), definition: edited(base.definition, (copy) => (copy.legs[1].tibia = 101)) }),
       save("lead", crawlerId, { baseRevision: String(base.number), definition: edited(base.definition, (copy) => (copy.legs[2].tibia = 102)) }),
@@ -75,12 +84,15 @@ describe("saving a robot", () => {
     expect([a.status, b.status].sort()).toEqual([200, 409]);
     const lost = a.status === 409 ? a : b;
     const winner = a.status === 409 ? "Mara Lindqvist" : "Theo Brandt";
-    expect(lost.body).toMatchObject({ code: "stale", details: { baseRevision: base.number, latest: { number: base.number + 1, authorName: winner } } });
-    expect(lost.body.error).toMatch(
-      new RegExp(
-        `^Revision ${base.number + 1} was saved by ${winner} at \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d UTC while you were editing revision ${base.number}\\. Nothing was saved\\.$`,
+    expect(lost.body).toMatchObject({
+      code: "stale",
+      details: { baseRevision: base.number, latest: { number: base.number + 1, authorName: winner } },
+      error: expect.stringMatching(
+        new RegExp(
+          `^Revision ${base.number + 1} was saved by ${winner} at \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d UTC while you were editing revision ${base.number}\\. Nothing was saved\\.$`,
+        ),
       ),
-    );
+    });
     expect(await revisionCount()).toBe(count + 1);
   });
 
@@ -95,11 +107,11 @@ describe("saving a robot", () => {
 
   test("without a message, the revision says what changed", async () => {
     const latest = await latestOf(crawlerId);
-    const answer = await save("owner", crawlerId, {
+    const answer = await save<SavedRevision>("owner", crawlerId, {
       baseRevision: String(latest.number),
       definition: edited(latest.definition, (copy) => (copy.legs[0].coxa = 31)),
     });
-    expect(answer.body.message).toBe(`Changed legs[0].coxa (${(latest.definition as any).legs[0].coxa} → 31)`);
+    expect(answer.body.message).toBe(`Changed legs[0].coxa (${robotOf(latest.definition).legs[0].coxa} → 31)`);
   });
 
   test("renaming the robot renames it in the list; a name another robot has is 409", async () => {
@@ -130,7 +142,7 @@ describe("bad saves are refused with what and where, and write nothing", () => {
   test("an invalid definition: 422 with parseRobot's path and message", async () => {
     const latest = await latestOf(crawlerId);
     const count = await revisionCount();
-    const answer = await save("animator", crawlerId, {
+    const answer = await save<SaveRefusal>("animator", crawlerId, {
       baseRevision: String(latest.number),
       definition: edited(latest.definition, (copy) => {
         copy.legs[2].joints.femur.minDeg = 40;
@@ -140,7 +152,7 @@ describe("bad saves are refused with what and where, and write nothing", () => {
     });
     expect(answer.status).toBe(422);
     expect(answer.body).toMatchObject({ code: "invalid", error: "The definition has 2 problems. Nothing was saved." });
-    expect(answer.body.details.issues).toEqual(
+    expect(answer.body.details?.issues).toEqual(
       expect.arrayContaining([
         { path: "legs[0].tibia", message: "must be positive (got -1)" },
         { path: "legs[2].joints.femur.minDeg", message: "must be below maxDeg (got 40 ≥ 30)" },
@@ -151,20 +163,20 @@ describe("bad saves are refused with what and where, and write nothing", () => {
 
   test("not JSON: 400; a missing base revision: 400; nothing changed: 422", async () => {
     const latest = await latestOf(crawlerId);
-    const notJson = await save("animator", crawlerId, { baseRevision: String(latest.number), definition: "{ legs: " });
+    const notJson = await save<SaveRefusal>("animator", crawlerId, { baseRevision: String(latest.number), definition: "{ legs: " });
     expect(notJson.status).toBe(400);
     expect(notJson.body.error).toBe('Cannot save: the definition is not valid JSON: unexpected "l" at line 1, column 3.');
-    const noBase = await save("animator", crawlerId, { definition: JSON.stringify(latest.definition) });
+    const noBase = await save<SaveRefusal>("animator", crawlerId, { definition: JSON.stringify(latest.definition) });
     expect(noBase.status).toBe(400);
     expect(noBase.body.error).toBe("Cannot save: baseRevision is required: the revision the edits started from.");
-    const same = await save("animator", crawlerId, { baseRevision: String(latest.number), definition: JSON.stringify(latest.definition) });
+    const same = await save<SaveRefusal>("animator", crawlerId, { baseRevision: String(latest.number), definition: JSON.stringify(latest.definition) });
     expect(same.status).toBe(422);
     expect(same.body.error).toBe(`Nothing changed since revision ${latest.number}, so nothing was saved.`);
   });
 
   test("a body over the limit: 413", async () => {
     const latest = await latestOf(crawlerId);
-    const answer = await save("animator", crawlerId, {
+    const answer = await save<SaveRefusal>("animator", crawlerId, {
       baseRevision: String(latest.number),
       definition: edited(latest.definition, (copy) => (copy.description = "x".repeat(300 * 1024))),
     });
@@ -202,7 +214,9 @@ describe("bad saves are refused with what and where, and write nothing", () => {
 describe("old revisions", () => {
   test("an old revision can be viewed and restored as a new revision", async () => {
     const request = await requestsAs("lead", ids);
-    const first = await outcome(async () => load(revisionPage, await request("GET", `/robots/${crawlerId}/revisions/1`), { robotId: crawlerId, number: "1" }));
+    const first = await outcome<LoaderData<typeof revisionPage>>(async () =>
+      load(revisionPage, await request("GET", `/robots/${crawlerId}/revisions/1`), { robotId: crawlerId, number: "1" }),
+    );
     expect(first.status).toBe(200);
     expect(first.body.revision.number).toBe(1);
     const [original] = await revisionsOf(crawlerId);

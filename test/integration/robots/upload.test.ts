@@ -5,9 +5,10 @@ import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { robots } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
-import { act, demoIds, load, multipart, outcome, requestsAs, type Caller, type DemoIds } from "../../support/routes";
+import { act, demoIds, load, multipart, outcome, requestsAs, type Caller, type DemoIds, type FormRefusal, type LoaderData } from "../../support/routes";
 import { uniqueName } from "../../support/names";
-import { demoRobotJson } from "../../support/robots";
+import { demoRobotJson, robotOf } from "../../support/robots";
+import type { AddRefusalDetails } from "~/features/robots/results";
 import { database } from "~/platform/db.server";
 import * as list from "~/routes/robots/list";
 import { revisionCount, revisionsOf, robotCount } from "./support";
@@ -22,9 +23,10 @@ beforeAll(async () => {
 const jsonFile = (value: unknown, name = "robot.json") =>
   new File([typeof value === "string" ? value : JSON.stringify(value, null, 2)], name, { type: "application/json" });
 
+/** The list's upload: a redirect to the new robot, or a refusal with a status. */
 async function upload(fields: Record<string, string | File>, caller: Caller = "animator") {
   const request = await requestsAs(caller, ids);
-  return outcome(async () => act(list, await multipart(request, "/robots?index", { intent: "upload", ...fields })));
+  return outcome<FormRefusal<AddRefusalDetails>>(async () => act(list, await multipart(request, "/robots?index", { intent: "upload", ...fields })));
 }
 
 async function unchanged<T>(run: () => Promise<T>): Promise<T> {
@@ -44,7 +46,7 @@ describe("upload a robot definition", () => {
     expect(answer.location).toBe(`/robots/${row.id}`);
     const [revision] = await revisionsOf(row.id);
     expect(revision).toMatchObject({ number: 1, message: "Uploaded from walker.json", authorId: ids.userIds.animator });
-    expect((revision.definition as any).legs).toHaveLength(4);
+    expect(robotOf(revision.definition).legs).toHaveLength(4);
   });
 
   test("the name field replaces the file's name", async () => {
@@ -59,12 +61,13 @@ describe("upload a robot definition", () => {
     broken.name = uniqueName("Broken");
     broken.legs[2].joints.femur.minDeg = 40;
     broken.legs[2].joints.femur.maxDeg = 30;
-    broken.legs[0].coxaLength = 3;
-    delete broken.standHeight;
+    // A misspelt field and a missing one, which the robot type would not allow: the server must refuse them.
+    Object.assign(broken.legs[0], { coxaLength: 3 });
+    Reflect.deleteProperty(broken, "standHeight");
     const answer = await unchanged(() => upload({ file: jsonFile(broken) }));
     expect(answer.status).toBe(422);
     expect(answer.body).toMatchObject({ code: "invalid", error: "The definition has 3 problems. Nothing was saved." });
-    expect(answer.body.details.issues).toEqual([
+    expect(answer.body.details?.issues).toEqual([
       { path: "standHeight", message: "is required" },
       { path: "legs[0].coxaLength", message: "is not a known field (check the spelling)" },
       { path: "legs[2].joints.femur.minDeg", message: "must be below maxDeg (got 40 ≥ 30)" },
@@ -79,7 +82,7 @@ describe("upload a robot definition", () => {
     broken.legs[1].id = "LF";
     const answer = await unchanged(() => upload({ file: jsonFile(broken) }));
     expect(answer.status).toBe(422);
-    expect(answer.body.details.issues).toEqual([
+    expect(answer.body.details?.issues).toEqual([
       { path: "legs[2].joints.femur.minDeg", message: "must be below maxDeg (got 40 ≥ 30)" },
       { path: "legs[1].id", message: 'must be unique (got "LF", also legs[0])' },
       { path: "rest.LM", message: 'must name a leg (no leg "LM")' },
@@ -127,9 +130,10 @@ describe("upload a robot definition", () => {
 });
 
 describe("new robot", () => {
+  /** The list's new-robot form: a redirect to the new robot, or a refusal with a status. */
   async function create(form: Record<string, string>, caller: Caller = "lead") {
     const request = await requestsAs(caller, ids);
-    return outcome(async () => act(list, await request("POST", "/robots?index", { form: { intent: "create", ...form } })));
+    return outcome<FormRefusal<AddRefusalDetails>>(async () => act(list, await request("POST", "/robots?index", { form: { intent: "create", ...form } })));
   }
 
   test("a copy of a demo robot starts at revision 1 with the same legs", async () => {
@@ -149,7 +153,7 @@ describe("new robot", () => {
     expect(answer.status).toBe(302);
     const [row] = await database().select().from(robots).where(eq(robots.name, name));
     const [revision] = await revisionsOf(row.id);
-    expect((revision.definition as any).legs).toHaveLength(Number(legs));
+    expect(robotOf(revision.definition).legs).toHaveLength(Number(legs));
   });
 
   test("no name, an unknown source, another workspace's robot: refused, nothing saved", async () => {
@@ -166,10 +170,10 @@ describe("new robot", () => {
   });
 
   test("the list links every robot and says who may add one", async () => {
-    const asViewer = await outcome(async () => load(list, await (await requestsAs("viewer", ids))("GET", "/robots")));
+    const asViewer = await outcome<LoaderData<typeof list>>(async () => load(list, await (await requestsAs("viewer", ids))("GET", "/robots")));
     expect(asViewer.body.canEdit).toBe(false);
-    expect(asViewer.body.robots.map((robot: any) => robot.name)).toEqual(expect.arrayContaining(["Pier crawler", "Quay walker", "Hull climber"]));
-    const asAnimator = await outcome(async () => load(list, await (await requestsAs("animator", ids))("GET", "/robots")));
+    expect(asViewer.body.robots.map((robot) => robot.name)).toEqual(expect.arrayContaining(["Pier crawler", "Quay walker", "Hull climber"]));
+    const asAnimator = await outcome<LoaderData<typeof list>>(async () => load(list, await (await requestsAs("animator", ids))("GET", "/robots")));
     expect(asAnimator.body.canEdit).toBe(true);
   });
 });
