@@ -1,9 +1,14 @@
 import { describe, expect, it } from "vitest";
-import { JOINT_NAMES, legRow, legSide, parseRobot, robotJsonSchema, type Leg } from "../../app/kinematics";
+import { JOINT_NAMES, legRow, legSide, parseRobot, robotJsonSchema, type Leg, type Robot } from "../../app/kinematics";
 import { demoRobotJson, loadDemoRobots } from "../support/robots";
 
 // A fresh, mutable copy of the six-legged demo robot's JSON.
-const pierCrawler = () => demoRobotJson("pier-crawler") as Record<string, any>;
+const pierCrawler = () => demoRobotJson("pier-crawler");
+
+function restOf(robot: Robot): NonNullable<Robot["rest"]> {
+  if (!robot.rest) throw new Error("expected the demo robot to have a rest pose");
+  return robot.rest;
+}
 
 function issuesOf(json: unknown) {
   const parsed = parseRobot(json);
@@ -19,7 +24,9 @@ describe("parseRobot: every problem as { path, message }", () => {
     }
   });
 
-  const cases: [string, (robot: Record<string, any>) => unknown, { path: string; message: string }[]][] = [
+  // Breaks the robot type cannot express (a wrong type, a misspelt or missing field) go through
+  // Object.assign and Reflect.deleteProperty, as a hand-edited file would carry them.
+  const cases: [string, (robot: Robot) => unknown, { path: string; message: string }[]][] = [
     [
       "minDeg not below maxDeg",
       (r) => ((r.legs[2].joints.femur.minDeg = 40), (r.legs[2].joints.femur.maxDeg = 30), r),
@@ -32,23 +39,27 @@ describe("parseRobot: every problem as { path, message }", () => {
       (r) => ((r.legs[1].joints.tibia.servo.channel = 0), r),
       [{ path: "legs[1].joints.tibia.servo.channel", message: "must be unique across the robot (got 0, also legs[0].joints.coxa)" }],
     ],
-    ["a rest pose for no leg", (r) => ((r.rest.XX = { coxa: 0, femur: 0, tibia: 0 }), r), [{ path: "rest.XX", message: 'must name a leg (no leg "XX")' }]],
-    ["a rest pose missing a leg", (r) => (delete r.rest.LM, r), [{ path: "rest.LM", message: "is missing: the rest pose gives every leg" }]],
+    ["a rest pose for no leg", (r) => ((restOf(r).XX = { coxa: 0, femur: 0, tibia: 0 }), r), [{ path: "rest.XX", message: 'must name a leg (no leg "XX")' }]],
+    ["a rest pose missing a leg", (r) => (delete restOf(r).LM, r), [{ path: "rest.LM", message: "is missing: the rest pose gives every leg" }]],
     [
       "a rest angle outside the limits",
-      (r) => ((r.rest.LM.tibia = -120), r),
+      (r) => ((restOf(r).LM.tibia = -120), r),
       [{ path: "rest.LM.tibia", message: "must lie within the joint limits -85..80 (got -120)" }],
     ],
-    ["a missing field", (r) => (delete r.legs[0].femur, r), [{ path: "legs[0].femur", message: "is required" }]],
-    ["a number given as text", (r) => ((r.legs[0].coxa = "30"), r), [{ path: "legs[0].coxa", message: 'must be a number (got "30")' }]],
+    ["a missing field", (r) => (Reflect.deleteProperty(r.legs[0], "femur"), r), [{ path: "legs[0].femur", message: "is required" }]],
+    ["a number given as text", (r) => (Object.assign(r.legs[0], { coxa: "30" }), r), [{ path: "legs[0].coxa", message: 'must be a number (got "30")' }]],
     ["a zero link length", (r) => ((r.legs[0].tibia = 0), r), [{ path: "legs[0].tibia", message: "must be positive (got 0)" }]],
     [
       "a misspelt field",
-      (r) => ((r.legs[0].joints.coxa.zeroOffset = 1), r),
+      (r) => (Object.assign(r.legs[0].joints.coxa, { zeroOffset: 1 }), r),
       [{ path: "legs[0].joints.coxa.zeroOffset", message: "is not a known field (check the spelling)" }],
     ],
-    ["another format", (r) => ((r.format = "gaitloom.robot/2"), r), [{ path: "format", message: 'must be "gaitloom.robot/1" (got "gaitloom.robot/2")' }]],
-    ["an unknown side", (r) => ((r.legs[0].side = "up"), r), [{ path: "legs[0].side", message: 'must be one of "left", "right" (got "up")' }]],
+    [
+      "another format",
+      (r) => (Object.assign(r, { format: "gaitloom.robot/2" }), r),
+      [{ path: "format", message: 'must be "gaitloom.robot/1" (got "gaitloom.robot/2")' }],
+    ],
+    ["an unknown side", (r) => (Object.assign(r.legs[0], { side: "up" }), r), [{ path: "legs[0].side", message: 'must be one of "left", "right" (got "up")' }]],
     [
       "a centre pulse outside the range",
       (r) => ((r.legs[0].joints.coxa.servo.centerUs = 2600), r),
@@ -66,7 +77,7 @@ describe("parseRobot: every problem as { path, message }", () => {
     ],
     ["two legs in one row", (r) => ((r.legs[1].row = 0), r), [{ path: "legs[1].row", message: "row 0 on the left side is taken by LF" }]],
     ["a mount yaw past a half turn", (r) => ((r.legs[0].mount.yawDeg = 200), r), [{ path: "legs[0].mount.yawDeg", message: "must be at most 180 (got 200)" }]],
-    ["a short centre of mass", (r) => ((r.body.com = [0, 0]), r), [{ path: "body.com", message: "must have at least 3 items (got 2)" }]],
+    ["a short centre of mass", (r) => (Object.assign(r.body, { com: [0, 0] }), r), [{ path: "body.com", message: "must have at least 3 items (got 2)" }]],
     ["not an object at all", () => "hello", [{ path: "", message: 'must be an object (got "hello")' }]],
   ];
   for (const [what, breakIt, expected] of cases) {
@@ -107,17 +118,48 @@ describe("leg side and row (DESIGN.md: y > 0 is left, rows by mount x from the f
   });
 });
 
+/** The JSON Schema (draft 2020-12) keywords zod emits that these tests read. */
+type JsonSchema =
+  | boolean
+  | {
+      $schema?: string;
+      title?: string;
+      type?: string;
+      const?: unknown;
+      enum?: unknown[];
+      required?: string[];
+      properties?: Record<string, JsonSchema>;
+      additionalProperties?: JsonSchema;
+      prefixItems?: JsonSchema[];
+      items?: JsonSchema;
+      exclusiveMinimum?: number;
+      minimum?: number;
+      maximum?: number;
+    };
+
+/** The schema of a property, and of its properties down the path; fails the test where one is missing. */
+function subSchema(schema: Exclude<JsonSchema, boolean>, ...path: string[]): Exclude<JsonSchema, boolean> {
+  let at = schema;
+  for (const [index, key] of path.entries()) {
+    const next = at.properties?.[key];
+    if (typeof next !== "object") throw new Error(`the schema has no object schema at ${path.slice(0, index + 1).join(".")}`);
+    at = next;
+  }
+  return at;
+}
+
 // A small JSON Schema (draft 2020-12) checker for the keywords zod emits; the
 // schema is checked against the demo robots and a broken one.
-function schemaProblems(schema: any, value: unknown, path = ""): string[] {
+function schemaProblems(schema: JsonSchema, value: unknown, path = ""): string[] {
   if (schema === false) return [`${path}: not allowed`];
+  if (schema === true) return [];
   if (schema.const !== undefined && value !== schema.const) return [`${path}: not the constant`];
   if (schema.enum && !schema.enum.includes(value)) return [`${path}: not in the enum`];
   const type = schema.type;
   if (type === "object") {
     if (typeof value !== "object" || value === null || Array.isArray(value)) return [`${path}: not an object`];
     const record = value as Record<string, unknown>;
-    const problems = (schema.required ?? []).filter((key: string) => !(key in record)).map((key: string) => `${path}.${key}: required`);
+    const problems = (schema.required ?? []).filter((key) => !(key in record)).map((key) => `${path}.${key}: required`);
     for (const [key, item] of Object.entries(record)) {
       const itemSchema = schema.properties?.[key] ?? schema.additionalProperties;
       if (itemSchema === undefined) continue;
@@ -148,25 +190,20 @@ function schemaProblems(schema: any, value: unknown, path = ""): string[] {
 }
 
 describe("robotJsonSchema: the JSON Schema generated from the zod schema (JSON Schema draft 2020-12)", () => {
-  const schema = robotJsonSchema() as any;
+  // The generated document read as the keywords zod emits.
+  const schema = robotJsonSchema() as Exclude<JsonSchema, boolean>;
 
   it("is a draft 2020-12 schema of our format, with the fixed field names", () => {
     expect(schema.$schema).toBe("https://json-schema.org/draft/2020-12/schema");
     expect(schema.title).toBe("Gaitloom robot definition");
-    expect(schema.properties.format.const).toBe("gaitloom.robot/1");
+    expect(subSchema(schema, "format").const).toBe("gaitloom.robot/1");
     expect(schema.required).toEqual(["format", "name", "body", "standHeight", "legs"]);
-    const leg = schema.properties.legs.items;
+    const leg = subSchema(schema, "legs").items;
+    if (typeof leg !== "object") throw new Error("legs has no item schema");
     expect(leg.required).toEqual(["id", "mount", "coxa", "femur", "tibia", "joints"]);
-    expect(Object.keys(leg.properties.joints.properties)).toEqual(["coxa", "femur", "tibia"]);
-    expect(Object.keys(leg.properties.joints.properties.femur.properties)).toEqual(["minDeg", "maxDeg", "zeroOffsetDeg", "maxSpeedDegS", "servo"]);
-    expect(Object.keys(leg.properties.joints.properties.femur.properties.servo.properties)).toEqual([
-      "channel",
-      "reversed",
-      "centerUs",
-      "usPerDeg",
-      "minUs",
-      "maxUs",
-    ]);
+    expect(Object.keys(subSchema(leg, "joints").properties ?? {})).toEqual(["coxa", "femur", "tibia"]);
+    expect(Object.keys(subSchema(leg, "joints", "femur").properties ?? {})).toEqual(["minDeg", "maxDeg", "zeroOffsetDeg", "maxSpeedDegS", "servo"]);
+    expect(Object.keys(subSchema(leg, "joints", "femur", "servo").properties ?? {})).toEqual(["channel", "reversed", "centerUs", "usPerDeg", "minUs", "maxUs"]);
     expect(leg.additionalProperties).toBe(false);
     expect(JSON.parse(JSON.stringify(schema))).toEqual(schema);
   });
@@ -176,7 +213,7 @@ describe("robotJsonSchema: the JSON Schema generated from the zod schema (JSON S
       expect(schemaProblems(schema, demoRobotJson(name)), name).toEqual([]);
     }
     const robot = pierCrawler();
-    robot.legs[0].joints.coxa.zeroOffset = 1;
+    Object.assign(robot.legs[0].joints.coxa, { zeroOffset: 1 });
     expect(schemaProblems(schema, robot)).toEqual([".legs[0].joints.coxa.zeroOffset: not allowed"]);
   });
 });
