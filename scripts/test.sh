@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
-# npm test: typecheck, unit, integration (real PostgreSQL) and e2e (Debian's
-# Chromium), each set up from scratch, ending with one "N passed, N failed" line.
+# npm test: typecheck, lint, format, unit, integration (real PostgreSQL) and e2e
+# (Debian's Chromium), each set up from scratch, ending with one "N passed, N failed" line.
 set -uo pipefail
 source "$(dirname "$0")/lib/common.sh"
 source "$(dirname "$0")/lib/postgres.sh"
@@ -34,6 +34,16 @@ say "typecheck (react-router typegen && tsc)"
 (cd "$ROOT" && npx react-router typegen >/dev/null 2>&1 && npx tsc -p tsconfig.json) >"$REPORTS/typecheck.log" 2>&1
 TYPECHECK_RC=$?
 [ $TYPECHECK_RC -eq 0 ] && say "typecheck passed" || { cat "$REPORTS/typecheck.log"; warn "typecheck failed"; }
+
+say "lint (eslint)"
+(cd "$ROOT" && npx eslint --max-warnings=0 .) >"$REPORTS/lint.log" 2>&1
+LINT_RC=$?
+[ $LINT_RC -eq 0 ] && say "lint passed" || { cat "$REPORTS/lint.log"; warn "lint failed"; }
+
+say "format (prettier --check)"
+(cd "$ROOT" && npx prettier --check .) >"$REPORTS/format.log" 2>&1
+FORMAT_RC=$?
+[ $FORMAT_RC -eq 0 ] && say "format passed" || { cat "$REPORTS/format.log"; warn "format failed: npx prettier --write <file> fixes a file"; }
 
 say "unit and integration tests (vitest)"
 (cd "$ROOT" && npx vitest run --reporter=default --reporter=json --outputFile.json="$REPORTS/vitest.json")
@@ -71,6 +81,6 @@ fi
 services_stop_all
 if [ -n "$PG_STARTED_HERE" ]; then pg_stop; PG_STARTED_HERE=""; fi
 say "finished in $(( $(date +%s) - STARTED_AT )) s"
-node "$ROOT/scripts/lib/summarize.mjs" "$REPORTS" "$TYPECHECK_RC"
+node "$ROOT/scripts/lib/summarize.mjs" "$REPORTS" "$TYPECHECK_RC" "$LINT_RC" "$FORMAT_RC"
 SUMMARY_RC=$?
-[ $TYPECHECK_RC -eq 0 ] && [ $VITEST_RC -eq 0 ] && [ $E2E_RC -eq 0 ] && [ $SUMMARY_RC -eq 0 ]
+[ $TYPECHECK_RC -eq 0 ] && [ $LINT_RC -eq 0 ] && [ $FORMAT_RC -eq 0 ] && [ $VITEST_RC -eq 0 ] && [ $E2E_RC -eq 0 ] && [ $SUMMARY_RC -eq 0 ]

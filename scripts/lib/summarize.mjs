@@ -1,12 +1,19 @@
 // Adds up the suites' JSON reports into the one closing line of `npm test`.
-// Dependency-free on purpose; a missing report counts as one failure.
+// Dependency-free on purpose; a missing report counts as one failure. The
+// typecheck, lint and format steps count as one test each, by exit code.
 import { existsSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 
-const [reports, typecheckRc] = process.argv.slice(2);
+const [reports, typecheckRc, lintRc, formatRc] = process.argv.slice(2);
 const suites = [];
 
-suites.push({ name: "typecheck", passed: typecheckRc === "0" ? 1 : 0, failed: typecheckRc === "0" ? 0 : 1 });
+for (const [name, rc] of [
+  ["typecheck", typecheckRc],
+  ["lint", lintRc],
+  ["format", formatRc],
+]) {
+  suites.push({ name, passed: rc === "0" ? 1 : 0, failed: rc === "0" ? 0 : 1, ...(rc === undefined ? { note: "did not run" } : {}) });
+}
 
 const read = (file) => (existsSync(join(reports, file)) ? JSON.parse(readFileSync(join(reports, file), "utf8")) : null);
 
