@@ -9,6 +9,7 @@ import type { Route } from "./+types/root";
 import { ErrorPanel } from "./components/common/ErrorPanel";
 import { crossOriginRefusal } from "./platform/origin.server";
 import { readTheme } from "./platform/theme";
+import type { RoutePermissions } from "./platform/permissions";
 
 export const middleware: Route.MiddlewareFunction[] = [
   async ({ request }, next) => {
@@ -17,6 +18,8 @@ export const middleware: Route.MiddlewareFunction[] = [
     return next();
   },
 ];
+
+export const permissions = { loader: "public" } satisfies RoutePermissions;
 
 export async function loader({ request }: Route.LoaderArgs) {
   return { theme: readTheme(request.headers.get("Cookie")) };

@@ -55,15 +55,20 @@ export async function requireUser(request: Request): Promise<User> {
   throw data({ message: "Sign in first." }, { status: 401 });
 }
 
-/** Pages and form actions: redirects to sign-in or onboarding, 403 with a message when the role cannot. */
-export async function requireAccess(request: Request, action: Action): Promise<Member> {
+/**
+ * Pages and form actions: redirects to sign-in or onboarding, 403 with a
+ * message when the role cannot. Given several actions (a form whose intent is
+ * unknown: app/platform/intent-form.server.ts), the role must hold one of them.
+ */
+export async function requireAccess(request: Request, action: Action | readonly Action[]): Promise<Member> {
   const user = await requireUser(request);
   const member = await currentMember(request);
   if (!member) {
     if (isRead(request)) throw redirect("/welcome");
     throw data({ message: "You are not a member of any workspace yet." }, { status: 403 });
   }
-  if (!can(member.role, action)) throw data({ message: refusal(member.role, action) }, { status: 403 });
+  const actions = typeof action === "string" ? [action] : action;
+  if (!actions.some((one) => can(member.role, one))) throw data({ message: refusal(member.role, actions[0]) }, { status: 403 });
   return { ...member, user };
 }
 

@@ -70,6 +70,28 @@ const ACTION_PHRASES: Record<Action, string> = {
   "bench.stream": "stream to a robot on the bench",
 };
 
+/** What a loader, an action or one of its intents needs: a permission, only a signed-in person, or nothing. */
+export type Requirement = Action | "signed-in" | "public";
+
+/**
+ * What a route module's loader and action need, exported by the module as
+ * `permissions` and passed by its own loader and action to the access check,
+ * so it is written once. An action told apart by an `intent` field names each
+ * intent. The role × route matrix (test/integration/access) reads it for its
+ * expected answers, and the OpenAPI document for each operation's x-permission.
+ */
+export type RoutePermissions = {
+  loader?: Requirement;
+  action?: Requirement | { readonly [intent: string]: Requirement };
+};
+
+/** The requirement a route module declares for its loader, or for its action (one intent of it, when it has intents); undefined when it declares none. */
+export function requirementOf(permissions: RoutePermissions | undefined, kind: "loader" | "action", intent?: string): Requirement | undefined {
+  const declared = permissions?.[kind];
+  if (declared === undefined || typeof declared === "string") return declared;
+  return intent !== undefined && Object.hasOwn(declared, intent) ? declared[intent] : undefined;
+}
+
 export function refusal(role: Role, action: Action): string {
   return `The ${role} role cannot ${ACTION_PHRASES[action]}.`;
 }

@@ -1,5 +1,8 @@
 // GET /healthz: is the app up and can it reach its database?
 import { pingDatabase } from "~/platform/db.server";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "public" } satisfies RoutePermissions;
 
 export async function loader() {
   const database = await pingDatabase();

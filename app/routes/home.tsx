@@ -2,6 +2,9 @@ import { Link } from "react-router";
 import type { Route } from "./+types/home";
 import { currentMember, currentUser } from "~/platform/access.server";
 import { summarizeWorkspace } from "~/features/accounts/workspaces.server";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "public" } satisfies RoutePermissions;
 
 export async function loader({ request }: Route.LoaderArgs) {
   const [user, member] = await Promise.all([currentUser(request), currentMember(request)]);

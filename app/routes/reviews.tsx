@@ -4,11 +4,13 @@ import { EmptyState } from "~/components/common/EmptyState";
 import { PageHeader } from "~/components/common/PageHeader";
 import { ReviewQueueList } from "~/components/versions/ReviewQueueList";
 import { requireAccess } from "~/platform/access.server";
-import { can } from "~/platform/permissions";
+import { can, type RoutePermissions } from "~/platform/permissions";
 import { reviewQueue } from "~/features/versions/review.server";
 
+export const permissions = { loader: "reviews.read" } satisfies RoutePermissions;
+
 export async function loader({ request }: Route.LoaderArgs) {
-  const member = await requireAccess(request, "reviews.read");
+  const member = await requireAccess(request, permissions.loader);
   return { queue: await reviewQueue(member), canDecide: can(member.role, "versions.decide"), canRequest: can(member.role, "versions.requestReview") };
 }
 

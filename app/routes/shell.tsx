@@ -6,6 +6,9 @@ import { AppShell, type ShellData } from "~/components/shell/AppShell";
 import { currentMember, currentUser, membershipsOf } from "~/platform/access.server";
 import { config } from "~/platform/config.server";
 import { summarizeWorkspace } from "~/features/accounts/workspaces.server";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "public" } satisfies RoutePermissions;
 
 export async function loader({ request }: Route.LoaderArgs): Promise<ShellData> {
   const [user, member] = await Promise.all([currentUser(request), currentMember(request)]);

@@ -6,10 +6,12 @@ import { PageHeader } from "~/components/common/PageHeader";
 import { membershipsOf, requireUser } from "~/platform/access.server";
 import { formAction, ServiceError } from "~/platform/errors.server";
 import { acceptInvitation, invitationsForEmail } from "~/features/accounts/invitations.server";
-import { ROLE_LABELS } from "~/platform/permissions";
+import { ROLE_LABELS, type RoutePermissions } from "~/platform/permissions";
 import { id } from "~/platform/params";
 import { commitSession, readSession } from "~/platform/session.server";
 import { createWorkspace } from "~/features/accounts/workspaces.server";
+
+export const permissions = { loader: "signed-in", action: { create: "signed-in", accept: "signed-in" } } satisfies RoutePermissions;
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
@@ -17,14 +19,14 @@ export async function loader({ request }: Route.LoaderArgs) {
   return { name: user.name, email: user.email, invitations, hasWorkspace: memberships.length > 0 };
 }
 
-const input = z.discriminatedUnion("intent", [
+export const actionForm = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("create"), name: z.string() }),
   z.object({ intent: z.literal("accept"), invitationId: id() }),
 ]);
 
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireUser(request);
-  const parsed = input.safeParse(Object.fromEntries(await request.formData()));
+  const parsed = actionForm.safeParse(Object.fromEntries(await request.formData()));
   return formAction(async () => {
     if (!parsed.success) throw new ServiceError(400, "bad-request", "The form was incomplete; try again.");
     const workspaceId =

@@ -5,6 +5,9 @@ import type { Route } from "./+types/workspace-switch";
 import { membershipsOf, requireUser } from "~/platform/access.server";
 import { commitSession, readSession, safeReturnTo } from "~/platform/session.server";
 import { id } from "~/platform/params";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { action: "signed-in" } satisfies RoutePermissions;
 
 const input = z.object({ workspaceId: id(), returnTo: z.string().optional() });
 

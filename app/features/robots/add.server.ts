@@ -7,7 +7,7 @@ import { ServiceError } from "../../platform/errors.server";
 import { createRobotFrom, createRobotFromDefinition, createRobotFromUrdf } from "./robots.server";
 import { DEFINITION_LIMIT_BYTES, formatBytes, URDF_LIMIT_BYTES } from "./files";
 import { describeJsonError } from "./json-errors";
-import { createForm, firstProblem, optionalName } from "./params";
+import { addForm, createForm, firstProblem, optionalName } from "./params";
 import type { ImportedRobot } from "./results";
 import type { StarterLegCount } from "./starter";
 
@@ -29,7 +29,9 @@ export async function addRobot(body: LimitedForm, member: Pick<Member, "user" | 
     );
   }
   const form = body.form;
-  const intent = form.get("intent");
+  const given = addForm.shape.intent.safeParse(form.get("intent"));
+  if (!given.success) throw badRequest(`Unknown intent ${JSON.stringify(form.get("intent"))}: expected "create", "upload" or "import-urdf".`);
+  const intent = given.data;
   const owner = { workspaceId: member.workspace.id, authorId: member.user.id };
   if (intent === "create") {
     const parsed = createForm.safeParse(Object.fromEntries(form));
@@ -43,33 +45,30 @@ export async function addRobot(body: LimitedForm, member: Pick<Member, "user" | 
     );
     return { redirectTo: `/robots/${created.robotId}` };
   }
-  if (intent === "upload" || intent === "import-urdf") {
-    const file = form.get("file");
-    const kind = intent === "upload" ? "robot definition (JSON)" : "URDF file";
-    if (!file || typeof file === "string" || file.size === 0) {
-      throw badRequest(
-        `Choose a ${kind} to ${intent === "upload" ? "upload" : "import"}${file && typeof file !== "string" && file.name ? `: ${file.name} is empty` : ""}.`,
-      );
-    }
-    const limit = intent === "upload" ? DEFINITION_LIMIT_BYTES : URDF_LIMIT_BYTES;
-    if (file.size > limit) {
-      throw new ServiceError(413, "too-large", `${file.name} is ${formatBytes(file.size)}; a ${kind} may be up to ${formatBytes(limit)}. Nothing was saved.`);
-    }
-    const name = optionalName.safeParse(form.get("name") ?? undefined);
-    if (!name.success) throw badRequest(`Cannot use that name: ${firstProblem(name.error)}.`);
-    const text = await file.text();
-    if (intent === "upload") {
-      let json: unknown;
-      try {
-        json = JSON.parse(text);
-      } catch (error) {
-        throw badRequest(`${file.name} is not valid JSON: ${describeJsonError(error, text)}. Nothing was saved.`);
-      }
-      const created = await createRobotFromDefinition(json, { ...owner, fileName: file.name, name: name.data });
-      return { redirectTo: `/robots/${created.robotId}` };
-    }
-    const imported = await createRobotFromUrdf(text, { ...owner, fileName: file.name, name: name.data });
-    return { ok: true, ...imported };
+  const file = form.get("file");
+  const kind = intent === "upload" ? "robot definition (JSON)" : "URDF file";
+  if (!file || typeof file === "string" || file.size === 0) {
+    throw badRequest(
+      `Choose a ${kind} to ${intent === "upload" ? "upload" : "import"}${file && typeof file !== "string" && file.name ? `: ${file.name} is empty` : ""}.`,
+    );
   }
-  throw badRequest(`Unknown intent ${JSON.stringify(intent)}: expected "create", "upload" or "import-urdf".`);
+  const limit = intent === "upload" ? DEFINITION_LIMIT_BYTES : URDF_LIMIT_BYTES;
+  if (file.size > limit) {
+    throw new ServiceError(413, "too-large", `${file.name} is ${formatBytes(file.size)}; a ${kind} may be up to ${formatBytes(limit)}. Nothing was saved.`);
+  }
+  const name = optionalName.safeParse(form.get("name") ?? undefined);
+  if (!name.success) throw badRequest(`Cannot use that name: ${firstProblem(name.error)}.`);
+  const text = await file.text();
+  if (intent === "upload") {
+    let json: unknown;
+    try {
+      json = JSON.parse(text);
+    } catch (error) {
+      throw badRequest(`${file.name} is not valid JSON: ${describeJsonError(error, text)}. Nothing was saved.`);
+    }
+    const created = await createRobotFromDefinition(json, { ...owner, fileName: file.name, name: name.data });
+    return { redirectTo: `/robots/${created.robotId}` };
+  }
+  const imported = await createRobotFromUrdf(text, { ...owner, fileName: file.name, name: name.data });
+  return { ok: true, ...imported };
 }

@@ -20,6 +20,12 @@ export const saveForm = z.object({
   message: z.string().max(500, "message must be at most 500 characters").optional().default(""),
 });
 
+/** Restoring an old revision as the newest; the restore form's one intent. */
+export const restoreForm = z.object({ intent: z.literal("restore") });
+
+/** The robot list's ways to add a robot: from the starter or a copy, an uploaded definition, an imported URDF file. */
+export const addForm = z.object({ intent: z.enum(["create", "upload", "import-urdf"]) });
+
 export const robotName = z.string().trim().min(1, "give the robot a name").max(120, "the name must be at most 120 characters");
 
 export const createForm = z.object({

@@ -7,7 +7,7 @@ import { revisionNumber } from "../../platform/params";
 import { getRevision, saveRevision } from "./robots.server";
 import { DEFINITION_LIMIT_BYTES, formatBytes } from "./files";
 import { describeJsonError } from "./json-errors";
-import { firstProblem, saveForm } from "./params";
+import { firstProblem, restoreForm, saveForm } from "./params";
 import type { SavedRevision } from "./results";
 
 /** A definition of up to 256 KB plus the other fields of the form. */
@@ -41,7 +41,7 @@ export async function saveFromForm(body: LimitedForm, context: { member: Member;
 
 /** Saves an old revision's definition as the newest revision. */
 export async function restoreFromForm(form: FormData, context: { member: Member; robotId: string; number: number }): Promise<SavedRevision> {
-  if (form.get("intent") !== "restore") {
+  if (!restoreForm.shape.intent.safeParse(form.get("intent")).success) {
     throw new ServiceError(400, "bad-request", `Unknown intent ${JSON.stringify(form.get("intent"))}: expected "restore".`);
   }
   const given = String(form.get("baseRevision") ?? "");

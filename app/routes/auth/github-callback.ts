@@ -3,6 +3,9 @@ import { data, redirect } from "react-router";
 import type { Route } from "./+types/github-callback";
 import { gitHubAuthenticator } from "~/platform/auth.server";
 import { commitSession, readSession, safeReturnTo } from "~/platform/session.server";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "public" } satisfies RoutePermissions;
 
 export async function loader({ request }: Route.LoaderArgs) {
   let user;

@@ -2,6 +2,9 @@
 import type { Route } from "./+types/github";
 import { gitHubAuthenticator } from "~/platform/auth.server";
 import { commitSession, readSession, safeReturnTo } from "~/platform/session.server";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { action: "public" } satisfies RoutePermissions;
 
 export async function action({ request }: Route.ActionArgs) {
   const form = await request.clone().formData();

@@ -2,6 +2,9 @@ import { Form, redirect } from "react-router";
 import type { Route } from "./+types/sign-in";
 import { currentUser } from "~/platform/access.server";
 import { safeReturnTo } from "~/platform/session.server";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "public" } satisfies RoutePermissions;
 
 export async function loader({ request }: Route.LoaderArgs) {
   const returnTo = safeReturnTo(new URL(request.url).searchParams.get("returnTo"));

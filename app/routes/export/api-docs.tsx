@@ -4,6 +4,9 @@ import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { PageHeader } from "~/components/common/PageHeader";
 import { ApiReference, type ApiDocument } from "~/components/export/api-docs/ApiReference";
 import { openApiDocument } from "~/features/api/openapi.server";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "public" } satisfies RoutePermissions;
 
 export function loader(_: Route.LoaderArgs) {
   return { document: openApiDocument() as unknown as ApiDocument };

@@ -16,9 +16,12 @@ import { robotsWithProfiles } from "~/features/robots/calibration.server";
 import { config } from "~/platform/config.server";
 import { pageGuard } from "~/platform/errors.server";
 import { benchPageData } from "./page-data.server";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "tables.download" } satisfies RoutePermissions;
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const member = await requireAccess(request, "tables.download");
+  const member = await requireAccess(request, permissions.loader);
   const robots = await robotsWithProfiles(member.workspace.id);
   return pageGuard(() => benchPageData(member.workspace.id, new URL(request.url).searchParams, config().publicUrl, robots));
 }

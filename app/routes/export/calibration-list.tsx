@@ -6,9 +6,12 @@ import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { PageHeader } from "~/components/common/PageHeader";
 import { requireAccess } from "~/platform/access.server";
 import { robotsWithProfiles } from "~/features/robots/calibration.server";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "robots.read" } satisfies RoutePermissions;
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const { workspace } = await requireAccess(request, "robots.read");
+  const { workspace } = await requireAccess(request, permissions.loader);
   return { robots: await robotsWithProfiles(workspace.id) };
 }
 

@@ -9,9 +9,10 @@ import { Notice } from "~/components/common/Notice";
 import { PageHeader } from "~/components/common/PageHeader";
 import { ProfileEditor, type ProfileIssues } from "~/components/export/ProfileEditor";
 import { requireAccess } from "~/platform/access.server";
+import { permissionOfEveryIntent } from "~/platform/intent-form.server";
 import { calibrationRobot, createProfile, deleteProfile, listProfiles, profileFromForm, updateProfile } from "~/features/robots/calibration.server";
 import { ServiceError, formAction, pageGuard, type FormError } from "~/platform/errors.server";
-import { can } from "~/platform/permissions";
+import { can, type RoutePermissions } from "~/platform/permissions";
 import { id, revisionNumber } from "~/platform/params";
 
 const params = z.object({ robotId: id() });
@@ -22,8 +23,13 @@ async function robotOr404(workspaceId: string, raw: unknown) {
   return pageGuard(() => calibrationRobot(workspaceId, parsed.data.robotId));
 }
 
+export const permissions = {
+  loader: "robots.read",
+  action: { create: "robots.calibrate", import: "robots.calibrate", update: "robots.calibrate", delete: "robots.calibrate" },
+} satisfies RoutePermissions;
+
 export async function loader({ request, params: raw }: Route.LoaderArgs) {
-  const member = await requireAccess(request, "robots.read");
+  const member = await requireAccess(request, permissions.loader);
   const target = await robotOr404(member.workspace.id, raw);
   const profiles = await listProfiles(target.id);
   const search = new URL(request.url).searchParams;
@@ -51,7 +57,7 @@ export async function loader({ request, params: raw }: Route.LoaderArgs) {
 }
 
 const revision = revisionNumber("baseRevision must be the profile revision the edits started from");
-const intent = z.discriminatedUnion("intent", [
+export const actionForm = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("create") }),
   z.object({ intent: z.literal("import"), json: z.string().min(1, "paste the profile's JSON") }),
   z.object({ intent: z.literal("update"), profileId: id(), baseRevision: revision }),
@@ -61,10 +67,10 @@ const intent = z.discriminatedUnion("intent", [
 type ActionResult = FormError<{ issues?: ProfileIssues }>;
 
 export async function action({ request, params: raw }: Route.ActionArgs) {
-  const member = await requireAccess(request, "robots.calibrate");
+  const member = await requireAccess(request, permissionOfEveryIntent(permissions.action));
   const target = await robotOr404(member.workspace.id, raw);
   const form = await request.formData();
-  const parsed = intent.safeParse(Object.fromEntries([...form].filter(([key]) => ["intent", "json", "profileId", "baseRevision"].includes(key))));
+  const parsed = actionForm.safeParse(Object.fromEntries([...form].filter(([key]) => ["intent", "json", "profileId", "baseRevision"].includes(key))));
   const actor = { userId: member.user.id, workspaceId: member.workspace.id };
   const page = `/export/calibration/${target.id}`;
   return formAction(async () => {

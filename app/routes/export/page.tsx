@@ -14,12 +14,14 @@ import { TablePreview } from "~/components/export/TablePreview";
 import { requireAccess } from "~/platform/access.server";
 import { config } from "~/platform/config.server";
 import { listGaits } from "~/features/gaits/gaits.server";
-import { can } from "~/platform/permissions";
+import { can, type RoutePermissions } from "~/platform/permissions";
 import { stateWord } from "~/features/versions/state-labels";
 import { exportPageData } from "./page-data.server";
 
+export const permissions = { loader: "tables.download" } satisfies RoutePermissions;
+
 export async function loader({ request }: Route.LoaderArgs) {
-  const member = await requireAccess(request, "tables.download");
+  const member = await requireAccess(request, permissions.loader);
   const gaits = await listGaits(member.workspace.id);
   const page = await exportPageData(member.workspace.id, new URL(request.url).searchParams, config().publicUrl, gaits);
   return { ...page, canCalibrate: can(member.role, "robots.calibrate") };

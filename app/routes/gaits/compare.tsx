@@ -18,14 +18,17 @@ import { requireAccess } from "~/platform/access.server";
 import { attempt, pageGuard } from "~/platform/errors.server";
 import { id } from "~/platform/params";
 import { compareVersions, listComparableVersions, type Comparison, type ComparedVersion } from "~/features/versions/versions.server";
+import type { RoutePermissions } from "~/platform/permissions";
 
 const compareQuery = z.object({
   a: id().optional().catch(undefined),
   b: id().optional().catch(undefined),
 });
 
+export const permissions = { loader: "gaits.read" } satisfies RoutePermissions;
+
 export async function loader({ request }: Route.LoaderArgs) {
-  const { workspace } = await requireAccess(request, "gaits.read");
+  const { workspace } = await requireAccess(request, permissions.loader);
   const search = new URL(request.url).searchParams;
   const query = compareQuery.parse({ a: search.get("a") ?? undefined, b: search.get("b") ?? undefined });
   const versions = await listComparableVersions(workspace.id);

@@ -9,7 +9,7 @@ import { EditorScreen } from "~/components/editor/EditorScreen";
 import { requireAccess } from "~/platform/access.server";
 import { moveDraftToNewestRobot, readDraft } from "~/features/gaits/drafts.server";
 import { ServiceError, formAction, pageGuard } from "~/platform/errors.server";
-import { can } from "~/platform/permissions";
+import { can, type RoutePermissions } from "~/platform/permissions";
 import { id } from "~/platform/params";
 
 const gaitParams = z.object({ gaitId: id("There is no gait at this address.") });
@@ -20,8 +20,10 @@ function gaitIdOf(params: unknown): string {
   return parsed.data.gaitId;
 }
 
+export const permissions = { loader: "gaits.read", action: { "move-to-newest-robot": "gaits.edit" } } satisfies RoutePermissions;
+
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { workspace, role } = await requireAccess(request, "gaits.read");
+  const { workspace, role } = await requireAccess(request, permissions.loader);
   const gaitId = gaitIdOf(params);
   return pageGuard(async () => {
     const draft = await readDraft(workspace.id, gaitId);
@@ -39,15 +41,15 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   });
 }
 
-const moveForm = z.object({
+export const actionForm = z.object({
   intent: z.literal("move-to-newest-robot", { error: "Unknown request." }),
   baseRevision: z.coerce.number({ error: "baseRevision must be the draft revision" }).int().min(0),
 });
 
 export async function action({ request, params }: Route.ActionArgs) {
-  const { user, workspace } = await requireAccess(request, "gaits.edit");
+  const { user, workspace } = await requireAccess(request, permissions.action["move-to-newest-robot"]);
   const gaitId = gaitIdOf(params);
-  const parsed = moveForm.safeParse(Object.fromEntries(await request.formData()));
+  const parsed = actionForm.safeParse(Object.fromEntries(await request.formData()));
   return formAction(async () => {
     if (!parsed.success) throw new ServiceError(400, "bad-request", parsed.error.issues[0].message);
     const moved = await moveDraftToNewestRobot({ userId: user.id, workspaceId: workspace.id }, gaitId, parsed.data.baseRevision);

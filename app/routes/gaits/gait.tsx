@@ -10,7 +10,7 @@ import { VersionTable } from "~/components/versions/VersionTable";
 import { parseVersionQuery } from "~/components/versions/version-query";
 import { requireAccess } from "~/platform/access.server";
 import { formAction, ServiceError, type FormError } from "~/platform/errors.server";
-import { can, type Action } from "~/platform/permissions";
+import { can, type RoutePermissions } from "~/platform/permissions";
 import { draftRevision, id } from "~/platform/params";
 import { readIntentForm } from "~/platform/intent-form.server";
 import { commitDraft, getGait, listVersions, restoreDraft, versionAuthors } from "~/features/versions/versions.server";
@@ -21,7 +21,7 @@ const notFound = () => data({ message: "There is no gait at this address in your
 
 const revisionField = draftRevision("draftRevision must be the draft revision the page showed");
 
-const actionForm = z.discriminatedUnion("intent", [
+export const actionForm = z.discriminatedUnion("intent", [
   z.object({
     intent: z.literal("commit"),
     message: z.string({ error: "Describe the version." }),
@@ -34,13 +34,10 @@ const actionForm = z.discriminatedUnion("intent", [
   }),
 ]);
 
-const INTENT_PERMISSIONS: Record<z.infer<typeof actionForm>["intent"], Action> = {
-  commit: "versions.commit",
-  restore: "gaits.edit",
-};
+export const permissions = { loader: "gaits.read", action: { commit: "versions.commit", restore: "gaits.edit" } } satisfies RoutePermissions;
 
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { workspace, role } = await requireAccess(request, "gaits.read");
+  const { workspace, role } = await requireAccess(request, permissions.loader);
   const parsed = gaitParams.safeParse(params);
   if (!parsed.success) throw notFound();
   const gait = await getGait(workspace.id, parsed.data.gaitId);
@@ -73,7 +70,7 @@ export type GaitActionData =
  */
 export async function action({ request, params }: Route.ActionArgs) {
   return formAction(async (): Promise<GaitActionData> => {
-    const { member, form } = await readIntentForm(request, actionForm, INTENT_PERMISSIONS, "gaits.edit");
+    const { member, form } = await readIntentForm(request, actionForm, permissions.action);
     const parsed = gaitParams.safeParse(params);
     if (!parsed.success) throw new ServiceError(404, "not-found", "There is no gait at this address in your workspace.");
     const gaitId = parsed.data.gaitId;

@@ -6,14 +6,16 @@ import { PageHeader } from "~/components/common/PageHeader";
 import { StateBadge } from "~/components/versions/StateBadge";
 import { requireAccess } from "~/platform/access.server";
 import { listGaits } from "~/features/gaits/gaits.server";
-import { can } from "~/platform/permissions";
+import { can, type RoutePermissions } from "~/platform/permissions";
 import { id } from "~/platform/params";
 import { listRobots } from "~/features/robots/robots.server";
 
 const listQuery = z.object({ robot: id().optional().catch(undefined) });
 
+export const permissions = { loader: "gaits.read" } satisfies RoutePermissions;
+
 export async function loader({ request }: Route.LoaderArgs) {
-  const { workspace, role } = await requireAccess(request, "gaits.read");
+  const { workspace, role } = await requireAccess(request, permissions.loader);
   const { robot } = listQuery.parse({ robot: new URL(request.url).searchParams.get("robot") || undefined });
   const robots = await listRobots(workspace.id);
   const chosen = robot ? (robots.find((candidate) => candidate.id === robot) ?? null) : null;

@@ -3,27 +3,37 @@
 // Also takes the "keep mine as a copy" post from the editor (intent=copy).
 import { useMemo, useState } from "react";
 import { Form, Link, redirect, useNavigation } from "react-router";
+import { z } from "zod";
 import type { Route } from "./+types/new";
 import { Notice } from "~/components/common/Notice";
 import { PageHeader } from "~/components/common/PageHeader";
 import { requireAccess } from "~/platform/access.server";
+import { permissionOfEveryIntent } from "~/platform/intent-form.server";
 import { copyForm, createGait, createGaitCopy, newGaitForm, robotChoices } from "~/features/gaits/new-gait.server";
 import { DEFAULT_PARAMS } from "~/features/gaits/editor/templates";
 import { formAction, ServiceError } from "~/platform/errors.server";
+import type { RoutePermissions } from "~/platform/permissions";
+
+/** A new gait from a template (this page's form), or someone's edits kept as a copy (the editor's). */
+export const actionForm = z.object({ intent: z.enum(["create", "copy"], { error: 'intent must be "create" or "copy"' }) });
+
+export const permissions = { loader: "gaits.edit", action: { create: "gaits.edit", copy: "gaits.edit" } } satisfies RoutePermissions;
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const { workspace } = await requireAccess(request, "gaits.edit");
+  const { workspace } = await requireAccess(request, permissions.loader);
   const robots = await robotChoices(workspace.id);
   const wanted = new URL(request.url).searchParams.get("robot");
   return { robots, robotId: robots.find((robot) => robot.id === wanted)?.id ?? robots[0]?.id ?? null };
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  const { user, workspace } = await requireAccess(request, "gaits.edit");
+  const { user, workspace } = await requireAccess(request, permissionOfEveryIntent(permissions.action));
   const form = Object.fromEntries(await request.formData());
   const actor = { userId: user.id, workspaceId: workspace.id };
   return formAction(async () => {
-    if (form.intent === "copy") {
+    const intent = actionForm.safeParse(form);
+    if (!intent.success) throw new ServiceError(400, "bad-request", intent.error.issues[0].message);
+    if (intent.data.intent === "copy") {
       const parsed = copyForm.safeParse(form);
       if (!parsed.success) throw new ServiceError(422, "invalid", parsed.error.issues[0].message, { field: String(parsed.error.issues[0].path[0] ?? "") });
       return redirect(`/gaits/${(await createGaitCopy(actor, parsed.data)).id}/edit`);

@@ -13,7 +13,7 @@ import { formatTime } from "~/platform/format";
 import { requireAccess } from "~/platform/access.server";
 import { groupFlags } from "~/features/compare";
 import { formAction, ServiceError, type FormError } from "~/platform/errors.server";
-import { can, type Action } from "~/platform/permissions";
+import { can, type RoutePermissions } from "~/platform/permissions";
 import { id, versionNumber } from "~/platform/params";
 import { readIntentForm } from "~/platform/intent-form.server";
 import { approvalRules, approveVersion, releaseVersion, requestReview, reviewersFor, sendBackVersion } from "~/features/versions/review.server";
@@ -28,7 +28,7 @@ const notFound = () => data({ message: "There is no such version of a gait in yo
 
 const text = z.string().optional().default("");
 
-const actionForm = z.discriminatedUnion("intent", [
+export const actionForm = z.discriminatedUnion("intent", [
   z.object({
     intent: z.literal("request-review"),
     reviewerId: id("Choose who should review this version."),
@@ -45,15 +45,13 @@ const actionForm = z.discriminatedUnion("intent", [
 
 type Intent = z.infer<typeof actionForm>["intent"];
 
-const INTENT_PERMISSIONS: Record<Intent, Action> = {
-  "request-review": "versions.requestReview",
-  approve: "versions.decide",
-  "send-back": "versions.decide",
-  release: "versions.release",
-};
+export const permissions = {
+  loader: "gaits.read",
+  action: { "request-review": "versions.requestReview", approve: "versions.decide", "send-back": "versions.decide", release: "versions.release" },
+} satisfies RoutePermissions;
 
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { workspace, role, user } = await requireAccess(request, "gaits.read");
+  const { workspace, role, user } = await requireAccess(request, permissions.loader);
   const parsed = versionParams.safeParse(params);
   if (!parsed.success) throw notFound();
   const [version, gait] = await Promise.all([getVersion(workspace.id, parsed.data.gaitId, parsed.data.number), getGait(workspace.id, parsed.data.gaitId)]);
@@ -89,15 +87,15 @@ export type VersionActionData = { ok: true; intent: Intent; notice: string } | F
 
 /**
  * POST /gaits/:gaitId/versions/:number
- *   intent=request-review, reviewerId, compareWithId?, comment?   (versions.requestReview)
- *   intent=approve, comment?, overrideReason?                       (versions.decide)
- *   intent=send-back, comment                                       (versions.decide)
- *   intent=release, comment?                                        (versions.release)
+ *   intent=request-review, reviewerId, compareWithId?, comment?
+ *   intent=approve, comment?, overrideReason?
+ *   intent=send-back, comment
+ *   intent=release, comment?
  */
 export async function action({ request, params }: Route.ActionArgs) {
   const mailNote = (mailed: boolean, whom: string) => (mailed ? ` ${whom} has been e-mailed.` : "");
   return formAction(async (): Promise<VersionActionData> => {
-    const { member, form: input } = await readIntentForm(request, actionForm, INTENT_PERMISSIONS, "versions.decide");
+    const { member, form: input } = await readIntentForm(request, actionForm, permissions.action);
     const parsed = versionParams.safeParse(params);
     const version = parsed.success ? await getVersion(member.workspace.id, parsed.data.gaitId, parsed.data.number) : null;
     if (!version) throw new ServiceError(404, "not-found", "There is no such version of a gait in your workspace.");

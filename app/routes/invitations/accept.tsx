@@ -4,8 +4,10 @@ import type { Route } from "./+types/accept";
 import { requireUser } from "~/platform/access.server";
 import { formAction, pageGuard } from "~/platform/errors.server";
 import { acceptInvitation, invitationForToken } from "~/features/accounts/invitations.server";
-import { ROLE_LABELS } from "~/platform/permissions";
+import { ROLE_LABELS, type RoutePermissions } from "~/platform/permissions";
 import { commitSession, readSession } from "~/platform/session.server";
+
+export const permissions = { loader: "signed-in", action: "signed-in" } satisfies RoutePermissions;
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const user = await requireUser(request);

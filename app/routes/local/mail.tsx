@@ -4,6 +4,9 @@ import type { Route } from "./+types/mail";
 import { PageHeader } from "~/components/common/PageHeader";
 import { formatTime } from "~/platform/format";
 import { localInbox } from "~/platform/mail.server";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "public" } satisfies RoutePermissions;
 
 export async function loader() {
   const messages = await localInbox();

@@ -5,9 +5,12 @@ import { requireAccess } from "~/platform/access.server";
 import { definitionFileName, definitionFileText } from "~/features/robots/files";
 import { revisionParams } from "~/features/robots/params";
 import { getRevision } from "~/features/robots/robots.server";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "robots.read" } satisfies RoutePermissions;
 
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { workspace } = await requireAccess(request, "robots.read");
+  const { workspace } = await requireAccess(request, permissions.loader);
   const parsed = revisionParams.safeParse(params);
   if (!parsed.success) throw data({ message: parsed.error.issues[0].message }, { status: 404 });
   const found = await getRevision(workspace.id, parsed.data.robotId, parsed.data.number);

@@ -4,21 +4,29 @@ import { EmptyState } from "~/components/common/EmptyState";
 import { PageHeader } from "~/components/common/PageHeader";
 import { AddRobotPanel, type AddPanel } from "~/components/robots/AddRobotPanels";
 import { requireAccess } from "~/platform/access.server";
+import { permissionOfEveryIntent } from "~/platform/intent-form.server";
 import { formatDate } from "~/platform/format";
-import { can } from "~/platform/permissions";
+import { can, type RoutePermissions } from "~/platform/permissions";
 import { addRobot, ADD_BODY_LIMIT_BYTES } from "~/features/robots/add.server";
 import { readFormWithin } from "~/platform/body.server";
 import { formAction } from "~/platform/errors.server";
 import type { AddRefusalDetails, ImportedRobot } from "~/features/robots/results";
 import { listRobots } from "~/features/robots/robots.server";
 
+export { addForm as actionForm } from "~/features/robots/params";
+
+export const permissions = {
+  loader: "robots.read",
+  action: { create: "robots.edit", upload: "robots.edit", "import-urdf": "robots.edit" },
+} satisfies RoutePermissions;
+
 export async function loader({ request }: Route.LoaderArgs) {
-  const { workspace, role } = await requireAccess(request, "robots.read");
+  const { workspace, role } = await requireAccess(request, permissions.loader);
   return { robots: await listRobots(workspace.id), canEdit: can(role, "robots.edit") };
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  const member = await requireAccess(request, "robots.edit");
+  const member = await requireAccess(request, permissionOfEveryIntent(permissions.action));
   return formAction<ImportedRobot | Response, AddRefusalDetails>(async () => {
     const added = await addRobot(await readFormWithin(request, ADD_BODY_LIMIT_BYTES), member);
     return "redirectTo" in added ? redirect(added.redirectTo) : added;

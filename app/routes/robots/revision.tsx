@@ -6,7 +6,7 @@ import { RevisionHistory } from "~/components/robots/RevisionHistory";
 import { formatTime } from "~/platform/format";
 import { RobotEditor } from "~/components/robots/RobotForm";
 import { requireAccess } from "~/platform/access.server";
-import { can } from "~/platform/permissions";
+import { can, type RoutePermissions } from "~/platform/permissions";
 import { readFormWithin } from "~/platform/body.server";
 import { formAction, ServiceError } from "~/platform/errors.server";
 import { revisionParams } from "~/features/robots/params";
@@ -15,8 +15,14 @@ import { getRevision, getRobot } from "~/features/robots/robots.server";
 
 const notFound = () => data({ message: "There is no such robot revision in your workspace." }, { status: 404 });
 
+export { restoreForm as actionForm } from "~/features/robots/params";
+
+// As saving: restoring a revision that differs from the newest beyond servo
+// mapping and calibration needs robots.edit too (saveRevision checks).
+export const permissions = { loader: "robots.read", action: { restore: "robots.calibrate" } } satisfies RoutePermissions;
+
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { workspace, role } = await requireAccess(request, "robots.read");
+  const { workspace, role } = await requireAccess(request, permissions.loader);
   const parsed = revisionParams.safeParse(params);
   if (!parsed.success) throw notFound();
   const [found, robot] = await Promise.all([getRevision(workspace.id, parsed.data.robotId, parsed.data.number), getRobot(workspace.id, parsed.data.robotId)]);
@@ -31,7 +37,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
-  const member = await requireAccess(request, "robots.calibrate");
+  const member = await requireAccess(request, permissions.action.restore);
   return formAction(async () => {
     const parsed = revisionParams.safeParse(params);
     if (!parsed.success) throw new ServiceError(404, "not-found", "There is no such robot revision in your workspace.");

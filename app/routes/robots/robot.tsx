@@ -6,7 +6,7 @@ import { RevisionHistory } from "~/components/robots/RevisionHistory";
 import { formatTime } from "~/platform/format";
 import { RobotEditor } from "~/components/robots/RobotForm";
 import { requireAccess } from "~/platform/access.server";
-import { can } from "~/platform/permissions";
+import { can, type RoutePermissions } from "~/platform/permissions";
 import { readFormWithin } from "~/platform/body.server";
 import { formAction, ServiceError } from "~/platform/errors.server";
 import { robotParams } from "~/features/robots/params";
@@ -16,8 +16,14 @@ import { getRobot } from "~/features/robots/robots.server";
 
 const notFound = () => data({ message: "There is no robot at this address in your workspace." }, { status: 404 });
 
+export { saveForm as actionForm } from "~/features/robots/params";
+
+// Firmware may save changes to servo mapping and calibration only: saveRevision
+// asks for robots.edit as well when the definition changes anything else.
+export const permissions = { loader: "robots.read", action: { save: "robots.calibrate" } } satisfies RoutePermissions;
+
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { workspace, role } = await requireAccess(request, "robots.read");
+  const { workspace, role } = await requireAccess(request, permissions.loader);
   const parsed = robotParams.safeParse(params);
   if (!parsed.success) throw notFound();
   const robot = await getRobot(workspace.id, parsed.data.robotId);
@@ -29,7 +35,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
-  const member = await requireAccess(request, "robots.calibrate");
+  const member = await requireAccess(request, permissions.action.save);
   return formAction<SavedRevision, SaveRefusalDetails>(async () => {
     const parsed = robotParams.safeParse(params);
     if (!parsed.success) throw new ServiceError(404, "not-found", "There is no robot at this address in your workspace.");

@@ -1,11 +1,14 @@
-// /settings/audit: the workspace's audit log, for owners.
+// /settings/audit: the workspace's audit log.
 import type { Route } from "./+types/audit";
 import { requireAccess } from "~/platform/access.server";
 import { formatTime } from "~/platform/format";
 import { listAudit } from "~/features/accounts/members.server";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "audit.read" } satisfies RoutePermissions;
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const member = await requireAccess(request, "audit.read");
+  const member = await requireAccess(request, permissions.loader);
   return { entries: await listAudit(member.workspace.id) };
 }
 

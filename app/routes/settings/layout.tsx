@@ -3,10 +3,12 @@ import { NavLink, Outlet } from "react-router";
 import type { Route } from "./+types/layout";
 import { PageHeader } from "~/components/common/PageHeader";
 import { requireAccess } from "~/platform/access.server";
-import { can } from "~/platform/permissions";
+import { can, type RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "workspace.read" } satisfies RoutePermissions;
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const { role } = await requireAccess(request, "workspace.read");
+  const { role } = await requireAccess(request, permissions.loader);
   return { tokens: can(role, "tokens.manage"), audit: can(role, "audit.read") };
 }
 

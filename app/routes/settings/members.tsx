@@ -4,15 +4,27 @@ import { z } from "zod";
 import type { Route } from "./+types/members";
 import { Notice } from "~/components/common/Notice";
 import { requireAccess } from "~/platform/access.server";
+import { requireIntentAccess } from "~/platform/intent-form.server";
 import { formAction, ServiceError } from "~/platform/errors.server";
 import { formatDate } from "~/platform/format";
 import { id } from "~/platform/params";
 import { invite, listInvitations, resendInvitation, revokeInvitation } from "~/features/accounts/invitations.server";
 import { changeRole, listMembers, parseRole, removeMember } from "~/features/accounts/members.server";
-import { type Action, ROLES, ROLE_LABELS, can, invitableRoles } from "~/platform/permissions";
+import { ROLES, ROLE_LABELS, can, invitableRoles, type RoutePermissions } from "~/platform/permissions";
+
+export const permissions = {
+  loader: "members.read",
+  action: {
+    "change-role": "members.changeRole",
+    remove: "members.remove",
+    invite: "invitations.manage",
+    resend: "invitations.manage",
+    revoke: "invitations.manage",
+  },
+} satisfies RoutePermissions;
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const member = await requireAccess(request, "members.read");
+  const member = await requireAccess(request, permissions.loader);
   const canInvite = can(member.role, "invitations.manage");
   return {
     you: member.user.id,
@@ -25,7 +37,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 }
 
 const uuid = id("That is not a valid id.");
-const input = z.discriminatedUnion("intent", [
+export const actionForm = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("change-role"), userId: uuid, role: z.string() }),
   z.object({ intent: z.literal("remove"), userId: uuid }),
   z.object({ intent: z.literal("invite"), email: z.string(), role: z.string() }),
@@ -33,18 +45,10 @@ const input = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("revoke"), invitationId: uuid }),
 ]);
 
-const needs: Record<z.infer<typeof input>["intent"], Action> = {
-  "change-role": "members.changeRole",
-  remove: "members.remove",
-  invite: "invitations.manage",
-  resend: "invitations.manage",
-  revoke: "invitations.manage",
-};
-
 export async function action({ request }: Route.ActionArgs) {
   const form = Object.fromEntries(await request.formData());
-  const parsed = input.safeParse(form);
-  const member = await requireAccess(request, parsed.success ? needs[parsed.data.intent] : "members.read");
+  const parsed = actionForm.safeParse(form);
+  const member = await requireIntentAccess(request, permissions.action, parsed.success ? parsed.data.intent : null);
   return formAction(async () => {
     if (!parsed.success) throw new ServiceError(400, "bad-request", `The form was incomplete: ${parsed.error.issues[0]?.message ?? "unknown field"}`);
     const command = parsed.data;

@@ -4,25 +4,29 @@ import { z } from "zod";
 import type { Route } from "./+types/tokens";
 import { Notice } from "~/components/common/Notice";
 import { requireAccess } from "~/platform/access.server";
+import { permissionOfEveryIntent } from "~/platform/intent-form.server";
 import { config } from "~/platform/config.server";
 import { formAction, ServiceError } from "~/platform/errors.server";
 import { formatTime } from "~/platform/format";
 import { id } from "~/platform/params";
 import { createToken, listTokens, revokeToken } from "~/features/accounts/tokens.server";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "tokens.manage", action: { create: "tokens.manage", revoke: "tokens.manage" } } satisfies RoutePermissions;
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const member = await requireAccess(request, "tokens.manage");
+  const member = await requireAccess(request, permissions.loader);
   return { tokens: await listTokens(member), workspace: member.workspace.name, apiUrl: `${config().publicUrl}/api/v1` };
 }
 
-const input = z.discriminatedUnion("intent", [
+export const actionForm = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("create"), name: z.string() }),
   z.object({ intent: z.literal("revoke"), tokenId: id("That is not a valid token id.") }),
 ]);
 
 export async function action({ request }: Route.ActionArgs) {
-  const member = await requireAccess(request, "tokens.manage");
-  const parsed = input.safeParse(Object.fromEntries(await request.formData()));
+  const member = await requireAccess(request, permissionOfEveryIntent(permissions.action));
+  const parsed = actionForm.safeParse(Object.fromEntries(await request.formData()));
   return formAction(async () => {
     if (!parsed.success) throw new ServiceError(400, "bad-request", parsed.error.issues[0]?.message ?? "The form was incomplete.");
     const command = parsed.data;

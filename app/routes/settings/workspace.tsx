@@ -4,18 +4,20 @@ import type { Route } from "./+types/workspace";
 import { Notice } from "~/components/common/Notice";
 import { requireAccess } from "~/platform/access.server";
 import { formAction, ServiceError } from "~/platform/errors.server";
-import { can } from "~/platform/permissions";
+import { can, type RoutePermissions } from "~/platform/permissions";
 import { renameWorkspace, summarizeWorkspace } from "~/features/accounts/workspaces.server";
 
+export const permissions = { loader: "workspace.read", action: "workspace.manage" } satisfies RoutePermissions;
+
 export async function loader({ request }: Route.LoaderArgs) {
-  const { workspace, role } = await requireAccess(request, "workspace.read");
+  const { workspace, role } = await requireAccess(request, permissions.loader);
   return { workspace: await summarizeWorkspace(workspace), canManage: can(role, "workspace.manage") };
 }
 
 const input = z.object({ name: z.string() });
 
 export async function action({ request }: Route.ActionArgs) {
-  const member = await requireAccess(request, "workspace.manage");
+  const member = await requireAccess(request, permissions.action);
   const parsed = input.safeParse(Object.fromEntries(await request.formData()));
   return formAction(async () => {
     if (!parsed.success) throw new ServiceError(400, "bad-request", "Give the workspace a name.");

@@ -6,9 +6,12 @@ import { requireApiAccess } from "~/platform/access.server";
 import { apiAction } from "~/platform/errors.server";
 import { prepareBenchTable, recordBenchDownload, renderBenchTable } from "~/features/tables/bench-tables.server";
 import { benchQuerySchema, matchesIfNoneMatch, parseParams, parseQuery, robotParamsSchema, tableHeaders } from "~/features/tables/query";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "tables.download" } satisfies RoutePermissions;
 
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const member = await requireApiAccess(request, "tables.download");
+  const member = await requireApiAccess(request, permissions.loader);
   return apiAction(async () => {
     const { robotId } = parseParams(robotParamsSchema, params);
     const query = parseQuery(benchQuerySchema, new URL(request.url).searchParams);

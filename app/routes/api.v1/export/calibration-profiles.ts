@@ -5,9 +5,12 @@ import { requireApiAccess } from "~/platform/access.server";
 import { calibrationRobot, listProfiles } from "~/features/robots/calibration.server";
 import { apiAction } from "~/platform/errors.server";
 import { parseParams, robotParamsSchema } from "~/features/tables/query";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "robots.read" } satisfies RoutePermissions;
 
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { workspace } = await requireApiAccess(request, "robots.read");
+  const { workspace } = await requireApiAccess(request, permissions.loader);
   return apiAction(async () => {
     const { robotId } = parseParams(robotParamsSchema, params);
     const robot = await calibrationRobot(workspace.id, robotId);

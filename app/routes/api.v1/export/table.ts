@@ -8,9 +8,12 @@ import { requireApiAccess } from "~/platform/access.server";
 import { apiAction } from "~/platform/errors.server";
 import { matchesIfNoneMatch, parseParams, parseQuery, tableHeaders, tableParamsSchema, tableQuerySchema } from "~/features/tables/query";
 import { prepareVersionTable, recordTableDownload, renderVersionTable } from "~/features/tables/version-table.server";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "tables.download" } satisfies RoutePermissions;
 
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const member = await requireApiAccess(request, "tables.download");
+  const member = await requireApiAccess(request, permissions.loader);
   return apiAction(async () => {
     const { gaitId, number } = parseParams(tableParamsSchema, params);
     const query = parseQuery(tableQuerySchema, new URL(request.url).searchParams);

@@ -9,6 +9,7 @@ import { idParam } from "~/platform/params";
 import { readJsonBody } from "~/platform/body.server";
 import { DRAFT_BODY_LIMIT_BYTES, readDraft, saveDraft, type DraftContext } from "~/features/gaits/drafts.server";
 import { apiAction, apiError } from "~/platform/errors.server";
+import type { RoutePermissions } from "~/platform/permissions";
 
 const gaitParams = z.object({ gaitId: idParam("gaitId") });
 
@@ -30,15 +31,17 @@ export const draftJson = (draft: DraftContext) => ({
 
 const noStore = { "Cache-Control": "no-store" };
 
+export const permissions = { loader: "gaits.read", action: "gaits.edit" } satisfies RoutePermissions;
+
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { workspace } = await requireApiAccess(request, "gaits.read");
+  const { workspace } = await requireApiAccess(request, permissions.loader);
   const gaitId = gaitIdOf(params);
   return apiAction(async () => Response.json(draftJson(await readDraft(workspace.id, gaitId)), { headers: noStore }));
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
   if (request.method !== "PUT") return apiError(400, "bad_request", "Use PUT with a JSON body { sequence, baseRevision }.");
-  const { user, workspace } = await requireApiAccess(request, "gaits.edit");
+  const { user, workspace } = await requireApiAccess(request, permissions.action);
   const gaitId = gaitIdOf(params);
   const body = await readJsonBody(request, DRAFT_BODY_LIMIT_BYTES);
   return apiAction(async () => Response.json(await saveDraft({ userId: user.id, workspaceId: workspace.id }, gaitId, body), { headers: noStore }));

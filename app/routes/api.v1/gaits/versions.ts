@@ -6,11 +6,14 @@ import { requireApiAccess } from "~/platform/access.server";
 import { idParam } from "~/platform/params";
 import { apiError } from "~/platform/errors.server";
 import { getGait, listVersions } from "~/features/versions/versions.server";
+import type { RoutePermissions } from "~/platform/permissions";
 
 const params = z.object({ gaitId: idParam("gaitId") });
 
+export const permissions = { loader: "gaits.read" } satisfies RoutePermissions;
+
 export async function loader({ request, params: raw }: Route.LoaderArgs) {
-  const { workspace } = await requireApiAccess(request, "gaits.read");
+  const { workspace } = await requireApiAccess(request, permissions.loader);
   const parsed = params.safeParse(raw);
   if (!parsed.success) throw apiError(400, "bad_request", parsed.error.issues[0].message);
   const gait = await getGait(workspace.id, parsed.data.gaitId);

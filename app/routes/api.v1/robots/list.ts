@@ -2,9 +2,12 @@
 import type { Route } from "./+types/list";
 import { requireApiAccess } from "~/platform/access.server";
 import { listRobots } from "~/features/robots/robots.server";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "robots.read" } satisfies RoutePermissions;
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const { workspace } = await requireApiAccess(request, "robots.read");
+  const { workspace } = await requireApiAccess(request, permissions.loader);
   const robots = await listRobots(workspace.id);
   return Response.json({
     robots: robots.map((robot) => ({

@@ -5,9 +5,12 @@ import { requireApiAccess } from "~/platform/access.server";
 import { revisionParams } from "~/features/robots/params";
 import { getRevision } from "~/features/robots/robots.server";
 import { revisionJson } from "./robot";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "robots.read" } satisfies RoutePermissions;
 
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { workspace } = await requireApiAccess(request, "robots.read");
+  const { workspace } = await requireApiAccess(request, permissions.loader);
   const parsed = revisionParams.safeParse(params);
   if (!parsed.success) throw apiError(400, "bad_request", parsed.error.issues[0].message);
   const found = await getRevision(workspace.id, parsed.data.robotId, parsed.data.number);

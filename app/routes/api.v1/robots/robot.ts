@@ -4,6 +4,7 @@ import { apiError } from "~/platform/errors.server";
 import { requireApiAccess } from "~/platform/access.server";
 import { robotParams } from "~/features/robots/params";
 import { getRobot, type RevisionSummary } from "~/features/robots/robots.server";
+import type { RoutePermissions } from "~/platform/permissions";
 
 export const revisionJson = (revision: RevisionSummary) => ({
   number: revision.number,
@@ -12,8 +13,10 @@ export const revisionJson = (revision: RevisionSummary) => ({
   createdAt: revision.createdAt.toISOString(),
 });
 
+export const permissions = { loader: "robots.read" } satisfies RoutePermissions;
+
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { workspace } = await requireApiAccess(request, "robots.read");
+  const { workspace } = await requireApiAccess(request, permissions.loader);
   const parsed = robotParams.safeParse(params);
   if (!parsed.success) throw apiError(400, "bad_request", parsed.error.issues[0].message);
   const robot = await getRobot(workspace.id, parsed.data.robotId);

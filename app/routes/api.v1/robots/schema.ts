@@ -4,6 +4,7 @@ import { createHash } from "node:crypto";
 import type { Route } from "./+types/schema";
 import { robotJsonSchema } from "~/kinematics";
 import { config } from "~/platform/config.server";
+import type { RoutePermissions } from "~/platform/permissions";
 
 let cached: { body: string; etag: string } | undefined;
 
@@ -14,6 +15,8 @@ function schemaDocument() {
   }
   return cached;
 }
+
+export const permissions = { loader: "public" } satisfies RoutePermissions;
 
 export async function loader({ request }: Route.LoaderArgs) {
   const { body, etag } = schemaDocument();

@@ -4,12 +4,15 @@ import { requireApiAccess } from "~/platform/access.server";
 import { readJsonBody } from "~/platform/body.server";
 import { apiAction, apiError } from "~/platform/errors.server";
 import { solveFeet } from "~/features/solver/solve.server";
+import type { RoutePermissions } from "~/platform/permissions";
 
 const IK_BODY_LIMIT_BYTES = 256 * 1024;
 
+export const permissions = { loader: "public", action: "solver.use" } satisfies RoutePermissions;
+
 export async function action({ request }: Route.ActionArgs) {
   if (request.method !== "POST") return apiError(400, "bad_request", "Use POST with a JSON body.");
-  await requireApiAccess(request, "solver.use");
+  await requireApiAccess(request, permissions.action);
   const body = await readJsonBody(request, IK_BODY_LIMIT_BYTES);
   return apiAction(async () => Response.json({ legs: solveFeet(body) }, { headers: { "Cache-Control": "no-store" } }));
 }

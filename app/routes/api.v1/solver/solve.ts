@@ -7,10 +7,13 @@ import { parseJsonText, readBodyText } from "~/platform/body.server";
 import { apiAction, apiError } from "~/platform/errors.server";
 import { bodyKey, cachedAnswer, rememberAnswer } from "~/features/solver/answer-cache.server";
 import { SOLVE_BODY_LIMIT_BYTES, solveRequest } from "~/features/solver/solve.server";
+import type { RoutePermissions } from "~/platform/permissions";
+
+export const permissions = { loader: "public", action: "solver.use" } satisfies RoutePermissions;
 
 export async function action({ request }: Route.ActionArgs) {
   if (request.method !== "POST") return apiError(400, "bad_request", "Use POST with a JSON body.");
-  await requireApiAccess(request, "solver.use");
+  await requireApiAccess(request, permissions.action);
   const text = await readBodyText(request, SOLVE_BODY_LIMIT_BYTES);
   const key = bodyKey(text);
   // `Cache-Control: no-cache` asks for a fresh solve (the benchmarks use it to time cold requests).
