@@ -1,14 +1,11 @@
 // The role × route matrix: each feature lists its loaders, actions and API
-// routes as cases in test/integration/access/cases/<feature>.ts, naming the
-// permission each needs; test/integration/access/matrix.test.ts runs every
-// case as every demo role and signed out, in-process against the test
-// database, and expects what the one permission table (app/platform/permissions.ts) says.
+// routes as cases in test/integration/access/cases/<feature>.ts;
+// test/integration/access/matrix.test.ts runs every case as every demo role and
+// signed out, in-process against the test database, and expects what the route
+// module declares (its `permissions` export) and the one permission table
+// (app/platform/permissions.ts) say together.
 import type { Database } from "../../../db/client";
-import type { Action } from "~/platform/permissions";
 import type { Caller, DemoIds, MakeRequest } from "../../support/routes";
-
-/** What a route needs: a permission, just a signed-in person, or nothing. */
-export type Requirement = Action | "signed-in" | "public";
 
 export type RouteCase = {
   /** e.g. "POST /robots/:robotId (save geometry)" */
@@ -17,7 +14,8 @@ export type RouteCase = {
   route: string;
   /** Which export the case calls. */
   kind: "loader" | "action";
-  needs: Requirement;
+  /** The intent the case posts, for an action told apart by one: what it needs is the module's declaration for that intent. */
+  intent?: string;
   /** A status an allowed caller gets besides 2xx/3xx (the 404 page answers 404 to everyone). */
   allowedStatus?: number;
   /** Runs before each caller, for cases that use up what they act on (a member to remove). */

@@ -1,5 +1,6 @@
 // Access cases for the shell, sign-in, workspaces, members, invitations, tokens and audit.
 import { randomBytes } from "node:crypto";
+import { eq } from "drizzle-orm";
 import { apiTokens, invitations, memberships, users } from "../../../../db/schema";
 import { act, load } from "../../../support/routes";
 import { uniqueName } from "../../../support/names";
@@ -37,68 +38,82 @@ async function throwawayMember(db: Parameters<NonNullable<RouteCase["prepare"]>>
   return { userId: user.id };
 }
 
-async function pendingInvitation(db: Parameters<NonNullable<RouteCase["prepare"]>>[0], workspaceId: string, role: "viewer" | "owner" = "viewer") {
+async function pendingInvitation(
+  db: Parameters<NonNullable<RouteCase["prepare"]>>[0],
+  workspaceId: string,
+  role: "viewer" | "owner" = "viewer",
+  email = `${uniqueName("invitee")}@example.test`,
+) {
   const token = randomBytes(12).toString("base64url");
   const [row] = await db
     .insert(invitations)
-    .values({ workspaceId, email: `${uniqueName("invitee")}@example.test`, role, tokenHash: hashToken(token), expiresAt: new Date(Date.now() + 86_400_000) })
+    .values({ workspaceId, email: email.toLowerCase(), role, tokenHash: hashToken(token), expiresAt: new Date(Date.now() + 86_400_000) })
     .returning();
   return { token, invitationId: row.id };
 }
 
 export const cases: RouteCase[] = [
-  { name: "GET (root)", route: "root.tsx", kind: "loader", needs: "public", run: (req) => req("GET", "/").then((r) => load(root, r)) },
-  { name: "GET /healthz", route: "routes/healthz.ts", kind: "loader", needs: "public", run: () => healthz.loader() },
-  { name: "GET (shell)", route: "routes/shell.tsx", kind: "loader", needs: "public", run: (req) => req("GET", "/").then((r) => load(shell, r)) },
-  { name: "GET /", route: "routes/home.tsx", kind: "loader", needs: "public", run: (req) => req("GET", "/").then((r) => load(home, r)) },
+  { name: "GET (root)", route: "root.tsx", kind: "loader", run: (req) => req("GET", "/").then((r) => load(root, r)) },
+  { name: "GET /healthz", route: "routes/healthz.ts", kind: "loader", run: () => healthz.loader() },
+  { name: "GET (shell)", route: "routes/shell.tsx", kind: "loader", run: (req) => req("GET", "/").then((r) => load(shell, r)) },
+  { name: "GET /", route: "routes/home.tsx", kind: "loader", run: (req) => req("GET", "/").then((r) => load(home, r)) },
   {
     name: "GET /sign-in",
     route: "routes/auth/sign-in.tsx",
     kind: "loader",
-    needs: "public",
     run: (req) => req("GET", "/sign-in").then((r) => load(signIn, r)),
   },
   {
     name: "POST /auth/github",
     route: "routes/auth/github.ts",
     kind: "action",
-    needs: "public",
     run: (req) => req("POST", "/auth/github", { form: { returnTo: "/robots" } }).then((r) => act(github, r)),
   },
   {
     name: "GET /auth/github/callback (no state: back to the authorize page)",
     route: "routes/auth/github-callback.ts",
     kind: "loader",
-    needs: "public",
     run: (req) => req("GET", "/auth/github/callback").then((r) => load(githubCallback, r)),
   },
   {
     name: "POST /sign-out",
     route: "routes/auth/sign-out.ts",
     kind: "action",
-    needs: "public",
     run: (req) => req("POST", "/sign-out").then((r) => act(signOut, r)),
   },
   {
     name: "POST /workspace (switch)",
     route: "routes/workspace-switch.ts",
     kind: "action",
-    needs: "signed-in",
     run: (req, ids) => req("POST", "/workspace", { form: { workspaceId: ids.workspaceId, returnTo: "/robots" } }).then((r) => act(workspaceSwitch, r)),
   },
-  { name: "GET /welcome", route: "routes/welcome.tsx", kind: "loader", needs: "signed-in", run: (req) => req("GET", "/welcome").then((r) => load(welcome, r)) },
+  { name: "GET /welcome", route: "routes/welcome.tsx", kind: "loader", run: (req) => req("GET", "/welcome").then((r) => load(welcome, r)) },
   {
     name: "POST /welcome (create a workspace)",
     route: "routes/welcome.tsx",
     kind: "action",
-    needs: "signed-in",
+    intent: "create",
     run: (req) => req("POST", "/welcome", { form: { intent: "create", name: uniqueName("Lab") } }).then((r) => act(welcome, r)),
+  },
+  {
+    name: "POST /welcome (accept an invitation sent to one's e-mail)",
+    route: "routes/welcome.tsx",
+    kind: "action",
+    intent: "accept",
+    // Into the demo workspace the caller is already in: accepting marks the invitation and adds no membership.
+    prepare: async (db, ids, caller) => {
+      const [user] = await db
+        .select({ email: users.email })
+        .from(users)
+        .where(eq(users.id, ids.userIds[caller === "signed-out" ? "viewer" : caller]));
+      return pendingInvitation(db, ids.workspaceId, "viewer", user.email);
+    },
+    run: (req, _ids, { invitationId }) => req("POST", "/welcome", { form: { intent: "accept", invitationId } }).then((r) => act(welcome, r)),
   },
   {
     name: "GET /invitations/:token",
     route: "routes/invitations/accept.tsx",
     kind: "loader",
-    needs: "signed-in",
     prepare: (db, ids) => pendingInvitation(db, ids.workspaceId),
     run: (req, _ids, { token }) => req("GET", `/invitations/${token}`).then((r) => load(acceptInvitation, r, { token })),
   },
@@ -106,7 +121,6 @@ export const cases: RouteCase[] = [
     name: "POST /invitations/:token (accept)",
     route: "routes/invitations/accept.tsx",
     kind: "action",
-    needs: "signed-in",
     prepare: (db, ids) => pendingInvitation(db, ids.workspaceId),
     run: (req, _ids, { token }) => req("POST", `/invitations/${token}`).then((r) => act(acceptInvitation, r, { token })),
   },
@@ -114,35 +128,31 @@ export const cases: RouteCase[] = [
     name: "GET /settings (layout)",
     route: "routes/settings/layout.tsx",
     kind: "loader",
-    needs: "workspace.read",
     run: (req) => req("GET", "/settings").then((r) => load(settingsLayout, r)),
   },
   {
     name: "GET /settings",
     route: "routes/settings/workspace.tsx",
     kind: "loader",
-    needs: "workspace.read",
     run: (req) => req("GET", "/settings").then((r) => load(workspaceSettings, r)),
   },
   {
     name: "POST /settings (rename)",
     route: "routes/settings/workspace.tsx",
     kind: "action",
-    needs: "workspace.manage",
     run: (req) => req("POST", "/settings", { form: { name: "Breakwater Robotics Lab" } }).then((r) => act(workspaceSettings, r)),
   },
   {
     name: "GET /settings/members",
     route: "routes/settings/members.tsx",
     kind: "loader",
-    needs: "members.read",
     run: (req) => req("GET", "/settings/members").then((r) => load(members, r)),
   },
   {
     name: "POST /settings/members (change a role)",
     route: "routes/settings/members.tsx",
     kind: "action",
-    needs: "members.changeRole",
+    intent: "change-role",
     prepare: (db, ids) => throwawayMember(db, ids.workspaceId),
     run: (req, _ids, { userId }) =>
       req("POST", "/settings/members", { form: { intent: "change-role", userId, role: "animator" } }).then((r) => act(members, r)),
@@ -151,7 +161,7 @@ export const cases: RouteCase[] = [
     name: "POST /settings/members (remove)",
     route: "routes/settings/members.tsx",
     kind: "action",
-    needs: "members.remove",
+    intent: "remove",
     prepare: (db, ids) => throwawayMember(db, ids.workspaceId),
     run: (req, _ids, { userId }) => req("POST", "/settings/members", { form: { intent: "remove", userId } }).then((r) => act(members, r)),
   },
@@ -159,7 +169,7 @@ export const cases: RouteCase[] = [
     name: "POST /settings/members (invite a viewer)",
     route: "routes/settings/members.tsx",
     kind: "action",
-    needs: "invitations.manage",
+    intent: "invite",
     run: (req) =>
       req("POST", "/settings/members", { form: { intent: "invite", email: `${uniqueName("new")}@example.test`, role: "viewer" } }).then((r) => act(members, r)),
   },
@@ -167,7 +177,7 @@ export const cases: RouteCase[] = [
     name: "POST /settings/members (resend)",
     route: "routes/settings/members.tsx",
     kind: "action",
-    needs: "invitations.manage",
+    intent: "resend",
     prepare: (db, ids) => pendingInvitation(db, ids.workspaceId),
     run: (req, _ids, { invitationId }) => req("POST", "/settings/members", { form: { intent: "resend", invitationId } }).then((r) => act(members, r)),
   },
@@ -175,7 +185,7 @@ export const cases: RouteCase[] = [
     name: "POST /settings/members (revoke)",
     route: "routes/settings/members.tsx",
     kind: "action",
-    needs: "invitations.manage",
+    intent: "revoke",
     prepare: (db, ids) => pendingInvitation(db, ids.workspaceId),
     run: (req, _ids, { invitationId }) => req("POST", "/settings/members", { form: { intent: "revoke", invitationId } }).then((r) => act(members, r)),
   },
@@ -183,21 +193,20 @@ export const cases: RouteCase[] = [
     name: "GET /settings/tokens",
     route: "routes/settings/tokens.tsx",
     kind: "loader",
-    needs: "tokens.manage",
     run: (req) => req("GET", "/settings/tokens").then((r) => load(tokens, r)),
   },
   {
     name: "POST /settings/tokens (create)",
     route: "routes/settings/tokens.tsx",
     kind: "action",
-    needs: "tokens.manage",
+    intent: "create",
     run: (req) => req("POST", "/settings/tokens", { form: { intent: "create", name: uniqueName("build") } }).then((r) => act(tokens, r)),
   },
   {
     name: "POST /settings/tokens (revoke one's own)",
     route: "routes/settings/tokens.tsx",
     kind: "action",
-    needs: "tokens.manage",
+    intent: "revoke",
     prepare: async (db, ids, caller) => {
       const userId = caller === "signed-out" ? ids.userIds.owner : ids.userIds[caller];
       const [row] = await db
@@ -212,29 +221,25 @@ export const cases: RouteCase[] = [
     name: "GET /settings/audit",
     route: "routes/settings/audit.tsx",
     kind: "loader",
-    needs: "audit.read",
     run: (req) => req("GET", "/settings/audit").then((r) => load(audit, r)),
   },
-  { name: "GET /local/mail", route: "routes/local/mail.tsx", kind: "loader", needs: "public", run: () => localMail.loader() },
+  { name: "GET /local/mail", route: "routes/local/mail.tsx", kind: "loader", run: () => localMail.loader() },
   {
     name: "GET /gaits",
     route: "routes/gaits/list.tsx",
     kind: "loader",
-    needs: "gaits.read",
     run: (req) => req("GET", "/gaits").then((r) => load(gaitList, r)),
   },
   {
     name: "GET /reviews",
     route: "routes/reviews.tsx",
     kind: "loader",
-    needs: "reviews.read",
     run: (req) => req("GET", "/reviews").then((r) => load(reviews, r)),
   },
   {
     name: "GET /no/such/page",
     route: "routes/not-found.tsx",
     kind: "loader",
-    needs: "public",
     allowedStatus: 404,
     run: () => Promise.resolve(notFound.loader()),
   },
@@ -242,7 +247,6 @@ export const cases: RouteCase[] = [
     name: "GET /api/v1/workspace",
     route: "routes/api.v1/workspace.ts",
     kind: "loader",
-    needs: "workspace.read",
     run: (req) => req("GET", "/api/v1/workspace").then((r) => load(apiWorkspace, r)),
   },
 ];

@@ -24,14 +24,13 @@ export const cases: RouteCase[] = [
     name: "GET /gaits/new",
     route: "routes/gaits/new.tsx",
     kind: "loader",
-    needs: "gaits.edit",
     run: (req) => req("GET", "/gaits/new").then((r) => load(newGait, r)),
   },
   {
     name: "POST /gaits/new (create from a template)",
     route: "routes/gaits/new.tsx",
     kind: "action",
-    needs: "gaits.edit",
+    intent: "create",
     run: (req, ids) =>
       req("POST", "/gaits/new", { form: { intent: "create", robotId: ids.robotIds[CRAWLER], name: uniqueName("Matrix tripod"), template: "tripod" } }).then(
         (r) => act(newGait, r),
@@ -41,7 +40,7 @@ export const cases: RouteCase[] = [
     name: "POST /gaits/new (keep edits as a copy)",
     route: "routes/gaits/new.tsx",
     kind: "action",
-    needs: "gaits.edit",
+    intent: "copy",
     prepare: async (db, ids) => ({ sequence: JSON.stringify((await draftOf(db, ids.gaitIds["Tripod cruise"])).draftSequence) }),
     run: (req, ids, prepared) =>
       req("POST", "/gaits/new", {
@@ -52,14 +51,13 @@ export const cases: RouteCase[] = [
     name: "GET /gaits/:gaitId/edit",
     route: "routes/gaits/editor.tsx",
     kind: "loader",
-    needs: "gaits.read",
     run: (req, ids) => req("GET", `/gaits/${ids.gaitIds[EDITED]}/edit`).then((r) => load(editor, r, { gaitId: ids.gaitIds[EDITED] })),
   },
   {
     name: "POST /gaits/:gaitId/edit (move the draft to the robot's newest revision)",
     route: "routes/gaits/editor.tsx",
     kind: "action",
-    needs: "gaits.edit",
+    intent: "move-to-newest-robot",
     // A newer robot revision for every caller, so that an allowed move has somewhere to go.
     prepare: async (db, ids) => {
       const gait = await draftOf(db, ids.gaitIds[EDITED]);
@@ -78,14 +76,12 @@ export const cases: RouteCase[] = [
     name: "GET /api/v1/gaits/:gaitId/draft",
     route: "routes/api.v1/gaits/draft.ts",
     kind: "loader",
-    needs: "gaits.read",
     run: (req, ids) => req("GET", `/api/v1/gaits/${ids.gaitIds[EDITED]}/draft`).then((r) => load(draftApi, r, { gaitId: ids.gaitIds[EDITED] })),
   },
   {
     name: "PUT /api/v1/gaits/:gaitId/draft",
     route: "routes/api.v1/gaits/draft.ts",
     kind: "action",
-    needs: "gaits.edit",
     prepare: async (db, ids) => {
       const gait = await draftOf(db, ids.gaitIds[EDITED]);
       return { baseRevision: String(gait.draftRevision), sequence: JSON.stringify(gait.draftSequence) };

@@ -35,14 +35,13 @@ export const cases: RouteCase[] = [
     name: "GET /robots",
     route: "routes/robots/list.tsx",
     kind: "loader",
-    needs: "robots.read",
     run: (req) => req("GET", "/robots").then((r) => load(list, r)),
   },
   {
     name: "POST /robots (create from the starter)",
     route: "routes/robots/list.tsx",
     kind: "action",
-    needs: "robots.edit",
+    intent: "create",
     run: (req) =>
       req("POST", "/robots?index", { form: { intent: "create", name: uniqueName("Matrix starter"), source: "starter-4" } }).then((r) => act(list, r)),
   },
@@ -50,7 +49,7 @@ export const cases: RouteCase[] = [
     name: "POST /robots (upload a definition)",
     route: "routes/robots/list.tsx",
     kind: "action",
-    needs: "robots.edit",
+    intent: "upload",
     run: async (req) => {
       const file = new File([JSON.stringify({ ...demoJson, name: uniqueName("Matrix upload") })], "walker.json", { type: "application/json" });
       return act(list, await multipart(req, "/robots?index", { intent: "upload", file }));
@@ -60,7 +59,7 @@ export const cases: RouteCase[] = [
     name: "POST /robots (import URDF)",
     route: "routes/robots/list.tsx",
     kind: "action",
-    needs: "robots.edit",
+    intent: "import-urdf",
     run: async (req) => {
       const file = new File([urdf], "test-crab.urdf", { type: "application/xml" });
       return act(list, await multipart(req, "/robots?index", { intent: "import-urdf", file, name: uniqueName("Matrix crab") }));
@@ -70,14 +69,13 @@ export const cases: RouteCase[] = [
     name: "GET /robots/:robotId",
     route: "routes/robots/robot.tsx",
     kind: "loader",
-    needs: "robots.read",
     run: (req, ids) => req("GET", `/robots/${ids.robotIds[ROBOT]}`).then((r) => load(robot, r, { robotId: ids.robotIds[ROBOT] })),
   },
   {
     name: "POST /robots/:robotId (save a calibration change)",
     route: "routes/robots/robot.tsx",
     kind: "action",
-    needs: "robots.calibrate",
+    intent: "save",
     prepare: (db, ids) => calibrationEdit(db, ids.robotIds[ROBOT]),
     run: (req, ids, prepared) =>
       req("POST", `/robots/${ids.robotIds[ROBOT]}`, { form: { intent: "save", message: "matrix", ...prepared } }).then((r) =>
@@ -88,14 +86,13 @@ export const cases: RouteCase[] = [
     name: "GET /robots/:robotId/revisions/:number",
     route: "routes/robots/revision.tsx",
     kind: "loader",
-    needs: "robots.read",
     run: (req, ids) => req("GET", `/robots/${ids.robotIds[ROBOT]}/revisions/1`).then((r) => load(revision, r, { robotId: ids.robotIds[ROBOT], number: "1" })),
   },
   {
     name: "POST /robots/:robotId/revisions/:number (restore)",
     route: "routes/robots/revision.tsx",
     kind: "action",
-    needs: "robots.calibrate",
+    intent: "restore",
     // Revision 1 differs from the newest only in calibration, so firmware may restore it too.
     prepare: async (db, ids) => {
       const { baseRevision, definition } = await calibrationEdit(db, ids.robotIds[ROBOT]);
@@ -112,7 +109,6 @@ export const cases: RouteCase[] = [
     name: "GET /robots/:robotId/revisions/:number/download",
     route: "routes/robots/download.ts",
     kind: "loader",
-    needs: "robots.read",
     run: (req, ids) =>
       req("GET", `/robots/${ids.robotIds[ROBOT]}/revisions/1/download`).then((r) => load(download, r, { robotId: ids.robotIds[ROBOT], number: "1" })),
   },
@@ -120,21 +116,18 @@ export const cases: RouteCase[] = [
     name: "GET /api/v1/robots",
     route: "routes/api.v1/robots/list.ts",
     kind: "loader",
-    needs: "robots.read",
     run: (req) => req("GET", "/api/v1/robots").then((r) => load(apiList, r)),
   },
   {
     name: "GET /api/v1/robots/:robotId",
     route: "routes/api.v1/robots/robot.ts",
     kind: "loader",
-    needs: "robots.read",
     run: (req, ids) => req("GET", `/api/v1/robots/${ids.robotIds[ROBOT]}`).then((r) => load(apiRobot, r, { robotId: ids.robotIds[ROBOT] })),
   },
   {
     name: "GET /api/v1/robots/:robotId/revisions/:number",
     route: "routes/api.v1/robots/revision.ts",
     kind: "loader",
-    needs: "robots.read",
     run: (req, ids) =>
       req("GET", `/api/v1/robots/${ids.robotIds[ROBOT]}/revisions/1`).then((r) => load(apiRevision, r, { robotId: ids.robotIds[ROBOT], number: "1" })),
   },
@@ -142,7 +135,6 @@ export const cases: RouteCase[] = [
     name: "GET /api/v1/schema/robot.json",
     route: "routes/api.v1/robots/schema.ts",
     kind: "loader",
-    needs: "public",
     run: (req) => req("GET", "/api/v1/schema/robot.json").then((r) => load(apiSchema, r)),
   },
 ];

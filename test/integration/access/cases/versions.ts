@@ -48,6 +48,7 @@ const versionStep = (intent: string, state: VersionState, fields: (ids: DemoIds)
   ({
     route: "routes/gaits/version.tsx",
     kind: "action",
+    intent,
     prepare: (db, ids) => versionIn(db, ids, state),
     run: (req, ids, { gaitId, number }) =>
       req("POST", `/gaits/${gaitId}/versions/${number}`, { form: { intent, ...fields(ids) } }).then((r) => act(versionPage, r, { gaitId, number })),
@@ -58,21 +59,19 @@ export const cases: RouteCase[] = [
     name: "GET /gaits?robot=:robotId (one robot's gaits)",
     route: "routes/gaits/list.tsx",
     kind: "loader",
-    needs: "gaits.read",
     run: (req, ids) => req("GET", `/gaits?robot=${ids.robotIds["Hull climber"]}`).then((r) => load(gaitList, r)),
   },
   {
     name: "GET /gaits/:gaitId (versions, sorted and filtered)",
     route: "routes/gaits/gait.tsx",
     kind: "loader",
-    needs: "gaits.read",
     run: (req, ids) => req("GET", `/gaits/${ids.gaitIds[GAIT]}?sort=margin&dir=asc&flags=clean`).then((r) => load(gaitPage, r, { gaitId: ids.gaitIds[GAIT] })),
   },
   {
     name: "POST /gaits/:gaitId (commit the draft)",
     route: "routes/gaits/gait.tsx",
     kind: "action",
-    needs: "versions.commit",
+    intent: "commit",
     run: (req, ids) =>
       req("POST", `/gaits/${ids.gaitIds[GAIT]}`, { form: { intent: "commit", message: uniqueName("Matrix commit") } }).then((r) =>
         act(gaitPage, r, { gaitId: ids.gaitIds[GAIT] }),
@@ -82,7 +81,7 @@ export const cases: RouteCase[] = [
     name: "POST /gaits/:gaitId (start a new draft from a version)",
     route: "routes/gaits/gait.tsx",
     kind: "action",
-    needs: "gaits.edit",
+    intent: "restore",
     prepare: draftState,
     run: (req, _ids, { gaitId, versionId, draftRevision }) =>
       req("POST", `/gaits/${gaitId}`, { form: { intent: "restore", versionId, draftRevision } }).then((r) => act(gaitPage, r, { gaitId })),
@@ -91,26 +90,22 @@ export const cases: RouteCase[] = [
     name: "GET /gaits/:gaitId/versions/:number",
     route: "routes/gaits/version.tsx",
     kind: "loader",
-    needs: "gaits.read",
     run: (req, ids) => req("GET", `/gaits/${ids.gaitIds[GAIT]}/versions/1`).then((r) => load(versionPage, r, { gaitId: ids.gaitIds[GAIT], number: "1" })),
   },
   {
     name: "POST /gaits/:gaitId/versions/:number (request review)",
-    needs: "versions.requestReview",
     ...versionStep("request-review", "committed", (ids) => ({ reviewerId: ids.userIds.lead, comment: "Please look" })),
   },
-  { name: "POST /gaits/:gaitId/versions/:number (approve)", needs: "versions.decide", ...versionStep("approve", "in-review") },
+  { name: "POST /gaits/:gaitId/versions/:number (approve)", ...versionStep("approve", "in-review") },
   {
     name: "POST /gaits/:gaitId/versions/:number (send back)",
-    needs: "versions.decide",
     ...versionStep("send-back", "in-review", () => ({ comment: "Lift the rear legs higher" })),
   },
-  { name: "POST /gaits/:gaitId/versions/:number (release)", needs: "versions.release", ...versionStep("release", "approved") },
+  { name: "POST /gaits/:gaitId/versions/:number (release)", ...versionStep("release", "approved") },
   {
     name: "GET /gaits/compare?a=&b=",
     route: "routes/gaits/compare.tsx",
     kind: "loader",
-    needs: "gaits.read",
     prepare: twoVersions,
     run: (req, _ids, { a, b }) => req("GET", `/gaits/compare?a=${a}&b=${b}`).then((r) => load(compare, r)),
   },
@@ -118,7 +113,6 @@ export const cases: RouteCase[] = [
     name: "GET /api/v1/gaits/:gaitId/versions",
     route: "routes/api.v1/gaits/versions.ts",
     kind: "loader",
-    needs: "gaits.read",
     run: (req, ids) => req("GET", `/api/v1/gaits/${ids.gaitIds[GAIT]}/versions`).then((r) => load(apiVersions, r, { gaitId: ids.gaitIds[GAIT] })),
   },
 ];
