@@ -48,7 +48,7 @@ describe("parseRobot: every problem as { path, message }", () => {
     ],
     ["a missing field", (r) => (Reflect.deleteProperty(r.legs[0], "femur"), r), [{ path: "legs[0].femur", message: "is required" }]],
     ["a number given as text", (r) => (Object.assign(r.legs[0], { coxa: "30" }), r), [{ path: "legs[0].coxa", message: 'must be a number (got "30")' }]],
-    ["a zero link length", (r) => ((r.legs[0].tibia = 0), r), [{ path: "legs[0].tibia", message: "must be positive (got 0)" }]],
+    ["a zero link length", (r) => ((r.legs[0].tibia = 0), r), [{ path: "legs[0].tibia", message: "must be at least 1 (got 0)" }]],
     [
       "a misspelt field",
       (r) => (Object.assign(r.legs[0].joints.coxa, { zeroOffset: 1 }), r),
@@ -91,8 +91,8 @@ describe("parseRobot: every problem as { path, message }", () => {
     robot.legs[0].coxa = -1;
     robot.legs[4].joints.femur.maxSpeedDegS = 0;
     expect(issuesOf(robot)).toEqual([
-      { path: "legs[0].coxa", message: "must be positive (got -1)" },
-      { path: "legs[4].joints.femur.maxSpeedDegS", message: "must be positive (got 0)" },
+      { path: "legs[0].coxa", message: "must be at least 1 (got -1)" },
+      { path: "legs[4].joints.femur.maxSpeedDegS", message: "must be at least 1 (got 0)" },
     ]);
   });
 });

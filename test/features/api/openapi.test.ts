@@ -15,6 +15,7 @@ import { PERMISSIONS } from "~/platform/permissions";
 import { loader as calibrationSchema } from "~/routes/api.v1/export/calibration-schema";
 import { loader as openapi } from "~/routes/api.v1/export/openapi";
 import { loader as sequenceSchema } from "~/routes/api.v1/export/sequence-schema";
+import { isBounded, numberSchemas } from "../../support/numbers";
 
 type ConfigEntry = { path?: string; file: string; children?: ConfigEntry[] };
 
@@ -195,5 +196,25 @@ describe("the schemas are the zod schemas'", () => {
   test("calibration.json is calibrationProfileJsonSchema() with its $id", async () => {
     const body = await calibrationSchema(get("/api/v1/schema/calibration.json")).json();
     expect(body).toEqual({ $id: "http://127.0.0.1:3000/api/v1/schema/calibration.json", ...calibrationProfileJsonSchema() });
+  });
+});
+
+describe("the published schemas say every number's physical range", () => {
+  test.each([
+    ["Robot", "robot.json"],
+    ["Sequence", "sequence.json"],
+  ])("every number of %s (%s) has a lower and an upper bound", (name) => {
+    const found = numberSchemas(document.components.schemas[name]);
+    expect(found.length).toBeGreaterThan(15);
+    expect(found.filter(({ schema }) => !isBounded(schema)).map(({ pointer }) => pointer)).toEqual([]);
+  });
+
+  test("a leg's links are 1 to 2 000 mm; a sequence's stride ±10 000 mm, its feet ±20 000 mm", async () => {
+    expect(document.components.schemas.Robot).toHaveProperty("properties.legs.items.properties.femur.maximum", 2000);
+    expect(document.components.schemas.Robot).toHaveProperty("properties.legs.items.properties.tibia.minimum", 1);
+    const served = numberSchemas(await sequenceSchema(get("/api/v1/schema/sequence.json")).json());
+    const field = (ending: string) => served.filter(({ pointer }) => pointer.endsWith(ending)).map(({ schema }) => [schema.minimum, schema.maximum]);
+    expect(field("/strideMm")).toEqual([[-10000, 10000]]);
+    expect(field("/foot/prefixItems/0")).toEqual([[-20000, 20000]]);
   });
 });

@@ -149,3 +149,54 @@ describe("POST /api/v1/ik", () => {
     expect(response.body.error.details?.[0].path).toBe("feet.XX");
   });
 });
+
+// Found by a probe: nothing capped link lengths, and a robot with 1e7 mm legs
+// kept a solve busy for 40 s (1e300: for ever) while /healthz waited behind it;
+// 1e200 mm legs made /api/v1/ik answer reachable with null angles. The parse
+// now refuses such a robot before any work, naming the field.
+describe("hostile robots are refused before any work", () => {
+  type Refusal = { error: { code: string; message: string; details: { path: string; message: string }[] } };
+  const withLinks = (lengthMm: number) => {
+    const json = demoRobotJson("pier-crawler");
+    for (const leg of json.legs) [leg.femur, leg.tibia] = [lengthMm, lengthMm];
+    return json;
+  };
+
+  test("POST /api/v1/solve with 1e7 mm femur and tibia: 422 naming the fields, well under a second (asserted < 5 s)", async () => {
+    // Keys without a foot take the neutral stance, the reach scan that took 40 s for such a robot.
+    const sequence = structuredClone(generateGait(robot, { template: "tripod", cycleMs: 1200, fps: 50, strideMm: 40 }));
+    for (const track of Object.values(sequence.legs)) for (const key of track.keys) delete key.foot;
+    const started = performance.now();
+    const response = await post(solve, "/api/v1/solve", { robot: withLinks(1e7), sequence });
+    const elapsedMs = performance.now() - started;
+    console.info(`POST /api/v1/solve with 1e7 mm links answered ${response.status} in ${elapsedMs.toFixed(1)} ms`);
+    expect(response.status).toBe(422);
+    const { error } = response.body as Refusal;
+    expect(error.code).toBe("invalid");
+    expect(error.details).toContainEqual({ path: "robot.legs[0].femur", message: "must be at most 2000 (got 10000000)" });
+    expect(error.details).toContainEqual({ path: "robot.legs[5].tibia", message: "must be at most 2000 (got 10000000)" });
+    expect(elapsedMs).toBeLessThan(5000);
+  });
+
+  test("POST /api/v1/ik with 1e200 mm femur and tibia: 422 naming the fields, no reachable answer with null angles", async () => {
+    const started = performance.now();
+    const response = await post(ik, "/api/v1/ik", { robot: withLinks(1e200), feet: { LF: [150, 120, -90] } });
+    const elapsedMs = performance.now() - started;
+    console.info(`POST /api/v1/ik with 1e200 mm links answered ${response.status} in ${elapsedMs.toFixed(1)} ms`);
+    expect(response.status).toBe(422);
+    const { error } = response.body as Refusal;
+    expect(error.details).toContainEqual({ path: "robot.legs[0].femur", message: "must be at most 2000 (got 1e+200)" });
+    expect(elapsedMs).toBeLessThan(5000);
+  });
+
+  test("POST /api/v1/solve with a 1e300 mm tibia and a 1e7 mm stride: 422 naming both", async () => {
+    const json = demoRobotJson("pier-crawler");
+    json.legs[3].tibia = 1e300;
+    const sequence = { ...generateGait(robot, { template: "tripod", cycleMs: 1200, fps: 50, strideMm: 40 }) };
+    sequence.generator = { ...sequence.generator, strideMm: 1e7 };
+    const response = await post(solve, "/api/v1/solve", { robot: json, sequence });
+    expect(response.status).toBe(422);
+    const { error } = response.body as Refusal;
+    expect(error.details).toEqual([{ path: "robot.legs[3].tibia", message: "must be at most 2000 (got 1e+300)" }]);
+  });
+});
