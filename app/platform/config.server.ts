@@ -1,5 +1,7 @@
 // Settings from the environment, read once. `npm start` and `npm test` set the
 // local values; production sets them itself (see the README).
+import { availableParallelism } from "node:os";
+
 export type Mode = "local" | "test" | "production";
 
 function required(name: string, fallback?: string): string {
@@ -31,5 +33,13 @@ export function config() {
       inboxUrl: local ? (process.env.MAIL_INBOX_URL ?? "http://127.0.0.1:2526") : null,
     },
     tokenRequestsPerMinute: Number(process.env.GAITLOOM_TOKEN_REQUESTS_PER_MINUTE ?? 120),
+    // Solves, table builds and URDF imports run on worker threads (app/platform/worker-pool.server.ts),
+    // one core left to the request thread. GAITLOOM_SOLVE_POOL=off runs them on the request thread, for comparison.
+    workerPool: {
+      enabled: process.env.GAITLOOM_SOLVE_POOL !== "off",
+      threads: Number(process.env.GAITLOOM_SOLVE_THREADS ?? Math.max(1, availableParallelism() - 1)),
+      // The longest a task may expect to wait for a thread; beyond it the request is refused with 503 and Retry-After.
+      queueBudgetMs: Number(process.env.GAITLOOM_SOLVE_QUEUE_BUDGET_MS ?? 5000),
+    },
   };
 }

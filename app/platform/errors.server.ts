@@ -9,7 +9,7 @@ import type { ApiErrorCode, DetailRecord, ErrorDetails, FormError, Issue } from 
 
 export type { ApiErrorCode, DetailRecord, ErrorDetails, FormError, Issue } from "./errors";
 
-export type ErrorStatus = 400 | 403 | 404 | 409 | 410 | 413 | 422;
+export type ErrorStatus = 400 | 403 | 404 | 409 | 410 | 413 | 422 | 503;
 
 /** The code a refusal has when its status says all there is to say. */
 const GENERAL_CODES: Record<ErrorStatus, string> = {
@@ -20,6 +20,7 @@ const GENERAL_CODES: Record<ErrorStatus, string> = {
   410: "gone",
   413: "too-large",
   422: "invalid",
+  503: "unavailable",
 };
 
 export class ServiceError extends Error {
@@ -57,7 +58,7 @@ const isIssueList = (details: ErrorDetails): details is readonly Issue[] => Arra
 
 /** The one JSON error shape of the API: `{ error: { code, message, details? } }`. */
 export function apiError(
-  status: 400 | 401 | 403 | 404 | 409 | 413 | 422 | 429,
+  status: 400 | 401 | 403 | 404 | 409 | 413 | 422 | 429 | 503,
   code: ApiErrorCode,
   message: string,
   details?: unknown,
@@ -74,17 +75,21 @@ const API_CODES: Record<ErrorStatus, ApiErrorCode> = {
   410: "not_found",
   413: "payload_too_large",
   422: "invalid",
+  503: "unavailable",
 };
 
 /**
  * A refusal as the API answers it. `code` stays one of the few the API
  * documents; a more specific code goes into `details.reason`, so clients that
- * only know the kinds keep working.
+ * only know the kinds keep working. A refusal for now (503) whose details
+ * give `retryAfterS` says when to try again in Retry-After too.
  */
 export function apiErrorOf(error: ServiceError): Response {
   const specific = error.code !== GENERAL_CODES[error.status];
   const details = specific && (error.details === undefined || !isIssueList(error.details)) ? { reason: error.code, ...error.details } : error.details;
-  return apiError(error.status === 410 ? 404 : error.status, API_CODES[error.status], error.message, details);
+  const { retryAfterS } = error.record;
+  const headers = error.status === 503 && typeof retryAfterS === "number" ? { "Retry-After": String(Math.max(1, Math.ceil(retryAfterS))) } : undefined;
+  return apiError(error.status === 410 ? 404 : error.status, API_CODES[error.status], error.message, details, headers);
 }
 
 /** Runs an API route's work; a refusal becomes its JSON error. */

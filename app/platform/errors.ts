@@ -17,4 +17,5 @@ export type DetailRecord = { field?: string; issues?: readonly Issue[]; [key: st
 export type FormError<Details extends ErrorDetails = ErrorDetails> = { error: string; code: string; field?: string; details?: Details };
 
 /** The `error.code` values of the JSON API, one per kind of refusal (the specific one goes into `details.reason`). */
-export type ApiErrorCode = "bad_request" | "unauthorized" | "forbidden" | "not_found" | "conflict" | "payload_too_large" | "invalid" | "rate_limited";
+export type ApiErrorCode =
+  "bad_request" | "unauthorized" | "forbidden" | "not_found" | "conflict" | "payload_too_large" | "invalid" | "rate_limited" | "unavailable";

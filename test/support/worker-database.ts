@@ -4,6 +4,7 @@
 import postgres from "postgres";
 import { afterAll } from "vitest";
 import { closeDatabase } from "~/platform/db.server";
+import { closeCorePool } from "~/platform/worker-pool.server";
 
 const adminUrl = process.env.GAITLOOM_TEST_ADMIN_URL;
 const template = process.env.GAITLOOM_TEST_TEMPLATE_DB;
@@ -27,4 +28,6 @@ process.env.DATABASE_URL = `${prefix}${worker}`;
 
 afterAll(async () => {
   await closeDatabase();
+  // Each test file loads the app afresh, with a worker pool of its own: its threads end with the file.
+  await closeCorePool();
 });
