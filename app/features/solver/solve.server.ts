@@ -1,14 +1,19 @@
 // The solver behind POST /api/v1/solve and /api/v1/ik: parse, check the
-// input fits, run the pure engine. The browser runs the same app/gait code.
+// input fits and is within the limits, run the pure engine on the worker
+// pool. The browser runs the same app/gait code.
 import { z } from "zod";
-import { columnsOf, encodeColumns, framesOf, GaitInputError, parseSequence, runSolve, type SolveOptions } from "../../gait/index";
-import { angleToPulse, JOINT_NAMES, parseRobot, solveLeg, type JointAngles, type Robot } from "../../kinematics/index";
+import { parseSequence, type Sequence } from "../../gait/index";
+import { parseRobot, type Robot } from "../../kinematics/index";
 import { ServiceError, type Issue } from "../../platform/errors.server";
+import { runCoreTask } from "../../platform/worker-pool.server";
+import { SOLVE_LAYOUTS, type GaitRefusal, type IkResult, type SolveLayout, type SolveTaskResult } from "../../workers/core-tasks";
+import { MAX_ANSWER_FLAGS, MAX_ANSWER_LEG_FRAMES, MAX_SOLVE_LEG_FRAMES } from "./limits";
 
 export const SOLVE_BODY_LIMIT_BYTES = 2 * 1024 * 1024;
 
-/** frames: DESIGN.md's layout; columns: the compact one (app/gait/columns.ts); checks: flags and summary only (the editor's reference). */
-export const SOLVE_LAYOUTS = ["frames", "columns", "checks"] as const;
+// The layouts and the IK answer are the worker task's (app/workers/core-tasks.ts).
+export { SOLVE_LAYOUTS };
+export type { IkResult };
 
 /** Input that does not parse or does not fit: 422 with the issues, by path into the body, as the details. */
 const inputIssues = (message: string, issues: Issue[]) => new ServiceError(422, "invalid", message, issues);
@@ -54,12 +59,7 @@ function shapeIssues(error: z.ZodError): { path: string; message: string }[] {
   return error.issues.map((issue) => ({ path: issue.path.join(".") || "(body)", message: issue.message }));
 }
 
-export type IkResult = Record<
-  string,
-  { reachable: boolean; reason?: string; angles: JointAngles; pulses: JointAngles; violations: ReturnType<typeof solveLeg>["violations"] }
->;
-
-export function solveFeet(body: unknown): IkResult {
+export async function solveFeet(body: unknown): Promise<IkResult> {
   const parsed = ikBody.safeParse(body);
   if (!parsed.success) throw inputIssues("The body must be { robot, feet: { LEG: [x, y, z] }, bodyPose? }.", shapeIssues(parsed.error));
   const robot = robotFrom(parsed.data.robot);
@@ -71,21 +71,57 @@ export function solveFeet(body: unknown): IkResult {
       unknown.map((id) => ({ path: `feet.${id}`, message: `no leg "${id}" on this robot (legs: ${[...legIds].join(", ")})` })),
     );
   }
-  const result: IkResult = {};
-  for (const [legId, foot] of Object.entries(parsed.data.feet)) {
-    const solved = solveLeg(robot, legId, foot, parsed.data.bodyPose);
-    const leg = robot.legs.find((candidate) => candidate.id === legId)!;
-    const pulses = Object.fromEntries(JOINT_NAMES.map((joint) => [joint, angleToPulse(leg.joints[joint], solved.angles[joint]).us])) as JointAngles;
-    result[legId] = { ...solved, pulses };
-  }
-  return result;
+  return runCoreTask("ik", { robot, feet: parsed.data.feet, bodyPose: parsed.data.bodyPose });
 }
 
-const utf8 = new TextEncoder();
-const base64 = (bytes: Uint8Array) => Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString("base64");
+/** Frames × legs within the solve limit and the layout's answer limit, or 422 naming the limit (before any solving). */
+function checkSolveSize(robot: Robot, sequence: Sequence, fps: number | undefined, layout: SolveLayout): void {
+  const cycleFrames = Math.round((sequence.cycleMs * (fps ?? sequence.fps)) / 1000);
+  const frames = sequence.loop ? cycleFrames : cycleFrames + 1;
+  const legs = robot.legs.length;
+  const legFrames = frames * legs;
+  const size = `${frames} frames × ${legs} legs = ${legFrames} leg-frames`;
+  const lowerRate = fps === undefined ? "a lower frame rate (options.fps)" : "a lower options.fps";
+  if (legFrames > MAX_SOLVE_LEG_FRAMES) {
+    throw new ServiceError(
+      422,
+      "too-many-frames",
+      `The solve is too large: ${size}, and one request solves at most ${MAX_SOLVE_LEG_FRAMES} (${MAX_SOLVE_LEG_FRAMES / 6} frames of a hexapod). Ask for ${lowerRate} or a shorter cycle.`,
+      { limit: MAX_SOLVE_LEG_FRAMES, legFrames, frames, legs },
+    );
+  }
+  const limit = MAX_ANSWER_LEG_FRAMES[layout];
+  if (legFrames > limit) {
+    const smaller = layout === "frames" ? "the columns or checks layout" : "the checks layout";
+    throw new ServiceError(
+      422,
+      "too-many-frames",
+      `The answer is too large: ${size}, and the ${layout} layout carries at most ${limit}. Ask for ${smaller}, or ${lowerRate}.`,
+      { limit, legFrames, frames, legs, layout },
+    );
+  }
+}
+
+function solveRefusal(refusal: Exclude<SolveTaskResult, { ok: true }>["refusal"]): ServiceError {
+  if (refusal.kind === "too-many-flags") {
+    return new ServiceError(
+      422,
+      "too-many-flags",
+      `The solve raised ${refusal.flags} flags, and an answer carries at most ${refusal.limit}. Solve at a lower frame rate (options.fps) to see where they are.`,
+      { limit: refusal.limit, flags: refusal.flags },
+    );
+  }
+  return gaitRefusal(refusal);
+}
+
+const gaitRefusal = (refusal: GaitRefusal) =>
+  inputIssues(
+    "The sequence does not fit this robot.",
+    refusal.issues.map((issue) => ({ path: issue.path ? `sequence.${issue.path}` : "sequence", message: issue.message })),
+  );
 
 /** The answer to POST /api/v1/solve as the UTF-8 bytes of its JSON, in the layout the options ask for. */
-export function solveRequest(body: unknown): Uint8Array<ArrayBuffer> {
+export async function solveRequest(body: unknown): Promise<Uint8Array<ArrayBuffer>> {
   const parsed = solveBody.safeParse(body);
   if (!parsed.success) throw inputIssues("The body must be { robot, sequence, options? }.", shapeIssues(parsed.error));
   const robot = robotFrom(parsed.data.robot);
@@ -97,20 +133,8 @@ export function solveRequest(body: unknown): Uint8Array<ArrayBuffer> {
     );
   }
   const { layout = "frames", ...options } = parsed.data.options ?? {};
-  let run;
-  try {
-    run = runSolve(robot, sequence.sequence, options as SolveOptions);
-  } catch (error) {
-    if (error instanceof GaitInputError) {
-      throw inputIssues(
-        "The sequence does not fit this robot.",
-        error.issues.map((issue) => ({ path: issue.path ? `sequence.${issue.path}` : "sequence", message: issue.message })),
-      );
-    }
-    throw error;
-  }
-  const { flags, summary } = run;
-  const answer =
-    layout === "columns" ? encodeColumns(columnsOf(run), base64) : layout === "checks" ? { flags, summary } : { frames: framesOf(run), flags, summary };
-  return utf8.encode(JSON.stringify(answer));
+  checkSolveSize(robot, sequence.sequence, options.fps, layout);
+  const solved = await runCoreTask("solve", { robot, sequence: sequence.sequence, options, layout, maxFlags: MAX_ANSWER_FLAGS });
+  if (!solved.ok) throw solveRefusal(solved.refusal);
+  return solved.answer;
 }

@@ -125,10 +125,10 @@ describe("the document holds together", () => {
     }
   });
 
-  test("the error shape and all eight error statuses are there", () => {
+  test("the error shape and all nine error statuses are there", () => {
     expect(document.components.schemas.Error).toHaveProperty("properties.error.required", ["code", "message"]);
     const statuses = new Set(operations.flatMap(({ operation }) => Object.keys(operation.responses)));
-    for (const status of ["400", "401", "403", "404", "409", "413", "422", "429"]) expect(statuses, status).toContain(status);
+    for (const status of ["400", "401", "403", "404", "409", "413", "422", "429", "503"]) expect(statuses, status).toContain(status);
   });
 });
 
@@ -151,7 +151,7 @@ describe("schemas come from the zod schemas", () => {
     expect(query.units.schema).toEqual({ default: "deg", type: "string", enum: ["deg", "rad", "us"] });
     expect(query.rate.schema).toEqual({ type: "number", exclusiveMinimum: 0, maximum: 1000 });
     expect(Object.values(query).every((parameter) => !parameter.required && parameter.description)).toBe(true);
-    expect(Object.keys(table.responses).sort()).toEqual(["200", "304", "400", "401", "403", "404", "409", "422", "429"]);
+    expect(Object.keys(table.responses).sort()).toEqual(["200", "304", "400", "401", "403", "404", "409", "422", "429", "503"]);
     const ok = table.responses["200"];
     expect(Object.keys("content" in ok ? (ok.content ?? {}) : {})).toEqual(["text/csv", "application/json", "text/x-c"]);
   });

@@ -60,7 +60,17 @@ export function queryParameters(schema: z.ZodType): OpenApiParameter[] {
   });
 }
 
-const ERROR_CODES: ApiErrorCode[] = ["bad_request", "unauthorized", "forbidden", "not_found", "conflict", "payload_too_large", "invalid", "rate_limited"];
+const ERROR_CODES: ApiErrorCode[] = [
+  "bad_request",
+  "unauthorized",
+  "forbidden",
+  "not_found",
+  "conflict",
+  "payload_too_large",
+  "invalid",
+  "rate_limited",
+  "unavailable",
+];
 
 const STATUS_RESPONSES = {
   400: ["BadRequest", "The request is malformed: a parameter or the JSON body; `details.parameter` names a bad query parameter."],
@@ -71,6 +81,10 @@ const STATUS_RESPONSES = {
   413: ["PayloadTooLarge", "The body is larger than the route's limit (the message gives both sizes)."],
   422: ["Unprocessable", "The input is well-formed but invalid: `details` lists the issues as `{ path, message }`."],
   429: ["TooManyRequests", "Too many requests with this token in a minute; the Retry-After header says when to try again."],
+  503: [
+    "ServiceUnavailable",
+    "The workers that solve and print tables are busy: the request would wait for one longer than the server allows (`details.reason` busy). The Retry-After header says when to try again.",
+  ],
 } as const;
 
 type Status = keyof typeof STATUS_RESPONSES;
@@ -89,6 +103,10 @@ export function errorResponses(): Record<string, OpenApiResponse> {
   responses.TooManyRequests = {
     ...responses.TooManyRequests,
     headers: { "Retry-After": { description: "Seconds until the next minute's allowance.", schema: { type: "integer" } } },
+  };
+  responses.ServiceUnavailable = {
+    ...responses.ServiceUnavailable,
+    headers: { "Retry-After": { description: "Seconds until the queue is expected to have room.", schema: { type: "integer" } } },
   };
   return responses;
 }

@@ -1,6 +1,6 @@
 // /api/v1/solve and /api/v1/ik: the gait engine, stateless.
 import { COLUMNS_ENCODING, COLUMNS_LAYOUT, FLAG_KINDS } from "../../../gait/index";
-import { SOLVE_LAYOUTS } from "../../solver/index.server";
+import { MAX_ANSWER_FLAGS, MAX_ANSWER_LEG_FRAMES, MAX_SOLVE_LEG_FRAMES, SOLVE_LAYOUTS } from "../../solver/index.server";
 import { AUTH, errorsFor, json, permission, ref, type Json, type OpenApiPaths } from "./common";
 
 export function solverPaths(): OpenApiPaths {
@@ -9,8 +9,13 @@ export function solverPaths(): OpenApiPaths {
       post: {
         operationId: "solveSequence",
         summary: "Solve a gait sequence for a robot",
-        description:
+        description: [
           "Every frame's foot positions, joint angles and pulses, the flags of every check, and a summary. Bodies up to 2 MiB; recent answers are cached (send `Cache-Control: no-cache` for a fresh solve).",
+          `Limits, counted in leg-frames (frames × legs; frames = cycleMs · fps / 1000, one more for a one-shot move): one request solves at most ${MAX_SOLVE_LEG_FRAMES} (${MAX_SOLVE_LEG_FRAMES / 6} frames of a hexapod);`,
+          `an answer carries at most ${MAX_ANSWER_LEG_FRAMES.frames} in the frames layout, ${MAX_ANSWER_LEG_FRAMES.columns} in the columns layout and ${MAX_ANSWER_LEG_FRAMES.checks} in the checks layout,`,
+          `and at most ${MAX_ANSWER_FLAGS} flags. Over a limit: 422, \`details.reason\` too-many-frames (with \`limit\` and \`legFrames\`) or too-many-flags.`,
+          "Solves run on a pool of worker threads; when the request would wait for one longer than the server allows: 503 with Retry-After.",
+        ].join(" "),
         tags: ["Solver"],
         requestBody: { required: true, content: json(ref("SolveRequest")) },
         responses: {
@@ -18,7 +23,7 @@ export function solverPaths(): OpenApiPaths {
             description: "The solved sequence in the layout asked for.",
             content: json({ oneOf: [ref("SolveResult"), ref("SolveColumns"), ref("SolveChecks")] }),
           },
-          ...errorsFor(400, ...AUTH, 413, 422),
+          ...errorsFor(400, ...AUTH, 413, 422, 503),
         },
         "x-permission": permission("solver.use"),
       },
@@ -30,7 +35,7 @@ export function solverPaths(): OpenApiPaths {
         description: "Closed-form leg IK per foot, with reachability, limit violations and pulse widths. Bodies up to 256 KiB.",
         tags: ["Solver"],
         requestBody: { required: true, content: json(ref("IkRequest")) },
-        responses: { "200": { description: "Angles per leg.", content: json(ref("IkResult")) }, ...errorsFor(400, ...AUTH, 413, 422) },
+        responses: { "200": { description: "Angles per leg.", content: json(ref("IkResult")) }, ...errorsFor(400, ...AUTH, 413, 422, 503) },
         "x-permission": permission("solver.use"),
       },
     },

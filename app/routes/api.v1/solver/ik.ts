@@ -14,7 +14,7 @@ export async function action({ request }: Route.ActionArgs) {
   if (request.method !== "POST") return apiError(400, "bad_request", "Use POST with a JSON body.");
   await requireApiAccess(request, permissions.action);
   const body = await readJsonBody(request, IK_BODY_LIMIT_BYTES);
-  return apiAction(async () => Response.json({ legs: solveFeet(body) }, { headers: { "Cache-Control": "no-store" } }));
+  return apiAction(async () => Response.json({ legs: await solveFeet(body) }, { headers: { "Cache-Control": "no-store" } }));
 }
 
 export function loader() {

@@ -20,7 +20,7 @@ export async function action({ request }: Route.ActionArgs) {
   const fresh = /no-cache/.test(request.headers.get("Cache-Control") ?? "");
   const cached = fresh ? undefined : cachedAnswer(key);
   return apiAction(async () => {
-    const answer = cached ?? solveRequest(parseJsonText(text));
+    const answer = cached ?? (await solveRequest(parseJsonText(text)));
     if (cached === undefined) rememberAnswer(key, answer);
     return new Response(answer, {
       headers: { "Content-Type": "application/json", "Cache-Control": "no-store", "X-Solve-Cache": cached !== undefined ? "hit" : "miss" },
