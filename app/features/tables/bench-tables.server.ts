@@ -3,16 +3,18 @@
 // through its range and checked for speed. Named by an ETag like a version's
 // table, and every download goes into the audit log.
 import { createHash } from "node:crypto";
-import { EXPORTER_VERSION, TableExportError, centreTable, sweepTable, type BenchTable } from "../../export/index";
+import { EXPORTER_VERSION } from "../../export/index";
 import { SOLVER_VERSION } from "../../gait/index";
 import { JOINT_NAMES, type JointName, type Robot } from "../../kinematics/index";
 import { recordAudit } from "../../platform/audit.server";
 import { database, type Reader } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
+import { runCoreTask } from "../../platform/worker-pool.server";
+import type { BenchChecks } from "../../workers/core-tasks";
 import { newestRevisionInWorkspace, robotOfRevision } from "../robots/index.server";
 import { canonicalJson } from "../versions/index.server";
 import { tableEtag, type BenchQuery, type TableCalibration } from "./query";
-import { renderTable, tableCalibration, type Downloader, type RenderedTable } from "./render.server";
+import { tableCalibration, tableOrRefusal, type Downloader, type RenderedTable } from "./render.server";
 
 export type PreparedBench = {
   robot: Robot;
@@ -61,49 +63,64 @@ export async function prepareBenchTable(workspaceId: string, robotId: string, qu
 
 const benchName = (query: BenchQuery) => (query.kind === "centre" ? "centre" : `sweep-${query.leg}-${query.joint}`);
 
-export function renderBenchTable(prepared: PreparedBench): RenderedTable & { bench: BenchTable } {
+export type { BenchChecks };
+
+/**
+ * Makes the bench table's frames and prints the table, on the worker pool:
+ * the frames' checks, and the table or the refusal to print it (the
+ * bring-up page shows the checks either way). Options the frames cannot be
+ * made with are refused (400) naming the query parameter.
+ */
+export async function makeBenchTable(prepared: PreparedBench): Promise<{ checks: BenchChecks; table: RenderedTable | ServiceError }> {
   const { query, robot } = prepared;
-  let bench: BenchTable;
-  try {
-    bench =
+  const made = await runCoreTask("benchTable", {
+    robot,
+    bench:
       query.kind === "centre"
-        ? centreTable(robot, { seconds: query.seconds, fps: query.fps })
-        : sweepTable(robot, {
+        ? { kind: "centre", seconds: query.seconds, fps: query.fps }
+        : {
+            kind: "sweep",
             legId: query.leg!,
             joint: query.joint as JointName,
             fps: query.fps,
             speedFraction: query.speed,
             dwellMs: query.dwell,
             hold: query.hold,
-          });
-  } catch (error) {
-    if (error instanceof TableExportError) {
-      const parameter =
-        { fps: "fps", seconds: "seconds", speedFraction: "speed", dwellMs: "dwell", legId: "leg", joint: "joint" }[error.issues[0]?.path ?? ""] ?? undefined;
-      throw new ServiceError(400, "bad-request", `The bench table cannot be made: ${error.message}.`, {
-        ...(parameter ? { parameter } : {}),
-        issues: error.issues,
-      });
-    }
-    throw error;
-  }
-  const rendered = renderTable(robot, bench, query.format, {
-    units: query.units,
-    meta: {
-      robotName: prepared.robotRow.name,
-      robotRevision: prepared.robotRow.revision,
-      // The robot's name first, so that the file and the C identifiers say which robot the bench table is for.
-      gaitName: `${prepared.robotRow.name} ${bench.name}`,
-      gaitVersion: "bench",
-      contentHash: prepared.contentHash,
-      loop: bench.loop,
-      solverVersion: SOLVER_VERSION,
-      exporterVersion: EXPORTER_VERSION,
+          },
+    format: query.format,
+    table: {
+      units: query.units,
+      meta: {
+        robotName: prepared.robotRow.name,
+        robotRevision: prepared.robotRow.revision,
+        // The robot's name first, so that the file and the C identifiers say which robot the bench table is for.
+        gaitName: `${prepared.robotRow.name} ${benchName(query)}`,
+        gaitVersion: "bench",
+        contentHash: prepared.contentHash,
+        solverVersion: SOLVER_VERSION,
+        exporterVersion: EXPORTER_VERSION,
+      },
+      calibration: prepared.calibration?.profile,
+      overrideReason: query.override,
     },
-    calibration: prepared.calibration?.profile,
-    overrideReason: query.override,
   });
-  return { ...rendered, bench };
+  if (!made.ok) {
+    const { refusal } = made;
+    const parameter =
+      { fps: "fps", seconds: "seconds", speedFraction: "speed", dwellMs: "dwell", legId: "leg", joint: "joint" }[refusal.issues[0]?.path ?? ""] ?? undefined;
+    throw new ServiceError(400, "bad-request", `The bench table cannot be made: ${refusal.message}.`, {
+      ...(parameter ? { parameter } : {}),
+      issues: refusal.issues,
+    });
+  }
+  return { checks: made.checks, table: tableOrRefusal(made.printed, "The bench table cannot be solved") };
+}
+
+/** The bench table's bytes with its checks; a refusal to print it is thrown. */
+export async function renderBenchTable(prepared: PreparedBench): Promise<RenderedTable & { checks: BenchChecks }> {
+  const { checks, table } = await makeBenchTable(prepared);
+  if (table instanceof ServiceError) throw table;
+  return { ...table, checks };
 }
 
 export async function recordBenchDownload(downloader: Downloader, prepared: PreparedBench, rendered: RenderedTable): Promise<void> {

@@ -42,7 +42,7 @@ export async function recordReleaseTable(
   const make = (reason: string | null) => renderVersionTable(prepareReleaseTable(version, RELEASE_TABLE.format, RELEASE_TABLE.units, reason));
   let rendered: RenderedTable;
   try {
-    rendered = make(overrideReason);
+    rendered = await make(overrideReason);
   } catch (error) {
     if (!(error instanceof ServiceError && error.code === "override-required")) throw error;
     const [event] = await tx
@@ -59,7 +59,7 @@ export async function recordReleaseTable(
       );
     }
     overrideReason = event.reason;
-    rendered = make(overrideReason);
+    rendered = await make(overrideReason);
   }
   const [release] = await tx
     .insert(releases)

@@ -1,32 +1,17 @@
 // What a gait version's table and a bench table share: the calibration
-// profile they apply, the bytes (from app/export) with their hash and file
-// name, and the exporter's refusals as the API answers them.
-import { createHash } from "node:crypto";
-import {
-  TABLE_MEDIA_TYPES,
-  TableExportError,
-  angleTableData,
-  formatAngleTable,
-  tableFileName,
-  type AngleTableData,
-  type CalibrationProfile,
-  type TableFormat,
-} from "../../export/index";
-import type { Flag, SolvedSequence } from "../../gait/index";
-import type { Robot } from "../../kinematics/index";
+// profile they apply, the bytes (printed by app/export on the worker pool)
+// with their hash and file name, and the exporter's refusals as the API
+// answers them.
+import type { CalibrationProfile } from "../../export/index";
+import type { FlagKind } from "../../gait/index";
 import type { Reader } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
+import type { ExportRefusal, PrintedTable, TableTaskResult } from "../../workers/core-tasks";
 import { findProfileByName, type StoredProfile } from "../robots/index.server";
 import type { TableCalibration } from "./query";
 
-export type RenderedTable = {
-  data: AngleTableData;
-  solved: SolvedSequence;
-  body: string;
-  sha256: string;
-  fileName: string;
-  mediaType: string;
-};
+/** The table's bytes (UTF-8), their SHA-256 in hex, its file name and media type, and its numbers for a preview. */
+export type RenderedTable = PrintedTable;
 
 /** Who downloaded a table, for the audit log. */
 export type Downloader = { workspaceId: string; userId: string; tokenId: string | null };
@@ -48,21 +33,17 @@ export async function tableCalibration(robotId: string, name: string | undefined
   return { name: found.profile.name, revision: found.profile.revision, profile: headerProfile(found.profile) };
 }
 
-function describeFlags(flags: readonly Flag[]): Record<string, number> {
-  const byKind: Record<string, number> = {};
-  for (const flag of flags) if (flag.severity === "error") byKind[flag.kind] = (byKind[flag.kind] ?? 0) + 1;
-  return byKind;
-}
+type ExportError = Omit<ExportRefusal, "kind">;
 
 /** The exporter's sentence without the issue list it appends (the issues go into `details`). */
-function sentenceOf(error: TableExportError): string {
+function sentenceOf(error: ExportError): string {
   const details = error.issues.map((issue) => (issue.path ? `${issue.path}: ${issue.message}` : issue.message)).join("; ");
   const text = details && error.message.endsWith(`: ${details}`) ? error.message.slice(0, -details.length - 2) : error.message;
   return `${text[0].toUpperCase()}${text.slice(1)}`;
 }
 
 /** The exporter's refusals, under its own codes: an override is a conflict (409), the rest do not fit (422). */
-function refusalOf(error: TableExportError, solved: SolvedSequence | null): ServiceError {
+function refusalOf(error: ExportError, errorFlags: Partial<Record<FlagKind, number>>): ServiceError {
   const summary = sentenceOf(error);
   if (error.code === "override-required") {
     return new ServiceError(
@@ -72,7 +53,7 @@ function refusalOf(error: TableExportError, solved: SolvedSequence | null): Serv
       {
         parameter: "override",
         summary,
-        errorFlags: solved ? describeFlags(solved.flags) : {},
+        errorFlags,
         issues: error.issues,
       },
     );
@@ -85,22 +66,14 @@ function refusalOf(error: TableExportError, solved: SolvedSequence | null): Serv
   });
 }
 
-/** Prints a solved result as a table in `format`; the exporter's refusals become ServiceErrors. */
-export function renderTable(robot: Robot, solved: SolvedSequence, format: TableFormat, options: Parameters<typeof angleTableData>[2]): RenderedTable {
-  let data: AngleTableData;
-  try {
-    data = angleTableData(robot, solved, options);
-  } catch (error) {
-    if (error instanceof TableExportError) throw refusalOf(error, solved);
-    throw error;
-  }
-  const body = formatAngleTable(data, format);
-  return {
-    data,
-    solved,
-    body,
-    sha256: createHash("sha256").update(body, "utf8").digest("hex"),
-    fileName: tableFileName(data.meta, format),
-    mediaType: TABLE_MEDIA_TYPES[format],
-  };
+/**
+ * A table the worker pool printed, or the refusal to print it as a
+ * ServiceError: the exporter's under its own codes, the gait engine's (the
+ * sequence cannot be solved) as 422 with `cannotSolve` saying what.
+ */
+export function tableOrRefusal(result: TableTaskResult, cannotSolve: string): RenderedTable | ServiceError {
+  if (result.ok) return result.table;
+  const { refusal } = result;
+  if (refusal.kind === "table-export") return refusalOf(refusal, result.errorFlags);
+  return new ServiceError(422, "invalid", `${cannotSolve}: ${refusal.message}`, { issues: refusal.issues });
 }

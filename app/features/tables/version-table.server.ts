@@ -6,15 +6,17 @@
 // released table can be made again byte for byte.
 import { and, desc, eq } from "drizzle-orm";
 import { gaitVersions, gaits, robotRevisions, robots, type VersionState } from "../../../db/schema";
-import { EXPORTER_VERSION, solveForTable, type TableFormat, type TableUnits } from "../../export/index";
-import { GaitInputError, MAX_FRAMES, SOLVER_VERSION, parseSequence, type Sequence, type SolvedSequence } from "../../gait/index";
+import { EXPORTER_VERSION, type TableFormat, type TableUnits } from "../../export/index";
+import { MAX_FRAMES, SOLVER_VERSION, parseSequence, type Sequence } from "../../gait/index";
 import type { Robot } from "../../kinematics/index";
 import { recordAudit } from "../../platform/audit.server";
 import { database, type Reader } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
+import { runCoreTask } from "../../platform/worker-pool.server";
 import { robotOfRevision } from "../robots/index.server";
+import { MAX_SOLVE_LEG_FRAMES } from "../solver/index.server";
 import { tableEtag, type TableCalibration, type TableQuery } from "./query";
-import { renderTable, tableCalibration, type Downloader, type RenderedTable } from "./render.server";
+import { tableCalibration, tableOrRefusal, type Downloader, type RenderedTable } from "./render.server";
 
 // ---------------------------------------------------------------------------
 // Finding a version
@@ -131,12 +133,22 @@ export type PreparedTable = {
   etag: string;
 };
 
-function checkRate(sequence: Sequence, rateHz: number): void {
+function checkRate(robot: Robot, sequence: Sequence, rateHz: number): void {
   const frames = Math.round((sequence.cycleMs * rateHz) / 1000);
   if (frames < 1 || frames > MAX_FRAMES) {
     throw new ServiceError(400, "bad-request", `rate ${rateHz} Hz gives ${frames} frames for a ${sequence.cycleMs} ms cycle; 1 to ${MAX_FRAMES} allowed.`, {
       parameter: "rate",
     });
+  }
+  // The table is a fresh solve, held to the solve API's limit.
+  const legFrames = frames * robot.legs.length;
+  if (legFrames > MAX_SOLVE_LEG_FRAMES) {
+    throw new ServiceError(
+      422,
+      "too-many-frames",
+      `rate ${rateHz} Hz gives ${frames} frames × ${robot.legs.length} legs = ${legFrames} leg-frames to solve; at most ${MAX_SOLVE_LEG_FRAMES} are solved for one table.`,
+      { parameter: "rate", limit: MAX_SOLVE_LEG_FRAMES, legFrames },
+    );
   }
 }
 
@@ -152,7 +164,7 @@ export async function prepareVersionTable(
   const robot = robotOf(version);
   const sequence = sequenceOf(version);
   const rateHz = query.rate ?? sequence.fps;
-  checkRate(sequence, rateHz);
+  checkRate(robot, sequence, rateHz);
   const calibration = await tableCalibration(version.robot.id, query.profile, db);
   const overrideReason = query.override ?? null;
   return {
@@ -190,32 +202,33 @@ function versionTableEtag(version: TableVersion, settings: Pick<PreparedTable, "
 // ---------------------------------------------------------------------------
 // Making the bytes, and the audit log
 
-/** Solves the version at the table's rate (solveForTable: a fresh solve) and prints the table. */
-export function renderVersionTable(prepared: PreparedTable): RenderedTable {
-  let solved: SolvedSequence;
-  try {
-    solved = solveForTable(prepared.robot, prepared.sequence, prepared.rateHz);
-  } catch (error) {
-    if (error instanceof GaitInputError)
-      throw new ServiceError(422, "invalid", `Version ${prepared.version.number} cannot be solved: ${error.message}`, { issues: error.issues });
-    throw error;
-  }
+/** Solves the version at the table's rate (a fresh solve) and prints the table, on the worker pool. */
+export async function renderVersionTable(prepared: PreparedTable): Promise<RenderedTable> {
   const { version } = prepared;
-  return renderTable(prepared.robot, solved, prepared.format, {
-    units: prepared.units,
-    meta: {
-      robotName: version.robot.name,
-      robotRevision: version.robot.revision,
-      gaitName: version.gait.name,
-      gaitVersion: version.number,
-      contentHash: version.contentHash,
-      loop: prepared.sequence.loop,
-      solverVersion: SOLVER_VERSION,
-      exporterVersion: EXPORTER_VERSION,
+  const printed = await runCoreTask("versionTable", {
+    robot: prepared.robot,
+    sequence: prepared.sequence,
+    rateHz: prepared.rateHz,
+    format: prepared.format,
+    table: {
+      units: prepared.units,
+      meta: {
+        robotName: version.robot.name,
+        robotRevision: version.robot.revision,
+        gaitName: version.gait.name,
+        gaitVersion: version.number,
+        contentHash: version.contentHash,
+        loop: prepared.sequence.loop,
+        solverVersion: SOLVER_VERSION,
+        exporterVersion: EXPORTER_VERSION,
+      },
+      calibration: prepared.calibration?.profile,
+      overrideReason: prepared.overrideReason ?? undefined,
     },
-    calibration: prepared.calibration?.profile,
-    overrideReason: prepared.overrideReason ?? undefined,
   });
+  const table = tableOrRefusal(printed, `Version ${version.number} cannot be solved`);
+  if (table instanceof ServiceError) throw table;
+  return table;
 }
 
 export async function recordTableDownload(

@@ -3,13 +3,12 @@
 // command. Page composition only; the tables themselves come from
 // app/features/tables, the same code as the download API.
 import { z } from "zod";
-import { centreTable, sweepTable, type BenchTable } from "~/export";
-import { JOINT_NAMES, parseRobot, type JointName } from "~/kinematics";
+import { JOINT_NAMES, parseRobot } from "~/kinematics";
 import { listProfiles } from "~/features/robots/calibration.server";
 import { attempt, ServiceError } from "~/platform/errors.server";
 import { id, versionOrReleased } from "~/platform/params";
 import { newestRevisionInWorkspace } from "~/features/robots/robots.server";
-import { prepareBenchTable, renderBenchTable, type PreparedBench } from "~/features/tables/bench-tables.server";
+import { makeBenchTable, prepareBenchTable } from "~/features/tables/bench-tables.server";
 import { benchQuerySchema, parseQuery, tableQuerySchema, type TableQuery } from "~/features/tables/query";
 import { releaseRecordOf, type ReleaseRecord } from "~/features/tables/releases.server";
 import type { RenderedTable } from "~/features/tables/render.server";
@@ -142,7 +141,7 @@ export async function exportPageData(workspaceId: string, search: URLSearchParam
     sequence = { fps: prepared.sequence.fps, cycleMs: prepared.sequence.cycleMs, loop: prepared.sequence.loop };
     const record = await releaseRecordOf(prepared.version.id);
     if (record) release = { ...record, matches: null, path: `/api/v1/gaits/${gait.id}/versions/${prepared.version.number}/table?${record.tableFormat}` };
-    const rendered = renderVersionTable(prepared);
+    const rendered = await renderVersionTable(prepared);
     table = previewOf(rendered);
     // The page's table is the release's canonical one when its query is the recorded one: then the hashes must agree.
     if (
@@ -256,17 +255,16 @@ export async function benchPageData(workspaceId: string, search: URLSearchParams
     const made = await attempt(async () => {
       const prepared = await prepareBenchTable(workspaceId, robotChoice.id, benchQuery);
       // The checks are shown even when the table needs an override to be made.
-      const printed = await attempt(() => renderBenchTable(prepared));
-      if (!printed.ok) problem = problemOf(printed.refusal);
-      const rendered = printed.ok ? printed.value : null;
-      const bench = rendered?.bench ?? benchOnly(prepared);
+      const { checks: bench, table: printed } = await makeBenchTable(prepared);
+      if (printed instanceof ServiceError) problem = problemOf(printed);
+      const rendered = printed instanceof ServiceError ? null : printed;
       const joint = query.kind === "sweep" ? prepared.robot.legs.find((leg) => leg.id === query.leg)!.joints[query.joint!] : null;
       checks = {
         flags: bench.flags.slice(0, 50).map((flag) => ({ frame: flag.frame, kind: flag.kind, severity: flag.severity, message: flag.message })),
         totalFlags: bench.flags.length,
         peakSpeedDegS: query.kind === "sweep" ? (bench.summary.peakSpeedDegS[query.leg!]?.[query.joint!] ?? null) : null,
         limitDegS: joint?.maxSpeedDegS ?? null,
-        durationS: bench.frames.length / query.fps,
+        durationS: bench.frameCount / query.fps,
       };
       if (rendered) {
         table = previewOf(rendered);
@@ -285,19 +283,4 @@ export async function benchPageData(workspaceId: string, search: URLSearchParams
     checks,
     download,
   };
-}
-
-/** The bench table's solved frames alone (for its checks), when the table itself is refused. */
-function benchOnly(prepared: PreparedBench): BenchTable {
-  const { query, robot } = prepared;
-  return query.kind === "centre"
-    ? centreTable(robot, { seconds: query.seconds, fps: query.fps })
-    : sweepTable(robot, {
-        legId: query.leg!,
-        joint: query.joint as JointName,
-        fps: query.fps,
-        speedFraction: query.speed,
-        dwellMs: query.dwell,
-        hold: query.hold,
-      });
 }

@@ -2,6 +2,7 @@
 import { TABLE_FORMAT, TABLE_MEDIA_TYPES } from "../../../export/index";
 import { NUMBER_PATTERN } from "../../../platform/params";
 import { RELEASE_TABLE, benchQuerySchema, tableQuerySchema } from "../../tables/index.server";
+import { MAX_SOLVE_LEG_FRAMES } from "../../solver/index.server";
 import { AUTH, errorsFor, etagResponses, ifNoneMatch, permission, queryParameters, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
 
 const tableHeadersDoc = {
@@ -43,7 +44,7 @@ export function benchTablePaths(): OpenApiPaths {
         responses: {
           "200": { description: "The table as a file.", headers: tableHeadersDoc, content: tableContent },
           ...etagResponses("The table is"),
-          ...errorsFor(400, ...AUTH, 404, 409, 422),
+          ...errorsFor(400, ...AUTH, 404, 409, 422, 503),
         },
         "x-permission": permission("tables.download"),
       },
@@ -64,6 +65,7 @@ export function angleTablePaths(): OpenApiPaths {
           "A version with error flags, or pulses clamped to the servo range, is exported only with an `override` reason (409 without it), written into the header.",
           `Tables are reproducible byte for byte; a release stores the SHA-256 of its canonical table (format=${RELEASE_TABLE.format}&units=${RELEASE_TABLE.units}) with the solver and exporter versions.`,
           "Every download (not a 304) is recorded in the workspace's audit log.",
+          `A table solves at most ${MAX_SOLVE_LEG_FRAMES} leg-frames (frames × legs; 422 too-many-frames naming \`rate\` beyond). Tables are made on a pool of worker threads; when the request would wait for one longer than the server allows: 503 with Retry-After.`,
         ].join(" "),
         tags: ["Tables"],
         parameters: [
@@ -81,7 +83,7 @@ export function angleTablePaths(): OpenApiPaths {
         responses: {
           "200": { description: "The table as a file.", headers: tableHeadersDoc, content: tableContent },
           ...etagResponses("The table is"),
-          ...errorsFor(400, ...AUTH, 404, 409, 422),
+          ...errorsFor(400, ...AUTH, 404, 409, 422, 503),
         },
         "x-permission": permission("tables.download"),
       },

@@ -21,7 +21,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     if (matchesIfNoneMatch(request.headers.get("If-None-Match"), prepared.etag)) {
       return new Response(null, { status: 304, headers: tableHeaders(prepared.etag) });
     }
-    const rendered = renderVersionTable(prepared);
+    const rendered = await renderVersionTable(prepared);
     // A HEAD asks about the file without taking it: not a download.
     if (request.method !== "HEAD")
       await recordTableDownload({ workspaceId: member.workspace.id, userId: member.user.id, tokenId: member.tokenId }, prepared, rendered, number);
