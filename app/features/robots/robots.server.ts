@@ -3,11 +3,12 @@
 // transaction with optimistic concurrency on the revision number it started from.
 import { and, desc, eq, ne, sql } from "drizzle-orm";
 import { robotRevisions, robots, users, type Role } from "../../../db/schema";
-import { importUrdf, parseRobot, type DefinitionIssue, type Robot } from "~/kinematics";
+import { parseRobot, type DefinitionIssue, type Robot } from "~/kinematics";
 import { recordAudit } from "../../platform/audit.server";
 import { database, isUniqueViolation, type Reader } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
 import { formatTime } from "../../platform/format";
+import { runCoreTask } from "../../platform/worker-pool.server";
 import { can, ROLE_LABELS } from "../../platform/permissions";
 import { changedFields, describeChange, nonCalibrationChanges, summarizeChanges, type FieldChange } from "./changes";
 import type { SaveRefusalDetails } from "./results";
@@ -256,7 +257,8 @@ export async function createRobotFromUrdf(
   xml: string,
   options: { workspaceId: string; authorId: string; fileName: string; name?: string },
 ): Promise<CreatedRobot & { report: string[] }> {
-  const imported = importUrdf(xml, options.name ? { name: options.name } : {});
+  // Parsing up to a megabyte of XML takes a while: on the worker pool.
+  const imported = await runCoreTask("urdf", { xml, options: options.name ? { name: options.name } : {} });
   if (!imported.ok) throw new ServiceError(422, "invalid", `${options.fileName} cannot be imported. Nothing was saved.`, { issues: imported.issues });
   const created = await insertRobot(imported.robot, {
     workspaceId: options.workspaceId,

@@ -6,7 +6,7 @@
 import { and, asc, desc, eq, ilike, max, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { gaitVersions, gaits, reviewEvents, robotRevisions, robots, users, type VersionState } from "../../../db/schema";
-import { GaitInputError, parseSequence, sequenceIssuesForRobot, solveSequence, type Sequence, type SolveSummary, type SolvedSequence } from "../../gait/index";
+import { parseSequence, sequenceIssuesForRobot, type Flag, type Sequence, type SolveSummary, type SolvedSequence } from "../../gait/index";
 import type { Robot } from "../../kinematics/index";
 import type { Database } from "../../../db/client";
 import { recordAudit } from "../../platform/audit.server";
@@ -27,6 +27,7 @@ import {
 import { versionContentHash } from "./content-hash.server";
 import { database } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
+import { runCoreTask } from "../../platform/worker-pool.server";
 import { robotOfRevision } from "../robots/index.server";
 
 /** What a version keeps of its solve: enough for tables, lists and comparisons without solving again. */
@@ -85,13 +86,8 @@ export async function commitDraft(
     if (!sequence.ok) throw new ServiceError(422, "invalid", `The draft is invalid: ${issuesText(sequence.issues)}`);
     const misfits = sequenceIssuesForRobot(robot, sequence.sequence);
     if (misfits.length > 0) throw new ServiceError(422, "invalid", `The draft does not fit robot revision ${revision.number}: ${issuesText(misfits)}`);
-    let solved: SolvedSequence;
-    try {
-      solved = solveSequence(robot, sequence.sequence);
-    } catch (error) {
-      if (error instanceof GaitInputError) throw new ServiceError(422, "invalid", `The draft cannot be solved: ${issuesText(error.issues)}`);
-      throw error;
-    }
+    const solved = await runCoreTask("summary", { robot, sequence: sequence.sequence });
+    if (!solved.ok) throw new ServiceError(422, "invalid", `The draft cannot be solved: ${issuesText(solved.refusal.issues)}`);
     const summary: VersionSummary = { ...solved.summary, cycleMs: sequence.sequence.cycleMs, loop: sequence.sequence.loop };
     const [{ latest }] = await tx
       .select({ latest: max(gaitVersions.number) })
@@ -528,9 +524,10 @@ export async function listComparableVersions(
 /** At most this many frames go to a page for playback and plots; longer moves are re-solved at a lower rate for display. */
 const DISPLAY_FRAME_LIMIT = 1500;
 
-export type SolvedVersion = { robot: Robot; sequence: Sequence; solved: SolvedSequence; display: SolvedSequence };
+/** The version's own solve (its flags and summary), and frames for playback: the same solve, or at a lower rate for a long move. */
+export type SolvedVersion = { robot: Robot; sequence: Sequence; solved: { flags: Flag[]; summary: SolveSummary }; display: SolvedSequence };
 
-/** Solves a version with the robot revision it pins (the same engine that committed it). */
+/** Solves a version with the robot revision it pins (the same engine that committed it), on the worker pool. */
 export async function solveVersion(version: Pick<VersionDetail, "sequence" | "robotRevisionId" | "number">): Promise<SolvedVersion> {
   const [revision] = await database()
     .select({ definition: robotRevisions.definition, number: robotRevisions.number })
@@ -540,13 +537,8 @@ export async function solveVersion(version: Pick<VersionDetail, "sequence" | "ro
   const sequence = parseSequence(version.sequence);
   if (!sequence.ok)
     throw new ServiceError(409, "conflict", `Version ${version.number} holds a sequence this engine cannot read: ${issuesText(sequence.issues)}`);
-  const solved = solveSequence(robot, sequence.sequence);
-  const frames = solved.frames.length;
-  const display =
-    frames <= DISPLAY_FRAME_LIMIT
-      ? solved
-      : solveSequence(robot, sequence.sequence, { fps: Math.max(1, Math.floor((DISPLAY_FRAME_LIMIT * 1000) / sequence.sequence.cycleMs)) });
-  return { robot, sequence: sequence.sequence, solved, display };
+  const { flags, summary, display } = await runCoreTask("playback", { robot, sequence: sequence.sequence, displayFrameLimit: DISPLAY_FRAME_LIMIT });
+  return { robot, sequence: sequence.sequence, solved: { flags, summary }, display };
 }
 
 export type ComparedVersion = Omit<VersionDetail, "sequence" | "events"> & {
