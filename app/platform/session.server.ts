@@ -37,7 +37,28 @@ export function destroySession(session: AppSession): Promise<string> {
   return sessionStorage().destroySession(session);
 }
 
-/** Only paths on this site, so a crafted link cannot send someone elsewhere after sign-in. */
+// Longer than this, the address would crowd the session cookie (about 4 KB in all).
+const RETURN_TO_LIMIT = 2048;
+// eslint-disable-next-line no-control-regex -- control characters are what it finds
+const CONTROL_OR_BACKSLASH = /[\u0000-\u001f\u007f\\]/;
+
+/**
+ * Where to send someone after sign-in or a workspace switch: a path on this
+ * site, or "/". The address is parsed against our own origin as a browser
+ * parses a Location (the WHATWG URL Standard drops tabs and newlines and reads
+ * a backslash as a slash, so "/\t/evil.example" is "//evil.example" to it);
+ * any control character or backslash, another origin, or anything but a path
+ * falls back to "/". The answer is the parsed path, query and fragment,
+ * percent-encoded, so it is always a valid header value.
+ */
 export function safeReturnTo(value: unknown): string {
-  return typeof value === "string" && value.startsWith("/") && !value.startsWith("//") && !value.startsWith("/\\") ? value : "/";
+  if (typeof value !== "string" || value.length > RETURN_TO_LIMIT || !value.startsWith("/") || CONTROL_OR_BACKSLASH.test(value)) return "/";
+  const origin = new URL(config().publicUrl).origin;
+  let url: URL;
+  try {
+    url = new URL(value, origin);
+  } catch {
+    return "/";
+  }
+  return url.origin === origin ? `${url.pathname}${url.search}${url.hash}` : "/";
 }
