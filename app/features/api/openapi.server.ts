@@ -4,16 +4,19 @@
 // together and serves the result. Request and response schemas come from the
 // zod schemas where there are some (robot, sequence, calibration profile,
 // table and bench-table queries, draft save); the rest are written beside
-// their routes. test/features/api/openapi.test.ts checks that every /api/v1
-// route of app/routes.ts is described, so the two cannot drift apart.
+// their routes. Each operation's x-permission is what its route module
+// declares (the openapi.json route and the API page pass those declarations in,
+// by path: app/routes/api.v1/permissions.server.ts). test/features/api/openapi.test.ts
+// checks that every /api/v1 route of app/routes.ts is described, so the two cannot drift apart.
 import { createHash } from "node:crypto";
 import { EXPORTER_VERSION, calibrationProfileJsonSchema } from "../../export/index";
 import { SOLVER_VERSION, sequenceJsonSchema } from "../../gait/index";
 import { config } from "../../platform/config.server";
+import { requirementOf, type RoutePermissions } from "../../platform/permissions";
 import { matchesIfNoneMatch } from "../tables/index.server";
 import { accountPaths, accountSchemas } from "./operations/account";
 import { calibrationPaths, calibrationSchemas } from "./operations/calibration";
-import { errorResponses, errorSchemas, type OpenApiDocument } from "./operations/common";
+import { errorResponses, errorSchemas, permission, type OpenApiDocument, type OpenApiOperation, type OpenApiPaths } from "./operations/common";
 import { draftPaths, draftSchemas } from "./operations/gaits";
 import { robotPaths, robotSchemas } from "./operations/robots";
 import { documentPaths, generatedSchemas, schemaPaths } from "./operations/schemas";
@@ -23,7 +26,25 @@ import { versionPaths, versionSchemas } from "./operations/versions";
 
 export type { OpenApiDocument, OpenApiOperation, OpenApiParameter, OpenApiResponse } from "./operations/common";
 
-function buildDocument(publicUrl: string): OpenApiDocument {
+/** What each /api/v1 route module declares it needs, by the route's path as the document writes it (`/api/v1/robots/{robotId}`). */
+export type ApiPermissions = Record<string, RoutePermissions>;
+
+/** Each operation with its x-permission: a GET is its route's loader, any other method its action. */
+function withPermissions(paths: OpenApiPaths, permissions: ApiPermissions): OpenApiDocument["paths"] {
+  return Object.fromEntries(
+    Object.entries(paths).map(([path, methods]) => [
+      path,
+      Object.fromEntries(
+        Object.entries(methods).map(([method, operation]): [string, OpenApiOperation] => {
+          const needs = requirementOf(permissions[path], method === "get" ? "loader" : "action");
+          return [method, { ...operation, "x-permission": permission(needs, `${method.toUpperCase()} ${path}`) }];
+        }),
+      ),
+    ]),
+  );
+}
+
+function buildDocument(publicUrl: string, permissions: ApiPermissions): OpenApiDocument {
   return {
     openapi: "3.1.0",
     jsonSchemaDialect: "https://json-schema.org/draft/2020-12/schema",
@@ -53,18 +74,21 @@ function buildDocument(publicUrl: string): OpenApiDocument {
     ],
     // Paths and schemas keep the order the document has always had: a new order
     // would be new bytes, a new ETag and a changed file for everyone who pins it.
-    paths: {
-      ...accountPaths(),
-      ...solverPaths(),
-      ...robotPaths(),
-      ...calibrationPaths(),
-      ...benchTablePaths(),
-      ...schemaPaths(),
-      ...versionPaths(),
-      ...draftPaths(),
-      ...angleTablePaths(),
-      ...documentPaths(),
-    },
+    paths: withPermissions(
+      {
+        ...accountPaths(),
+        ...solverPaths(),
+        ...robotPaths(),
+        ...calibrationPaths(),
+        ...benchTablePaths(),
+        ...schemaPaths(),
+        ...versionPaths(),
+        ...draftPaths(),
+        ...angleTablePaths(),
+        ...documentPaths(),
+      },
+      permissions,
+    ),
     components: {
       securitySchemes: {
         bearerToken: { type: "http", scheme: "bearer", description: "A personal API token from Settings → API tokens." },
@@ -103,12 +127,12 @@ let cachedSequence: PublicDocument | undefined;
 let cachedCalibration: PublicDocument | undefined;
 
 /** The OpenAPI document for this server's public address. */
-export function openApiDocument(): OpenApiDocument {
-  return openApiPublicDocument().value as OpenApiDocument;
+export function openApiDocument(permissions: ApiPermissions): OpenApiDocument {
+  return openApiPublicDocument(permissions).value as OpenApiDocument;
 }
 
-export function openApiPublicDocument(): PublicDocument {
-  cachedOpenApi ??= publicDocument(buildDocument(config().publicUrl));
+export function openApiPublicDocument(permissions: ApiPermissions): PublicDocument {
+  cachedOpenApi ??= publicDocument(buildDocument(config().publicUrl, permissions));
   return cachedOpenApi;
 }
 

@@ -4,12 +4,13 @@ import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { PageHeader } from "~/components/common/PageHeader";
 import { ApiReference, type ApiDocument } from "~/components/export/api-docs/ApiReference";
 import { openApiDocument } from "~/features/api/openapi.server";
+import { apiPermissions } from "~/routes/api.v1/permissions.server";
 import type { RoutePermissions } from "~/platform/permissions";
 
 export const permissions = { loader: "public" } satisfies RoutePermissions;
 
 export function loader(_: Route.LoaderArgs) {
-  return { document: openApiDocument() as unknown as ApiDocument };
+  return { document: openApiDocument(apiPermissions()) as unknown as ApiDocument };
 }
 
 export const meta: Route.MetaFunction = () => [{ title: "API · Gaitloom" }];

@@ -12,6 +12,7 @@ import { sequenceJsonSchema } from "~/gait";
 import { robotJsonSchema } from "~/kinematics";
 import { openApiDocument, type OpenApiOperation } from "~/features/api/openapi.server";
 import { PERMISSIONS } from "~/platform/permissions";
+import { apiPermissions } from "~/routes/api.v1/permissions.server";
 import { loader as calibrationSchema } from "~/routes/api.v1/export/calibration-schema";
 import { loader as openapi } from "~/routes/api.v1/export/openapi";
 import { loader as sequenceSchema } from "~/routes/api.v1/export/sequence-schema";
@@ -29,7 +30,7 @@ function routesOf(entries: ConfigEntry[], parent = ""): { path: string; file: st
 
 const apiRoutes = routesOf(routeConfig as ConfigEntry[]).filter((route) => route.path.startsWith("api/v1/"));
 const toOpenApiPath = (path: string) => `/${path.replace(/:([A-Za-z0-9_]+)/g, "{$1}")}`;
-const document = openApiDocument();
+const document = openApiDocument(apiPermissions());
 const operations = Object.entries(document.paths).flatMap(([path, methods]) =>
   Object.entries(methods).map(([method, operation]) => ({ path, method, operation: operation as OpenApiOperation })),
 );
@@ -50,6 +51,18 @@ describe("every /api/v1 route of app/routes.ts is in the OpenAPI document", () =
       ).toBe(true);
     }
     if (typeof module.loader === "function" && typeof module.action !== "function") expect(methods).toContain("get");
+  });
+
+  test.each(apiRoutes.map((route) => [toOpenApiPath(route.path), route.file]))("%s takes its x-permission from %s's own declaration", async (path, file) => {
+    const module = await import(/* @vite-ignore */ `../../../app/${file}`);
+    expect(module.permissions, `${file} declares no permissions`).toBeDefined();
+    expect(apiPermissions()[path], `app/routes/api.v1/permissions.server.ts gives ${path} another module's declaration than ${file}'s`).toBe(
+      module.permissions,
+    );
+  });
+
+  test("the declarations handed to the document are those of the routed paths, no more", () => {
+    expect(Object.keys(apiPermissions()).sort()).toEqual(apiRoutes.map((route) => toOpenApiPath(route.path)).sort());
   });
 
   test("and nothing else is described", () => {

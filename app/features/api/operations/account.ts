@@ -1,5 +1,5 @@
 // /api/v1/workspace: who the caller is.
-import { AUTH, errorsFor, json, permission, ref, type Json, type OpenApiPaths } from "./common";
+import { AUTH, errorsFor, json, ref, type Json, type OpenApiPaths } from "./common";
 
 export function accountPaths(): OpenApiPaths {
   return {
@@ -10,7 +10,6 @@ export function accountPaths(): OpenApiPaths {
         description: "Build scripts call it first to check their token.",
         tags: ["Account"],
         responses: { "200": { description: "The workspace, role and person.", content: json(ref("Workspace")) }, ...errorsFor(...AUTH) },
-        "x-permission": permission("workspace.read"),
       },
     },
   };

@@ -2,7 +2,7 @@
 // builds with: references, error answers, permissions, path parameters, ETags.
 import { z } from "zod";
 import type { ApiErrorCode } from "../../../platform/errors";
-import { PERMISSIONS, type Action } from "../../../platform/permissions";
+import { PERMISSIONS, type Action, type Requirement } from "../../../platform/permissions";
 
 export type Json = Record<string, unknown>;
 
@@ -24,7 +24,10 @@ export type OpenApiOperation = {
   /** Which permission of app/platform/permissions.ts the route checks, and the roles that hold it; "public" for none. */
   "x-permission": { action: Action | "public"; roles: string[] };
 };
-export type OpenApiPaths = Record<string, Partial<Record<"get" | "put" | "post" | "delete", OpenApiOperation>>>;
+type Method = "get" | "put" | "post" | "delete";
+/** An operation as an operations file describes it: the document adds `x-permission` from the route module's own declaration. */
+export type OperationDescription = Omit<OpenApiOperation, "x-permission">;
+export type OpenApiPaths = Record<string, Partial<Record<Method, OperationDescription>>>;
 export type OpenApiDocument = {
   openapi: "3.1.0";
   jsonSchemaDialect: string;
@@ -32,7 +35,7 @@ export type OpenApiDocument = {
   servers: { url: string; description?: string }[];
   security: Record<string, string[]>[];
   tags: { name: string; description: string }[];
-  paths: OpenApiPaths;
+  paths: Record<string, Partial<Record<Method, OpenApiOperation>>>;
   components: { securitySchemes: Json; schemas: Record<string, Json>; responses: Record<string, OpenApiResponse> };
 };
 
@@ -134,10 +137,13 @@ export function errorSchemas(): Record<string, Json> {
 
 export const PUBLIC = [] as Record<string, string[]>[];
 
-export const permission = (action: Action | "public"): OpenApiOperation["x-permission"] => ({
-  action,
-  roles: action === "public" ? ["anyone"] : [...PERMISSIONS[action]],
-});
+/** An operation's x-permission from what its route module declares; `where` names the operation when there is nothing an API route can declare. */
+export function permission(requirement: Requirement | undefined, where: string): OpenApiOperation["x-permission"] {
+  if (requirement === undefined || requirement === "signed-in") {
+    throw new Error(`${where}: an /api/v1 route is public or needs a permission, and its route module must say which (got ${requirement ?? "nothing"})`);
+  }
+  return { action: requirement, roles: requirement === "public" ? ["anyone"] : [...PERMISSIONS[requirement]] };
+}
 
 export const uuidPath = (name: string, what: string): OpenApiParameter => ({
   name,

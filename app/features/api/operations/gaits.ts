@@ -1,7 +1,7 @@
 // /api/v1/gaits/{gaitId}/draft: a gait's working draft, read and saved.
 import { z } from "zod";
 import { draftSaveBody } from "../../gaits/index.server";
-import { AUTH, errorsFor, json, permission, person, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
+import { AUTH, errorsFor, json, person, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
 
 export function draftPaths(): OpenApiPaths {
   const draftSave = z.toJSONSchema(draftSaveBody, { io: "input", target: "draft-2020-12" }) as Json & { properties: Json };
@@ -14,7 +14,6 @@ export function draftPaths(): OpenApiPaths {
         tags: ["Gaits"],
         parameters: [uuidPath("gaitId", "The gait.")],
         responses: { "200": { description: "The draft.", content: json(ref("Draft")) }, ...errorsFor(400, ...AUTH, 404) },
-        "x-permission": permission("gaits.read"),
       },
       put: {
         operationId: "saveDraft",
@@ -25,7 +24,6 @@ export function draftPaths(): OpenApiPaths {
         parameters: [uuidPath("gaitId", "The gait.")],
         requestBody: { required: true, content: json({ ...draftSaveSchema, properties: { ...draftSave.properties, sequence: ref("Sequence") } }) },
         responses: { "200": { description: "The new draft revision.", content: json(ref("DraftSaved")) }, ...errorsFor(400, ...AUTH, 404, 409, 413, 422) },
-        "x-permission": permission("gaits.edit"),
       },
     },
   };

@@ -1,5 +1,5 @@
 // /api/v1/robots: robot definitions and their revisions.
-import { AUTH, errorsFor, json, permission, person, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
+import { AUTH, errorsFor, json, person, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
 
 export function robotPaths(): OpenApiPaths {
   return {
@@ -9,7 +9,6 @@ export function robotPaths(): OpenApiPaths {
         summary: "The workspace's robots",
         tags: ["Robots"],
         responses: { "200": { description: "Robots with their newest revision.", content: json(ref("RobotList")) }, ...errorsFor(...AUTH) },
-        "x-permission": permission("robots.read"),
       },
     },
     "/api/v1/robots/{robotId}": {
@@ -19,7 +18,6 @@ export function robotPaths(): OpenApiPaths {
         tags: ["Robots"],
         parameters: [uuidPath("robotId", "The robot.")],
         responses: { "200": { description: "The robot.", content: json(ref("RobotDetail")) }, ...errorsFor(400, ...AUTH, 404) },
-        "x-permission": permission("robots.read"),
       },
     },
     "/api/v1/robots/{robotId}/revisions/{number}": {
@@ -32,7 +30,6 @@ export function robotPaths(): OpenApiPaths {
           { name: "number", in: "path", required: true, description: "The revision number.", schema: { type: "integer", minimum: 1 } },
         ],
         responses: { "200": { description: "The revision.", content: json(ref("RobotRevision")) }, ...errorsFor(400, ...AUTH, 404) },
-        "x-permission": permission("robots.read"),
       },
     },
   };

@@ -3,10 +3,10 @@
 import { calibrationProfileJsonSchema } from "../../../export/index";
 import { sequenceJsonSchema } from "../../../gait/index";
 import { robotJsonSchema } from "../../../kinematics/index";
-import { PUBLIC, embedded, etagResponses, json, permission, ref, type Json, type OpenApiOperation, type OpenApiPaths } from "./common";
+import { PUBLIC, embedded, etagResponses, json, ref, type Json, type OperationDescription, type OpenApiPaths } from "./common";
 
 /** GET of one of the public JSON Schema documents. */
-function schemaOperation(operationId: string, summary: string, schema: string): OpenApiOperation {
+function schemaOperation(operationId: string, summary: string, schema: string): OperationDescription {
   return {
     operationId,
     summary,
@@ -16,7 +16,6 @@ function schemaOperation(operationId: string, summary: string, schema: string): 
       "200": { description: "JSON Schema (draft 2020-12).", content: { "application/schema+json": { schema: ref(schema) } } },
       ...etagResponses("The schema is"),
     },
-    "x-permission": permission("public"),
   };
 }
 
@@ -43,7 +42,6 @@ export function documentPaths(): OpenApiPaths {
         tags: ["Schemas"],
         security: PUBLIC,
         responses: { "200": { description: "OpenAPI 3.1.", content: json({ type: "object" }) }, ...etagResponses("The document is") },
-        "x-permission": permission("public"),
       },
     },
   };

@@ -1,7 +1,7 @@
 // /api/v1/solve and /api/v1/ik: the gait engine, stateless.
 import { COLUMNS_ENCODING, COLUMNS_LAYOUT, FLAG_KINDS } from "../../../gait/index";
 import { MAX_ANSWER_FLAGS, MAX_ANSWER_LEG_FRAMES, MAX_SOLVE_LEG_FRAMES, SOLVE_LAYOUTS } from "../../solver/index.server";
-import { AUTH, errorsFor, json, permission, ref, type Json, type OpenApiPaths } from "./common";
+import { AUTH, errorsFor, json, ref, type Json, type OpenApiPaths } from "./common";
 
 export function solverPaths(): OpenApiPaths {
   return {
@@ -25,7 +25,6 @@ export function solverPaths(): OpenApiPaths {
           },
           ...errorsFor(400, ...AUTH, 413, 422, 503),
         },
-        "x-permission": permission("solver.use"),
       },
     },
     "/api/v1/ik": {
@@ -36,7 +35,6 @@ export function solverPaths(): OpenApiPaths {
         tags: ["Solver"],
         requestBody: { required: true, content: json(ref("IkRequest")) },
         responses: { "200": { description: "Angles per leg.", content: json(ref("IkResult")) }, ...errorsFor(400, ...AUTH, 413, 422, 503) },
-        "x-permission": permission("solver.use"),
       },
     },
   };

@@ -3,7 +3,7 @@ import { TABLE_FORMAT, TABLE_MEDIA_TYPES } from "../../../export/index";
 import { NUMBER_PATTERN } from "../../../platform/params";
 import { RELEASE_TABLE, benchQuerySchema, tableQuerySchema } from "../../tables/index.server";
 import { MAX_SOLVE_LEG_FRAMES } from "../../solver/index.server";
-import { AUTH, errorsFor, etagResponses, ifNoneMatch, permission, queryParameters, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
+import { AUTH, errorsFor, etagResponses, ifNoneMatch, queryParameters, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
 
 const tableHeadersDoc = {
   ETag: {
@@ -46,7 +46,6 @@ export function benchTablePaths(): OpenApiPaths {
           ...etagResponses("The table is"),
           ...errorsFor(400, ...AUTH, 404, 409, 422, 503),
         },
-        "x-permission": permission("tables.download"),
       },
     },
   };
@@ -85,7 +84,6 @@ export function angleTablePaths(): OpenApiPaths {
           ...etagResponses("The table is"),
           ...errorsFor(400, ...AUTH, 404, 409, 422, 503),
         },
-        "x-permission": permission("tables.download"),
       },
     },
   };

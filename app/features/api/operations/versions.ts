@@ -1,6 +1,6 @@
 // /api/v1/gaits/{gaitId}/versions: a gait's committed versions.
 import { VERSION_STATES } from "../../versions/index";
-import { AUTH, errorsFor, json, permission, person, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
+import { AUTH, errorsFor, json, person, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
 
 export function versionPaths(): OpenApiPaths {
   return {
@@ -11,7 +11,6 @@ export function versionPaths(): OpenApiPaths {
         tags: ["Gaits"],
         parameters: [uuidPath("gaitId", "The gait.")],
         responses: { "200": { description: "The versions, newest first.", content: json(ref("VersionList")) }, ...errorsFor(400, ...AUTH, 404) },
-        "x-permission": permission("gaits.read"),
       },
     },
   };

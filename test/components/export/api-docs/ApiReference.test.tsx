@@ -5,10 +5,11 @@ import { cleanup, render, screen, within } from "@testing-library/react";
 import { afterEach, describe, expect, test } from "vitest";
 import { ApiReference, type ApiDocument } from "~/components/export/api-docs/ApiReference";
 import { openApiDocument } from "~/features/api/openapi.server";
+import { apiPermissions } from "~/routes/api.v1/permissions.server";
 
 afterEach(cleanup);
 
-const document = openApiDocument() as unknown as ApiDocument;
+const document = openApiDocument(apiPermissions()) as unknown as ApiDocument;
 
 describe("ApiReference", () => {
   test("one card per operation, with its method, path and summary", () => {
