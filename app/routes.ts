@@ -1,3 +1,6 @@
+// The route table. What each route needs (a permission, a signed-in person, or
+// nothing) is declared once, in its module's `permissions` export; the access
+// matrix and the OpenAPI document read it there.
 import { type RouteConfig, index, layout, prefix, route } from "@react-router/dev/routes";
 import { exportApi } from "./routes/api.v1/export/routes";
 import { editorApi } from "./routes/api.v1/gaits/editor-routes";

@@ -2,14 +2,14 @@
 import { route, type RouteConfigEntry } from "@react-router/dev/routes";
 
 export const exportPages: RouteConfigEntry[] = [
-  // tables.download: choose a version, format, units, rate, profile; preview; download; the build script's command
+  // choose a version, format, units, rate, profile; preview; download; the build script's command
   route("export", "routes/export/page.tsx"),
-  // robots.read: the robots and their calibration profiles
+  // the robots and their calibration profiles
   route("export/calibration", "routes/export/calibration-list.tsx"),
-  // GET robots.read; POST create, import, update, delete: robots.calibrate
+  // a robot's calibration profiles; POST create, import, update, delete
   route("export/calibration/:robotId", "routes/export/calibration.tsx"),
-  // tables.download: centre and sweep tables for a robot on a stand
+  // centre and sweep tables for a robot on a stand
   route("export/bring-up", "routes/export/bring-up.tsx"),
-  // public: the OpenAPI document, readable
+  // the OpenAPI document, readable
   route("api-docs", "routes/export/api-docs.tsx"),
 ];

@@ -2,8 +2,8 @@
 import { route, type RouteConfigEntry } from "@react-router/dev/routes";
 
 export const editorPages: RouteConfigEntry[] = [
-  // GET gaits.edit (robots and templates to start from); POST create / copy: gaits.edit
+  // robots and templates to start from; POST create / copy
   route("new", "routes/gaits/new.tsx"),
-  // GET gaits.read (read-only without gaits.edit); POST move-to-newest-robot: gaits.edit
+  // the editor on the working draft (read-only for who may not edit it); POST move-to-newest-robot
   route(":gaitId/edit", "routes/gaits/editor.tsx"),
 ];

@@ -3,12 +3,12 @@
 import { route, type RouteConfigEntry } from "@react-router/dev/routes";
 
 export const versionPages: RouteConfigEntry[] = [
-  // GET gaits.read: two versions side by side (?a=<versionId>&b=<versionId>), or the picker
+  // two versions side by side (?a=<versionId>&b=<versionId>), or the picker
   route("compare", "routes/gaits/compare.tsx"),
-  // GET gaits.read: the gait's versions (?sort=&dir=&state=&author=&q=&flags=)
-  // POST intent=commit (message, draftRevision?) versions.commit; intent=restore (versionId, draftRevision) gaits.edit
+  // the gait's versions (?sort=&dir=&state=&author=&q=&flags=)
+  // POST intent=commit (message, draftRevision?); intent=restore (versionId, draftRevision)
   route(":gaitId", "routes/gaits/gait.tsx"),
-  // GET gaits.read: one version, its checks and review history
-  // POST intent=request-review versions.requestReview; approve / send-back versions.decide; release versions.release
+  // one version, its checks and review history
+  // POST intent=request-review, approve, send-back or release
   route(":gaitId/versions/:number", "routes/gaits/version.tsx"),
 ];

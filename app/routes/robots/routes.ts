@@ -2,12 +2,12 @@
 import { index, route, type RouteConfigEntry } from "@react-router/dev/routes";
 
 export const robotPages: RouteConfigEntry[] = [
-  // GET robots.read; POST (create, upload, import-urdf) robots.edit
+  // the robots; POST adds one (create, upload, import-urdf)
   index("routes/robots/list.tsx"),
-  // GET robots.read; POST save: robots.calibrate, and robots.edit for anything beyond calibration
+  // one robot's definition; POST save
   route(":robotId", "routes/robots/robot.tsx"),
-  // GET robots.read; POST restore: as save
+  // an old revision; POST restore
   route(":robotId/revisions/:number", "routes/robots/revision.tsx"),
-  // GET robots.read: the revision's JSON as a file
+  // the revision's JSON as a file
   route(":robotId/revisions/:number/download", "routes/robots/download.ts"),
 ];

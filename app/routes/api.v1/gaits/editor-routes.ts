@@ -2,6 +2,6 @@
 import { route, type RouteConfigEntry } from "@react-router/dev/routes";
 
 export const editorApi: RouteConfigEntry[] = [
-  // GET gaits.read: the working draft; PUT gaits.edit: save it with { sequence, baseRevision }
+  // GET the working draft; PUT saves it with { sequence, baseRevision }
   route("gaits/:gaitId/draft", "routes/api.v1/gaits/draft.ts"),
 ];

@@ -2,6 +2,6 @@
 import { route, type RouteConfigEntry } from "@react-router/dev/routes";
 
 export const versionApi: RouteConfigEntry[] = [
-  // gaits.read: the gait's versions, newest first
+  // the gait's versions, newest first
   route("gaits/:gaitId/versions", "routes/api.v1/gaits/versions.ts"),
 ];

@@ -2,12 +2,12 @@
 import { route, type RouteConfigEntry } from "@react-router/dev/routes";
 
 export const robotApi: RouteConfigEntry[] = [
-  // robots.read
+  // the workspace's robots
   route("robots", "routes/api.v1/robots/list.ts"),
-  // robots.read
+  // one robot: its newest definition and its revisions
   route("robots/:robotId", "routes/api.v1/robots/robot.ts"),
-  // robots.read
+  // one revision's definition
   route("robots/:robotId/revisions/:number", "routes/api.v1/robots/revision.ts"),
-  // public
+  // the robot definition's JSON Schema
   route("schema/robot.json", "routes/api.v1/robots/schema.ts"),
 ];
