@@ -10,6 +10,7 @@ import { seedDemo } from "../../../db/seed";
 import { act, demoIds, requestsAs, responseOf, type ApiRefusal, type DemoIds } from "../../support/routes";
 import { demoRobotJson, loadDemoRobot, type DemoRobotFile } from "../../support/robots";
 import { database } from "~/platform/db.server";
+import { corePoolStats } from "~/platform/worker-pool.server";
 import { generateGait, type TemplateName } from "~/gait";
 import * as healthz from "~/routes/healthz";
 import * as solve from "~/routes/api.v1/solver/solve";
@@ -43,6 +44,14 @@ async function post<Answer = unknown>(body: object, headers: Record<string, stri
 
 const fresh = { "Cache-Control": "no-cache" };
 
+/** Until the large solve has reached the pool (checked every 10 ms, on this thread's timers: they fire only while it is free). */
+async function untilInFlight() {
+  for (let waited = 0; corePoolStats().inFlight === 0; waited += 10) {
+    if (waited > 10_000) throw new Error("the large solve did not reach the pool within 10 s");
+    await delay(10);
+  }
+}
+
 describe("POST /api/v1/solve on the worker pool", () => {
   test("the largest allowed solve in flight holds up neither GET /healthz nor an answer from the cache", async () => {
     const cachedBody = small();
@@ -52,8 +61,7 @@ describe("POST /api/v1/solve on the worker pool", () => {
       finished.push("large solve");
       return answer;
     });
-    // Let the large solve get going: with the solve on this thread, the timer only fires once it is done.
-    await delay(100);
+    await untilInFlight();
     const health = healthz.loader().then((answer) => {
       finished.push("healthz");
       return answer;
@@ -74,7 +82,7 @@ describe("POST /api/v1/solve on the worker pool", () => {
     // A solve of some milliseconds first, so the pool knows how long its tasks take.
     expect((await post(solveBody("pier-crawler", "tripod", 5000, "checks"), fresh)).status).toBe(200);
     const large = post(largest(), fresh);
-    await delay(100);
+    await untilInFlight();
     const refused = await post<ApiRefusal>(small(), fresh);
     expect(refused.status).toBe(503);
     expect(Number(refused.headers.get("Retry-After"))).toBeGreaterThanOrEqual(1);
