@@ -3,7 +3,21 @@
 // sequenceJsonSchema publishes it. Field names are fixed by DESIGN.md; the
 // additions (name, description, body key `resting`) are documented below.
 import { z } from "zod";
-import type { Robot } from "../kinematics/index";
+import {
+  BODY_HEIGHT_MM,
+  BODY_OFFSET_MM,
+  CYCLE_MS,
+  EASE_Y,
+  FOOT_MM,
+  FRAME_RATE_FPS,
+  FULL_TURN_DEG,
+  HALF_TURN_DEG,
+  STEP_HEIGHT_MM,
+  STRIDE_MM,
+  rangeText,
+  type Bound,
+  type Robot,
+} from "../kinematics/index";
 import { formatSequenceIssues, type SequenceIssue } from "./issues";
 import { TEMPLATE_NAMES } from "./templates/names";
 
@@ -17,41 +31,59 @@ export const CSS_EASE_IN_OUT: Ease = [0.42, 0, 0.58, 1];
 export const DEFAULT_STEP_HEIGHT_MM = 25;
 /** Limits that keep a solve bounded (a request can not ask for millions of frames). */
 export const MAX_FRAMES = 100_000;
-export const MAX_CYCLE_MS = 600_000;
-export const MAX_FPS = 1000;
+export const MAX_CYCLE_MS = CYCLE_MS.max;
+export const MAX_FPS = FRAME_RATE_FPS.max;
 
-const finite = z.number();
+// Every number of the format lies in a physical range (kinematics/bounds.ts); zod numbers are finite already.
+const within = (bound: Bound) => z.number().min(bound.min).max(bound.max);
 const fraction = z.number().min(0).max(1);
+const easeY = within(EASE_Y);
+const footMm = within(FOOT_MM);
+const offsetMm = within(BODY_OFFSET_MM);
+const offsetDeg = within(HALF_TURN_DEG);
 
 // x1 and x2 of a CSS cubic-bezier must lie in [0, 1] so that the curve is a function of time.
 export const easeSchema = z
-  .tuple([fraction, finite, fraction, finite])
-  .describe("Cubic-Bézier easing [x1, y1, x2, y2] as in CSS cubic-bezier(); x1 and x2 in [0, 1].");
+  .tuple([fraction, easeY, fraction, easeY])
+  .describe(`Cubic-Bézier easing [x1, y1, x2, y2] as in CSS cubic-bezier(); x1 and x2 in [0, 1], y1 and y2 within ${EASE_Y.min}..${EASE_Y.max}.`);
 
-const vec3Schema = z.tuple([finite, finite, finite]);
+const vec3Schema = z.tuple([footMm, footMm, footMm]);
+
+/** The generator's numbers with their ranges and units, shared with generateGait's flat parameters. */
+export const cycleMsSchema = within(CYCLE_MS).describe(`Duration of the cycle (or of the one-shot move), ${rangeText("ms", CYCLE_MS)}.`);
+export const fpsSchema = within(FRAME_RATE_FPS).describe(`Frame rate, ${rangeText("frames per second", FRAME_RATE_FPS)}.`);
+export const strideMmSchema = within(STRIDE_MM);
+export const directionDegSchema = within(FULL_TURN_DEG);
+export const turnDegPerCycleSchema = within(FULL_TURN_DEG);
+export const stepHeightMmSchema = within(STEP_HEIGHT_MM);
+export const bodyHeightMmSchema = within(BODY_HEIGHT_MM);
 
 export const contactSchema = z.enum(["stance", "swing"]);
 
 const legKeySchema = z.strictObject({
   t: fraction.describe("Time as a fraction of the cycle."),
   contact: contactSchema.describe("Holds from this key until the next key of the track (half-open)."),
-  foot: vec3Schema.optional().describe("Foot in the neutral body frame at the key's time, mm; omitted: the generator's placement."),
+  foot: vec3Schema
+    .optional()
+    .describe(`Foot in the neutral body frame at the key's time, [x, y, z], each ${rangeText("mm", FOOT_MM)}; omitted: the generator's placement.`),
   ease: easeSchema.optional().describe("Shapes the segment that leaves the key; default CSS ease."),
-  apexMm: z.number().min(0).max(1000).optional().describe("Swing height above the straight path, mm; default stepHeightMm."),
+  apexMm: stepHeightMmSchema.optional().describe(`Swing height above the straight path, ${rangeText("mm", STEP_HEIGHT_MM)}; default stepHeightMm.`),
 });
 
 const legTrackSchema = z.strictObject({ keys: z.array(legKeySchema).min(1).max(10_000) });
 
 const poseSchema = z
   .strictObject({
-    x: finite.default(0),
-    y: finite.default(0),
-    z: finite.default(0),
-    roll: finite.default(0),
-    pitch: finite.default(0),
-    yaw: finite.default(0),
+    x: offsetMm.default(0),
+    y: offsetMm.default(0),
+    z: offsetMm.default(0),
+    roll: offsetDeg.default(0),
+    pitch: offsetDeg.default(0),
+    yaw: offsetDeg.default(0),
   })
-  .describe("Pose offset: translation (mm) in the heading frame, then roll, pitch, yaw (degrees), R = Rz·Ry·Rx.");
+  .describe(
+    `Pose offset: translation in the heading frame, each ${rangeText("mm", BODY_OFFSET_MM)}, then roll, pitch, yaw, each ${rangeText("°", HALF_TURN_DEG)}; R = Rz·Ry·Rx.`,
+  );
 
 export const bodyKeySchema = z.strictObject({
   t: fraction,
@@ -69,19 +101,21 @@ const generatorSchema = z.strictObject({
   template: z.enum(TEMPLATE_NAMES).optional(),
   dutyFactor: z.number().gt(0).lt(1).optional().describe("Fraction of the cycle a foot is on the ground."),
   phase: z.record(z.string(), fraction).optional().describe("Lift-off time of each leg, fraction of the cycle."),
-  strideMm: finite.default(0).describe("Distance the body travels in one cycle, mm."),
-  directionDeg: finite.default(0).describe("Direction of travel in the body frame, degrees (0 forward, 90 left)."),
-  turnDegPerCycle: finite.default(0).describe("Turn of the body about its centre over one cycle, degrees."),
-  stepHeightMm: z.number().min(0).max(1000).default(DEFAULT_STEP_HEIGHT_MM).describe("Default swing apex, mm."),
-  bodyHeightMm: z.number().positive().optional().describe("Height of the body origin above the ground, mm; default the robot's standHeight."),
+  strideMm: strideMmSchema.default(0).describe(`Distance the body travels in one cycle, ${rangeText("mm", STRIDE_MM)}.`),
+  directionDeg: directionDegSchema.default(0).describe(`Direction of travel in the body frame (0 forward, 90 left), ${rangeText("°", FULL_TURN_DEG)}.`),
+  turnDegPerCycle: turnDegPerCycleSchema.default(0).describe(`Turn of the body about its centre over one cycle, ${rangeText("°", FULL_TURN_DEG)}.`),
+  stepHeightMm: stepHeightMmSchema.default(DEFAULT_STEP_HEIGHT_MM).describe(`Default swing apex, ${rangeText("mm", STEP_HEIGHT_MM)}.`),
+  bodyHeightMm: bodyHeightMmSchema
+    .optional()
+    .describe(`Height of the body origin above the ground, ${rangeText("mm", BODY_HEIGHT_MM)}; default the robot's standHeight.`),
 });
 
 const sequenceObjectSchema = z.strictObject({
   format: z.literal(SEQUENCE_FORMAT),
   name: z.string().max(200).optional(),
   description: z.string().max(2000).optional(),
-  cycleMs: z.number().positive().max(MAX_CYCLE_MS).describe("Duration of the cycle (or of the one-shot move), ms."),
-  fps: z.number().positive().max(MAX_FPS).describe("Frame rate, frames per second."),
+  cycleMs: cycleMsSchema,
+  fps: fpsSchema,
   loop: z.boolean().describe("True for a gait cycle; false for a one-shot move (frames 0..N, t = 1 at the end)."),
   generator: generatorSchema.default({ strideMm: 0, directionDeg: 0, turnDegPerCycle: 0, stepHeightMm: DEFAULT_STEP_HEIGHT_MM }),
   legs: z.record(z.string(), legTrackSchema),

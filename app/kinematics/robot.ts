@@ -2,6 +2,19 @@
 // One zod schema is the source of truth: parseRobot validates with it and
 // robotJsonSchema publishes it, so the two can never disagree.
 import { z } from "zod";
+import {
+  BODY_HEIGHT_MM,
+  BODY_POINT_MM,
+  HALF_TURN_DEG,
+  JOINT_SPEED_DEG_S,
+  LINK_MM,
+  MASS_KG,
+  PULSE_US,
+  SERVO_CHANNEL,
+  US_PER_DEG,
+  rangeText,
+  type Bound,
+} from "./bounds";
 import { describeValue, formatIssues, type DefinitionIssue } from "./issues";
 
 export const ROBOT_FORMAT = "gaitloom.robot/1";
@@ -23,20 +36,30 @@ export type JointAngles = { coxa: number; femur: number; tibia: number };
  */
 export type BodyPose = { x: number; y: number; z: number; roll: number; pitch: number; yaw: number };
 
-const finite = z.number();
-const positiveMm = z.number().positive();
+// Every number of the format lies in a physical range (bounds.ts); zod numbers are finite already.
+const within = (bound: Bound) => z.number().min(bound.min).max(bound.max);
+const bodyPointMm = within(BODY_POINT_MM);
+const halfTurnDeg = within(HALF_TURN_DEG);
+const pulseUs = within(PULSE_US);
 
 // Leg ids end up as CSV headers and C identifiers in the exports.
 const LEG_ID_PATTERN = /^[A-Za-z][A-Za-z0-9_]{0,15}$/;
 
 const servoSchema = z
   .strictObject({
-    channel: z.number().int().min(0).max(255).describe("Output channel on the servo controller; unique across the robot."),
+    channel: z
+      .number()
+      .int()
+      .min(SERVO_CHANNEL.min)
+      .max(SERVO_CHANNEL.max)
+      .describe(`Output channel on the servo controller, ${SERVO_CHANNEL.min} to ${SERVO_CHANNEL.max}; unique across the robot.`),
     reversed: z.boolean().describe("The servo turns against the joint's positive sense: pulses step the other way."),
-    centerUs: positiveMm.describe("Pulse width (µs) at servo angle 0."),
-    usPerDeg: z.number().positive().describe("Pulse width change per servo degree (µs/°), always positive; `reversed` gives the sign."),
-    minUs: positiveMm.describe("Shortest pulse the servo accepts (µs)."),
-    maxUs: positiveMm.describe("Longest pulse the servo accepts (µs)."),
+    centerUs: pulseUs.describe(`Pulse width at servo angle 0, ${rangeText("µs", PULSE_US)}.`),
+    usPerDeg: within(US_PER_DEG).describe(
+      `Pulse width change per servo degree, ${rangeText("µs/°", US_PER_DEG)}, always positive; \`reversed\` gives the sign.`,
+    ),
+    minUs: pulseUs.describe(`Shortest pulse the servo accepts, ${rangeText("µs", PULSE_US)}.`),
+    maxUs: pulseUs.describe(`Longest pulse the servo accepts, ${rangeText("µs", PULSE_US)}.`),
   })
   .superRefine((servo, ctx) => {
     if (servo.minUs >= servo.maxUs) {
@@ -52,10 +75,10 @@ const servoSchema = z
 
 const jointSchema = z
   .strictObject({
-    minDeg: z.number().min(-180).max(180).describe("Lower joint limit in servo degrees."),
-    maxDeg: z.number().min(-180).max(180).describe("Upper joint limit in servo degrees."),
-    zeroOffsetDeg: z.number().min(-180).max(180).describe("Calibration: servoDeg = geometricDeg − zeroOffsetDeg."),
-    maxSpeedDegS: z.number().positive().describe("Fastest the joint may turn (°/s)."),
+    minDeg: halfTurnDeg.describe(`Lower joint limit in servo degrees, ${rangeText("°", HALF_TURN_DEG)}.`),
+    maxDeg: halfTurnDeg.describe(`Upper joint limit in servo degrees, ${rangeText("°", HALF_TURN_DEG)}.`),
+    zeroOffsetDeg: halfTurnDeg.describe(`Calibration: servoDeg = geometricDeg − zeroOffsetDeg, ${rangeText("°", HALF_TURN_DEG)}.`),
+    maxSpeedDegS: within(JOINT_SPEED_DEG_S).describe(`Fastest the joint may turn, ${rangeText("°/s", JOINT_SPEED_DEG_S)}.`),
     servo: servoSchema,
   })
   .superRefine((joint, ctx) => {
@@ -73,36 +96,42 @@ const legSchema = z.strictObject({
     .describe("Short leg name, e.g. LF; letters, digits and _, starting with a letter."),
   mount: z
     .strictObject({
-      x: finite.describe("Mount point (the coxa axis) in the body frame, mm."),
-      y: finite,
-      z: finite,
-      yawDeg: z.number().min(-180).max(180).describe("Direction of the coxa's zero about z, degrees, counter-clockwise from forward."),
+      x: bodyPointMm.describe(`Mount point (the coxa axis) in the body frame, forward, ${rangeText("mm", BODY_POINT_MM)}.`),
+      y: bodyPointMm.describe(`Mount point, to the left, ${rangeText("mm", BODY_POINT_MM)}.`),
+      z: bodyPointMm.describe(`Mount point (the femur joint's height), up, ${rangeText("mm", BODY_POINT_MM)}.`),
+      yawDeg: halfTurnDeg.describe(`Direction of the coxa's zero about z, counter-clockwise from forward, ${rangeText("°", HALF_TURN_DEG)}.`),
     })
     .describe("Where the leg attaches to the body and which way its coxa zero points."),
-  coxa: positiveMm.describe("Coxa length, coxa axis to femur joint, mm."),
-  femur: positiveMm.describe("Femur length, femur joint to knee joint, mm."),
-  tibia: positiveMm.describe("Tibia length, knee joint to foot tip, mm."),
+  coxa: within(LINK_MM).describe(`Coxa length, coxa axis to femur joint, ${rangeText("mm", LINK_MM)}.`),
+  femur: within(LINK_MM).describe(`Femur length, femur joint to knee joint, ${rangeText("mm", LINK_MM)}.`),
+  tibia: within(LINK_MM).describe(`Tibia length, knee joint to foot tip, ${rangeText("mm", LINK_MM)}.`),
   side: z.enum(["left", "right"]).optional().describe("Overrides the side taken from the mount (y > 0 is left)."),
-  row: z.number().int().min(0).optional().describe("Front-to-back position on its side, 0 = front; overrides the order by mount x."),
+  row: z
+    .number()
+    .int()
+    .min(0)
+    .max(MAX_LEGS - 1)
+    .optional()
+    .describe(`Front-to-back position on its side, 0 = front to ${MAX_LEGS - 1}; overrides the order by mount x.`),
   joints: z.strictObject({ coxa: jointSchema, femur: jointSchema, tibia: jointSchema }),
 });
 
-const restAnglesSchema = z.strictObject({ coxa: finite, femur: finite, tibia: finite });
+const restAnglesSchema = z.strictObject({ coxa: halfTurnDeg, femur: halfTurnDeg, tibia: halfTurnDeg });
 
 const robotObjectSchema = z.strictObject({
   format: z.literal(ROBOT_FORMAT),
   name: z.string().trim().min(1).max(120),
   description: z.string().max(2000).optional(),
   body: z.strictObject({
-    massKg: z.number().positive().describe("Total mass of the robot, kg."),
-    com: z.tuple([finite, finite, finite]).describe("Centre of mass in the body frame, mm."),
+    massKg: within(MASS_KG).describe(`Total mass of the robot, ${rangeText("kg", MASS_KG)}.`),
+    com: z.tuple([bodyPointMm, bodyPointMm, bodyPointMm]).describe(`Centre of mass in the body frame, [x, y, z], each ${rangeText("mm", BODY_POINT_MM)}.`),
   }),
-  standHeight: positiveMm.describe("Default height of the body origin above the ground, mm."),
+  standHeight: within(BODY_HEIGHT_MM).describe(`Default height of the body origin above the ground, ${rangeText("mm", BODY_HEIGHT_MM)}.`),
   legs: z.array(legSchema),
   rest: z
     .record(z.string(), restAnglesSchema)
     .optional()
-    .describe("Servo angles (degrees) per leg of the robot resting on its belly, powered down; gives every leg."),
+    .describe(`Servo angles per leg of the robot resting on its belly, powered down, each ${rangeText("°", HALF_TURN_DEG)}; gives every leg.`),
 });
 
 export const robotSchema = robotObjectSchema

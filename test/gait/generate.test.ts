@@ -68,7 +68,7 @@ describe("generateGait (DESIGN.md, Core module contracts)", () => {
     } catch (error) {
       expect(error).toBeInstanceOf(GaitInputError);
       expect((error as GaitInputError).issues).toEqual([
-        { path: "cycleMs", message: "must be positive (got -5)" },
+        { path: "cycleMs", message: "must be at least 1 (got -5)" },
         { path: "dutyFactor", message: "must be below 1 (got 1.2)" },
       ]);
     }

@@ -45,7 +45,7 @@ describe("robot editor", { timeout: 30_000 }, () => {
     fireEvent.change(femur, { target: { value: "-5" } });
     expect(femur.getAttribute("aria-invalid")).toBe("true");
     const message = document.getElementById(femur.getAttribute("aria-describedby")!);
-    expect(message?.textContent).toBe("⚠ must be positive (got -5)");
+    expect(message?.textContent).toBe("⚠ must be at least 1 (got -5)");
     const summary = screen.getByRole("region", { name: "Problems" });
     expect(within(summary).getByText("1 problem to fix before saving")).toBeTruthy();
     expect(within(summary).getByRole("link", { name: "legs[0].femur" }).getAttribute("href")).toBe(`#${femur.id}`);

@@ -23,7 +23,7 @@ describe("the editor's working copy", () => {
     document = setAt(document, ["body", "massKg"], undefined);
     const check = checkDraft(document);
     expect(check.robot).toBeNull();
-    expect(check.byPath.get("legs[0].femur")).toEqual(["must be positive (got -5)"]);
+    expect(check.byPath.get("legs[0].femur")).toEqual(["must be at least 1 (got -5)"]);
     expect(check.byPath.get("legs[1].joints.femur.minDeg")?.[0]).toMatch(/^must be below maxDeg \(got 90 ≥ \d+\)$/);
     expect(check.byPath.get("standHeight")).toEqual(['must be a number (got "abc")']);
     expect(check.byPath.get("body.massKg")).toEqual(["is required"]);

@@ -154,7 +154,7 @@ describe("bad saves are refused with what and where, and write nothing", () => {
     expect(answer.body).toMatchObject({ code: "invalid", error: "The definition has 2 problems. Nothing was saved." });
     expect(answer.body.details?.issues).toEqual(
       expect.arrayContaining([
-        { path: "legs[0].tibia", message: "must be positive (got -1)" },
+        { path: "legs[0].tibia", message: "must be at least 1 (got -1)" },
         { path: "legs[2].joints.femur.minDeg", message: "must be below maxDeg (got 40 ≥ 30)" },
       ]),
     );
