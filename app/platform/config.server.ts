@@ -39,7 +39,7 @@ export function config() {
       enabled: process.env.GAITLOOM_SOLVE_POOL !== "off",
       threads: Number(process.env.GAITLOOM_SOLVE_THREADS ?? Math.max(1, availableParallelism() - 1)),
       // The longest a task may expect to wait for a thread; beyond it the request is refused with 503 and Retry-After.
-      queueBudgetMs: Number(process.env.GAITLOOM_SOLVE_QUEUE_BUDGET_MS ?? 5000),
+      queueBudgetMs: Number(process.env.GAITLOOM_SOLVE_QUEUE_BUDGET_MS ?? 10_000),
     },
   };
 }
