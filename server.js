@@ -23,6 +23,29 @@ const clientDir = path.resolve(path.dirname(buildPath), "..", "client");
 
 const app = express();
 app.disable("x-powered-by");
+// An answer given before the request's body was all read (a 413 at the limit,
+// a refusal before the form is read) leaves the rest of the body between this
+// request and the next on a keep-alive connection, which Node would then wait
+// for: such an answer says `Connection: close`. Node would close the
+// connection as soon as the answer is out, and the client, still sending,
+// would meet a reset and often lose the answer; so the connection lingers
+// half-closed for a moment first, as web servers do ("lingering close").
+const LINGER_MS = 2000;
+app.use((req, res, next) => {
+  const writeHead = res.writeHead;
+  res.writeHead = function (...args) {
+    if (!req.complete && !res.headersSent) {
+      res.setHeader("Connection", "close");
+      req.socket.destroySoon = function lingeringClose() {
+        if (this.writable) this.end();
+        const timer = setTimeout(() => this.destroy(), LINGER_MS);
+        this.once("close", () => clearTimeout(timer));
+      };
+    }
+    return writeHead.apply(this, args);
+  };
+  next();
+});
 // Compressed only when the client asks (Accept-Encoding), as usual.
 app.use(compression());
 // Hashed build assets never change under their name.

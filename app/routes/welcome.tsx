@@ -4,6 +4,7 @@ import { z } from "zod";
 import type { Route } from "./+types/welcome";
 import { PageHeader } from "~/components/common/PageHeader";
 import { membershipsOf, requireUser } from "~/platform/access.server";
+import { readForm } from "~/platform/body.server";
 import { formAction, ServiceError } from "~/platform/errors.server";
 import { acceptInvitation, invitationsForEmail } from "~/features/accounts/invitations.server";
 import { ROLE_LABELS, type RoutePermissions } from "~/platform/permissions";
@@ -26,8 +27,8 @@ export const actionForm = z.discriminatedUnion("intent", [
 
 export async function action({ request }: Route.ActionArgs) {
   const user = await requireUser(request);
-  const parsed = actionForm.safeParse(Object.fromEntries(await request.formData()));
   return formAction(async () => {
+    const parsed = actionForm.safeParse(Object.fromEntries(await readForm(request)));
     if (!parsed.success) throw new ServiceError(400, "bad-request", "The form was incomplete; try again.");
     const workspaceId =
       parsed.data.intent === "create"

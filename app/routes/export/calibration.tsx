@@ -9,6 +9,7 @@ import { Notice } from "~/components/common/Notice";
 import { PageHeader } from "~/components/common/PageHeader";
 import { ProfileEditor, type ProfileIssues } from "~/components/export/ProfileEditor";
 import { requireAccess } from "~/platform/access.server";
+import { readForm } from "~/platform/body.server";
 import { permissionOfEveryIntent } from "~/platform/intent-form.server";
 import { calibrationRobot, createProfile, deleteProfile, listProfiles, profileFromForm, updateProfile } from "~/features/robots/calibration.server";
 import { ServiceError, formAction, pageGuard, type FormError } from "~/platform/errors.server";
@@ -56,6 +57,9 @@ export async function loader({ request, params: raw }: Route.LoaderArgs) {
   };
 }
 
+// A profile's fields for every joint of eight legs, or its JSON pasted, with room to spare.
+const PROFILE_FORM_LIMIT_BYTES = 64 * 1024;
+
 const revision = revisionNumber("baseRevision must be the profile revision the edits started from");
 export const actionForm = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("create") }),
@@ -69,7 +73,7 @@ type ActionResult = FormError<{ issues?: ProfileIssues }>;
 export async function action({ request, params: raw }: Route.ActionArgs) {
   const member = await requireAccess(request, permissionOfEveryIntent(permissions.action));
   const target = await robotOr404(member.workspace.id, raw);
-  const form = await request.formData();
+  const form = await pageGuard(() => readForm(request, PROFILE_FORM_LIMIT_BYTES));
   const parsed = actionForm.safeParse(Object.fromEntries([...form].filter(([key]) => ["intent", "json", "profileId", "baseRevision"].includes(key))));
   const actor = { userId: member.user.id, workspaceId: member.workspace.id };
   const page = `/export/calibration/${target.id}`;

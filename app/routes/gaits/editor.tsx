@@ -7,6 +7,7 @@ import type { Route } from "./+types/editor";
 import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { EditorScreen } from "~/components/editor/EditorScreen";
 import { requireAccess } from "~/platform/access.server";
+import { readForm } from "~/platform/body.server";
 import { moveDraftToNewestRobot, readDraft } from "~/features/gaits/drafts.server";
 import { ServiceError, formAction, pageGuard } from "~/platform/errors.server";
 import { can, type RoutePermissions } from "~/platform/permissions";
@@ -49,8 +50,8 @@ export const actionForm = z.object({
 export async function action({ request, params }: Route.ActionArgs) {
   const { user, workspace } = await requireAccess(request, permissions.action["move-to-newest-robot"]);
   const gaitId = gaitIdOf(params);
-  const parsed = actionForm.safeParse(Object.fromEntries(await request.formData()));
   return formAction(async () => {
+    const parsed = actionForm.safeParse(Object.fromEntries(await readForm(request)));
     if (!parsed.success) throw new ServiceError(400, "bad-request", parsed.error.issues[0].message);
     const moved = await moveDraftToNewestRobot({ userId: user.id, workspaceId: workspace.id }, gaitId, parsed.data.baseRevision);
     return { ok: true as const, ...moved };

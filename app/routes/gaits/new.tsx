@@ -8,6 +8,7 @@ import type { Route } from "./+types/new";
 import { Notice } from "~/components/common/Notice";
 import { PageHeader } from "~/components/common/PageHeader";
 import { requireAccess } from "~/platform/access.server";
+import { readForm } from "~/platform/body.server";
 import { permissionOfEveryIntent } from "~/platform/intent-form.server";
 import { copyForm, createGait, createGaitCopy, newGaitForm, robotChoices } from "~/features/gaits/new-gait.server";
 import { DEFAULT_PARAMS } from "~/features/gaits/editor/templates";
@@ -28,9 +29,9 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export async function action({ request }: Route.ActionArgs) {
   const { user, workspace } = await requireAccess(request, permissionOfEveryIntent(permissions.action));
-  const form = Object.fromEntries(await request.formData());
   const actor = { userId: user.id, workspaceId: workspace.id };
   return formAction(async () => {
+    const form = Object.fromEntries(await readForm(request));
     const intent = actionForm.safeParse(form);
     if (!intent.success) throw new ServiceError(400, "bad-request", intent.error.issues[0].message);
     if (intent.data.intent === "copy") {

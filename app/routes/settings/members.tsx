@@ -4,6 +4,7 @@ import { z } from "zod";
 import type { Route } from "./+types/members";
 import { Notice } from "~/components/common/Notice";
 import { requireAccess } from "~/platform/access.server";
+import { readForm } from "~/platform/body.server";
 import { requireIntentAccess } from "~/platform/intent-form.server";
 import { formAction, ServiceError } from "~/platform/errors.server";
 import { formatDate } from "~/platform/format";
@@ -46,10 +47,9 @@ export const actionForm = z.discriminatedUnion("intent", [
 ]);
 
 export async function action({ request }: Route.ActionArgs) {
-  const form = Object.fromEntries(await request.formData());
-  const parsed = actionForm.safeParse(form);
-  const member = await requireIntentAccess(request, permissions.action, parsed.success ? parsed.data.intent : null);
   return formAction(async () => {
+    const parsed = actionForm.safeParse(Object.fromEntries(await readForm(request)));
+    const member = await requireIntentAccess(request, permissions.action, parsed.success ? parsed.data.intent : null);
     if (!parsed.success) throw new ServiceError(400, "bad-request", `The form was incomplete: ${parsed.error.issues[0]?.message ?? "unknown field"}`);
     const command = parsed.data;
     switch (command.intent) {

@@ -4,6 +4,7 @@ import { z } from "zod";
 import type { Route } from "./+types/tokens";
 import { Notice } from "~/components/common/Notice";
 import { requireAccess } from "~/platform/access.server";
+import { readForm } from "~/platform/body.server";
 import { permissionOfEveryIntent } from "~/platform/intent-form.server";
 import { config } from "~/platform/config.server";
 import { formAction, ServiceError } from "~/platform/errors.server";
@@ -26,8 +27,8 @@ export const actionForm = z.discriminatedUnion("intent", [
 
 export async function action({ request }: Route.ActionArgs) {
   const member = await requireAccess(request, permissionOfEveryIntent(permissions.action));
-  const parsed = actionForm.safeParse(Object.fromEntries(await request.formData()));
   return formAction(async () => {
+    const parsed = actionForm.safeParse(Object.fromEntries(await readForm(request)));
     if (!parsed.success) throw new ServiceError(400, "bad-request", parsed.error.issues[0]?.message ?? "The form was incomplete.");
     const command = parsed.data;
     if (command.intent === "create") {

@@ -3,6 +3,7 @@ import { z } from "zod";
 import type { Route } from "./+types/workspace";
 import { Notice } from "~/components/common/Notice";
 import { requireAccess } from "~/platform/access.server";
+import { readForm } from "~/platform/body.server";
 import { formAction, ServiceError } from "~/platform/errors.server";
 import { can, type RoutePermissions } from "~/platform/permissions";
 import { renameWorkspace, summarizeWorkspace } from "~/features/accounts/workspaces.server";
@@ -18,8 +19,8 @@ const input = z.object({ name: z.string() });
 
 export async function action({ request }: Route.ActionArgs) {
   const member = await requireAccess(request, permissions.action);
-  const parsed = input.safeParse(Object.fromEntries(await request.formData()));
   return formAction(async () => {
+    const parsed = input.safeParse(Object.fromEntries(await readForm(request)));
     if (!parsed.success) throw new ServiceError(400, "bad-request", "Give the workspace a name.");
     await renameWorkspace(member.user, member.workspace, parsed.data.name);
     return redirect("/settings");
