@@ -27,10 +27,6 @@ export type ReachRing = {
   endDeg: number;
 };
 
-// Scan step for the limit-aware radii; the edges are then refined by bisection.
-const SCAN_STEP_MM = 0.5;
-const EDGE_TOLERANCE_MM = 1e-3;
-
 /** The leg's reach at foot height `footZMm` (body frame): an annulus about the coxa axis and the coxa's sector. */
 export function reachRing(robot: Robot, legId: string, footZMm: number): ReachRing {
   const leg = findLeg(robot, legId);
@@ -70,34 +66,136 @@ function fitsAt(k: LegConstants, footZMm: number, radiusMm: number): boolean {
   return (solveLegInto(k, x, y, footZMm, scratch, 0) & ~SOLVE_COXA_LIMIT) === 0;
 }
 
+const TWO_PI = 2 * Math.PI;
+const HALF_PI = Math.PI / 2;
+// Angle slack when deciding whether an edge point lies on a limit arc: a
+// point taken in error only splits a piece that is tested anyway.
+const ANGLE_SLACK_RAD = 1e-9;
+// Two tibia ranges at most (a limit arc meets [−90°, 90°] at both ends), four
+// edge arcs each, two crossings an arc, and the scan's two ends.
+const candidates = new Float64Array(2 * 4 * 2 + 2);
+const tibiaRanges = new Float64Array(4);
+
+/**
+ * The span [nearest, farthest] of the distances in [fromMm, toMm] from the
+ * coxa axis at which the foot, at height footZMm along the coxa's zero, is
+ * within the femur and tibia limits; null when there is none.
+ *
+ * In closed form, so a leg of 2 000 mm costs what a leg of 50 mm does. The
+ * postures within limits, (φf, φt) in a box of geometric angles, map onto a
+ * region of the leg plane whose boundary is the image of the box's edges:
+ * with φf fixed the foot runs on a circle of radius t about the knee, with
+ * φt fixed on a circle about the femur joint. The horizontal line at the
+ * foot's height crosses those arcs at a handful of points, each found from
+ * its circle with one arcsine; between two neighbouring crossings the line is wholly inside or
+ * wholly outside, which one solve at the middle decides.
+ */
 function limitedSpan(k: LegConstants, footZMm: number, fromMm: number, toMm: number): [number, number] | null {
   if (toMm <= fromMm) return null;
-  let first = -1;
-  let last = -1;
-  const steps = Math.ceil((toMm - fromMm) / SCAN_STEP_MM);
-  for (let step = 0; step <= steps; step += 1) {
-    const radius = Math.min(toMm, fromMm + step * SCAN_STEP_MM);
-    if (fitsAt(k, footZMm, radius)) {
-      if (first < 0) first = radius;
-      last = radius;
+  const height = footZMm - k.mountZMm;
+  const f = k.femurMm;
+  const t = k.tibiaMm;
+  const femurLow = (k.femurMinDeg + k.femurOffsetDeg) * RAD_PER_DEG;
+  const femurSpan = (k.femurMaxDeg - k.femurMinDeg) * RAD_PER_DEG;
+  // Crossings as distances from the coxa axis; those outside (fromMm, toMm) are dropped below.
+  let count = 0;
+  const ranges = tibiaRangesInto(k, tibiaRanges);
+  for (let range = 0; range < ranges; range += 1) {
+    const tibiaLow = tibiaRanges[range * 2];
+    const tibiaHigh = tibiaRanges[range * 2 + 1];
+    // The femur at a limit: the foot on the circle of radius t about the knee, t·sin α = h − f·sin φf.
+    for (let edge = 0; edge < 2; edge += 1) {
+      const femur = edge === 0 ? femurLow : femurLow + femurSpan;
+      const sine = (height - f * Math.sin(femur)) / t;
+      if (!(Math.abs(sine) <= 1)) continue;
+      const first = Math.asin(sine);
+      for (let crossing = 0; crossing < 2; crossing += 1) {
+        const direction = crossing === 0 ? first : Math.PI - first;
+        // α = φf − 90° + φt
+        const tibia = wrapPi(direction - femur + HALF_PI);
+        if (tibia >= tibiaLow - ANGLE_SLACK_RAD && tibia <= tibiaHigh + ANGLE_SLACK_RAD) {
+          candidates[count++] = k.coxaMm + f * Math.cos(femur) + t * Math.cos(direction);
+        }
+      }
+    }
+    // The tibia at a limit: the foot at R(φf)·(f + t·sin φt, −t·cos φt), a circle about the femur joint.
+    for (let edge = 0; edge < 2; edge += 1) {
+      const tibia = edge === 0 ? tibiaLow : tibiaHigh;
+      const reachX = f + t * Math.sin(tibia);
+      const reachZ = -t * Math.cos(tibia);
+      const reach = Math.sqrt(reachX * reachX + reachZ * reachZ);
+      if (!(reach > 0 && Math.abs(height) <= reach)) continue;
+      const first = Math.asin(height / reach);
+      const lag = Math.atan2(reachZ, reachX);
+      for (let crossing = 0; crossing < 2; crossing += 1) {
+        const direction = crossing === 0 ? first : Math.PI - first;
+        let fromLow = (direction - lag - femurLow) % TWO_PI;
+        if (fromLow < 0) fromLow += TWO_PI;
+        if (fromLow <= femurSpan + ANGLE_SLACK_RAD || fromLow >= TWO_PI - ANGLE_SLACK_RAD) candidates[count++] = k.coxaMm + reach * Math.cos(direction);
+      }
     }
   }
-  if (first < 0) return null;
-  const inner = first === fromMm ? first : bisectEdge(k, footZMm, Math.max(fromMm, first - SCAN_STEP_MM), first);
-  const outer = last === toMm ? last : bisectEdge(k, footZMm, Math.min(toMm, last + SCAN_STEP_MM), last);
-  return [inner, outer];
+  let kept = 0;
+  for (let i = 0; i < count; i += 1) if (candidates[i] > fromMm && candidates[i] < toMm) candidates[kept++] = candidates[i];
+  candidates[kept++] = fromMm;
+  candidates[kept++] = toMm;
+  count = kept;
+  // Insertion sort: a few numbers, no allocation.
+  for (let i = 1; i < count; i += 1) {
+    const value = candidates[i];
+    let j = i - 1;
+    while (j >= 0 && candidates[j] > value) {
+      candidates[j + 1] = candidates[j];
+      j -= 1;
+    }
+    candidates[j + 1] = value;
+  }
+  let inner = Number.NaN;
+  let outer = Number.NaN;
+  for (let i = 0; i + 1 < count; i += 1) {
+    const start = candidates[i];
+    const end = candidates[i + 1];
+    if (end <= start) continue;
+    if (fitsAt(k, footZMm, (start + end) / 2)) {
+      if (Number.isNaN(inner)) inner = start;
+      outer = end;
+    }
+  }
+  // A limit range that only touches the line (the straight knee, say) fits at single crossings.
+  for (let i = 0; i < count; i += 1) {
+    const radius = candidates[i];
+    if (radius >= inner && radius <= outer) continue;
+    if (!fitsAt(k, footZMm, radius)) continue;
+    if (!(radius >= inner)) inner = radius;
+    if (!(radius <= outer)) outer = radius;
+  }
+  return Number.isNaN(inner) ? null : [inner, outer];
 }
 
-// Narrows [outside, inside] to the edge of the fitting region.
-function bisectEdge(k: LegConstants, footZMm: number, outsideMm: number, insideMm: number): number {
-  let outside = outsideMm;
-  let inside = insideMm;
-  while (Math.abs(inside - outside) > EDGE_TOLERANCE_MM) {
-    const middle = (inside + outside) / 2;
-    if (fitsAt(k, footZMm, middle)) inside = middle;
-    else outside = middle;
+/**
+ * The geometric tibia angles (radians) the knee-up solve can give, [−90°, 90°],
+ * that lie within the tibia's limits (servo limits plus the zero offset, a turn
+ * of 360° apart): one or two ranges, written as [low, high] pairs; returns how many.
+ */
+function tibiaRangesInto(k: LegConstants, out: Float64Array): number {
+  const low = k.tibiaMinDeg + k.tibiaOffsetDeg;
+  const high = k.tibiaMaxDeg + k.tibiaOffsetDeg;
+  let ranges = 0;
+  for (let turn = -2; turn <= 2 && ranges < 2; turn += 1) {
+    const from = Math.max(-90, low + 360 * turn);
+    const to = Math.min(90, high + 360 * turn);
+    if (from > to) continue;
+    out[ranges * 2] = from * RAD_PER_DEG;
+    out[ranges * 2 + 1] = to * RAD_PER_DEG;
+    ranges += 1;
   }
-  return inside;
+  return ranges;
+}
+
+// The angle modulo a full turn, in (−π, π].
+function wrapPi(angleRad: number): number {
+  const wrapped = angleRad - TWO_PI * Math.round(angleRad / TWO_PI);
+  return wrapped === -Math.PI ? Math.PI : wrapped;
 }
 
 /**
