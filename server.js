@@ -8,6 +8,7 @@ import { createRequestHandler } from "@react-router/express";
 import compression from "compression";
 import express from "express";
 import morgan from "morgan";
+import { AsyncLocalStorage } from "node:async_hooks";
 import { readdirSync } from "node:fs";
 import path from "node:path";
 import { pathToFileURL } from "node:url";
@@ -54,7 +55,60 @@ const topLevel = new Set(readdirSync(clientDir).filter((name) => name !== "asset
 const files = express.static(clientDir, { index: false, maxAge: "1h" });
 app.use((req, res, next) => (topLevel.has(req.path.split("/")[1]) ? files(req, res, next) : next()));
 app.use(morgan("tiny"));
-app.all("*", createRequestHandler({ build, mode: process.env.NODE_ENV }));
+
+// Test-only, for npm run probe (scripts/probe), and only for requests from
+// this machine. The app's Request carries no socket address, so while
+// GAITLOOM_RATE_LIMITS=off or GAITLOOM_PROBE_COUNTS=1 is set the address is
+// kept for each request's async work (app/platform/loopback.server.ts reads
+// it). With GAITLOOM_PROBE_COUNTS=1, every loader and action a loopback
+// request enters is counted per route, method and handler (the framework's
+// route instrumentation), named in the answer's X-Gaitloom-Probe-Reached
+// header, and the counts are served to loopback at GET /local/probe-counts.
+const probeCounts = process.env.GAITLOOM_PROBE_COUNTS === "1";
+const isLoopback = (address = "") => address === "::1" || /^(::ffff:)?127\./.test(address);
+let served = build;
+if (probeCounts || process.env.GAITLOOM_RATE_LIMITS === "off") {
+  const peers = new AsyncLocalStorage();
+  globalThis[Symbol.for("gaitloom.requestPeer")] = peers;
+  app.use((req, res, next) => {
+    const peer = { loopback: isLoopback(req.socket.remoteAddress), reached: [] };
+    if (probeCounts && peer.loopback) {
+      const writeHead = res.writeHead;
+      res.writeHead = function (...args) {
+        if (peer.reached.length && !res.headersSent) res.setHeader("X-Gaitloom-Probe-Reached", peer.reached.join(", "));
+        return writeHead.apply(this, args);
+      };
+    }
+    peers.run(peer, next);
+  });
+  if (probeCounts) {
+    const counts = new Map();
+    const counting = {
+      route(route) {
+        const count =
+          (handler) =>
+          async (call, { request }) => {
+            const peer = peers.getStore();
+            if (peer?.loopback) {
+              const key = `${route.id} ${request.method} ${handler}`;
+              counts.set(key, (counts.get(key) ?? 0) + 1);
+              peer.reached.push(`${route.id} ${handler}`);
+            }
+            await call();
+          };
+        route.instrument({ loader: count("loader"), action: count("action") });
+      },
+    };
+    const instrumentations = [...(build.entry.module.instrumentations ?? []), counting];
+    served = { ...build, entry: { ...build.entry, module: { ...build.entry.module, instrumentations } } };
+    app.get("/local/probe-counts", (req, res) => {
+      if (!isLoopback(req.socket.remoteAddress)) return res.status(404).end();
+      res.set("Cache-Control", "no-store").json(Object.fromEntries(counts));
+    });
+  }
+}
+
+app.all("*", createRequestHandler({ build: served, mode: process.env.NODE_ENV }));
 
 const port = Number(process.env.PORT ?? 3000);
 const host = process.env.HOST ?? "127.0.0.1";
