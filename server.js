@@ -56,6 +56,20 @@ const files = express.static(clientDir, { index: false, maxAge: "1h" });
 app.use((req, res, next) => (topLevel.has(req.path.split("/")[1]) ? files(req, res, next) : next()));
 app.use(morgan("tiny"));
 
+// What the framework cannot make a Fetch Request of would fail inside it as a
+// 500: a Host header that names no host, and the methods Fetch forbids.
+const UNFETCHABLE_METHODS = new Set(["CONNECT", "TRACE", "TRACK"]);
+app.use((req, res, next) => {
+  const refuse = (status, message) =>
+    req.path.startsWith("/api/") ? res.status(status).json({ error: { code: "bad_request", message } }) : res.status(status).type("text/plain").send(message);
+  if (UNFETCHABLE_METHODS.has(req.method)) {
+    res.set("Allow", "GET, HEAD, POST, PUT");
+    return refuse(405, `${req.method} is not a method Gaitloom answers.`);
+  }
+  if (!URL.canParse(`http://${req.get("host") ?? ""}/`)) return refuse(400, "The Host header does not name a host.");
+  next();
+});
+
 // Test-only, for npm run probe (scripts/probe), and only for requests from
 // this machine. The app's Request carries no socket address, so while
 // GAITLOOM_RATE_LIMITS=off or GAITLOOM_PROBE_COUNTS=1 is set the address is
