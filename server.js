@@ -57,12 +57,12 @@ app.use((req, res, next) => (topLevel.has(req.path.split("/")[1]) ? files(req, r
 app.use(morgan("tiny"));
 
 // What the framework cannot make a Fetch Request of would fail inside it as a
-// 500: a Host header that names no host, and the methods Fetch forbids.
-const UNFETCHABLE_METHODS = new Set(["CONNECT", "TRACE", "TRACK"]);
+// 500: a Host header that names no host, and TRACE, a method Fetch forbids
+// (Node's parser itself refuses the others, CONNECT and TRACK).
 app.use((req, res, next) => {
   const refuse = (status, message) =>
     req.path.startsWith("/api/") ? res.status(status).json({ error: { code: "bad_request", message } }) : res.status(status).type("text/plain").send(message);
-  if (UNFETCHABLE_METHODS.has(req.method)) {
+  if (req.method === "TRACE") {
     res.set("Allow", "GET, HEAD, POST, PUT");
     return refuse(405, `${req.method} is not a method Gaitloom answers.`);
   }
