@@ -15,7 +15,7 @@ export type TableExportErrorCode =
   | "duplicate-channel"
   /** The solved result does not fit the robot (a leg missing, no frames, a value not finite). */
   | "solved-mismatch"
-  /** A value does not fit the C header's integer type. */
+  /** A value does not fit the table's integers: the C header's type, or 32 bits in any format. */
   | "value-out-of-range"
   /** The metadata asks for another exporter version than this code is. */
   | "exporter-version";

@@ -96,6 +96,9 @@ function channelInfo(entry: TableChannel): ChannelInfo {
   };
 }
 
+const INT32_MIN = -(2 ** 31);
+const INT32_MAX = 2 ** 31 - 1;
+
 /** Whole µs inside minUs..maxUs: rounding a clamped pulse must not step out of a range with fractional ends. */
 function wholePulse(us: number, minUs: number, maxUs: number): number {
   const rounded = toFixedPoint(us, 1);
@@ -171,6 +174,9 @@ export function angleTableData(robot: Robot, solved: SolvedSequence, options: Ta
     const frame = frames[row];
     frameIndex[row] = frame.index;
     timeUs[row] = timeToMicroseconds(frame.timeMs);
+    if (!Number.isFinite(timeUs[row])) {
+      throw new TableExportError("solved-mismatch", `frame ${frame.index} plays at ${frame.timeMs} ms; a table never holds a time that is not finite`);
+    }
     const base = row * channelCount;
     for (let legIndex = 0; legIndex < legCount; legIndex += 1) {
       const leg = frame.legs[legIds[legIndex]];
@@ -202,6 +208,13 @@ export function angleTableData(robot: Robot, solved: SolvedSequence, options: Ta
         if (units === "us") cell = cellUs;
         else if (units === "deg") cell = toFixedPoint(servoDeg, scale);
         else cell = toFixedPoint(servoDeg * RAD_PER_DEG, scale);
+        // The cells are int32: a larger value would wrap silently into a wrong angle.
+        if (!(cell >= INT32_MIN && cell <= INT32_MAX)) {
+          throw new TableExportError(
+            "value-out-of-range",
+            `frame ${frame.index} holds ${servoDeg}° for ${entry.name}, more than a table's 32-bit integers hold in ${unitRounding.label}`,
+          );
+        }
         values[base + entry.column] = cell;
       }
     }

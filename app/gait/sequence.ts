@@ -211,6 +211,65 @@ export function sequenceIssuesForRobot(robot: Robot, sequence: Sequence): Sequen
   return issues;
 }
 
+/**
+ * Numbers of a sequence outside the format's ranges — what parseSequence
+ * refuses, but a sequence built or changed in code may hold (a NaN foot, an
+ * infinite offset) — as issues with paths, at most `limit`. The solve checks
+ * with it, so that such a sequence is refused rather than solved into NaN.
+ * Plain comparisons; a path is only written for what is found.
+ */
+export function sequenceRangeIssues(sequence: Sequence, limit = 10): SequenceIssue[] {
+  const issues: SequenceIssue[] = [];
+  const note = (path: string, value: unknown, bound: Bound) => {
+    if (issues.length < limit) issues.push({ path, message: `must be a number from ${bound.min} to ${bound.max} (got ${String(value)})` });
+  };
+  if (outside(sequence.cycleMs, CYCLE_MS)) note("cycleMs", sequence.cycleMs, CYCLE_MS);
+  if (outside(sequence.fps, FRAME_RATE_FPS)) note("fps", sequence.fps, FRAME_RATE_FPS);
+  const generator = sequence.generator;
+  if (generator.dutyFactor !== undefined && outside(generator.dutyFactor, UNIT_INTERVAL)) note("generator.dutyFactor", generator.dutyFactor, UNIT_INTERVAL);
+  for (const [legId, phase] of Object.entries(generator.phase ?? {})) if (outside(phase, UNIT_INTERVAL)) note(`generator.phase.${legId}`, phase, UNIT_INTERVAL);
+  if (outside(generator.strideMm, STRIDE_MM)) note("generator.strideMm", generator.strideMm, STRIDE_MM);
+  if (outside(generator.directionDeg, FULL_TURN_DEG)) note("generator.directionDeg", generator.directionDeg, FULL_TURN_DEG);
+  if (outside(generator.turnDegPerCycle, FULL_TURN_DEG)) note("generator.turnDegPerCycle", generator.turnDegPerCycle, FULL_TURN_DEG);
+  if (outside(generator.stepHeightMm, STEP_HEIGHT_MM)) note("generator.stepHeightMm", generator.stepHeightMm, STEP_HEIGHT_MM);
+  if (generator.bodyHeightMm !== undefined && outside(generator.bodyHeightMm, BODY_HEIGHT_MM)) {
+    note("generator.bodyHeightMm", generator.bodyHeightMm, BODY_HEIGHT_MM);
+  }
+  for (const [legId, track] of Object.entries(sequence.legs)) {
+    track.keys.forEach((key, index) => {
+      if (outside(key.t, UNIT_INTERVAL)) note(`legs.${legId}.keys[${index}].t`, key.t, UNIT_INTERVAL);
+      for (let axis = 0; key.foot && axis < 3; axis += 1) {
+        if (outside(key.foot[axis], FOOT_MM)) note(`legs.${legId}.keys[${index}].foot[${axis}]`, key.foot[axis], FOOT_MM);
+      }
+      for (let i = 0; key.ease && i < 4; i += 1) {
+        const bound = i % 2 === 0 ? UNIT_INTERVAL : EASE_Y;
+        if (outside(key.ease[i], bound)) note(`legs.${legId}.keys[${index}].ease[${i}]`, key.ease[i], bound);
+      }
+      if (key.apexMm !== undefined && outside(key.apexMm, STEP_HEIGHT_MM)) note(`legs.${legId}.keys[${index}].apexMm`, key.apexMm, STEP_HEIGHT_MM);
+    });
+  }
+  sequence.body.keys.forEach((key, index) => {
+    if (outside(key.t, UNIT_INTERVAL)) note(`body.keys[${index}].t`, key.t, UNIT_INTERVAL);
+    for (const field of POSE_FIELDS) {
+      const bound = field === "x" || field === "y" || field === "z" ? BODY_OFFSET_MM : HALF_TURN_DEG;
+      if (outside(key.pose[field], bound)) note(`body.keys[${index}].pose.${field}`, key.pose[field], bound);
+    }
+    for (let i = 0; key.ease && i < 4; i += 1) {
+      const bound = i % 2 === 0 ? UNIT_INTERVAL : EASE_Y;
+      if (outside(key.ease[i], bound)) note(`body.keys[${index}].ease[${i}]`, key.ease[i], bound);
+    }
+  });
+  return issues;
+}
+
+const UNIT_INTERVAL: Bound = { min: 0, max: 1 };
+const POSE_FIELDS = ["x", "y", "z", "roll", "pitch", "yaw"] as const;
+
+// NaN and a missing number fail both comparisons, so they are outside every range.
+function outside(value: number | undefined, bound: Bound): boolean {
+  return !(value !== undefined && value >= bound.min && value <= bound.max);
+}
+
 /** Thrown by the engine for a sequence or parameters that do not fit the robot; carries the issues. */
 export class GaitInputError extends Error {
   readonly issues: SequenceIssue[];

@@ -30,7 +30,7 @@ import { compileBodyTrack, sampleBodyPiece, type BodyPiece } from "./interpolate
 import { TIME_EPSILON, compileLegTrack, pieceFraction, type LegTrackPlan } from "./interpolate/legs";
 import { swingPoint } from "./interpolate/swing";
 import { createPlanar, createTravel, headingToWorld, travelBy, worldToHeading, type Travel } from "./interpolate/travel";
-import { GaitInputError, MAX_FPS, MAX_FRAMES, sequenceIssuesForRobot, type Sequence } from "./sequence";
+import { GaitInputError, MAX_FPS, MAX_FRAMES, sequenceIssuesForRobot, sequenceRangeIssues, type Sequence } from "./sequence";
 import { FLAG_KINDS, type Flag, type FlagKind, type SolveOptions, type SolveSummary, type SolvedFrame, type SolvedLeg, type SolvedSequence } from "./solved";
 import { clampPulseUs, createPulseTable, rawPulseUs } from "./pulses";
 import { convexHullInto, stabilityMargin } from "./support";
@@ -49,7 +49,8 @@ function resolveFrameRate(sequence: Sequence, options: SolveOptions): number {
   const fps = options.fps ?? sequence.fps;
   if (!(fps > 0 && fps <= MAX_FPS)) throw new GaitInputError("cannot solve", [{ path: "fps", message: `must lie in (0, ${MAX_FPS}] (got ${fps})` }]);
   const frames = Math.round((sequence.cycleMs * fps) / 1000);
-  if (frames < 1 || frames > MAX_FRAMES) {
+  // Written so that NaN fails too.
+  if (!(frames >= 1 && frames <= MAX_FRAMES)) {
     throw new GaitInputError("cannot solve", [{ path: "fps", message: `gives ${frames} frames (cycleMs · fps / 1000), 1 to ${MAX_FRAMES} allowed` }]);
   }
   return fps;
@@ -99,6 +100,9 @@ export function solveSequence(robot: Robot, sequence: Sequence, options: SolveOp
  * the frames from it; the column layout reads it directly (columns.ts).
  */
 export function runSolve(robot: Robot, sequence: Sequence, options: SolveOptions = {}): SolveRun {
+  // A parsed sequence has none; one built or changed in code might, and NaN in means NaN out.
+  const outOfRange = sequenceRangeIssues(sequence);
+  if (outOfRange.length > 0) throw new GaitInputError("sequence holds numbers outside the format's ranges", outOfRange);
   const issues = sequenceIssuesForRobot(robot, sequence);
   if (issues.length > 0) throw new GaitInputError(`sequence does not fit robot "${robot.name}"`, issues);
   const sampling = prepare(robot, sequence, options);
@@ -488,6 +492,8 @@ export function summarize(
       const peak = peaks[leg * 3 + j];
       if (peak <= 0) continue;
       const headroom = state.joints[leg * 3 + j].maxSpeedDegS / peak;
+      // A peak of round-off (5e-324 °/s) would give an infinite headroom: no joint moves that little.
+      if (!(headroom < Infinity)) continue;
       if (speedHeadroom === null || headroom < speedHeadroom) speedHeadroom = headroom;
     }
   });

@@ -2,7 +2,7 @@
 // solveLeg; forwardLegJoints: where every joint is, for drawing the leg. Both
 // come from the kernel's one forward solve (leg-kernel.ts).
 import { createPoseRotationCache } from "./body-pose";
-import { cachedLegConstants } from "./leg-constants";
+import { cachedLegConstants, type LegConstants } from "./leg-constants";
 import { forwardLegInto, legJointsInto } from "./leg-kernel";
 import { findLeg, type BodyPose, type JointAngles, type Robot, type Vec3 } from "./robot";
 
@@ -18,6 +18,7 @@ export type LegJointPoints = {
   foot: Vec3;
 };
 
+const POSE_FIELDS = ["x", "y", "z", "roll", "pitch", "yaw"] as const;
 const footScratch = new Float64Array(3);
 // The coxa joint (the mount), then the femur joint, knee and foot as legJointsInto writes them.
 const jointsScratch = new Float64Array(12);
@@ -28,7 +29,7 @@ const rotationOf = createPoseRotationCache();
  * the body moved by `bodyPose` if given: R·p + t of the foot p in the moved body frame.
  */
 export function forwardLeg(robot: Robot, legId: string, angles: JointAngles, bodyPose?: BodyPose): Vec3 {
-  const k = cachedLegConstants(findLeg(robot, legId));
+  const k = checkedConstants("forwardLeg", robot, legId, angles, bodyPose);
   forwardLegInto(k, angles.coxa, angles.femur, angles.tibia, footScratch, 0);
   return toNeutral(footScratch, 0, bodyPose);
 }
@@ -39,7 +40,7 @@ export function forwardLeg(robot: Robot, legId: string, angles: JointAngles, bod
  * foot is forwardLeg's.
  */
 export function forwardLegJoints(robot: Robot, legId: string, angles: JointAngles, bodyPose?: BodyPose): LegJointPoints {
-  const k = cachedLegConstants(findLeg(robot, legId));
+  const k = checkedConstants("forwardLegJoints", robot, legId, angles, bodyPose);
   jointsScratch[0] = k.mountXMm;
   jointsScratch[1] = k.mountYMm;
   jointsScratch[2] = k.mountZMm;
@@ -52,6 +53,27 @@ export function forwardLegJoints(robot: Robot, legId: string, angles: JointAngle
   };
 }
 
+/**
+ * The leg's constants, once its numbers, the angles and the pose are known to
+ * give a finite foot: a foot of NaN has no meaning, and the contract has no
+ * other way to say so than a RangeError (a caller's bug, as findLeg's).
+ */
+function checkedConstants(what: string, robot: Robot, legId: string, angles: JointAngles, bodyPose: BodyPose | undefined): LegConstants {
+  const k = cachedLegConstants(findLeg(robot, legId));
+  if (k.problem !== null) throw new RangeError(`${what}: leg ${legId} cannot be posed: ${k.problem} (a definition parseRobot would refuse)`);
+  // One test on the way through; the words only when it fails.
+  if (!(Number.isFinite(angles.coxa) && Number.isFinite(angles.femur) && Number.isFinite(angles.tibia))) {
+    const joint = !Number.isFinite(angles.coxa) ? "coxa" : !Number.isFinite(angles.femur) ? "femur" : "tibia";
+    throw new RangeError(`${what}: leg ${legId}: the ${joint} angle is ${angles[joint]}; servo angles must be finite numbers of degrees`);
+  }
+  // v·0 is 0 for a finite v and NaN for NaN or an infinity.
+  if (bodyPose && !(bodyPose.x * 0 + bodyPose.y * 0 + bodyPose.z * 0 + bodyPose.roll * 0 + bodyPose.pitch * 0 + bodyPose.yaw * 0 === 0)) {
+    const field = POSE_FIELDS.find((name) => !Number.isFinite(bodyPose[name])) ?? "roll";
+    throw new RangeError(`${what}: leg ${legId}: the body pose's ${field} is ${bodyPose[field]}; it must be a finite number`);
+  }
+  return k;
+}
+
 // p = point[offset..offset+2] in the moved body frame → neutral body frame, R·p + t (p itself without a pose).
 function toNeutral(point: Float64Array, offset: number, bodyPose: BodyPose | undefined): Vec3 {
   const x = point[offset];
@@ -59,5 +81,10 @@ function toNeutral(point: Float64Array, offset: number, bodyPose: BodyPose | und
   const z = point[offset + 2];
   if (!bodyPose) return [x, y, z];
   const r = rotationOf(bodyPose);
-  return [r[0] * x + r[1] * y + r[2] * z + bodyPose.x, r[3] * x + r[4] * y + r[5] * z + bodyPose.y, r[6] * x + r[7] * y + r[8] * z + bodyPose.z];
+  const foot: Vec3 = [r[0] * x + r[1] * y + r[2] * z + bodyPose.x, r[3] * x + r[4] * y + r[5] * z + bodyPose.y, r[6] * x + r[7] * y + r[8] * z + bodyPose.z];
+  // Only a translation near the largest double can overflow here.
+  if (!(Number.isFinite(foot[0]) && Number.isFinite(foot[1]) && Number.isFinite(foot[2]))) {
+    throw new RangeError(`the body pose's translation (${bodyPose.x}, ${bodyPose.y}, ${bodyPose.z}) mm takes the foot past the largest number`);
+  }
+  return foot;
 }

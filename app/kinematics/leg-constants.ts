@@ -2,10 +2,17 @@
 // yaw, squared lengths, offsets in radians. The hot-path solver keeps these for
 // a whole sequence; the one-off solveLeg builds them per call.
 import { RAD_PER_DEG } from "./angles";
+import { legProblem } from "./definition-check";
 import type { Leg } from "./robot";
 
 export type LegConstants = {
   id: string;
+  /**
+   * Null for a leg within the format's ranges, as parseRobot returns it; else
+   * the first number outside, in words. The solve refuses such a leg (its
+   * squares may overflow, its offsets be NaN) rather than answer NaN.
+   */
+  problem: string | null;
   mountXMm: number;
   mountYMm: number;
   mountZMm: number;
@@ -46,6 +53,7 @@ export function legConstants(leg: Leg): LegConstants {
   const yawRad = leg.mount.yawDeg * RAD_PER_DEG;
   return {
     id: leg.id,
+    problem: legProblem(leg),
     mountXMm: leg.mount.x,
     mountYMm: leg.mount.y,
     mountZMm: leg.mount.z,

@@ -16,6 +16,7 @@ import {
   SOLVE_COXA_LIMIT,
   SOLVE_FEMUR_LIMIT,
   SOLVE_INSIDE_FOLD,
+  SOLVE_INVALID_LEG,
   SOLVE_NOT_FINITE,
   SOLVE_ON_COXA_AXIS,
   SOLVE_TIBIA_LIMIT,
@@ -32,9 +33,12 @@ const LIMIT_TOLERANCE_DEG = 1e-9;
 /**
  * Solves one leg for a foot at (x, y, z) in the body frame; writes servo degrees
  * (coxa, femur, tibia) to out[offset..offset+2] and returns the SOLVE_* bits.
- * Unreachable targets get the clamped solution: finite angles, never NaN.
+ * Unreachable targets get the clamped solution: finite angles, never NaN,
+ * whatever the target; a leg whose own numbers are out of range (k.problem)
+ * gets zeros and SOLVE_INVALID_LEG.
  */
 export function solveLegInto(k: LegConstants, x: number, y: number, z: number, out: NumberSink, offset: number): number {
+  if (k.problem !== null) return invalidLeg(out, offset);
   // Into the leg frame: translate to the mount, turn by −yaw.
   const dx = x - k.mountXMm;
   const dy = y - k.mountYMm;
@@ -42,8 +46,11 @@ export function solveLegInto(k: LegConstants, x: number, y: number, z: number, o
   const legY = k.cosYaw * dy - k.sinYaw * dx;
   const legZ = z - k.mountZMm;
   const radius = Math.sqrt(legX * legX + legY * legY);
-  // NaN fails every comparison, so this also catches NaN targets.
-  if (!(radius < Infinity && Math.abs(legZ) < Infinity)) return notFinite(k, out, offset);
+  // NaN fails every comparison, so this also catches NaN targets; a finite
+  // target whose squares overflow (beyond about 1e154 mm) takes the far path.
+  if (!(radius < Infinity && Math.abs(legZ) < Infinity)) {
+    return Number.isFinite(x) && Number.isFinite(y) && Number.isFinite(z) ? farTarget(k, x, y, z, out, offset) : notFinite(k, out, offset);
+  }
   let bits = 0;
   if (radius < COXA_AXIS_CLEARANCE_MM) bits |= SOLVE_ON_COXA_AXIS;
   const coxaRad = Math.atan2(legY, legX);
@@ -57,8 +64,9 @@ export function solveLegInto(k: LegConstants, x: number, y: number, z: number, o
   if (distance > k.reachMaxMm + REACH_TOLERANCE_MM) bits |= SOLVE_BEYOND_REACH;
   else if (distance < k.reachMinMm - REACH_TOLERANCE_MM) bits |= SOLVE_INSIDE_FOLD;
   let cosKnee = (k.linkSquaresSum - distanceSquared) / k.twiceFemurTibia;
+  // Clamped, and written so that a NaN would come out as the straight leg.
   if (cosKnee > 1) cosKnee = 1;
-  else if (cosKnee < -1) cosKnee = -1;
+  else if (!(cosKnee >= -1)) cosKnee = -1;
   const kneeRad = Math.acos(cosKnee);
   const sinKnee = Math.sqrt(1 - cosKnee * cosKnee);
   // Knee-up branch: φt = γ − 90° ∈ [−90°, 90°]. The foot seen from the femur
@@ -84,6 +92,35 @@ export function limitBits(k: LegConstants, coxaDeg: number, femurDeg: number, ti
   if (femurDeg < k.femurMinDeg - LIMIT_TOLERANCE_DEG || femurDeg > k.femurMaxDeg + LIMIT_TOLERANCE_DEG) bits |= SOLVE_FEMUR_LIMIT;
   if (tibiaDeg < k.tibiaMinDeg - LIMIT_TOLERANCE_DEG || tibiaDeg > k.tibiaMaxDeg + LIMIT_TOLERANCE_DEG) bits |= SOLVE_TIBIA_LIMIT;
   return bits;
+}
+
+// A target so far out that its squares overflow, though every coordinate is
+// finite: the straight leg pointing at it (cos γ = −1, the femur along the line
+// to the foot), worked out on the target scaled down by 2^−1000 so that
+// nothing overflows. Such a target is always beyond full extension.
+const FAR_SCALE = 2 ** -1000;
+function farTarget(k: LegConstants, x: number, y: number, z: number, out: NumberSink, offset: number): number {
+  const dx = x * FAR_SCALE - k.mountXMm * FAR_SCALE;
+  const dy = y * FAR_SCALE - k.mountYMm * FAR_SCALE;
+  const legX = k.cosYaw * dx + k.sinYaw * dy;
+  const legY = k.cosYaw * dy - k.sinYaw * dx;
+  const legZ = z * FAR_SCALE - k.mountZMm * FAR_SCALE;
+  const u = Math.sqrt(legX * legX + legY * legY) - k.coxaMm * FAR_SCALE;
+  const coxaDeg = wrapNear((Math.atan2(legY, legX) - k.coxaOffsetRad) * DEG_PER_RAD, k.coxaMidDeg);
+  const femurDeg = wrapNear((Math.atan2(legZ, u) - k.femurOffsetRad) * DEG_PER_RAD, k.femurMidDeg);
+  const tibiaDeg = wrapNear((HALF_PI - k.tibiaOffsetRad) * DEG_PER_RAD, k.tibiaMidDeg);
+  out[offset] = coxaDeg;
+  out[offset + 1] = femurDeg;
+  out[offset + 2] = tibiaDeg;
+  return SOLVE_BEYOND_REACH | limitBits(k, coxaDeg, femurDeg, tibiaDeg);
+}
+
+// A leg whose own numbers are out of range: zeros, the one posture that needs none of them.
+function invalidLeg(out: NumberSink, offset: number): number {
+  out[offset] = 0;
+  out[offset + 1] = 0;
+  out[offset + 2] = 0;
+  return SOLVE_INVALID_LEG;
 }
 
 // A target with NaN or infinite coordinates: the joints' geometric zero, so no NaN leaves.

@@ -2,6 +2,7 @@
 // the body pose's rotation once per frame, results written into the caller's
 // arrays. No allocation per call.
 import { poseRotation } from "./body-pose";
+import { robotProblem } from "./definition-check";
 import { legConstants, type LegConstants } from "./leg-constants";
 import { forwardLegInto, limitBits, solveLegInto } from "./leg-kernel";
 import type { BodyPose, Robot } from "./robot";
@@ -32,7 +33,13 @@ export interface LegSolver {
   reason(legIndex: number, footXMm: number, footYMm: number, footZMm: number, status: number): string;
 }
 
+/**
+ * Throws a RangeError for a robot with a number outside the format's ranges (a
+ * definition parseRobot would refuse): the hot path trusts its constants.
+ */
 export function createLegSolver(robot: Robot): LegSolver {
+  const problem = robotProblem(robot);
+  if (problem !== null) throw new RangeError(`robot "${robot.name}" cannot be solved: ${problem} (a definition parseRobot would refuse)`);
   const constants: LegConstants[] = robot.legs.map(legConstants);
   const legIds = Object.freeze(robot.legs.map((leg) => leg.id));
   const rotation = new Float64Array(9);

@@ -31,6 +31,7 @@ export type ReachRing = {
 export function reachRing(robot: Robot, legId: string, footZMm: number): ReachRing {
   const leg = findLeg(robot, legId);
   const k = legConstants(leg);
+  if (k.problem !== null) throw new RangeError(`reachRing: leg ${legId} has no reach: ${k.problem} (a definition parseRobot would refuse)`);
   const height = Math.abs(footZMm - k.mountZMm);
   let geometricInnerMm = 0;
   let geometricOuterMm = 0;

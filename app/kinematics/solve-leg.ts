@@ -10,6 +10,7 @@ import {
   SOLVE_COXA_LIMIT,
   SOLVE_FEMUR_LIMIT,
   SOLVE_INSIDE_FOLD,
+  SOLVE_INVALID_LEG,
   SOLVE_NOT_FINITE,
   SOLVE_ON_COXA_AXIS,
   SOLVE_TIBIA_LIMIT,
@@ -62,6 +63,7 @@ export function solveLeg(robot: Robot, legId: string, foot: Vec3, bodyPose?: Bod
 
 /** The human reason for an unreachable target (body-frame mm), naming the leg and the distance. */
 export function unreachableReason(k: LegConstants, x: number, y: number, z: number, bits: number): string {
+  if (bits & SOLVE_INVALID_LEG) return `leg ${k.id}: cannot be solved: ${k.problem ?? "its numbers are out of range"} (a definition parseRobot would refuse)`;
   if (bits & SOLVE_NOT_FINITE) return `leg ${k.id}: the target (${x}, ${y}, ${z}) is not a finite point`;
   const radius = Math.hypot(x - k.mountXMm, y - k.mountYMm);
   if (bits & SOLVE_ON_COXA_AXIS) {
@@ -78,5 +80,6 @@ export function unreachableReason(k: LegConstants, x: number, y: number, z: numb
 }
 
 function mm(value: number): string {
-  return `${value.toFixed(1)} mm`;
+  // A finite target far enough out has a distance past the largest double.
+  return value < Infinity ? `${value.toFixed(1)} mm` : "over 1e308 mm";
 }

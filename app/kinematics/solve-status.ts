@@ -10,7 +10,9 @@ export const SOLVE_INSIDE_FOLD = 2;
 export const SOLVE_ON_COXA_AXIS = 4;
 /** The target has a NaN or infinite coordinate. */
 export const SOLVE_NOT_FINITE = 64;
-export const SOLVE_UNREACHABLE = SOLVE_BEYOND_REACH | SOLVE_INSIDE_FOLD | SOLVE_ON_COXA_AXIS | SOLVE_NOT_FINITE;
+/** The leg's own numbers lie outside the format's ranges (a definition that skipped parseRobot): no posture is solved. */
+export const SOLVE_INVALID_LEG = 128;
+export const SOLVE_UNREACHABLE = SOLVE_BEYOND_REACH | SOLVE_INSIDE_FOLD | SOLVE_ON_COXA_AXIS | SOLVE_NOT_FINITE | SOLVE_INVALID_LEG;
 export const SOLVE_COXA_LIMIT = 8;
 export const SOLVE_FEMUR_LIMIT = 16;
 export const SOLVE_TIBIA_LIMIT = 32;
