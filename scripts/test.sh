@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
-# npm test: typecheck, lint, format, unit, integration (real PostgreSQL) and e2e
-# (Debian's Chromium), each set up from scratch, ending with one "N passed, N failed" line.
+# npm test: typecheck, lint, format, unit, integration (real PostgreSQL), e2e
+# (Debian's Chromium) and a seeded sample of the probe (scripts/probe), each set
+# up from scratch, ending with one "N passed, N failed" line.
 set -uo pipefail
 source "$(dirname "$0")/lib/common.sh"
 source "$(dirname "$0")/lib/postgres.sh"
@@ -51,6 +52,7 @@ VITEST_RC=$?
 
 say "building the app for the browser tests"
 E2E_RC=1
+PROBE_RC=""
 if (cd "$ROOT" && npx react-router build >"$REPORTS/build.log" 2>&1); then
   pg_recreate_database "$E2E_DB" "$TEMPLATE_DB"
   export DATABASE_URL="$(pg_url "$E2E_DB")"
@@ -64,13 +66,21 @@ if (cd "$ROOT" && npx react-router build >"$REPORTS/build.log" 2>&1); then
     # (The server finds its assets at build/client relative to its working folder.)
     SERVE_DIR="$DATA_DIR/test-serve-$APP_PORT"
     rm -rf "$SERVE_DIR" && mkdir -p "$SERVE_DIR" && cp -r "$ROOT/build" "$SERVE_DIR/build"
+    # The probe's switches (scripts/probe.sh), honoured for loopback requests only.
     service_start test-app "$REPORTS/app.log" env NODE_ENV=production HOST=127.0.0.1 PORT="$APP_PORT" \
+      GAITLOOM_PROBE_COUNTS=1 GAITLOOM_RATE_LIMITS=off \
       bash -c 'cd "$1" && exec node "$2/server.js" build/server/index.js' serve "$SERVE_DIR" "$ROOT"
     ( service_wait_port test-app "$APP_PORT" "$REPORTS/app.log" ) && {
       say "browser tests (Playwright driving /usr/bin/chromium)"
       (cd "$ROOT" && GAITLOOM_E2E_URL="$PUBLIC_URL" PLAYWRIGHT_JSON_OUTPUT_NAME="$REPORTS/e2e.json" \
         npx playwright test -c e2e/playwright.config.ts --reporter=list,json)
       E2E_RC=$?
+      # After the browser tests, as it writes to their database: 600 hostile requests from seed 1.
+      say "probe sample (600 malformed and hostile requests across every route, seed 1)"
+      (cd "$ROOT" && GAITLOOM_PROBE_SESSION_SECRET="$SESSION_SECRET" npx tsx scripts/probe/run.ts --url "$PUBLIC_URL" \
+        --seed 1 --count 600 --seconds 90 --app-log "$REPORTS/app.log" --report "$REPORTS/probe.json") >"$REPORTS/probe.log" 2>&1
+      PROBE_RC=$?
+      [ $PROBE_RC -eq 0 ] && say "probe sample passed: $(tail -n 1 "$REPORTS/probe.log")" || { tail -n 80 "$REPORTS/probe.log"; warn "probe sample failed"; }
     }
   fi
 else
@@ -81,6 +91,6 @@ fi
 services_stop_all
 if [ -n "$PG_STARTED_HERE" ]; then pg_stop; PG_STARTED_HERE=""; fi
 say "finished in $(( $(date +%s) - STARTED_AT )) s"
-node "$ROOT/scripts/lib/summarize.mjs" "$REPORTS" "$TYPECHECK_RC" "$LINT_RC" "$FORMAT_RC"
+node "$ROOT/scripts/lib/summarize.mjs" "$REPORTS" "$TYPECHECK_RC" "$LINT_RC" "$FORMAT_RC" "$PROBE_RC"
 SUMMARY_RC=$?
-[ $TYPECHECK_RC -eq 0 ] && [ $LINT_RC -eq 0 ] && [ $FORMAT_RC -eq 0 ] && [ $VITEST_RC -eq 0 ] && [ $E2E_RC -eq 0 ] && [ $SUMMARY_RC -eq 0 ]
+[ $TYPECHECK_RC -eq 0 ] && [ $LINT_RC -eq 0 ] && [ $FORMAT_RC -eq 0 ] && [ $VITEST_RC -eq 0 ] && [ $E2E_RC -eq 0 ] && [ "$PROBE_RC" = 0 ] && [ $SUMMARY_RC -eq 0 ]

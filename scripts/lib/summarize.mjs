@@ -1,18 +1,20 @@
 // Adds up the suites' JSON reports into the one closing line of `npm test`.
 // Dependency-free on purpose; a missing report counts as one failure. The
-// typecheck, lint and format steps count as one test each, by exit code.
+// typecheck, lint and format steps and the probe sample count as one test
+// each, by exit code (none: it did not run, one failure).
 import { existsSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 
-const [reports, typecheckRc, lintRc, formatRc] = process.argv.slice(2);
+const [reports, typecheckRc, lintRc, formatRc, probeRc] = process.argv.slice(2);
 const suites = [];
 
 for (const [name, rc] of [
   ["typecheck", typecheckRc],
   ["lint", lintRc],
   ["format", formatRc],
+  ["probe", probeRc],
 ]) {
-  suites.push({ name, passed: rc === "0" ? 1 : 0, failed: rc === "0" ? 0 : 1, ...(rc === undefined ? { note: "did not run" } : {}) });
+  suites.push({ name, passed: rc === "0" ? 1 : 0, failed: rc === "0" ? 0 : 1, ...(rc === undefined || rc === "" ? { note: "did not run" } : {}) });
 }
 
 const read = (file) => (existsSync(join(reports, file)) ? JSON.parse(readFileSync(join(reports, file), "utf8")) : null);
