@@ -60,7 +60,7 @@ test("create a robot by uploading JSON, edit a link length and save as revision 
   // Inline validation next to the field, on every change.
   const femur = page.getByRole("textbox", { name: "LF femur length (mm)" });
   await femur.fill("-5");
-  await expect(page.getByText("must be positive (got -5)").first()).toBeVisible();
+  await expect(page.getByText("must be at least 1 (got -5)").first()).toBeVisible();
   await expect(page.getByRole("button", { name: "Save as revision 2" })).toBeDisabled();
   await femur.fill("88");
   await expect(page.getByRole("region", { name: "Problems" })).toHaveCount(0);
