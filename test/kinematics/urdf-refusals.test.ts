@@ -5,7 +5,7 @@
 // refusal that names the problem, like any other import refusal.
 import { describe, expect, test } from "vitest";
 import { fixtureText } from "../support/robots";
-import { importUrdf, type UrdfImportResult } from "~/kinematics";
+import { importUrdf, type UrdfImportResult } from "~/kinematics/urdf";
 
 const crab = () => fixtureText("test-crab.urdf");
 const withDoctype = (doctype: string) => crab().replace('<?xml version="1.0"?>', `<?xml version="1.0"?>\n${doctype}`);
