@@ -794,6 +794,34 @@ const HOSTILE_HEADERS: { headers: (origin: URL) => Record<string, string>; note:
 
 const roll = (target: Target) => target.fields.length + target.query.length > 0 || hasParam(target) || isAction(target);
 
+/**
+ * NUL or bytes that are not UTF-8 in each field, query parameter and path
+ * parameter of the target once, as one allowed to use it: the pass that
+ * reaches every field, before the families draw at random.
+ */
+export function everyField(target: Target, context: Context): Case[] {
+  const { random, world } = context;
+  const family = "NUL and invalid UTF-8";
+  const params = [...target.route.pattern.matchAll(/:([A-Za-z]+)/g)].map((match) => match[1]);
+  const cases: Case[] = [];
+  for (const field of [...target.fields, ...target.query]) {
+    const value = random.pick(NUL_AND_BAD_UTF8);
+    const identity = allowedIdentity(target, world, random);
+    const shown = value.bytes.length > 40 ? `${value.bytes.length} bytes` : JSON.stringify(value.bytes.toString("latin1"));
+    cases.push(
+      target.query.includes(field)
+        ? build(target, { identity, query: [[field.name, value]] }, context, family, `?${field.name}=${shown}`)
+        : build(target, { identity, fields: [[field.name, value]] }, context, family, `${field.name}=${shown}`),
+    );
+  }
+  for (const name of params) {
+    const value = random.pick(NUL_AND_BAD_UTF8);
+    const shown = JSON.stringify(value.bytes.toString("latin1"));
+    cases.push(build(target, { identity: allowedIdentity(target, world, random), params: { [name]: value } }, context, family, `:${name}=${shown}`));
+  }
+  return cases;
+}
+
 export const FAMILIES: Family[] = [
   {
     name: "well-formed",
