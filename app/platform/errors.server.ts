@@ -9,7 +9,7 @@ import type { ApiErrorCode, DetailRecord, ErrorDetails, FormError, Issue } from 
 
 export type { ApiErrorCode, DetailRecord, ErrorDetails, FormError, Issue } from "./errors";
 
-export type ErrorStatus = 400 | 403 | 404 | 409 | 410 | 413 | 422 | 503;
+export type ErrorStatus = 400 | 403 | 404 | 409 | 410 | 413 | 415 | 422 | 503;
 
 /** The code a refusal has when its status says all there is to say. */
 const GENERAL_CODES: Record<ErrorStatus, string> = {
@@ -19,6 +19,7 @@ const GENERAL_CODES: Record<ErrorStatus, string> = {
   409: "conflict",
   410: "gone",
   413: "too-large",
+  415: "unsupported-media-type",
   422: "invalid",
   503: "unavailable",
 };
@@ -58,7 +59,7 @@ const isIssueList = (details: ErrorDetails): details is readonly Issue[] => Arra
 
 /** The one JSON error shape of the API: `{ error: { code, message, details? } }`. */
 export function apiError(
-  status: 400 | 401 | 403 | 404 | 409 | 413 | 422 | 429 | 503,
+  status: 400 | 401 | 403 | 404 | 409 | 413 | 415 | 422 | 429 | 503,
   code: ApiErrorCode,
   message: string,
   details?: unknown,
@@ -74,6 +75,7 @@ const API_CODES: Record<ErrorStatus, ApiErrorCode> = {
   409: "conflict",
   410: "not_found",
   413: "payload_too_large",
+  415: "unsupported_media_type",
   422: "invalid",
   503: "unavailable",
 };

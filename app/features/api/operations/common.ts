@@ -70,6 +70,7 @@ const ERROR_CODES: ApiErrorCode[] = [
   "not_found",
   "conflict",
   "payload_too_large",
+  "unsupported_media_type",
   "invalid",
   "rate_limited",
   "unavailable",
