@@ -7,13 +7,14 @@ import "./app.css";
 import { Links, Meta, Outlet, Scripts, ScrollRestoration, useRouteLoaderData } from "react-router";
 import type { Route } from "./+types/root";
 import { ErrorPanel } from "./components/common/ErrorPanel";
+import { addressRefusal } from "./platform/address.server";
 import { crossOriginRefusal } from "./platform/origin.server";
 import { readTheme } from "./platform/theme";
 import type { RoutePermissions } from "./platform/permissions";
 
 export const middleware: Route.MiddlewareFunction[] = [
   async ({ request }, next) => {
-    const refusal = crossOriginRefusal(request);
+    const refusal = crossOriginRefusal(request) ?? addressRefusal(request);
     if (refusal) throw refusal;
     return next();
   },
