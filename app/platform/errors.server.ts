@@ -59,13 +59,19 @@ const isIssueList = (details: ErrorDetails): details is readonly Issue[] => Arra
 
 /** The one JSON error shape of the API: `{ error: { code, message, details? } }`. */
 export function apiError(
-  status: 400 | 401 | 403 | 404 | 409 | 413 | 415 | 422 | 429 | 503,
+  status: 400 | 401 | 403 | 404 | 405 | 409 | 413 | 415 | 422 | 429 | 500 | 501 | 503,
   code: ApiErrorCode,
   message: string,
   details?: unknown,
   headers?: HeadersInit,
 ): Response {
   return Response.json({ error: { code, message, ...(details === undefined ? {} : { details }) } }, { status, headers });
+}
+
+/** 405 for a method the route does not answer, with the Allow header RFC 9110 §15.5.6 requires. */
+export function methodNotAllowed(method: string, allow: readonly string[]): Response {
+  const methods = allow.length === 1 ? allow[0] : `${allow.slice(0, -1).join(", ")} and ${allow.at(-1)}`;
+  return apiError(405, "method_not_allowed", `${method} is not a method this address answers; it answers ${methods}.`, undefined, { Allow: allow.join(", ") });
 }
 
 const API_CODES: Record<ErrorStatus, ApiErrorCode> = {

@@ -23,8 +23,11 @@ export type ApiErrorCode =
   | "forbidden"
   | "not_found"
   | "conflict"
+  | "method_not_allowed"
   | "payload_too_large"
   | "unsupported_media_type"
   | "invalid"
   | "rate_limited"
+  | "internal_error"
+  | "not_implemented"
   | "unavailable";
