@@ -122,7 +122,34 @@ if (probeCounts || process.env.GAITLOOM_RATE_LIMITS === "off") {
   }
 }
 
-app.all("*", createRequestHandler({ build: served, mode: process.env.NODE_ENV }));
+// The framework routes these methods; for any other it answers 405 in a shape
+// of its own before the app's middleware runs. Under /api/v1 the answer is
+// made here, in the API's error shape: 501, a method no route knows
+// (RFC 9110 §15.6.2).
+const ROUTED_METHODS = new Set(["GET", "HEAD", "OPTIONS", "POST", "PUT", "PATCH", "DELETE"]);
+app.use("/api/v1", (req, res, next) => {
+  if (ROUTED_METHODS.has(req.method)) return next();
+  const message = `${req.method} is not a method this API knows; each route's Allow header says which it answers.`;
+  res.status(501).json({ error: { code: "not_implemented", message } });
+});
+
+// app.use, not app.all("*"): Express decodes a route's parameters and answers
+// a malformed percent-encoding (/api/v1/robots/%E0%A4%A) with its own HTML 400
+// before the app sees it; the app reads such addresses itself (the API
+// refuses them in its own shape).
+app.use(createRequestHandler({ build: served, mode: process.env.NODE_ENV }));
+
+// Whatever still reaches Express as an error (the handler passes on what it
+// could not answer) is answered under /api/v1 in the API's error shape, its
+// own text logged rather than sent; elsewhere Express answers as usual.
+app.use((error, req, res, next) => {
+  if (!/^\/api\/v1(\/|$)/.test(req.path) || res.headersSent) return next(error);
+  console.error(error);
+  const status = Number(error?.status ?? error?.statusCode);
+  if (status >= 400 && status < 500) return res.status(status).json({ error: { code: "bad_request", message: "The request could not be read." } });
+  const message = "Something went wrong on our side and the request was not completed; the error has been logged.";
+  res.status(500).json({ error: { code: "internal_error", message } });
+});
 
 const port = Number(process.env.PORT ?? 3000);
 const host = process.env.HOST ?? "127.0.0.1";
