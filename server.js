@@ -58,15 +58,15 @@ app.use(morgan("tiny"));
 
 // What the framework cannot make a Fetch Request of would fail inside it as a
 // 500: a Host header that names no host, and TRACE, a method Fetch forbids
-// (Node's parser itself refuses the others, CONNECT and TRACK).
+// (Node's parser itself refuses the others, CONNECT and TRACK); under /api/v1
+// TRACE is one of the methods answered 501 below.
 app.use((req, res, next) => {
-  const refuse = (status, message) =>
-    req.path.startsWith("/api/") ? res.status(status).json({ error: { code: "bad_request", message } }) : res.status(status).type("text/plain").send(message);
-  if (req.method === "TRACE") {
-    res.set("Allow", "GET, HEAD, POST, PUT");
-    return refuse(405, `${req.method} is not a method Gaitloom answers.`);
+  const api = /^\/api\/v1(\/|$)/.test(req.path);
+  if (!URL.canParse(`http://${req.get("host") ?? ""}/`)) {
+    const message = "The Host header does not name a host.";
+    return api ? res.status(400).json({ error: { code: "bad_request", message } }) : res.status(400).type("text/plain").send(message);
   }
-  if (!URL.canParse(`http://${req.get("host") ?? ""}/`)) return refuse(400, "The Host header does not name a host.");
+  if (req.method === "TRACE" && !api) return res.status(405).set("Allow", "GET, HEAD, POST").type("text/plain").send("TRACE is not a method Gaitloom answers.");
   next();
 });
 
