@@ -706,9 +706,21 @@ const UNKNOWN_API_PATHS = [
   "/api/v1/robots/%E0%A4%A",
   "/api/v1/schema/nope.json",
   "/api/v1/openapi.yaml",
+];
+
+const UNKNOWN_PAGE_PATHS = [
+  "/nope",
   "/.env",
   "/%00",
   "/robots/%ff",
+  "/robots/{robot}/nope",
+  "/gaits/{gait}/versions/1/x",
+  "/gaits/new/edit",
+  "/settings/nope",
+  "//evil.example",
+  "/%2e%2e/%2e%2e/etc/passwd",
+  "/api/v2/robots",
+  "/" + "x".repeat(4000),
 ];
 
 const CROSS_CONTENT_TYPES_FOR_FORMS = [
@@ -1103,7 +1115,7 @@ export const FAMILIES: Family[] = [
       const identity = random.chance(0.5) ? allowedIdentity(target, world, random) : anyIdentity(world, random);
       const ids = ownIds(world, identity);
       const path = random
-        .pick(UNKNOWN_API_PATHS)
+        .pick(target.route.api ? UNKNOWN_API_PATHS : UNKNOWN_PAGE_PATHS)
         .replace("{robot}", ids.robots[0] ?? "x")
         .replace("{gait}", ids.gaits[0] ?? "x");
       const method = random.pick(["GET", "GET", "POST", "PUT", "DELETE"]);
