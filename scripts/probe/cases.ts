@@ -942,7 +942,7 @@ export const FAMILIES: Family[] = [
       const identity = allowedIdentity(target, world, random);
       const { text: json, note } = deepJson(random);
       if (target.body === "json") {
-        if (random.chance(0.5)) return build(target, { identity, body: Buffer.from(json) }, context, "deep or huge JSON", note);
+        if (random.chance(0.5) || !target.fields.length) return build(target, { identity, body: Buffer.from(json) }, context, "deep or huge JSON", note);
         const field = random.pick(target.fields);
         return build(target, { identity, fields: [[field.name, new JsonText(json)]] }, context, "deep or huge JSON", `${field.name}: ${note}`);
       }
