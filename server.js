@@ -58,15 +58,15 @@ app.use(morgan("tiny"));
 
 // What the framework cannot make a Fetch Request of would fail inside it as a
 // 500: a Host header that names no host, and TRACE, a method Fetch forbids
-// (Node's parser itself refuses the others, CONNECT and TRACK).
+// (Node's parser itself refuses the others, CONNECT and TRACK); under /api/v1
+// TRACE is one of the methods answered 501 below.
 app.use((req, res, next) => {
-  const refuse = (status, message) =>
-    req.path.startsWith("/api/") ? res.status(status).json({ error: { code: "bad_request", message } }) : res.status(status).type("text/plain").send(message);
-  if (req.method === "TRACE") {
-    res.set("Allow", "GET, HEAD, POST, PUT");
-    return refuse(405, `${req.method} is not a method Gaitloom answers.`);
+  const api = /^\/api\/v1(\/|$)/.test(req.path);
+  if (!URL.canParse(`http://${req.get("host") ?? ""}/`)) {
+    const message = "The Host header does not name a host.";
+    return api ? res.status(400).json({ error: { code: "bad_request", message } }) : res.status(400).type("text/plain").send(message);
   }
-  if (!URL.canParse(`http://${req.get("host") ?? ""}/`)) return refuse(400, "The Host header does not name a host.");
+  if (req.method === "TRACE" && !api) return res.status(405).set("Allow", "GET, HEAD, POST").type("text/plain").send("TRACE is not a method Gaitloom answers.");
   next();
 });
 
@@ -122,7 +122,34 @@ if (probeCounts || process.env.GAITLOOM_RATE_LIMITS === "off") {
   }
 }
 
-app.all("*", createRequestHandler({ build: served, mode: process.env.NODE_ENV }));
+// The framework routes these methods; for any other it answers 405 in a shape
+// of its own before the app's middleware runs. Under /api/v1 the answer is
+// made here, in the API's error shape: 501, a method no route knows
+// (RFC 9110 §15.6.2).
+const ROUTED_METHODS = new Set(["GET", "HEAD", "OPTIONS", "POST", "PUT", "PATCH", "DELETE"]);
+app.use("/api/v1", (req, res, next) => {
+  if (ROUTED_METHODS.has(req.method)) return next();
+  const message = `${req.method} is not a method this API knows; each route's Allow header says which it answers.`;
+  res.status(501).json({ error: { code: "not_implemented", message } });
+});
+
+// app.use, not app.all("*"): Express decodes a route's parameters and answers
+// a malformed percent-encoding (/api/v1/robots/%E0%A4%A) with its own HTML 400
+// before the app sees it; the app reads such addresses itself (the API
+// refuses them in its own shape).
+app.use(createRequestHandler({ build: served, mode: process.env.NODE_ENV }));
+
+// Whatever still reaches Express as an error (the handler passes on what it
+// could not answer) is answered under /api/v1 in the API's error shape, its
+// own text logged rather than sent; elsewhere Express answers as usual.
+app.use((error, req, res, next) => {
+  if (!/^\/api\/v1(\/|$)/.test(req.path) || res.headersSent) return next(error);
+  console.error(error);
+  const status = Number(error?.status ?? error?.statusCode);
+  if (status >= 400 && status < 500) return res.status(status).json({ error: { code: "bad_request", message: "The request could not be read." } });
+  const message = "Something went wrong on our side and the request was not completed; the error has been logged.";
+  res.status(500).json({ error: { code: "internal_error", message } });
+});
 
 const port = Number(process.env.PORT ?? 3000);
 const host = process.env.HOST ?? "127.0.0.1";

@@ -7,13 +7,17 @@ import "./app.css";
 import { Links, Meta, Outlet, Scripts, ScrollRestoration, useRouteLoaderData } from "react-router";
 import type { Route } from "./+types/root";
 import { ErrorPanel } from "./components/common/ErrorPanel";
+import { addressRefusal } from "./platform/address.server";
+import { apiErrorShape } from "./platform/api-answers.server";
 import { crossOriginRefusal } from "./platform/origin.server";
 import { readTheme } from "./platform/theme";
 import type { RoutePermissions } from "./platform/permissions";
 
 export const middleware: Route.MiddlewareFunction[] = [
+  // First, so that what the others and the routes answer under /api/v1 comes out in the API's error shape.
+  ({ request }, next) => apiErrorShape(request, next),
   async ({ request }, next) => {
-    const refusal = crossOriginRefusal(request);
+    const refusal = crossOriginRefusal(request) ?? addressRefusal(request);
     if (refusal) throw refusal;
     return next();
   },

@@ -21,6 +21,8 @@ export default [
     ...editorApi,
     ...versionApi,
     ...exportApi,
+    // Any other address under /api/v1: a JSON 404, not the shell's HTML page.
+    route("*", "routes/api.v1/not-found.ts"),
   ]),
   route("auth/github", "routes/auth/github.ts"),
   route("auth/github/callback", "routes/auth/github-callback.ts"),

@@ -22,18 +22,21 @@ function call(url: URL, method: string, headers: Record<string, string> = {}): P
   });
 }
 
-test("TRACE is refused with 405, a JSON error under /api/", async ({ baseURL }) => {
+test("TRACE is refused with 405 on a page and 501 in the API's error shape under /api/v1", async ({ baseURL }) => {
   const page = await call(new URL("/robots", baseURL), "TRACE");
   expect(page.status).toBe(405);
   const api = await call(new URL("/api/v1/robots", baseURL), "TRACE");
-  expect(api.status).toBe(405);
-  expect(JSON.parse(api.text)).toMatchObject({ error: { code: "bad_request" } });
+  expect(api.status).toBe(501);
+  expect(JSON.parse(api.text)).toMatchObject({ error: { code: "not_implemented" } });
 });
 
-test("a Host header that names no host is refused with 400", async ({ baseURL }) => {
+test("a Host header that names no host is refused with 400, in the API's error shape under /api/v1", async ({ baseURL }) => {
   const answer = await call(new URL("/healthz", baseURL), "GET", { Host: "[::1" });
   expect(answer.status).toBe(400);
   expect(answer.text).toContain("Host");
+  const api = await call(new URL("/api/v1/robots", baseURL), "GET", { Host: "[::1" });
+  expect(api.status).toBe(400);
+  expect(JSON.parse(api.text)).toMatchObject({ error: { code: "bad_request" } });
 });
 
 test("with GAITLOOM_PROBE_COUNTS=1 an answer names the handlers it entered, and loopback reads the counts", async ({ baseURL }) => {

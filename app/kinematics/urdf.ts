@@ -38,6 +38,14 @@ export const URDF_SERVO_DEFAULTS = { reversed: false, centerUs: 1500, usPerDeg: 
 export const URDF_DEFAULT_SPEED_DEG_S = 300;
 export const URDF_DEFAULT_MASS_KG = 1;
 
+// A DOCTYPE anywhere but in a comment or CDATA section; XML names are
+// case-sensitive, but the parser would read a lower-case one too.
+const DOCTYPE = /<!DOCTYPE/i;
+const COMMENT_OR_CDATA = /<!--[\s\S]*?-->|<!\[CDATA\[[\s\S]*?\]\]>/g;
+// How deep elements may nest: URDF itself goes four or five levels
+// (robot > link > visual > geometry > mesh); vendor extensions a few more.
+const MAX_NESTING = 100;
+
 const MM_PER_M = 1000;
 // A URDF number closer to zero than this counts as zero (1 µm, 1 µrad).
 const ZERO_LENGTH_M = 1e-6;
@@ -162,8 +170,18 @@ export function importUrdf(xml: string, options: UrdfImportOptions = {}): UrdfIm
 function importOrRefuse(xml: string, options: UrdfImportOptions): UrdfImportResult {
   const valid = XMLValidator.validate(xml);
   if (valid !== true) refuse([], `not well-formed XML: ${valid.err.msg} (line ${valid.err.line}, column ${valid.err.col})`);
-  const parser = new XMLParser({ ignoreAttributes: false, attributeNamePrefix: "@_", parseAttributeValue: false });
-  const document = parser.parse(xml) as XmlNode;
+  if (DOCTYPE.test(xml.replace(COMMENT_OR_CDATA, ""))) {
+    refuse([], "has a DOCTYPE declaration: URDF declares none, and entities are not read (a DOCTYPE is how XML bombs and external entity reads come in)");
+  }
+  const parser = new XMLParser({ ignoreAttributes: false, attributeNamePrefix: "@_", parseAttributeValue: false, maxNestedTags: MAX_NESTING });
+  let document: XmlNode;
+  try {
+    document = parser.parse(xml) as XmlNode;
+  } catch (error) {
+    const reason = error instanceof Error ? error.message : String(error);
+    if (/nested tags/i.test(reason)) refuse([], `nests elements more than ${MAX_NESTING} deep: URDF needs only a few levels`);
+    refuse([], `could not be read: ${reason}`);
+  }
   const robotNode = asNodes(document.robot)[0];
   if (!robotNode) refuse([], "no <robot> element: not a URDF document");
 

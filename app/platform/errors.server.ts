@@ -9,7 +9,7 @@ import type { ApiErrorCode, DetailRecord, ErrorDetails, FormError, Issue } from 
 
 export type { ApiErrorCode, DetailRecord, ErrorDetails, FormError, Issue } from "./errors";
 
-export type ErrorStatus = 400 | 403 | 404 | 409 | 410 | 413 | 422 | 503;
+export type ErrorStatus = 400 | 403 | 404 | 409 | 410 | 413 | 415 | 422 | 503;
 
 /** The code a refusal has when its status says all there is to say. */
 const GENERAL_CODES: Record<ErrorStatus, string> = {
@@ -19,6 +19,7 @@ const GENERAL_CODES: Record<ErrorStatus, string> = {
   409: "conflict",
   410: "gone",
   413: "too-large",
+  415: "unsupported-media-type",
   422: "invalid",
   503: "unavailable",
 };
@@ -58,13 +59,19 @@ const isIssueList = (details: ErrorDetails): details is readonly Issue[] => Arra
 
 /** The one JSON error shape of the API: `{ error: { code, message, details? } }`. */
 export function apiError(
-  status: 400 | 401 | 403 | 404 | 409 | 413 | 422 | 429 | 503,
+  status: 400 | 401 | 403 | 404 | 405 | 409 | 413 | 415 | 422 | 429 | 500 | 501 | 503,
   code: ApiErrorCode,
   message: string,
   details?: unknown,
   headers?: HeadersInit,
 ): Response {
   return Response.json({ error: { code, message, ...(details === undefined ? {} : { details }) } }, { status, headers });
+}
+
+/** 405 for a method the route does not answer, with the Allow header RFC 9110 §15.5.6 requires. */
+export function methodNotAllowed(method: string, allow: readonly string[]): Response {
+  const methods = allow.length === 1 ? allow[0] : `${allow.slice(0, -1).join(", ")} and ${allow.at(-1)}`;
+  return apiError(405, "method_not_allowed", `${method} is not a method this address answers; it answers ${methods}.`, undefined, { Allow: allow.join(", ") });
 }
 
 const API_CODES: Record<ErrorStatus, ApiErrorCode> = {
@@ -74,6 +81,7 @@ const API_CODES: Record<ErrorStatus, ApiErrorCode> = {
   409: "conflict",
   410: "not_found",
   413: "payload_too_large",
+  415: "unsupported_media_type",
   422: "invalid",
   503: "unavailable",
 };

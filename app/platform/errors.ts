@@ -18,4 +18,16 @@ export type FormError<Details extends ErrorDetails = ErrorDetails> = { error: st
 
 /** The `error.code` values of the JSON API, one per kind of refusal (the specific one goes into `details.reason`). */
 export type ApiErrorCode =
-  "bad_request" | "unauthorized" | "forbidden" | "not_found" | "conflict" | "payload_too_large" | "invalid" | "rate_limited" | "unavailable";
+  | "bad_request"
+  | "unauthorized"
+  | "forbidden"
+  | "not_found"
+  | "conflict"
+  | "method_not_allowed"
+  | "payload_too_large"
+  | "unsupported_media_type"
+  | "invalid"
+  | "rate_limited"
+  | "internal_error"
+  | "not_implemented"
+  | "unavailable";

@@ -40,7 +40,7 @@ export function permissionOfEveryIntent(permissions: Record<string, Action>): Ac
  */
 export async function readIntentForm<Schema extends IntentSchema>(request: Request, schema: Schema, permissions: Record<z.output<Schema>["intent"], Action>) {
   const body = await readFormWithin(request, INTENT_FORM_LIMIT_BYTES);
-  if (!body.ok) throw body.tooLarge ? new ServiceError(413, "too-large", "The form is too large.") : new ServiceError(400, "bad-request", body.message);
+  if (!body.ok) throw body.tooLarge ? new ServiceError(413, "too-large", "The form is too large.") : body.refusal;
   const form = schema.safeParse(Object.fromEntries(body.form));
   const intent = form.success ? (form.data.intent as z.output<Schema>["intent"]) : null;
   const member = await requireIntentAccess(request, permissions, intent);

@@ -34,6 +34,24 @@ export const versionNumber = fromOne;
 /** A version number, or `released` for the gait's released version. */
 export const versionOrReleased = (error?: ErrorText) => z.union([z.literal("released"), versionNumber()], withError(error));
 
+// A number as a browser's number field sends it: HTML's "valid floating-point
+// number" (an optional minus, digits with an optional fraction or a fraction
+// alone, an optional exponent). Not what Number() or z.coerce also read:
+// 0x10, 0b110010, 0o20, " 16 ", "+16", "Infinity" or "" (which is 0).
+const DECIMAL = /^-?(?:\d+(?:\.\d+)?|\.\d+)(?:[eE][+-]?\d+)?$/;
+
+export const isDecimal = (text: string) => DECIMAL.test(text);
+
+/** Text written in decimal as its number, other text as NaN (which a number schema refuses); anything else as it is. */
+export const fromDecimalText = (value: unknown) => (typeof value === "string" ? (isDecimal(value) ? Number(value) : Number.NaN) : value);
+
+/**
+ * A number schema for a query parameter or form field, read from decimal text
+ * only: `schema`'s error is the refusal of anything else. (Its JSON Schema is
+ * `schema`'s own, so OpenAPI still says number.)
+ */
+export const decimal = <Schema extends z.ZodType<number>>(schema: Schema) => z.preprocess(fromDecimalText, schema);
+
 /** A gait's draft revision, as text: 0 before the first save, then as any revision. */
 export const draftRevision = (error?: ErrorText) =>
   z

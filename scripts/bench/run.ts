@@ -6,7 +6,7 @@ import { benchKinematics } from "./kinematics";
 import { eq } from "drizzle-orm";
 import { createDatabase } from "../../db/client";
 import { gaits } from "../../db/schema";
-import { benchSolveApi, benchTableApi } from "./http";
+import { benchHeavyWork, benchSolveApi, benchTableApi } from "./http";
 
 console.log(`Gaitloom benchmarks on ${process.version}, ${new Date().toISOString()}\n`);
 console.log("== kinematics");
@@ -25,6 +25,11 @@ if (url && token) {
   const [gait] = await db.select({ id: gaits.id }).from(gaits).where(eq(gaits.name, "Tripod cruise"));
   await client.end();
   await benchTableApi(url, token, gait.id, appPid);
+  const noPoolUrl = process.env.GAITLOOM_BENCH_NO_POOL_URL;
+  if (noPoolUrl) {
+    console.log("\n== heavy work on the worker pool, and on the request thread (GAITLOOM_SOLVE_POOL=off)");
+    await benchHeavyWork(url, noPoolUrl, token);
+  }
 } else {
   console.log("\n(HTTP benchmarks skipped: run them through `npm run bench`, which starts the app.)");
 }

@@ -706,9 +706,21 @@ const UNKNOWN_API_PATHS = [
   "/api/v1/robots/%E0%A4%A",
   "/api/v1/schema/nope.json",
   "/api/v1/openapi.yaml",
+];
+
+const UNKNOWN_PAGE_PATHS = [
+  "/nope",
   "/.env",
   "/%00",
   "/robots/%ff",
+  "/robots/{robot}/nope",
+  "/gaits/{gait}/versions/1/x",
+  "/gaits/new/edit",
+  "/settings/nope",
+  "//evil.example",
+  "/%2e%2e/%2e%2e/etc/passwd",
+  "/api/v2/robots",
+  "/" + "x".repeat(4000),
 ];
 
 const CROSS_CONTENT_TYPES_FOR_FORMS = [
@@ -793,6 +805,34 @@ const HOSTILE_HEADERS: { headers: (origin: URL) => Record<string, string>; note:
 ];
 
 const roll = (target: Target) => target.fields.length + target.query.length > 0 || hasParam(target) || isAction(target);
+
+/**
+ * NUL or bytes that are not UTF-8 in each field, query parameter and path
+ * parameter of the target once, as one allowed to use it: the pass that
+ * reaches every field, before the families draw at random.
+ */
+export function everyField(target: Target, context: Context): Case[] {
+  const { random, world } = context;
+  const family = "NUL and invalid UTF-8";
+  const params = [...target.route.pattern.matchAll(/:([A-Za-z]+)/g)].map((match) => match[1]);
+  const cases: Case[] = [];
+  for (const field of [...target.fields, ...target.query]) {
+    const value = random.pick(NUL_AND_BAD_UTF8);
+    const identity = allowedIdentity(target, world, random);
+    const shown = value.bytes.length > 40 ? `${value.bytes.length} bytes` : JSON.stringify(value.bytes.toString("latin1"));
+    cases.push(
+      target.query.includes(field)
+        ? build(target, { identity, query: [[field.name, value]] }, context, family, `?${field.name}=${shown}`)
+        : build(target, { identity, fields: [[field.name, value]] }, context, family, `${field.name}=${shown}`),
+    );
+  }
+  for (const name of params) {
+    const value = random.pick(NUL_AND_BAD_UTF8);
+    const shown = JSON.stringify(value.bytes.toString("latin1"));
+    cases.push(build(target, { identity: allowedIdentity(target, world, random), params: { [name]: value } }, context, family, `:${name}=${shown}`));
+  }
+  return cases;
+}
 
 export const FAMILIES: Family[] = [
   {
@@ -902,7 +942,7 @@ export const FAMILIES: Family[] = [
       const identity = allowedIdentity(target, world, random);
       const { text: json, note } = deepJson(random);
       if (target.body === "json") {
-        if (random.chance(0.5)) return build(target, { identity, body: Buffer.from(json) }, context, "deep or huge JSON", note);
+        if (random.chance(0.5) || !target.fields.length) return build(target, { identity, body: Buffer.from(json) }, context, "deep or huge JSON", note);
         const field = random.pick(target.fields);
         return build(target, { identity, fields: [[field.name, new JsonText(json)]] }, context, "deep or huge JSON", `${field.name}: ${note}`);
       }
@@ -1075,7 +1115,7 @@ export const FAMILIES: Family[] = [
       const identity = random.chance(0.5) ? allowedIdentity(target, world, random) : anyIdentity(world, random);
       const ids = ownIds(world, identity);
       const path = random
-        .pick(UNKNOWN_API_PATHS)
+        .pick(target.route.api ? UNKNOWN_API_PATHS : UNKNOWN_PAGE_PATHS)
         .replace("{robot}", ids.robots[0] ?? "x")
         .replace("{gait}", ids.gaits[0] ?? "x");
       const method = random.pick(["GET", "GET", "POST", "PUT", "DELETE"]);

@@ -10,7 +10,7 @@
 // intent that no request reached.
 import { closeSync, openSync, readSync, statSync, writeFileSync } from "node:fs";
 import { parseArgs } from "node:util";
-import { allowedIdentity, build, FAMILIES, type Case, type Context } from "./cases";
+import { allowedIdentity, build, everyField, FAMILIES, type Case, type Context } from "./cases";
 import { bodySize, isLargeBody, makeAgent, send, type Answer } from "./http";
 import { random } from "./prng";
 import { isLoopbackHost, prepareWorld } from "./setup";
@@ -83,10 +83,15 @@ const rng = random(seed);
 let serial = 0;
 const context: Context = { world, random: rng, serial: () => ++serial };
 
-/** The cases in order: each target once as its own clients send it, each family on each target it fits, then drawn at random. */
+/**
+ * The cases in order: each target once as its own clients send it, NUL or
+ * bytes that are not UTF-8 in each of its fields and parameters, each family
+ * on each target it fits, then families and targets drawn at random.
+ */
 function* cases(): Generator<Case> {
   for (const target of targets)
     yield build(target, { identity: allowedIdentity(target, world, rng) }, context, "well-formed", "as its own pages or clients send it");
+  for (const target of targets) yield* everyField(target, context);
   const pairs = FAMILIES.flatMap((family) => targets.filter((target) => family.applies(target)).map((target) => ({ family, target })));
   for (let i = pairs.length - 1; i > 0; i--) {
     const j = rng.int(i + 1);
@@ -177,7 +182,7 @@ const routeWidth = Math.max(5, ...sorted.map((row) => row.route.length));
 const line = (cells: (string | number)[]) =>
   `${pad(cells[0], routeWidth)}  ${pad(cells[1], 8)}${cells
     .slice(2)
-    .map((cell) => pad(cell, 9, true))
+    .map((cell) => pad(cell, 10, true))
     .join("")}`;
 console.log("");
 console.log(line(["route", "method", "requests", "reached", "2xx", "3xx", "4xx", "5xx", "no answer"]));
@@ -186,9 +191,9 @@ const sum = (pick: (row: Row) => number) => sorted.reduce((n, row) => n + pick(r
 console.log(line(["all", "", sum((r) => r.requests), sum((r) => r.reached), ...[0, 1, 2, 3].map((i) => sum((r) => r.byClass[i])), sum((r) => r.unanswered)]));
 
 console.log("");
-console.log(`${pad("family", 24)}${pad("requests", 9, true)}${pad("5xx", 9, true)}`);
+console.log(`${pad("family", 24)}${pad("requests", 10, true)}${pad("5xx", 10, true)}`);
 for (const [name, family] of [...families].sort((a, b) => b[1].requests - a[1].requests)) {
-  console.log(`${pad(name, 24)}${pad(family.requests, 9, true)}${pad(family.serverErrors, 9, true)}`);
+  console.log(`${pad(name, 24)}${pad(family.requests, 10, true)}${pad(family.serverErrors, 10, true)}`);
 }
 
 const describe = ({ item, answer }: { item: Case; answer: Answer }) => {

@@ -123,7 +123,9 @@ export class Setup {
       redirect: "manual",
     });
     const callback = new URL(picked.headers.get("Location") ?? "");
-    if (callback.origin !== this.origin.origin) throw new Error(`The GitHub stand-in sent ${login} to ${callback.origin}, not back to the app`);
+    // The app names itself by PUBLIC_URL, which may be another loopback name for the address probed.
+    const sameApp = callback.origin === this.origin.origin || (isLoopbackHost(callback.hostname) && callback.port === this.origin.port);
+    if (!sameApp) throw new Error(`The GitHub stand-in sent ${login} to ${callback.origin}, not back to the app`);
     const back = await this.call(callback.pathname + callback.search, { jar });
     if (back.response.status !== 302 || !jar.get("gaitloom_session")) {
       throw new Error(`Signing in as ${login} did not complete: the callback answered ${back.response.status} ${back.text.slice(0, 200)}`);

@@ -11,7 +11,7 @@ import { recordAudit } from "../../platform/audit.server";
 import { database, isUniqueViolation } from "../../platform/db.server";
 import { checkSequenceFor, type DraftActor } from "./drafts.server";
 import { ServiceError } from "../../platform/errors.server";
-import { id } from "../../platform/params";
+import { fromDecimalText, id } from "../../platform/params";
 import { newestRevisionInWorkspace, robotOfRevision } from "../robots/index.server";
 import { suitableTemplates, type TemplateChoice } from "./editor/templates";
 
@@ -48,20 +48,19 @@ export async function robotChoices(workspaceId: string, db: Database = database(
   return choices.sort((a, b) => a.name.localeCompare(b.name));
 }
 
+// Number fields are read as decimal numbers only (no 0x10, no padding); an empty field takes the default.
 const optionalNumber = (schema: z.ZodNumber) =>
   z
     .string()
-    .trim()
     .optional()
-    .transform((text) => (text === undefined || text === "" ? undefined : Number(text)))
+    .transform((text) => (text === undefined || text === "" ? undefined : fromDecimalText(text)))
     .pipe(schema.optional());
 
 const requiredNumber = (schema: z.ZodNumber, fallback: number) =>
   z
     .string()
-    .trim()
     .optional()
-    .transform((text) => (text === undefined || text === "" ? fallback : Number(text)))
+    .transform((text) => (text === undefined || text === "" ? fallback : fromDecimalText(text)))
     .pipe(schema);
 
 export const gaitName = z.string().trim().min(1, "give the gait a name").max(120, "the name must be at most 120 characters");

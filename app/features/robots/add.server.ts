@@ -2,7 +2,7 @@
 // the starter template, an uploaded definition file, or an imported URDF file.
 // Reads the posted form and calls the robot service; a refusal is a ServiceError.
 import type { Member } from "../../platform/access.server";
-import type { LimitedForm } from "../../platform/body.server";
+import { fileText, refuseNulIn, type LimitedForm } from "../../platform/body.server";
 import { ServiceError } from "../../platform/errors.server";
 import { createRobotFrom, createRobotFromDefinition, createRobotFromUrdf } from "./robots.server";
 import { DEFINITION_LIMIT_BYTES, formatBytes, URDF_LIMIT_BYTES } from "./files";
@@ -21,7 +21,7 @@ const badRequest = (message: string) => new ServiceError(400, "bad-request", mes
 
 export async function addRobot(body: LimitedForm, member: Pick<Member, "user" | "workspace">): Promise<Added> {
   if (!body.ok) {
-    if (!body.tooLarge) throw badRequest(body.message);
+    if (!body.tooLarge) throw body.refusal;
     throw new ServiceError(
       413,
       "too-large",
@@ -58,7 +58,7 @@ export async function addRobot(body: LimitedForm, member: Pick<Member, "user" | 
   }
   const name = optionalName.safeParse(form.get("name") ?? undefined);
   if (!name.success) throw badRequest(`Cannot use that name: ${firstProblem(name.error)}.`);
-  const text = await file.text();
+  const text = await fileText(file, "file");
   if (intent === "upload") {
     let json: unknown;
     try {
@@ -66,6 +66,7 @@ export async function addRobot(body: LimitedForm, member: Pick<Member, "user" | 
     } catch (error) {
       throw badRequest(`${file.name} is not valid JSON: ${describeJsonError(error, text)}. Nothing was saved.`);
     }
+    refuseNulIn(json, file.name, "file");
     const created = await createRobotFromDefinition(json, { ...owner, fileName: file.name, name: name.data });
     return { redirectTo: `/robots/${created.robotId}` };
   }

@@ -18,6 +18,7 @@ import { JOINT_NAMES, type Robot } from "../../kinematics/index";
 import { recordAudit } from "../../platform/audit.server";
 import { database, isUniqueViolation, type Reader } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
+import { isDecimal } from "../../platform/params";
 import { robotOfRevision } from "./revision-robot.server";
 import { newestRevisionInWorkspace } from "./robots.server";
 
@@ -134,20 +135,22 @@ const plural = (count: number, word: string) => `${count} ${word}${count === 1 ?
  */
 export function profileFromForm(robot: Robot, form: FormData): { json: unknown; issues: TableExportIssue[] } {
   const issues: TableExportIssue[] = [];
-  const text = (name: string) => {
+  const raw = (name: string) => {
     const value = form.get(name);
-    return typeof value === "string" ? value.trim() : "";
+    return typeof value === "string" ? value : "";
   };
+  const text = (name: string) => raw(name).trim();
   const joints: Record<string, Record<string, Record<string, unknown>>> = {};
   for (const leg of robot.legs) {
     for (const joint of JOINT_NAMES) {
       const path = `joints.${leg.id}.${joint}`;
       const entry: Record<string, unknown> = {};
-      const trim = text(`${path}.trimDeg`);
-      if (trim !== "") {
-        const value = Number(trim);
+      // Numbers as a number field sends them: decimal, unpadded (not 0x10, not " 1.5").
+      const trim = raw(`${path}.trimDeg`);
+      if (trim.trim() !== "") {
+        const value = isDecimal(trim) ? Number(trim) : Number.NaN;
         if (Number.isFinite(value)) entry.trimDeg = value;
-        else issues.push({ path: `${path}.trimDeg`, message: `must be a number of degrees (got ${JSON.stringify(trim)})` });
+        else issues.push({ path: `${path}.trimDeg`, message: `must be a number of degrees written in decimal (got ${JSON.stringify(trim)})` });
       }
       const reversed = text(`${path}.reversed`);
       if (reversed === "true" || reversed === "false") entry.reversed = reversed === "true";

@@ -1,7 +1,7 @@
 // Saving the robot form, and restoring an old revision: reads the posted
 // fields and calls the robot service; a refusal is a ServiceError.
 import type { Member } from "../../platform/access.server";
-import type { LimitedForm } from "../../platform/body.server";
+import { refuseNulIn, type LimitedForm } from "../../platform/body.server";
 import { ServiceError } from "../../platform/errors.server";
 import { revisionNumber } from "../../platform/params";
 import { getRevision, saveRevision } from "./robots.server";
@@ -17,7 +17,7 @@ export async function saveFromForm(body: LimitedForm, context: { member: Member;
   if (!body.ok) {
     throw body.tooLarge
       ? new ServiceError(413, "too-large", `The save is ${formatBytes(body.bytes)}; a robot definition may be up to 256 KB. Nothing was saved.`)
-      : new ServiceError(400, "bad-request", body.message);
+      : body.refusal;
   }
   const fields = Object.fromEntries([...body.form].filter(([, value]) => typeof value === "string"));
   const parsed = saveForm.safeParse(fields);
@@ -28,6 +28,7 @@ export async function saveFromForm(body: LimitedForm, context: { member: Member;
   } catch (error) {
     throw new ServiceError(400, "bad-request", `Cannot save: the definition is not valid JSON: ${describeJsonError(error, parsed.data.definition)}.`);
   }
+  refuseNulIn(definition, "Cannot save: the definition", "definition");
   const saved = await saveRevision({
     workspaceId: context.member.workspace.id,
     robotId: context.robotId,

@@ -8,7 +8,7 @@ import { EXPORTER_VERSION, TABLE_FORMAT, TABLE_FORMATS, TABLE_UNITS, type Calibr
 import { MAX_FPS, SOLVER_VERSION } from "../../gait/index";
 import { JOINT_NAMES } from "../../kinematics/index";
 import { ServiceError } from "../../platform/errors.server";
-import { idParam, versionOrReleased } from "../../platform/params";
+import { decimal, idParam, versionOrReleased } from "../../platform/params";
 import { canonicalJson } from "../versions/index.server";
 import type { RenderedTable } from "./render.server";
 
@@ -27,8 +27,8 @@ export function releaseTableQuery(overrideReason: string | null): string {
 
 const number = (name: string, min: { value: number; inclusive: boolean }, max: number) => {
   const range = `${name} must lie in ${min.inclusive ? "[" : "("}${min.value}, ${max}]`;
-  const base = z.coerce.number({ error: `${name} must be a number` });
-  return (min.inclusive ? base.gte(min.value, { error: range }) : base.gt(min.value, { error: range })).max(max, { error: range });
+  const base = z.number({ error: `${name} must be a decimal number` });
+  return decimal((min.inclusive ? base.gte(min.value, { error: range }) : base.gt(min.value, { error: range })).max(max, { error: range }));
 };
 
 const formatParameter = z

@@ -86,15 +86,27 @@ export async function commitDraft(
     if (!sequence.ok) throw new ServiceError(422, "invalid", `The draft is invalid: ${issuesText(sequence.issues)}`);
     const misfits = sequenceIssuesForRobot(robot, sequence.sequence);
     if (misfits.length > 0) throw new ServiceError(422, "invalid", `The draft does not fit robot revision ${revision.number}: ${issuesText(misfits)}`);
+    // The gait's row is held (for update) from the start, so racing commits of
+    // one gait come here one at a time, each seeing the version the one before made.
+    const contentHash = versionContentHash(sequence.sequence, revision.definition);
+    const [newest] = await tx
+      .select({ id: gaitVersions.id, number: gaitVersions.number, contentHash: gaitVersions.contentHash })
+      .from(gaitVersions)
+      .where(eq(gaitVersions.gaitId, gaitId))
+      .orderBy(desc(gaitVersions.number))
+      .limit(1);
+    if (newest?.contentHash === contentHash) {
+      throw new ServiceError(
+        409,
+        "unchanged",
+        `Nothing to commit: the draft is version ${newest.number} as it stands (the same sequence on the same robot revision). Change the draft first.`,
+        { versionId: newest.id, number: newest.number },
+      );
+    }
     const solved = await runCoreTask("summary", { robot, sequence: sequence.sequence });
     if (!solved.ok) throw new ServiceError(422, "invalid", `The draft cannot be solved: ${issuesText(solved.refusal.issues)}`);
     const summary: VersionSummary = { ...solved.summary, cycleMs: sequence.sequence.cycleMs, loop: sequence.sequence.loop };
-    const [{ latest }] = await tx
-      .select({ latest: max(gaitVersions.number) })
-      .from(gaitVersions)
-      .where(eq(gaitVersions.gaitId, gaitId));
-    const number = (latest ?? 0) + 1;
-    const contentHash = versionContentHash(sequence.sequence, revision.definition);
+    const number = (newest?.number ?? 0) + 1;
     const [row] = await tx
       .insert(gaitVersions)
       .values({

@@ -9,7 +9,7 @@ import { Notice } from "~/components/common/Notice";
 import { PageHeader } from "~/components/common/PageHeader";
 import { ProfileEditor, type ProfileIssues } from "~/components/export/ProfileEditor";
 import { requireAccess } from "~/platform/access.server";
-import { readForm } from "~/platform/body.server";
+import { readForm, refuseNulIn } from "~/platform/body.server";
 import { permissionOfEveryIntent } from "~/platform/intent-form.server";
 import { calibrationRobot, createProfile, deleteProfile, listProfiles, profileFromForm, updateProfile } from "~/features/robots/calibration.server";
 import { ServiceError, formAction, pageGuard, type FormError } from "~/platform/errors.server";
@@ -91,6 +91,7 @@ export async function action({ request, params: raw }: Route.ActionArgs) {
       } catch (error) {
         throw new ServiceError(400, "bad-request", `The pasted text is not JSON: ${error instanceof Error ? error.message : String(error)}`, { field: "json" });
       }
+      refuseNulIn(json, "The pasted text", "json");
     } else {
       const fromForm = profileFromForm(target.robot, form);
       if (fromForm.issues.length) throw new ServiceError(422, "invalid", "Some fields are not valid.", { issues: fromForm.issues });

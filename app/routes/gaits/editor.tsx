@@ -11,7 +11,7 @@ import { readForm } from "~/platform/body.server";
 import { moveDraftToNewestRobot, readDraft } from "~/features/gaits/drafts.server";
 import { ServiceError, formAction, pageGuard } from "~/platform/errors.server";
 import { can, type RoutePermissions } from "~/platform/permissions";
-import { id } from "~/platform/params";
+import { draftRevision, id } from "~/platform/params";
 
 const gaitParams = z.object({ gaitId: id("There is no gait at this address.") });
 
@@ -44,7 +44,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 
 export const actionForm = z.object({
   intent: z.literal("move-to-newest-robot", { error: "Unknown request." }),
-  baseRevision: z.coerce.number({ error: "baseRevision must be the draft revision" }).int().min(0),
+  baseRevision: draftRevision((issue) => `baseRevision must be the draft revision, a whole number (got ${JSON.stringify(issue.input ?? null)})`),
 });
 
 export async function action({ request, params }: Route.ActionArgs) {

@@ -42,7 +42,7 @@ export async function action({ request, params }: Route.ActionArgs) {
     const parsed = revisionParams.safeParse(params);
     if (!parsed.success) throw new ServiceError(404, "not-found", "There is no such robot revision in your workspace.");
     const body = await readFormWithin(request, 16 * 1024);
-    if (!body.ok) throw body.tooLarge ? new ServiceError(413, "too-large", "The request is too large.") : new ServiceError(400, "bad-request", body.message);
+    if (!body.ok) throw body.tooLarge ? new ServiceError(413, "too-large", "The request is too large.") : body.refusal;
     await restoreFromForm(body.form, { member, robotId: parsed.data.robotId, number: parsed.data.number });
     return redirect(`/robots/${parsed.data.robotId}`);
   });

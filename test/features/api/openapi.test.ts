@@ -28,7 +28,8 @@ function routesOf(entries: ConfigEntry[], parent = ""): { path: string; file: st
   });
 }
 
-const apiRoutes = routesOf(routeConfig as ConfigEntry[]).filter((route) => route.path.startsWith("api/v1/"));
+// The splat under /api/v1 answers addresses that have no route: not an operation.
+const apiRoutes = routesOf(routeConfig as ConfigEntry[]).filter((route) => route.path.startsWith("api/v1/") && !route.path.endsWith("*"));
 const toOpenApiPath = (path: string) => `/${path.replace(/:([A-Za-z0-9_]+)/g, "{$1}")}`;
 const document = openApiDocument(apiPermissions());
 const operations = Object.entries(document.paths).flatMap(([path, methods]) =>

@@ -196,7 +196,7 @@ describe("saving the draft", () => {
     expect((await stored()).draftRevision).toBe(before.draftRevision);
   });
 
-  test("a body without baseRevision gets 422 naming it; bad JSON 400; a body over the limit 413; a GET-only verb 400", async () => {
+  test("a body without baseRevision gets 422 naming it; bad JSON 400; a body over the limit 413; a POST 405", async () => {
     const missing = await putDraft<ApiRefusal<Issue[]>>("animator", { sequence: (await stored()).draftSequence });
     expect(missing.status).toBe(422);
     expect(missing.body.error.details).toEqual([{ path: "baseRevision", message: "must be the draft revision the edits started from (a whole number)" }]);
@@ -216,8 +216,9 @@ describe("saving the draft", () => {
     expect(huge.body.error.code).toBe("payload_too_large");
 
     const post = await outcome<ApiRefusal>(async () => act(draftApi, await request("POST", `/api/v1/gaits/${gaitId}/draft`, { json: {} }), { gaitId }));
-    expect(post.status).toBe(400);
-    expect(post.body.error.message).toBe("Use PUT with a JSON body { sequence, baseRevision }.");
+    expect(post.status).toBe(405);
+    expect(post.headers.get("Allow")).toBe("GET, HEAD, PUT");
+    expect(post.body.error.code).toBe("method_not_allowed");
   });
 
   test("viewers and firmware read the draft but cannot save it (403, nothing stored); signed out gets 401", async () => {

@@ -136,7 +136,13 @@ describe("number fields take decimal numbers only", () => {
 
   test.each(["0x1", "0b1", " 1", "1.0"])("POST /gaits/:gaitId/edit refuses baseRevision=%j with 400 naming it", async (baseRevision) => {
     const gaitId = ids.gaitIds["Tripod cruise"];
-    const request = await postAs("owner", ids, `/gaits/${gaitId}/edit`, new URLSearchParams({ baseRevision }).toString(), "application/x-www-form-urlencoded");
+    const request = await postAs(
+      "owner",
+      ids,
+      `/gaits/${gaitId}/edit`,
+      new URLSearchParams({ intent: "move-to-newest-robot", baseRevision }).toString(),
+      "application/x-www-form-urlencoded",
+    );
     const answer = await outcome(async () => act(editor, request, { gaitId }));
     expect(answer.status, refusalText(answer.body)).toBe(400);
     expect(refusalText(answer.body)).toContain("baseRevision");

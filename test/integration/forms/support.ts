@@ -141,7 +141,7 @@ export const FORM_ACTIONS: FormAction[] = [
     path: (ids) => `/gaits/${ids.gaitIds[GAIT]}/edit`,
     params: (ids) => ({ gaitId: ids.gaitIds[GAIT] }),
     caller: "owner",
-    form: () => ({ baseRevision: "1" }),
+    form: () => ({ intent: "move-to-newest-robot", baseRevision: "1" }),
     textField: "baseRevision",
   },
   {

@@ -2,6 +2,7 @@
 import { and, asc, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { auditLog, gaitVersions, gaits, reviewEvents, robotRevisions } from "../../../db/schema";
+import { changeDraft } from "../../support/drafts";
 import { uniqueName } from "../../support/names";
 import { act, memberAs, outcome, refusal, requestsAs, type DemoIds } from "../../support/routes";
 import { parseSequence, solveSequence } from "~/gait/index";
@@ -26,6 +27,7 @@ const committer = () => ({ userId: animator.user.id, workspaceId: ids.workspaceI
 describe("commitDraft", () => {
   test("makes the next numbered version with the message, author, pinned revision, full sequence, solved summary and content hash", async () => {
     const gaitId = ids.gaitIds["Wave creep"];
+    await changeDraft(database(), gaitId);
     const [gait] = await database().select().from(gaits).where(eq(gaits.id, gaitId));
     const message = uniqueName("A calmer wave");
     const committed = await commitDraft(committer(), gaitId, `  ${message}  `);
@@ -56,23 +58,21 @@ describe("commitDraft", () => {
     expect(audit).toBeDefined();
   });
 
-  test("two concurrent commits of one gait get distinct numbers and neither is lost", async () => {
+  test("commits of one gait, one after another, get consecutive numbers (racing ones: unchanged-commit.test.ts)", async () => {
     const gaitId = ids.gaitIds["Ripple turn left"];
-    const messages = [uniqueName("Racer one"), uniqueName("Racer two"), uniqueName("Racer three")];
-    const results = await Promise.all(messages.map((message) => commitDraft(committer(), gaitId, message)));
-    expect(new Set(results.map((result) => result.number)).size).toBe(3);
+    const messages = [uniqueName("First"), uniqueName("Second"), uniqueName("Third")];
+    for (const message of messages) {
+      await changeDraft(database(), gaitId);
+      await commitDraft(committer(), gaitId, message);
+    }
     const rows = await database().select().from(gaitVersions).where(eq(gaitVersions.gaitId, gaitId)).orderBy(asc(gaitVersions.number));
     expect(rows.map((row) => row.number)).toEqual([1, 2, 3, 4, 5]);
-    expect(
-      rows
-        .slice(2)
-        .map((row) => row.message)
-        .sort(),
-    ).toEqual([...messages].sort());
+    expect(rows.slice(2).map((row) => row.message)).toEqual(messages);
   });
 
   test("refuses an empty message, a gait of another workspace, and a draft that moved on since the page was loaded", async () => {
     const gaitId = ids.gaitIds["Wave creep"];
+    await changeDraft(database(), gaitId);
     expect((await refusal(() => commitDraft(committer(), gaitId, "   "))).field).toBe("message");
     expect((await refusal(() => commitDraft({ ...committer(), workspaceId: "00000000-0000-4000-8000-000000000000" }, gaitId, "x"))).status).toBe(404);
     const current = await draftRevisionOf(gaitId);
@@ -86,6 +86,7 @@ describe("commitDraft", () => {
 
   test("the gait page's commit action answers with the new version, or the message field's error", async () => {
     const gaitId = ids.gaitIds["Crawl"];
+    await changeDraft(database(), gaitId);
     const request = await requestsAs("animator", ids);
     const done = await outcome(async () =>
       act(gaitPage, await request("POST", `/gaits/${gaitId}`, { form: { intent: "commit", message: uniqueName("From the page") } }), { gaitId }),

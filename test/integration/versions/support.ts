@@ -2,6 +2,7 @@
 // chosen state, reading states back, and the local fake SMTP server's messages.
 import { eq } from "drizzle-orm";
 import { gaitVersions, gaits, type VersionState } from "../../../db/schema";
+import { changeDraft } from "../../support/drafts";
 import { uniqueName } from "../../support/names";
 import { demoIds, type DemoIds } from "../../support/routes";
 import type { Member } from "~/platform/access.server";
@@ -16,9 +17,11 @@ export async function setUp(): Promise<DemoIds> {
   return demoIds(database());
 }
 
-/** Commits the gait's current draft as `author`, then moves the version straight to `state` (as the seed does). */
+/** Changes the gait's draft and commits it as `author`, then moves the version straight to `state` (as the seed does). */
 export async function versionIn(ids: DemoIds, gaitName: string, state: VersionState, author: Member, options: { reviewerId?: string; message?: string } = {}) {
   const message = options.message ?? uniqueName("Test version");
+  // An unchanged draft would be the newest version again, which a commit refuses.
+  await changeDraft(database(), ids.gaitIds[gaitName]);
   const version = await commitDraft({ userId: author.user.id, workspaceId: ids.workspaceId }, ids.gaitIds[gaitName], message);
   if (state !== "committed") {
     await database()

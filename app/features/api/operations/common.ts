@@ -69,9 +69,13 @@ const ERROR_CODES: ApiErrorCode[] = [
   "forbidden",
   "not_found",
   "conflict",
+  "method_not_allowed",
   "payload_too_large",
+  "unsupported_media_type",
   "invalid",
   "rate_limited",
+  "internal_error",
+  "not_implemented",
   "unavailable",
 ];
 

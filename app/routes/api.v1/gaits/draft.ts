@@ -8,7 +8,7 @@ import { requireApiAccess } from "~/platform/access.server";
 import { idParam } from "~/platform/params";
 import { readJsonBody } from "~/platform/body.server";
 import { DRAFT_BODY_LIMIT_BYTES, readDraft, saveDraft, type DraftContext } from "~/features/gaits/drafts.server";
-import { apiAction, apiError } from "~/platform/errors.server";
+import { apiAction, apiError, methodNotAllowed } from "~/platform/errors.server";
 import type { RoutePermissions } from "~/platform/permissions";
 
 const gaitParams = z.object({ gaitId: idParam("gaitId") });
@@ -40,7 +40,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
-  if (request.method !== "PUT") return apiError(400, "bad_request", "Use PUT with a JSON body { sequence, baseRevision }.");
+  if (request.method !== "PUT") return methodNotAllowed(request.method, ["GET", "HEAD", "PUT"]);
   const { user, workspace } = await requireApiAccess(request, permissions.action);
   const gaitId = gaitIdOf(params);
   const body = await readJsonBody(request, DRAFT_BODY_LIMIT_BYTES);

@@ -4,7 +4,7 @@
 import type { Route } from "./+types/solve";
 import { requireApiAccess } from "~/platform/access.server";
 import { parseJsonText, readBodyText } from "~/platform/body.server";
-import { apiAction, apiError } from "~/platform/errors.server";
+import { apiAction, methodNotAllowed } from "~/platform/errors.server";
 import { bodyKey, cachedAnswer, rememberAnswer } from "~/features/solver/answer-cache.server";
 import { SOLVE_BODY_LIMIT_BYTES, solveRequest } from "~/features/solver/solve.server";
 import type { RoutePermissions } from "~/platform/permissions";
@@ -12,7 +12,7 @@ import type { RoutePermissions } from "~/platform/permissions";
 export const permissions = { loader: "public", action: "solver.use" } satisfies RoutePermissions;
 
 export async function action({ request }: Route.ActionArgs) {
-  if (request.method !== "POST") return apiError(400, "bad_request", "Use POST with a JSON body.");
+  if (request.method !== "POST") return methodNotAllowed(request.method, ["POST"]);
   await requireApiAccess(request, permissions.action);
   const text = await readBodyText(request, SOLVE_BODY_LIMIT_BYTES);
   const key = bodyKey(text);
@@ -28,6 +28,7 @@ export async function action({ request }: Route.ActionArgs) {
   });
 }
 
-export function loader() {
-  return apiError(400, "bad_request", "POST a JSON body { robot, sequence, options? } to this address.");
+// A GET asks the solver nothing: the address takes a POST of { robot, sequence, options? }.
+export function loader({ request }: Route.LoaderArgs) {
+  return methodNotAllowed(request.method, ["POST"]);
 }

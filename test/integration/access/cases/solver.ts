@@ -1,5 +1,5 @@
 // Access cases for the solver API.
-import { act } from "../../../support/routes";
+import { act, load } from "../../../support/routes";
 import { demoRobotJson, loadDemoRobot } from "../../../support/robots";
 import type { RouteCase } from "../support";
 import * as solve from "~/routes/api.v1/solver/solve";
@@ -19,11 +19,11 @@ export const cases: RouteCase[] = [
     run: (req) => req("POST", "/api/v1/solve", { json: { robot: robotJson, sequence } }).then((r) => act(solve, r)),
   },
   {
-    name: "GET /api/v1/solve (asks for POST)",
+    name: "GET /api/v1/solve (405: it takes a POST)",
     route: "routes/api.v1/solver/solve.ts",
     kind: "loader",
-    allowedStatus: 400,
-    run: () => Promise.resolve(solve.loader()),
+    allowedStatus: 405,
+    run: (req) => req("GET", "/api/v1/solve").then((r) => load(solve, r)),
   },
   {
     name: "POST /api/v1/ik",
@@ -32,10 +32,10 @@ export const cases: RouteCase[] = [
     run: (req) => req("POST", "/api/v1/ik", { json: { robot: robotJson, feet: neutralStance(robot) } }).then((r) => act(ik, r)),
   },
   {
-    name: "GET /api/v1/ik (asks for POST)",
+    name: "GET /api/v1/ik (405: it takes a POST)",
     route: "routes/api.v1/solver/ik.ts",
     kind: "loader",
-    allowedStatus: 400,
-    run: () => Promise.resolve(ik.loader()),
+    allowedStatus: 405,
+    run: (req) => req("GET", "/api/v1/ik").then((r) => load(ik, r)),
   },
 ];

@@ -2,6 +2,7 @@
 import { and, desc, eq } from "drizzle-orm";
 import { gaitVersions, gaits, type VersionState } from "../../../../db/schema";
 import { type DemoIds, act, load } from "../../../support/routes";
+import { changeDraft } from "../../../support/drafts";
 import { uniqueName } from "../../../support/names";
 import type { RouteCase } from "../support";
 import { commitDraft } from "~/features/versions/versions.server";
@@ -16,9 +17,10 @@ const GAIT = "Wave climb";
 
 type Db = Parameters<NonNullable<RouteCase["prepare"]>>[0];
 
-/** A fresh version of the gait by the animator, moved straight to `state` (reviewer: the lead). */
+/** A fresh version of the gait by the animator (its draft changed first: an unchanged one is not committed), moved straight to `state` (reviewer: the lead). */
 async function versionIn(db: Db, ids: DemoIds, state: VersionState) {
   const gaitId = ids.gaitIds[GAIT];
+  await changeDraft(db, gaitId);
   const version = await commitDraft({ userId: ids.userIds.animator, workspaceId: ids.workspaceId }, gaitId, uniqueName("Matrix version"), db);
   if (state !== "committed") await db.update(gaitVersions).set({ state, reviewerId: ids.userIds.lead }).where(eq(gaitVersions.id, version.id));
   return { gaitId, number: String(version.number), versionId: version.id };
@@ -72,6 +74,8 @@ export const cases: RouteCase[] = [
     route: "routes/gaits/gait.tsx",
     kind: "action",
     intent: "commit",
+    // Each caller commits a draft changed for them: a draft equal to the newest version is refused.
+    prepare: (db, ids) => changeDraft(db, ids.gaitIds[GAIT]).then(() => ({})),
     run: (req, ids) =>
       req("POST", `/gaits/${ids.gaitIds[GAIT]}`, { form: { intent: "commit", message: uniqueName("Matrix commit") } }).then((r) =>
         act(gaitPage, r, { gaitId: ids.gaitIds[GAIT] }),
