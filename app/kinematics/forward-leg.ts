@@ -19,6 +19,7 @@ export type LegJointPoints = {
 };
 
 const POSE_FIELDS = ["x", "y", "z", "roll", "pitch", "yaw"] as const;
+const JOINTS = ["coxa", "femur", "tibia"] as const;
 const footScratch = new Float64Array(3);
 // The coxa joint (the mount), then the femur joint, knee and foot as legJointsInto writes them.
 const jointsScratch = new Float64Array(12);
@@ -29,9 +30,11 @@ const rotationOf = createPoseRotationCache();
  * the body moved by `bodyPose` if given: R·p + t of the foot p in the moved body frame.
  */
 export function forwardLeg(robot: Robot, legId: string, angles: JointAngles, bodyPose?: BodyPose): Vec3 {
-  const k = checkedConstants("forwardLeg", robot, legId, angles, bodyPose);
+  const k = postableConstants("forwardLeg", robot, legId);
   forwardLegInto(k, angles.coxa, angles.femur, angles.tibia, footScratch, 0);
-  return toNeutral(footScratch, 0, bodyPose);
+  const foot = toNeutral(footScratch, 0, bodyPose);
+  if (!isFinitePoint(foot)) refuseNonFinite("forwardLeg", legId, angles, bodyPose);
+  return foot;
 }
 
 /**
@@ -40,38 +43,47 @@ export function forwardLeg(robot: Robot, legId: string, angles: JointAngles, bod
  * foot is forwardLeg's.
  */
 export function forwardLegJoints(robot: Robot, legId: string, angles: JointAngles, bodyPose?: BodyPose): LegJointPoints {
-  const k = checkedConstants("forwardLegJoints", robot, legId, angles, bodyPose);
+  const k = postableConstants("forwardLegJoints", robot, legId);
   jointsScratch[0] = k.mountXMm;
   jointsScratch[1] = k.mountYMm;
   jointsScratch[2] = k.mountZMm;
   legJointsInto(k, angles.coxa, angles.femur, angles.tibia, jointsScratch, 3);
-  return {
+  const joints = {
     coxa: toNeutral(jointsScratch, 0, bodyPose),
     femur: toNeutral(jointsScratch, 3, bodyPose),
     knee: toNeutral(jointsScratch, 6, bodyPose),
     foot: toNeutral(jointsScratch, 9, bodyPose),
   };
+  if (!(isFinitePoint(joints.coxa) && isFinitePoint(joints.femur) && isFinitePoint(joints.knee) && isFinitePoint(joints.foot))) {
+    refuseNonFinite("forwardLegJoints", legId, angles, bodyPose);
+  }
+  return joints;
+}
+
+function postableConstants(what: string, robot: Robot, legId: string): LegConstants {
+  const k = cachedLegConstants(findLeg(robot, legId));
+  if (k.problem !== null) throw new RangeError(`${what}: leg ${legId} cannot be posed: ${k.problem} (a definition parseRobot would refuse)`);
+  return k;
+}
+
+// v·0 is 0 for a finite v and NaN for NaN or an infinity: one test on the way out.
+function isFinitePoint(p: Vec3): boolean {
+  return p[0] * 0 + p[1] * 0 + p[2] * 0 === 0;
 }
 
 /**
- * The leg's constants, once its numbers, the angles and the pose are known to
- * give a finite foot: a foot of NaN has no meaning, and the contract has no
- * other way to say so than a RangeError (a caller's bug, as findLeg's).
+ * A point of NaN or infinity has no meaning, and the contract has no other
+ * way to say so than a RangeError (a caller's bug, as findLeg's): this finds
+ * which input made it. Checked on the way out, so a finite call pays one test.
  */
-function checkedConstants(what: string, robot: Robot, legId: string, angles: JointAngles, bodyPose: BodyPose | undefined): LegConstants {
-  const k = cachedLegConstants(findLeg(robot, legId));
-  if (k.problem !== null) throw new RangeError(`${what}: leg ${legId} cannot be posed: ${k.problem} (a definition parseRobot would refuse)`);
-  // One test on the way through; the words only when it fails.
-  if (!(Number.isFinite(angles.coxa) && Number.isFinite(angles.femur) && Number.isFinite(angles.tibia))) {
-    const joint = !Number.isFinite(angles.coxa) ? "coxa" : !Number.isFinite(angles.femur) ? "femur" : "tibia";
-    throw new RangeError(`${what}: leg ${legId}: the ${joint} angle is ${angles[joint]}; servo angles must be finite numbers of degrees`);
-  }
-  // v·0 is 0 for a finite v and NaN for NaN or an infinity.
-  if (bodyPose && !(bodyPose.x * 0 + bodyPose.y * 0 + bodyPose.z * 0 + bodyPose.roll * 0 + bodyPose.pitch * 0 + bodyPose.yaw * 0 === 0)) {
-    const field = POSE_FIELDS.find((name) => !Number.isFinite(bodyPose[name])) ?? "roll";
-    throw new RangeError(`${what}: leg ${legId}: the body pose's ${field} is ${bodyPose[field]}; it must be a finite number`);
-  }
-  return k;
+function refuseNonFinite(what: string, legId: string, angles: JointAngles, bodyPose: BodyPose | undefined): never {
+  const joint = JOINTS.find((name) => !Number.isFinite(angles[name]));
+  if (joint) throw new RangeError(`${what}: leg ${legId}: the ${joint} angle is ${angles[joint]}; servo angles must be finite numbers of degrees`);
+  const field = bodyPose && POSE_FIELDS.find((name) => !Number.isFinite(bodyPose[name]));
+  if (bodyPose && field) throw new RangeError(`${what}: leg ${legId}: the body pose's ${field} is ${bodyPose[field]}; it must be a finite number`);
+  // Finite inputs: only a translation near the largest double can overflow.
+  const translation = bodyPose ? `(${bodyPose.x}, ${bodyPose.y}, ${bodyPose.z})` : "(0, 0, 0)";
+  throw new RangeError(`${what}: leg ${legId}: the body pose's translation ${translation} mm takes the leg past the largest number`);
 }
 
 // p = point[offset..offset+2] in the moved body frame → neutral body frame, R·p + t (p itself without a pose).
@@ -81,10 +93,5 @@ function toNeutral(point: Float64Array, offset: number, bodyPose: BodyPose | und
   const z = point[offset + 2];
   if (!bodyPose) return [x, y, z];
   const r = rotationOf(bodyPose);
-  const foot: Vec3 = [r[0] * x + r[1] * y + r[2] * z + bodyPose.x, r[3] * x + r[4] * y + r[5] * z + bodyPose.y, r[6] * x + r[7] * y + r[8] * z + bodyPose.z];
-  // Only a translation near the largest double can overflow here.
-  if (!(Number.isFinite(foot[0]) && Number.isFinite(foot[1]) && Number.isFinite(foot[2]))) {
-    throw new RangeError(`the body pose's translation (${bodyPose.x}, ${bodyPose.y}, ${bodyPose.z}) mm takes the foot past the largest number`);
-  }
-  return foot;
+  return [r[0] * x + r[1] * y + r[2] * z + bodyPose.x, r[3] * x + r[4] * y + r[5] * z + bodyPose.y, r[6] * x + r[7] * y + r[8] * z + bodyPose.z];
 }
