@@ -15,6 +15,11 @@ export const users = pgTable("users", {
   login: text("login").notNull().unique(),
   name: text("name").notNull(),
   email: text("email").notNull(),
+  // Every address GitHub had verified at the last sign-in, lower-cased: an invitation is accepted only by one of these.
+  verifiedEmails: text("verified_emails")
+    .array()
+    .notNull()
+    .default(sql`'{}'::text[]`),
   avatarUrl: text("avatar_url"),
   createdAt: createdAt(),
 });
@@ -244,5 +249,62 @@ export const auditLog = pgTable(
   (table) => [index("audit_log_workspace_time").on(table.workspaceId, table.createdAt)],
 );
 
+/**
+ * Browser sessions: the cookie holds only a signed id, so signing out (here or
+ * everywhere) ends a session for good. A row without a user is a visitor's
+ * before sign-in (it carries the address to return to).
+ */
+export const sessions = pgTable(
+  "sessions",
+  {
+    id: text("id").primaryKey(),
+    userId: uuid("user_id").references(() => users.id, { onDelete: "cascade" }),
+    data: jsonb("data").notNull(),
+    userAgent: text("user_agent"),
+    createdAt: createdAt(),
+    lastSeenAt: timestamp("last_seen_at", { withTimezone: true }).notNull().defaultNow(),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+  },
+  (table) => [index("sessions_user").on(table.userId), index("sessions_expires").on(table.expiresAt)],
+);
+
+/** Request counters shared by every app process (rate-limiter-flexible's Drizzle store: key, points, expire). */
+export const rateLimits = pgTable("rate_limits", {
+  key: text("key").primaryKey(),
+  points: integer("points").notNull().default(0),
+  expire: timestamp("expire", { withTimezone: true }),
+});
+
+export const mailStateEnum = pgEnum("mail_state", ["queued", "sent", "failed"]);
+
+/**
+ * Outgoing e-mail, written in the same transaction as the action that sends
+ * it and delivered by the job runner with retries: nothing is sent for an
+ * action that rolled back, and nothing an action promised is lost.
+ */
+export const mailOutbox = pgTable(
+  "mail_outbox",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    workspaceId: uuid("workspace_id").references(() => workspaces.id, { onDelete: "cascade" }),
+    senderId: uuid("sender_id").references(() => users.id, { onDelete: "set null" }),
+    // What the mail is about, so the page that sent it can show how it went.
+    topic: text("topic").notNull(),
+    targetType: text("target_type"),
+    targetId: text("target_id"),
+    to: text("to").notNull(),
+    subject: text("subject").notNull(),
+    body: text("body").notNull(),
+    state: mailStateEnum("state").notNull().default("queued"),
+    attempts: integer("attempts").notNull().default(0),
+    lastError: text("last_error"),
+    createdAt: createdAt(),
+    sentAt: timestamp("sent_at", { withTimezone: true }),
+    failedAt: timestamp("failed_at", { withTimezone: true }),
+  },
+  (table) => [index("mail_outbox_target").on(table.targetType, table.targetId), index("mail_outbox_state").on(table.state, table.createdAt)],
+);
+
 export type Role = (typeof roleEnum.enumValues)[number];
 export type VersionState = (typeof versionStateEnum.enumValues)[number];
+export type MailState = (typeof mailStateEnum.enumValues)[number];
