@@ -22,12 +22,17 @@ function call(url: URL, method: string, headers: Record<string, string> = {}): P
   });
 }
 
-test("TRACE is refused with 405 on a page and 501 in the API's error shape under /api/v1", async ({ baseURL }) => {
+test("TRACE is refused with 405 on a page, and TRACE or PROPFIND with 405 in the API's error shape under /api/v1 (a refusal, not a server error)", async ({
+  baseURL,
+}) => {
   const page = await call(new URL("/robots", baseURL), "TRACE");
   expect(page.status).toBe(405);
-  const api = await call(new URL("/api/v1/robots", baseURL), "TRACE");
-  expect(api.status).toBe(501);
-  expect(JSON.parse(api.text)).toMatchObject({ error: { code: "not_implemented" } });
+  for (const method of ["TRACE", "PROPFIND"]) {
+    const api = await call(new URL("/api/v1/robots", baseURL), method);
+    expect(api.status, method).toBe(405);
+    expect(api.headers.allow, method).toBe("GET, HEAD, OPTIONS, POST, PUT, PATCH, DELETE");
+    expect(JSON.parse(api.text), method).toMatchObject({ error: { code: "method_not_allowed" } });
+  }
 });
 
 test("a Host header that names no host is refused with 400, in the API's error shape under /api/v1", async ({ baseURL }) => {
