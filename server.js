@@ -59,7 +59,7 @@ app.use(morgan("tiny"));
 // What the framework cannot make a Fetch Request of would fail inside it as a
 // 500: a Host header that names no host, and TRACE, a method Fetch forbids
 // (Node's parser itself refuses the others, CONNECT and TRACK); under /api/v1
-// TRACE is one of the methods answered 501 below.
+// TRACE is one of the methods answered 405 below.
 app.use((req, res, next) => {
   const api = /^\/api\/v1(\/|$)/.test(req.path);
   if (!URL.canParse(`http://${req.get("host") ?? ""}/`)) {
@@ -124,13 +124,17 @@ if (probeCounts || process.env.GAITLOOM_RATE_LIMITS === "off") {
 
 // The framework routes these methods; for any other it answers 405 in a shape
 // of its own before the app's middleware runs. Under /api/v1 the answer is
-// made here, in the API's error shape: 501, a method no route knows
-// (RFC 9110 §15.6.2).
-const ROUTED_METHODS = new Set(["GET", "HEAD", "OPTIONS", "POST", "PUT", "PATCH", "DELETE"]);
+// made here, in the API's error shape: 405 with the methods the API uses, a
+// refusal of the client's request rather than a fault of the server (OPTIONS
+// on an address names the ones it answers).
+const ROUTED_METHODS = ["GET", "HEAD", "OPTIONS", "POST", "PUT", "PATCH", "DELETE"];
 app.use("/api/v1", (req, res, next) => {
-  if (ROUTED_METHODS.has(req.method)) return next();
-  const message = `${req.method} is not a method this API knows; each route's Allow header says which it answers.`;
-  res.status(501).json({ error: { code: "not_implemented", message } });
+  if (ROUTED_METHODS.includes(req.method)) return next();
+  const message = `${req.method} is not a method this API answers; OPTIONS on an address lists the methods it takes.`;
+  res
+    .status(405)
+    .set("Allow", ROUTED_METHODS.join(", "))
+    .json({ error: { code: "method_not_allowed", message, details: { method: req.method } } });
 });
 
 // app.use, not app.all("*"): Express decodes a route's parameters and answers

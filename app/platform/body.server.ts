@@ -214,23 +214,32 @@ export async function readForm(request: Request, limitBytes = FORM_LIMIT_BYTES):
 /**
  * Where parsed JSON holds U+0000 in a string or a key (as the escape
  * \u0000, which no form or body reader sees): a path like `legs[2].id`, or
- * null. PostgreSQL's text and jsonb cannot hold it.
+ * null. PostgreSQL's text and jsonb cannot hold it. The walk keeps its own
+ * stack, as a hostile body may nest 100 000 levels deep, and builds the path
+ * only for the value it finds.
  */
-export function nulPathIn(value: unknown, path = ""): string | null {
-  if (typeof value === "string") return value.includes("\u0000") ? path || "(the whole value)" : null;
-  if (Array.isArray(value)) {
-    for (let index = 0; index < value.length; index += 1) {
-      const found = nulPathIn(value[index], `${path}[${index}]`);
-      if (found !== null) return found;
+export function nulPathIn(value: unknown): string | null {
+  type Step = { value: unknown; parent: Step | null; key: string | number | null };
+  const pathOf = (step: Step): string => {
+    const parts: string[] = [];
+    for (let at: Step | null = step; at && at.key !== null; at = at.parent) parts.push(typeof at.key === "number" ? `[${at.key}]` : `.${at.key}`);
+    const path = parts.reverse().join("");
+    return path.startsWith(".") ? path.slice(1) : path || "(the whole value)";
+  };
+  const pending: Step[] = [{ value, parent: null, key: null }];
+  while (pending.length > 0) {
+    const step = pending.pop()!;
+    const here = step.value;
+    if (typeof here === "string") {
+      if (here.includes("\u0000")) return pathOf(step);
+    } else if (Array.isArray(here)) {
+      // Pushed last to first, so the first element is looked at first.
+      for (let index = here.length - 1; index >= 0; index -= 1) pending.push({ value: here[index], parent: step, key: index });
+    } else if (here !== null && typeof here === "object") {
+      const entries = Object.entries(here);
+      for (const [key] of entries) if (key.includes("\u0000")) return pathOf({ value: undefined, parent: step, key });
+      for (let index = entries.length - 1; index >= 0; index -= 1) pending.push({ value: entries[index][1], parent: step, key: entries[index][0] });
     }
-    return null;
-  }
-  if (value === null || typeof value !== "object") return null;
-  for (const [key, entry] of Object.entries(value)) {
-    const here = path ? `${path}.${key}` : key;
-    if (key.includes("\u0000")) return here;
-    const found = nulPathIn(entry, here);
-    if (found !== null) return found;
   }
   return null;
 }

@@ -59,7 +59,7 @@ const isIssueList = (details: ErrorDetails): details is readonly Issue[] => Arra
 
 /** The one JSON error shape of the API: `{ error: { code, message, details? } }`. */
 export function apiError(
-  status: 400 | 401 | 403 | 404 | 405 | 409 | 413 | 415 | 422 | 429 | 500 | 501 | 503,
+  status: 400 | 401 | 403 | 404 | 405 | 409 | 413 | 415 | 422 | 429 | 500 | 503,
   code: ApiErrorCode,
   message: string,
   details?: unknown,

@@ -29,5 +29,4 @@ export type ApiErrorCode =
   | "invalid"
   | "rate_limited"
   | "internal_error"
-  | "not_implemented"
   | "unavailable";

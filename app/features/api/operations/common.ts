@@ -75,7 +75,6 @@ const ERROR_CODES: ApiErrorCode[] = [
   "invalid",
   "rate_limited",
   "internal_error",
-  "not_implemented",
   "unavailable",
 ];
 
