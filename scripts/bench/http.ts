@@ -133,6 +133,16 @@ function demoSolveBody(frames: number, layout: "frames" | "columns" | "checks"):
   return JSON.stringify({ robot: robotJson, sequence, options: { layout } });
 }
 
+/** The demo robot with every femur and tibia `lengthMm` long: a hostile robot that froze the server before lengths were bounded. */
+function hostileSolveBody(lengthMm: number): string {
+  const robotJson = JSON.parse(readFileSync(new URL("../../db/demo/robots/pier-crawler.json", import.meta.url), "utf8"));
+  const parsed = parseRobot(robotJson);
+  if (!parsed.ok) throw new Error("demo robot invalid");
+  const sequence = generateGait(parsed.robot, { template: "tripod", cycleMs: 1000, fps: 50, strideMm: 40 });
+  for (const leg of robotJson.legs) Object.assign(leg, { femur: lengthMm, tibia: lengthMm });
+  return JSON.stringify({ robot: robotJson, sequence });
+}
+
 /** `clients` loops that each post the same solve again as soon as its answer is in, until stopped. */
 function backToBack(baseUrl: string, token: string, body: string, clients: number) {
   let stopped = false;
@@ -166,7 +176,8 @@ const ms = (value: number) => `${value.toFixed(1)} ms`;
  * The worker pool's figures, the app with it beside the app without it
  * (GAITLOOM_SOLVE_POOL=off): GET /healthz at 20 clients idle and while two
  * clients post the largest allowed solve back to back (the goal: p95 at most
- * twice the idle one), and the solve throughput at 20 clients.
+ * twice the idle one), and the solve throughput at 20 clients; first, how
+ * soon a hostile robot's solve is answered (the goal: within a second).
  */
 export async function benchHeavyWork(poolUrl: string, noPoolUrl: string, token: string): Promise<void> {
   const health: Scenario = { name: "GET /healthz", path: "/healthz" };
@@ -175,6 +186,18 @@ export async function benchHeavyWork(poolUrl: string, noPoolUrl: string, token: 
     ["pool on ", poolUrl],
     ["pool off", noPoolUrl],
   ] as const;
+  for (const lengthMm of [1e7, 1e300]) {
+    const started = performance.now();
+    const response = await fetch(`${poolUrl}/api/v1/solve`, {
+      method: "POST",
+      headers: { Authorization: `Bearer ${token}`, "Content-Type": "application/json", "Cache-Control": "no-cache" },
+      body: hostileSolveBody(lengthMm),
+    });
+    await response.arrayBuffer();
+    console.log(
+      `POST /api/v1/solve, a hostile robot (femur and tibia ${lengthMm.toExponential()} mm): ${response.status} in ${ms(performance.now() - started)} (goal ≤ 1 s)`,
+    );
+  }
   for (const [, url] of apps) await run(url, token, health, 20, WARM_UP_REQUESTS);
   const idle = await run(poolUrl, token, health, 20, REQUESTS[20]);
   const idleP95 = percentile(idle.times, 95);
