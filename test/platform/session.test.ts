@@ -19,6 +19,10 @@ describe("safeReturnTo (WHATWG URL parsing, as browsers follow a Location)", () 
     ["a newline that browsers drop", "/\n/evil.example"],
     ["a carriage return and line feed", "/\r\n/evil.example"],
     ["a protocol-relative address", "//evil.example"],
+    // Found by the full probe run: the parsed path is //evil.example, which a Location sends off the site.
+    ["dot segments that collapse to //evil.example", "/./..//evil.example"],
+    ["a dot segment before a doubled slash", "/.//evil.example"],
+    ["a parent segment before a doubled slash", "/gaits/..//evil.example"],
     ["a backslash that browsers read as a slash", "/\\evil.example"],
     ["a backslash further in", "/\\/evil.example"],
     ["another site's absolute URL", "https://evil.example/"],
