@@ -48,7 +48,7 @@ const CONTROL_OR_BACKSLASH = /[\u0000-\u001f\u007f\\]/;
  * parses a Location (the WHATWG URL Standard drops tabs and newlines and reads
  * a backslash as a slash, so "/\t/evil.example" is "//evil.example" to it);
  * any control character or backslash, another origin, or anything but a path
- * falls back to "/". The answer is the parsed path, query and fragment,
+ * falls back to "/", as does a parsed path that begins "//". The answer is the parsed path, query and fragment,
  * percent-encoded, so it is always a valid header value.
  */
 export function safeReturnTo(value: unknown): string {
@@ -60,5 +60,7 @@ export function safeReturnTo(value: unknown): string {
   } catch {
     return "/";
   }
-  return url.origin === origin ? `${url.pathname}${url.search}${url.hash}` : "/";
+  // Dot segments can collapse to a path that starts "//" (/./..//evil.example), which a Location reads as another host.
+  if (url.origin !== origin || url.pathname.startsWith("//")) return "/";
+  return `${url.pathname}${url.search}${url.hash}`;
 }
