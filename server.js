@@ -10,6 +10,7 @@ import express from "express";
 import morgan from "morgan";
 import { AsyncLocalStorage } from "node:async_hooks";
 import { readdirSync } from "node:fs";
+import { isIP } from "node:net";
 import path from "node:path";
 import { pathToFileURL } from "node:url";
 
@@ -70,56 +71,76 @@ app.use((req, res, next) => {
   next();
 });
 
-// Test-only, for npm run probe (scripts/probe), and only for requests from
-// this machine. The app's Request carries no socket address, so while
-// GAITLOOM_RATE_LIMITS=off or GAITLOOM_PROBE_COUNTS=1 is set the address is
-// kept for each request's async work (app/platform/loopback.server.ts reads
-// it). With GAITLOOM_PROBE_COUNTS=1, every loader and action a loopback
-// request enters is counted per route, method and handler (the framework's
-// route instrumentation), named in the answer's X-Gaitloom-Probe-Reached
-// header, and the counts are served to loopback at GET /local/probe-counts.
-const probeCounts = process.env.GAITLOOM_PROBE_COUNTS === "1";
-const isLoopback = (address = "") => address === "::1" || /^(::ffff:)?127\./.test(address);
-let served = build;
-if (probeCounts || process.env.GAITLOOM_RATE_LIMITS === "off") {
-  const peers = new AsyncLocalStorage();
-  globalThis[Symbol.for("gaitloom.requestPeer")] = peers;
-  app.use((req, res, next) => {
-    const peer = { loopback: isLoopback(req.socket.remoteAddress), reached: [] };
-    if (probeCounts && peer.loopback) {
-      const writeHead = res.writeHead;
-      res.writeHead = function (...args) {
-        if (peer.reached.length && !res.headersSent) res.setHeader("X-Gaitloom-Probe-Reached", peer.reached.join(", "));
-        return writeHead.apply(this, args);
-      };
-    }
-    peers.run(peer, next);
-  });
-  if (probeCounts) {
-    const counts = new Map();
-    const counting = {
-      route(route) {
-        const count =
-          (handler) =>
-          async (call, { request }) => {
-            const peer = peers.getStore();
-            if (peer?.loopback) {
-              const key = `${route.id} ${request.method} ${handler}`;
-              counts.set(key, (counts.get(key) ?? 0) + 1);
-              peer.reached.push(`${route.id} ${handler}`);
-            }
-            await call();
-          };
-        route.instrument({ loader: count("loader"), action: count("action") });
-      },
-    };
-    const instrumentations = [...(build.entry.module.instrumentations ?? []), counting];
-    served = { ...build, entry: { ...build.entry, module: { ...build.entry.module, instrumentations } } };
-    app.get("/local/probe-counts", (req, res) => {
-      if (!isLoopback(req.socket.remoteAddress)) return res.status(404).end();
-      res.set("Cache-Control", "no-store").json(Object.fromEntries(counts));
-    });
+// Where each request came from, for the rate limits and the test-only
+// switches: the app's Request carries no socket address, so it is kept for
+// each request's async work (app/platform/loopback.server.ts reads it). The
+// client's address is the socket's; behind a reverse proxy,
+// GAITLOOM_TRUST_PROXY names the proxy's addresses (comma-separated addresses
+// or subnets), and for a request from one of them the right-most
+// X-Forwarded-For entry that is not the proxy's counts instead, as Express's
+// `trust proxy` reads it (which also takes X-Forwarded-Proto and -Host from
+// that proxy). A client can add entries of its own on the left, never on
+// the right, which its proxy writes.
+const trustProxy = process.env.GAITLOOM_TRUST_PROXY?.trim();
+if (trustProxy) {
+  const proxies = trustProxy.split(",").map((entry) => entry.trim());
+  // Express would also take a hop count or `true` (anyone may forward), and reads "1" as the address 0.0.0.1.
+  const namesAddress = (entry) => ["loopback", "linklocal", "uniquelocal"].includes(entry) || isIP(entry.replace(/\/\d+$/, "")) !== 0;
+  try {
+    const wrong = proxies.find((entry) => !namesAddress(entry));
+    if (wrong !== undefined) throw new Error(`${JSON.stringify(wrong)} is not an address`);
+    app.set("trust proxy", proxies);
+  } catch (error) {
+    console.error(`GAITLOOM_TRUST_PROXY must name the proxy's addresses, e.g. 10.0.0.5 or 10.0.0.0/24: ${error.message}.`);
+    process.exit(1);
   }
+}
+const isLoopback = (address = "") => address === "::1" || /^(::ffff:)?127\./.test(address);
+const peers = new AsyncLocalStorage();
+globalThis[Symbol.for("gaitloom.requestPeer")] = peers;
+// Test-only, for npm run probe (scripts/probe), and only for requests from
+// this machine: with GAITLOOM_PROBE_COUNTS=1, every loader and action a
+// loopback request enters is counted per route, method and handler (the
+// framework's route instrumentation), named in the answer's
+// X-Gaitloom-Probe-Reached header, and the counts are served to loopback at
+// GET /local/probe-counts.
+const probeCounts = process.env.GAITLOOM_PROBE_COUNTS === "1";
+app.use((req, res, next) => {
+  const peer = { loopback: isLoopback(req.socket.remoteAddress), address: req.ip ?? "", reached: [] };
+  if (probeCounts && peer.loopback) {
+    const writeHead = res.writeHead;
+    res.writeHead = function (...args) {
+      if (peer.reached.length && !res.headersSent) res.setHeader("X-Gaitloom-Probe-Reached", peer.reached.join(", "));
+      return writeHead.apply(this, args);
+    };
+  }
+  peers.run(peer, next);
+});
+let served = build;
+if (probeCounts) {
+  const counts = new Map();
+  const counting = {
+    route(route) {
+      const count =
+        (handler) =>
+        async (call, { request }) => {
+          const peer = peers.getStore();
+          if (peer?.loopback) {
+            const key = `${route.id} ${request.method} ${handler}`;
+            counts.set(key, (counts.get(key) ?? 0) + 1);
+            peer.reached.push(`${route.id} ${handler}`);
+          }
+          await call();
+        };
+      route.instrument({ loader: count("loader"), action: count("action") });
+    },
+  };
+  const instrumentations = [...(build.entry.module.instrumentations ?? []), counting];
+  served = { ...build, entry: { ...build.entry, module: { ...build.entry.module, instrumentations } } };
+  app.get("/local/probe-counts", (req, res) => {
+    if (!isLoopback(req.socket.remoteAddress)) return res.status(404).end();
+    res.set("Cache-Control", "no-store").json(Object.fromEntries(counts));
+  });
 }
 
 // The framework routes these methods; for any other it answers 405 in a shape

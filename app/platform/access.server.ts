@@ -8,7 +8,7 @@ import { apiError } from "./errors.server";
 import type { Database } from "../../db/client";
 import { database } from "./db.server";
 import { type Action, can, refusal } from "./permissions";
-import { checkRateLimit } from "./rate-limit.server";
+import { checkFailedTokenAttempts, countFailedTokenAttempt, countRequest, type Verdict } from "./rate-limit.server";
 import { readSession } from "./session.server";
 
 export type User = typeof users.$inferSelect;
@@ -80,14 +80,13 @@ export async function requireApiAccess(request: Request, action: Action): Promis
   if (header) {
     const token = header.match(/^Bearer\s+(\S+)$/i)?.[1];
     if (!token) throw apiError(401, "unauthorized", "The Authorization header must read `Bearer <token>`.");
+    refuseOver(await checkFailedTokenAttempts(), "Too many unknown or revoked tokens from this address");
     const member = await memberForToken(token);
-    if (!member) throw apiError(401, "unauthorized", "This API token is unknown or revoked.");
-    const limit = checkRateLimit(member.tokenId!);
-    if (!limit.ok) {
-      throw apiError(429, "rate_limited", `Too many requests with this token; try again in ${limit.retryAfterS} s.`, undefined, {
-        "Retry-After": String(limit.retryAfterS),
-      });
+    if (!member) {
+      await countFailedTokenAttempt();
+      throw apiError(401, "unauthorized", "This API token is unknown or revoked.");
     }
+    refuseOver(await countRequest("token", member.tokenId!), "Too many requests with this token");
     if (!can(member.role, action)) throw apiError(403, "forbidden", refusal(member.role, action));
     return member;
   }
@@ -97,8 +96,14 @@ export async function requireApiAccess(request: Request, action: Action): Promis
     if (!user) throw apiError(401, "unauthorized", "Sign in, or send `Authorization: Bearer <token>`.");
     throw apiError(403, "forbidden", "You are not a member of any workspace yet.");
   }
+  refuseOver(await countRequest("session", member.user.id), "Too many API requests from your account");
   if (!can(member.role, action)) throw apiError(403, "forbidden", refusal(member.role, action));
   return { ...member, tokenId: null };
+}
+
+function refuseOver(verdict: Verdict, sentence: string): void {
+  if (verdict.ok) return;
+  throw apiError(429, "rate_limited", `${sentence}; try again in ${verdict.retryAfterS} s.`, undefined, { "Retry-After": String(verdict.retryAfterS) });
 }
 
 // Every API call looks its token up: built once per pool as a prepared statement.

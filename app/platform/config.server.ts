@@ -10,6 +10,14 @@ function required(name: string, fallback?: string): string {
   return value;
 }
 
+/** A count from the environment: a whole number from 1, or refused (NaN or 0 would silently mean no limit or none allowed). */
+function wholeNumber(name: string, fallback: number): number {
+  const text = process.env[name];
+  if (text === undefined) return fallback;
+  if (!/^[1-9]\d*$/.test(text.trim())) throw new Error(`${name} must be a whole number from 1 (got ${JSON.stringify(text)}).`);
+  return Number(text);
+}
+
 export function config() {
   const mode = (process.env.GAITLOOM_ENV ?? "production") as Mode;
   const local = mode !== "production";
@@ -32,7 +40,14 @@ export function config() {
       // The local fake's message list, shown in the app's inbox page (never in production).
       inboxUrl: local ? (process.env.MAIL_INBOX_URL ?? "http://127.0.0.1:2526") : null,
     },
-    tokenRequestsPerMinute: Number(process.env.GAITLOOM_TOKEN_REQUESTS_PER_MINUTE ?? 120),
+    // Counted in PostgreSQL, shared by every app process (app/platform/rate-limit.server.ts).
+    rateLimits: {
+      tokenRequestsPerMinute: wholeNumber("GAITLOOM_TOKEN_REQUESTS_PER_MINUTE", 120),
+      // The editor sends up to two (autosave, reference solve) per pause in editing: some 170 a minute in a busy tab.
+      sessionRequestsPerMinute: wholeNumber("GAITLOOM_SESSION_API_REQUESTS_PER_MINUTE", 600),
+      // Unknown or revoked tokens per client address; a person retyping a token needs a few.
+      failedTokenAttemptsPerMinute: wholeNumber("GAITLOOM_FAILED_TOKEN_ATTEMPTS_PER_MINUTE", 10),
+    },
     // Solves, table builds and URDF imports run on worker threads (app/platform/worker-pool.server.ts),
     // one core left to the request thread. GAITLOOM_SOLVE_POOL=off runs them on the request thread, for comparison.
     workerPool: {

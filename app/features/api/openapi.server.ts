@@ -44,6 +44,13 @@ function withPermissions(paths: OpenApiPaths, permissions: ApiPermissions): Open
   );
 }
 
+function rateLimitText(limits: ReturnType<typeof config>["rateLimits"]): string {
+  return (
+    `A token may make ${limits.tokenRequestsPerMinute} requests a minute and a person ${limits.sessionRequestsPerMinute} with the browser session, counted across all of the app's servers; more answer 429 with Retry-After. ` +
+    `After ${limits.failedTokenAttemptsPerMinute} unknown or revoked tokens from one address in a minute, token requests from that address answer 429 until the minute is over.`
+  );
+}
+
 function buildDocument(publicUrl: string, permissions: ApiPermissions): OpenApiDocument {
   return {
     openapi: "3.1.0",
@@ -55,7 +62,7 @@ function buildDocument(publicUrl: string, permissions: ApiPermissions): OpenApiD
       description: [
         "Send `Authorization: Bearer <token>` (Settings → API tokens; owner, lead and firmware may hold one, and it acts with the holder's role in one workspace), or use the browser session.",
         "Requests carrying a session cookie that change something must come from the app's own origin; bearer-token requests need no Origin.",
-        `A token may make ${config().tokenRequestsPerMinute} requests a minute; more answer 429.`,
+        rateLimitText(config().rateLimits),
         "Every refusal is JSON `{ error: { code, message, details? } }`. Millimetres and degrees at every interface.",
         "Angle tables drive real motors: test with the robot on a stand and its legs free, with a current-limited supply and a power cut-off within reach.",
       ].join(" "),

@@ -86,7 +86,10 @@ const STATUS_RESPONSES = {
   409: ["Conflict", "A conflict with the current state: a stale revision, or a table that needs an override reason."],
   413: ["PayloadTooLarge", "The body is larger than the route's limit (the message gives both sizes)."],
   422: ["Unprocessable", "The input is well-formed but invalid: `details` lists the issues as `{ path, message }`."],
-  429: ["TooManyRequests", "Too many requests with this token in a minute; the Retry-After header says when to try again."],
+  429: [
+    "TooManyRequests",
+    "Too many requests in a minute with this token or this person's session, or too many unknown or revoked tokens from this address; the Retry-After header says when to try again.",
+  ],
   503: [
     "ServiceUnavailable",
     "The workers that solve and print tables are busy: the request would wait for one longer than the server allows (`details.reason` busy). The Retry-After header says when to try again.",
@@ -108,7 +111,7 @@ export function errorResponses(): Record<string, OpenApiResponse> {
   );
   responses.TooManyRequests = {
     ...responses.TooManyRequests,
-    headers: { "Retry-After": { description: "Seconds until the next minute's allowance.", schema: { type: "integer" } } },
+    headers: { "Retry-After": { description: "Seconds until the minute's count starts again.", schema: { type: "integer" } } },
   };
   responses.ServiceUnavailable = {
     ...responses.ServiceUnavailable,
