@@ -1,6 +1,7 @@
 // Lint carries the architecture (DEVELOPERS.md): the pure core imports no
 // React, router, database or app layer; components import no server module;
-// features reach each other only through their index. Untyped rules, so a
+// features reach each other only through their index; browser tests take the
+// shared test that fails on a policy violation. Untyped rules, so a
 // run stays fast enough for every `npm test`.
 import js from "@eslint/js";
 import reactHooks from "eslint-plugin-react-hooks";
@@ -101,4 +102,17 @@ export default tseslint.config(
     files: [`app/features/${feature}/**/*.{ts,tsx}`],
     rules: { "no-restricted-imports": ["error", { patterns: crossFeatureImports(feature) }] },
   })),
+  {
+    files: ["e2e/**/*.spec.ts"],
+    rules: {
+      "no-restricted-imports": [
+        "error",
+        {
+          paths: [
+            { name: "@playwright/test", message: "Import test and expect from ./support/test, which fails a test on a Content-Security-Policy violation." },
+          ],
+        },
+      ],
+    },
+  },
 );

@@ -7,6 +7,7 @@
 import { createRequestHandler } from "@react-router/express";
 import compression from "compression";
 import express from "express";
+import helmet from "helmet";
 import morgan from "morgan";
 import { AsyncLocalStorage } from "node:async_hooks";
 import { readdirSync } from "node:fs";
@@ -44,6 +45,30 @@ app.use((req, res, next) => {
         this.once("close", () => clearTimeout(timer));
       };
     }
+    return writeHead.apply(this, args);
+  };
+  next();
+});
+// The headers every answer carries, files and the refusals below included
+// (docs/decisions/009-headers.md): helmet's, with X-Frame-Options DENY, as the
+// pages' frame-ancestors 'none' says, and Referrer-Policy
+// strict-origin-when-cross-origin, since with helmet's no-referrer Chromium
+// sends `Origin: null` on our own form posts, which the origin guard refuses.
+// Permissions-Policy by hand (helmet has none): no powerful feature but Web
+// Serial, for the firmware kit's bench link. A page's Content-Security-Policy
+// is the app's, with the nonce it made (app/entry.server.tsx); any other answer
+// loads nothing. That one is set as the answer goes out, if the app set none:
+// the adapter adds the app's headers to those already set, and a browser
+// would enforce both policies.
+const PERMISSIONS_POLICY =
+  "accelerometer=(), camera=(), display-capture=(), geolocation=(), gyroscope=(), hid=(), magnetometer=(), microphone=(), midi=(), payment=(), usb=(), serial=(self)";
+const NOTHING_POLICY = "default-src 'none'; frame-ancestors 'none'";
+app.use(helmet({ contentSecurityPolicy: false, xFrameOptions: { action: "deny" }, referrerPolicy: { policy: "strict-origin-when-cross-origin" } }));
+app.use((req, res, next) => {
+  res.setHeader("Permissions-Policy", PERMISSIONS_POLICY);
+  const writeHead = res.writeHead;
+  res.writeHead = function (...args) {
+    if (!res.hasHeader("Content-Security-Policy")) res.setHeader("Content-Security-Policy", NOTHING_POLICY);
     return writeHead.apply(this, args);
   };
   next();

@@ -1,6 +1,6 @@
-import { expect, test } from "@playwright/test";
 import { demoPeople } from "../db/demo/scenario";
 import { latestMailTo, signInAs, signInAsNewPerson } from "./support/sign-in";
+import { expect, test } from "./support/test";
 
 const roleLabel = (role: string) => role[0].toUpperCase() + role.slice(1);
 

@@ -2,8 +2,8 @@
 // API's one error shape, `{ error: { code, message, details? } }`, whatever
 // stage makes it: an address no route has, a method a route does not answer,
 // a malformed percent-encoding, a method no route knows.
-import { expect, test, type APIResponse } from "@playwright/test";
 import http from "node:http";
+import { expect, test, type APIResponse } from "./support/test";
 
 async function expectApiError(response: APIResponse, status: number, code: string) {
   expect(response.status()).toBe(status);

@@ -3,9 +3,9 @@
 // is passed, without reading the rest, and the keep-alive connection it came
 // on is either still usable or closed with `Connection: close`, so the
 // client's next request goes through.
-import { expect, test } from "@playwright/test";
 import http from "node:http";
 import { signInAs } from "./support/sign-in";
+import { expect, test, type Page } from "./support/test";
 
 type Answer = { status: number; headers: http.IncomingHttpHeaders; text: string; sentBytes: number };
 
@@ -65,7 +65,7 @@ function get(agent: http.Agent, url: URL): Promise<{ status: number; reusedSocke
 }
 
 /** The signed-in browser's session, as a script on the same machine would send it. */
-async function sessionHeaders(page: import("@playwright/test").Page, baseURL: string): Promise<Record<string, string>> {
+async function sessionHeaders(page: Page, baseURL: string): Promise<Record<string, string>> {
   await signInAs(page, "mara-lindqvist");
   const cookies = await page.context().cookies(baseURL);
   return { Cookie: cookies.map((cookie) => `${cookie.name}=${cookie.value}`).join("; "), Origin: new URL(baseURL).origin };

@@ -2,9 +2,9 @@
 // Functions Level 1 as Chromium implements it, read through Web Animations
 // (getComputedTiming().progress of an effect with that easing).
 import { readFileSync } from "node:fs";
-import { expect, test } from "@playwright/test";
 import { generateGait, solveSequence, type Ease, type Sequence } from "../app/gait/index";
 import { parseRobot, type Robot } from "../app/kinematics/index";
+import { expect, test } from "./support/test";
 
 const robot = (() => {
   const parsed = parseRobot(JSON.parse(readFileSync(new URL("../db/demo/robots/pier-crawler.json", import.meta.url), "utf8")));

@@ -3,13 +3,12 @@
 // dragged out of reach (unreachable flags at exactly the frames the engine
 // finds), undo, and a reload that finds the draft as it was left. The editor
 // passes axe-core without serious or critical violations.
-import { createRequire } from "node:module";
-import { expect, test, type Locator, type Page } from "@playwright/test";
 import { parseSequence, solveSequence } from "../app/gait/index";
 import { parseRobot } from "../app/kinematics/index";
+import { axeViolations } from "./support/axe";
 import { signInAs } from "./support/sign-in";
+import { expect, test, type Locator, type Page } from "./support/test";
 
-const axePath = createRequire(import.meta.url).resolve("axe-core/axe.min.js");
 const uniqueName = (label: string) => `${label} ${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}`;
 
 async function createTripod(page: Page, name: string) {
@@ -125,16 +124,7 @@ test("animator: new tripod, drag a key, drag a foot out of reach, undo, reload â
 
   // axe-core on the editor (the main content; the shell has its own checks).
   await page.getByRole("button", { name: /^LF key 2 of 2/ }).click();
-  await page.addScriptTag({ path: axePath });
-  const violations = await page.evaluate(async () => {
-    const axe = (
-      window as unknown as { axe: { run: (context: unknown) => Promise<{ violations: { id: string; impact: string; nodes: { html: string }[] }[] }> } }
-    ).axe;
-    const result = await axe.run("main");
-    return result.violations
-      .filter((violation) => violation.impact === "serious" || violation.impact === "critical")
-      .map((violation) => `${violation.id} (${violation.impact}): ${violation.nodes.length} Ã— ${violation.nodes[0]?.html.slice(0, 140)}`);
-  });
+  const violations = await axeViolations(page, ["serious", "critical"]);
   expect(violations).toEqual([]);
 });
 

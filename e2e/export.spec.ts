@@ -7,8 +7,8 @@ import { existsSync, mkdtempSync, readFileSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { promisify } from "node:util";
-import { expect, test, type Page } from "@playwright/test";
 import { signInAs, signInAsNewPerson } from "./support/sign-in";
+import { expect, test, type Page } from "./support/test";
 
 const run = promisify(execFile);
 const CURL = "/usr/bin/curl";

@@ -1,8 +1,8 @@
 // Harmless malformed addresses against the production server: a NUL
 // character in a query string or a path (PostgreSQL's text cannot hold
 // U+0000) is a 400 naming where it is, on pages and in the API alike.
-import { expect, test } from "@playwright/test";
 import { signInAs } from "./support/sign-in";
+import { expect, test } from "./support/test";
 
 test("a NUL character in a query string or a path is a 400 naming it, not a server error", async ({ page }) => {
   await signInAs(page, "mara-lindqvist", "/gaits");

@@ -2,8 +2,8 @@
 // POST /auth/github, the local GitHub stand-in and the callback's redirect,
 // which the browser follows as browsers do (the WHATWG URL Standard drops tabs
 // and newlines, so "/\t/evil.example" reads as "//evil.example").
-import { expect, test } from "@playwright/test";
 import { signInAs } from "./support/sign-in";
+import { expect, test } from "./support/test";
 
 test("an address browsers would read as another site ends on this site's home page after the callback", async ({ page, baseURL }) => {
   await signInAs(page, "kenji-wu", "/\t/evil.example");

@@ -2,9 +2,9 @@
 // demo gait and asks the lead for a review; the lead follows the e-mail's
 // link to the comparison, reads the changed keys and metric deltas, approves
 // and releases; the animator gets the decision mails.
-import { expect, test, type Page } from "@playwright/test";
 import { demoPeople } from "../db/demo/scenario";
 import { MAIL_API, latestMailTo, signInAs } from "./support/sign-in";
+import { expect, test, type Page } from "./support/test";
 
 const GAIT = "Alternating tetrapod";
 const ROBOT = "Hull climber";

@@ -3,13 +3,12 @@
 // calibration-only form. Robot names are unique per run and worker.
 import { readFileSync } from "node:fs";
 import { readFile } from "node:fs/promises";
-import { createRequire } from "node:module";
-import { expect, test, type Page } from "@playwright/test";
+import { axeViolations } from "./support/axe";
 import { signInAs } from "./support/sign-in";
+import { expect, test, type Page } from "./support/test";
 
 const quayWalker = JSON.parse(readFileSync(new URL("../db/demo/robots/quay-walker.json", import.meta.url), "utf8"));
 const crabUrdf = readFileSync(new URL("../test/kinematics/fixtures/test-crab.urdf", import.meta.url));
-const axePath = createRequire(import.meta.url).resolve("axe-core/axe.min.js");
 
 const uniqueName = (label: string) => `${label} ${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}`;
 const slugOf = (name: string) =>
@@ -33,15 +32,8 @@ async function uploadDefinition(page: Page, definition: unknown, fileName = "rob
 }
 
 async function expectNoAxeViolations(page: Page) {
-  await page.addScriptTag({ path: axePath });
-  const violations = await page.evaluate(async () => {
-    // Our part of the page: the main content (the shell around it has its own checks).
-    const result = await (
-      window as unknown as { axe: { run: (context: unknown) => Promise<{ violations: { id: string; nodes: { html: string }[] }[] }> } }
-    ).axe.run("main");
-    return result.violations.map((violation) => `${violation.id}: ${violation.nodes.length} × ${violation.nodes[0]?.html.slice(0, 120)}`);
-  });
-  expect(violations).toEqual([]);
+  // Our part of the page: the main content (the shell around it has its own checks).
+  expect(await axeViolations(page)).toEqual([]);
 }
 
 test("create a robot by uploading JSON, edit a link length and save as revision 2, then download it", async ({ page }) => {

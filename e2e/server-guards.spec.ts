@@ -3,8 +3,8 @@
 // refused as the client's mistake (4xx), not failed as 500s; and the probe's
 // switches (npm test runs the app with GAITLOOM_PROBE_COUNTS=1) name the
 // handlers a request entered and count them for loopback.
-import { expect, test } from "@playwright/test";
 import http from "node:http";
+import { expect, test } from "./support/test";
 
 type Answer = { status: number; headers: http.IncomingHttpHeaders; text: string };
 

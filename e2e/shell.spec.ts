@@ -1,5 +1,5 @@
-import { expect, test } from "@playwright/test";
 import { signInAs } from "./support/sign-in";
+import { expect, test } from "./support/test";
 
 test("the home page renders in IBM Plex Sans served from our own origin, and nothing leaves 127.0.0.1", async ({ page, baseURL }) => {
   const requested: string[] = [];

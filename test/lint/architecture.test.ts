@@ -2,7 +2,8 @@
 // "Rules of the house"): the pure core imports no React, router, database or
 // app layer and reaches another core module only through its index;
 // components and stores import no server module; a feature reaches another
-// only through its index.ts or index.server.ts. Each snippet is linted as if
+// only through its index.ts or index.server.ts; a browser test imports the
+// shared test of e2e/support/test.ts. Each snippet is linted as if
 // it were the named file, so a rule that stops firing fails here.
 import { fileURLToPath } from "node:url";
 import { ESLint } from "eslint";
@@ -36,6 +37,7 @@ describe("refused imports", () => {
     ["app/features/tables/x.ts", 'import { robotOfRevision } from "../robots/revision-robot.server";', "through its index"],
     ["app/features/api/operations/x.ts", 'import { draftSaveBody } from "../../gaits/drafts.server";', "through its index"],
     ["app/features/gaits/editor/x.ts", 'import { changedFields } from "~/features/robots/index/changes";', "through its index"],
+    ["e2e/x.spec.ts", 'import { expect, test } from "@playwright/test";', "./support/test"],
   ])("%s: %s", async (filePath, code, saying) => {
     const found = await refusals(filePath, code);
     expect(found, `${code} in ${filePath}`).toHaveLength(1);
@@ -62,6 +64,8 @@ describe("allowed imports", () => {
     ["app/features/robots/x.ts", 'import { changedFields } from "./changes";'],
     ["app/features/robots/x.ts", 'import { getRobot } from "~/features/robots/robots.server";'],
     ["app/features/gaits/editor/x.ts", 'import { FLAG_LABELS } from "../flag-labels";'],
+    ["e2e/x.spec.ts", 'import { expect, test } from "./support/test";'],
+    ["e2e/support/x.ts", 'import { test as base } from "@playwright/test";'],
   ])("%s: %s", async (filePath, code) => {
     expect(await refusals(filePath, code), `${code} in ${filePath}`).toEqual([]);
   });
