@@ -50,7 +50,7 @@ app.use((req, res, next) => {
   next();
 });
 // The headers every answer carries, files and the refusals below included
-// (docs/decisions/009-headers.md): helmet's, with X-Frame-Options DENY, as the
+// (docs/decisions/010-headers.md): helmet's, with X-Frame-Options DENY, as the
 // pages' frame-ancestors 'none' says, and Referrer-Policy
 // strict-origin-when-cross-origin, since with helmet's no-referrer Chromium
 // sends `Origin: null` on our own form posts, which the origin guard refuses.

@@ -12,7 +12,7 @@ import { expect, test, type APIResponse, type Page } from "./support/test";
 
 const signInOrigin = new URL(process.env.GITHUB_OAUTH_URL ?? "https://github.com").origin;
 
-/** The page policy of docs/decisions/009-headers.md, with `nonce`. */
+/** The page policy of docs/decisions/010-headers.md, with `nonce`. */
 const pagePolicy = (nonce: string) =>
   [
     "default-src 'self'",
@@ -104,13 +104,13 @@ test("API answers, refusals and the server's own answers load nothing; build fil
     expectEveryAnswersHeaders(headers, path);
   }
 
-  // Answered by server.js before the app: a method no route knows, under /api/v1.
+  // Answered by server.js before the app: a method the API does not route (405), under /api/v1.
   const trace = await new Promise<http.IncomingMessage>((resolve, reject) => {
     const call = http.request(new URL("/api/v1/robots", baseURL), { method: "TRACE" }, (response) => resolve(response.resume()));
     call.on("error", reject);
     call.end();
   });
-  expect(trace.statusCode).toBe(501);
+  expect(trace.statusCode).toBe(405);
   expect(trace.headers["content-security-policy"]).toBe(NOTHING_POLICY);
   expect(trace.headers["x-content-type-options"]).toBe("nosniff");
 });

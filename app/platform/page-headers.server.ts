@@ -3,7 +3,7 @@
 // Content-Security-Policy, naming a nonce made for this answer alone, and,
 // for a signed-in person, that no cache may keep it. app/entry.server.tsx
 // applies it; the headers that are the same for every answer, and the policy
-// of everything that is not a page, are server.js's (docs/decisions/009-headers.md).
+// of everything that is not a page, are server.js's (docs/decisions/010-headers.md).
 import { randomBytes } from "node:crypto";
 import { config } from "./config.server";
 import { readSession } from "./session.server";

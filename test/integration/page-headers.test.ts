@@ -92,7 +92,7 @@ async function answer(caller: Caller, path: string, method = "GET"): Promise<Res
   return handle(await request(method, path));
 }
 
-/** The page policy of docs/decisions/009-headers.md, with `nonce`. */
+/** The page policy of docs/decisions/010-headers.md, with `nonce`. */
 const pagePolicy = (nonce: string) =>
   [
     "default-src 'self'",
