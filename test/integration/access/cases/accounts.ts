@@ -223,7 +223,12 @@ export const cases: RouteCase[] = [
     kind: "loader",
     run: (req) => req("GET", "/settings/audit").then((r) => load(audit, r)),
   },
-  { name: "GET /local/mail", route: "routes/local/mail.tsx", kind: "loader", run: () => localMail.loader() },
+  {
+    name: "GET /local/mail",
+    route: "routes/local/mail.tsx",
+    kind: "loader",
+    run: (req) => req("GET", "/local/mail").then((r) => load(localMail, r)),
+  },
   {
     name: "GET /gaits",
     route: "routes/gaits/list.tsx",
