@@ -88,12 +88,12 @@ test("an invitation followed by an account whose GitHub address is not verified 
   const theirs = await context.newPage();
   await signInAsNewPerson(theirs, newcomer, new URL(link!).pathname);
   await expect(theirs.getByRole("heading", { name: "Join Breakwater Robotics Lab" })).toBeVisible();
-  await expect(theirs.getByText(/verify that address on GitHub and sign in again/)).toBeVisible();
+  await expect(theirs.getByText(/verify that address on GitHub and sign in again/i)).toBeVisible();
   await expect(theirs.getByRole("button", { name: /^Join as/ })).toHaveCount(0);
   // Sent anyway (an old tab, a script): refused, and no membership.
   const answer = await theirs.request.post(new URL(link!).pathname, { form: {}, headers: { Origin: new URL(link!).origin } });
   expect(answer.status()).toBe(403);
-  await theirs.goto("/");
+  await theirs.goto("/robots");
   await expect(theirs).toHaveURL(/\/welcome$/);
   await context.close();
 });

@@ -2,7 +2,7 @@
 import { randomBytes } from "node:crypto";
 import { eq } from "drizzle-orm";
 import { apiTokens, invitations, memberships, users } from "../../../../db/schema";
-import { act, load } from "../../../support/routes";
+import { act, load, type Caller, type DemoIds } from "../../../support/routes";
 import { uniqueName } from "../../../support/names";
 import type { RouteCase } from "../support";
 import { hashToken } from "~/platform/access.server";
@@ -50,6 +50,18 @@ async function pendingInvitation(
     .values({ workspaceId, email: email.toLowerCase(), role, tokenHash: hashToken(token), expiresAt: new Date(Date.now() + 86_400_000) })
     .returning();
   return { token, invitationId: row.id };
+}
+
+/**
+ * An invitation to the caller's own (verified) address, into the demo
+ * workspace they are already in: accepting marks it and adds no membership.
+ */
+async function invitationToCaller(db: Parameters<NonNullable<RouteCase["prepare"]>>[0], ids: DemoIds, caller: Caller) {
+  const [user] = await db
+    .select({ email: users.email })
+    .from(users)
+    .where(eq(users.id, ids.userIds[caller === "signed-out" ? "viewer" : caller]));
+  return pendingInvitation(db, ids.workspaceId, "viewer", user.email);
 }
 
 export const cases: RouteCase[] = [
@@ -100,14 +112,7 @@ export const cases: RouteCase[] = [
     route: "routes/welcome.tsx",
     kind: "action",
     intent: "accept",
-    // Into the demo workspace the caller is already in: accepting marks the invitation and adds no membership.
-    prepare: async (db, ids, caller) => {
-      const [user] = await db
-        .select({ email: users.email })
-        .from(users)
-        .where(eq(users.id, ids.userIds[caller === "signed-out" ? "viewer" : caller]));
-      return pendingInvitation(db, ids.workspaceId, "viewer", user.email);
-    },
+    prepare: invitationToCaller,
     run: (req, _ids, { invitationId }) => req("POST", "/welcome", { form: { intent: "accept", invitationId } }).then((r) => act(welcome, r)),
   },
   {
@@ -121,7 +126,7 @@ export const cases: RouteCase[] = [
     name: "POST /invitations/:token (accept)",
     route: "routes/invitations/accept.tsx",
     kind: "action",
-    prepare: (db, ids) => pendingInvitation(db, ids.workspaceId),
+    prepare: invitationToCaller,
     run: (req, _ids, { token }) => req("POST", `/invitations/${token}`).then((r) => act(acceptInvitation, r, { token })),
   },
   {
