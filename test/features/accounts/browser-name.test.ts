@@ -20,6 +20,14 @@ describe("browserName", () => {
     expect(browserName(userAgent)).toBe(expected);
   });
 
+  test("headless Chrome is Chrome; a browser of no name we know goes by its system", () => {
+    expect(browserName("Mozilla/5.0 (X11; Linux x86_64) AppleWebKit/537.36 (KHTML, like Gecko) HeadlessChrome/131.0.0.0 Safari/537.36")).toBe(
+      "Chrome on Linux",
+    );
+    expect(browserName("Mozilla/5.0 (X11; Linux x86_64) Gecko/20100101 Nameless/1.0")).toBe("A browser on Linux");
+    expect(browserName("Mozilla/5.0")).toBe("Unknown browser");
+  });
+
   test("a client that is no browser goes by its first product", () => {
     expect(browserName("curl/8.5.0")).toBe("curl/8.5.0");
   });

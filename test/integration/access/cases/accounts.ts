@@ -2,10 +2,11 @@
 import { randomBytes } from "node:crypto";
 import { eq } from "drizzle-orm";
 import { apiTokens, invitations, memberships, users } from "../../../../db/schema";
-import { act, load, type Caller, type DemoIds } from "../../../support/routes";
+import { act, load, sessionCookieFor, type Caller, type DemoIds } from "../../../support/routes";
 import { uniqueName } from "../../../support/names";
 import type { RouteCase } from "../support";
 import { hashToken } from "~/platform/access.server";
+import { publicSessionId, sessionStorage } from "~/platform/session.server";
 import * as root from "~/root";
 import * as healthz from "~/routes/healthz";
 import * as shell from "~/routes/shell";
@@ -17,6 +18,7 @@ import * as signOut from "~/routes/auth/sign-out";
 import * as workspaceSwitch from "~/routes/workspace-switch";
 import * as welcome from "~/routes/welcome";
 import * as acceptInvitation from "~/routes/invitations/accept";
+import * as accountSessions from "~/routes/account/sessions";
 import * as settingsLayout from "~/routes/settings/layout";
 import * as workspaceSettings from "~/routes/settings/workspace";
 import * as members from "~/routes/settings/members";
@@ -128,6 +130,31 @@ export const cases: RouteCase[] = [
     kind: "action",
     prepare: invitationToCaller,
     run: (req, _ids, { token }) => req("POST", `/invitations/${token}`).then((r) => act(acceptInvitation, r, { token })),
+  },
+  {
+    name: "GET /account/sessions",
+    route: "routes/account/sessions.tsx",
+    kind: "loader",
+    run: (req) => req("GET", "/account/sessions").then((r) => load(accountSessions, r)),
+  },
+  {
+    name: "POST /account/sessions (end another of one's sessions)",
+    route: "routes/account/sessions.tsx",
+    kind: "action",
+    intent: "end",
+    prepare: async (_db, ids, caller) => {
+      const other = await sessionCookieFor(ids.userIds[caller === "signed-out" ? "viewer" : caller]);
+      const id = (await sessionStorage().getSession(other)).id;
+      return { sessionId: publicSessionId(id) };
+    },
+    run: (req, _ids, { sessionId }) => req("POST", "/account/sessions", { form: { intent: "end", sessionId } }).then((r) => act(accountSessions, r)),
+  },
+  {
+    name: "POST /account/sessions (sign out everywhere)",
+    route: "routes/account/sessions.tsx",
+    kind: "action",
+    intent: "end-all",
+    run: (req) => req("POST", "/account/sessions", { form: { intent: "end-all" } }).then((r) => act(accountSessions, r)),
   },
   {
     name: "GET /settings (layout)",
