@@ -32,6 +32,7 @@ export default [
     index("routes/home.tsx"),
     route("sign-in", "routes/auth/sign-in.tsx"),
     route("welcome", "routes/welcome.tsx"),
+    route("account/sessions", "routes/account/sessions.tsx"),
     route("invitations/:token", "routes/invitations/accept.tsx"),
     ...prefix("robots", robotPages),
     ...prefix("gaits", [index("routes/gaits/list.tsx"), ...editorPages, ...versionPages]),

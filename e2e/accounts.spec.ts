@@ -72,6 +72,32 @@ test("an owner invites a new person by e-mail; they follow the link and land in 
   await context.close();
 });
 
+test("an invitation followed by an account whose GitHub address is not verified explains what to do, and joining is refused", async ({ page, browser }) => {
+  const stamp = Date.now().toString(36);
+  const newcomer = { login: `eli-${stamp}`, name: `Eli Marsh ${stamp}`, email: `eli.${stamp}@breakwater-lab.test`, verified: false };
+
+  await signInAs(page, "ines-okafor", "/settings/members");
+  await page.getByLabel("E-mail").fill(newcomer.email);
+  await page.getByLabel("Role").last().selectOption("lead");
+  await page.getByRole("button", { name: "Send invitation" }).click();
+  await expect(page.getByRole("status")).toContainText(`Invitation sent to ${newcomer.email}`);
+  const link = (await latestMailTo(newcomer.email)).text.match(/https?:\/\/\S+\/invitations\/\S+/)?.[0];
+  expect(link, "the invitation e-mail carries a link").toBeTruthy();
+
+  const context = await browser.newContext();
+  const theirs = await context.newPage();
+  await signInAsNewPerson(theirs, newcomer, new URL(link!).pathname);
+  await expect(theirs.getByRole("heading", { name: "Join Breakwater Robotics Lab" })).toBeVisible();
+  await expect(theirs.getByText(/verify that address on GitHub and sign in again/i)).toBeVisible();
+  await expect(theirs.getByRole("button", { name: /^Join as/ })).toHaveCount(0);
+  // Sent anyway (an old tab, a script): refused, and no membership.
+  const answer = await theirs.request.post(new URL(link!).pathname, { form: {}, headers: { Origin: new URL(link!).origin } });
+  expect(answer.status()).toBe(403);
+  await theirs.goto("/robots");
+  await expect(theirs).toHaveURL(/\/welcome$/);
+  await context.close();
+});
+
 test("a person with no workspace is offered to start one", async ({ page }) => {
   const stamp = Date.now().toString(36);
   await signInAsNewPerson(page, { login: `solo-${stamp}`, name: `Solo ${stamp}`, email: `solo.${stamp}@example.test` }, "/robots");

@@ -37,5 +37,5 @@ export PUBLIC_URL="http://127.0.0.1:$APP_PORT"
 service_start app - env NODE_ENV=production HOST=127.0.0.1 PORT="$APP_PORT" node server.js build/server/index.js
 service_wait_port app "$APP_PORT"
 say "Gaitloom is running: $PUBLIC_URL  (Ctrl-C stops the app and its database)"
-say "sign in as a demo person through the local GitHub stand-in; mail the app sends is at $PUBLIC_URL/local/mail"
+say "sign in as a demo person through the local GitHub stand-in; mail the app sends is at $PUBLIC_URL/local/mail (for the owner, Ines Okafor)"
 wait "$(cat "$RUN_DIR/app.pid")" || true

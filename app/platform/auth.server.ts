@@ -1,5 +1,5 @@
 // Sign-in with GitHub through remix-auth. The verify step reads the person's
-// profile and primary e-mail, then finds or creates their user row.
+// profile and e-mail addresses, then finds or creates their user row.
 import { eq } from "drizzle-orm";
 import { Authenticator } from "remix-auth";
 import { users } from "../../db/schema";
@@ -35,22 +35,27 @@ export function gitHubAuthenticator(): Authenticator<User> {
   return authenticator;
 }
 
-async function fetchGitHubPerson(accessToken: string): Promise<{ profile: GitHubProfile; email: string }> {
+type GitHubPerson = { profile: GitHubProfile; email: string; verifiedEmails: string[] };
+
+async function fetchGitHubPerson(accessToken: string): Promise<GitHubPerson> {
   const api = config().github.apiUrl;
   const headers = { Authorization: `Bearer ${accessToken}`, Accept: "application/vnd.github+json", "User-Agent": "Gaitloom" };
   const profileResponse = await fetch(`${api}/user`, { headers });
   if (!profileResponse.ok) throw new Error(`GitHub answered ${profileResponse.status} for the profile.`);
   const profile = (await profileResponse.json()) as GitHubProfile;
   const emailsResponse = await fetch(`${api}/user/emails`, { headers });
-  const emails = emailsResponse.ok ? ((await emailsResponse.json()) as GitHubEmail[]) : [];
+  const listed: unknown = emailsResponse.ok ? await emailsResponse.json() : [];
+  const emails = Array.isArray(listed) ? (listed as GitHubEmail[]) : [];
   const email = emails.find((e) => e.primary && e.verified)?.email ?? profile.email;
   if (!email) throw new Error("GitHub gave no verified e-mail address for this account.");
-  return { profile, email };
+  // Only what GitHub vouches for may accept an invitation (the profile's address need not be verified).
+  const verifiedEmails = [...new Set(emails.filter((e) => e.verified === true && typeof e.email === "string").map((e) => e.email.toLowerCase()))];
+  return { profile, email, verifiedEmails };
 }
 
-export async function upsertGitHubUser({ profile, email }: { profile: GitHubProfile; email: string }): Promise<User> {
+export async function upsertGitHubUser({ profile, email, verifiedEmails }: GitHubPerson): Promise<User> {
   const db = database();
-  const values = { githubId: profile.id, login: profile.login, name: profile.name || profile.login, email, avatarUrl: profile.avatar_url };
+  const values = { githubId: profile.id, login: profile.login, name: profile.name || profile.login, email, verifiedEmails, avatarUrl: profile.avatar_url };
   // A seeded or invited person may exist by login before their first sign-in.
   const [byGitHub] = await db.select().from(users).where(eq(users.githubId, profile.id));
   const [byLogin] = byGitHub ? [byGitHub] : await db.select().from(users).where(eq(users.login, profile.login));

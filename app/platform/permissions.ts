@@ -24,6 +24,8 @@ export const PERMISSIONS = {
   "members.changeRole": ["owner"],
   "members.remove": ["owner"],
   "invitations.manage": leads,
+  // The local inbox (local and test mode) holds every invitation's link, as good as a membership.
+  "mail.readLocal": ["owner"],
   // API tokens act with the holder's role; only these roles may hold one.
   "tokens.manage": ["owner", "lead", "firmware"],
   // Robots: geometry and limits by editors; servo mapping and calibration also by firmware.
@@ -56,6 +58,7 @@ const ACTION_PHRASES: Record<Action, string> = {
   "members.changeRole": "change members' roles",
   "members.remove": "remove members",
   "invitations.manage": "invite people",
+  "mail.readLocal": "read the local inbox",
   "tokens.manage": "hold API tokens",
   "robots.edit": "edit robots",
   "robots.calibrate": "edit servo mapping and calibration",

@@ -6,7 +6,7 @@ import { AppShell, type ShellData } from "~/components/shell/AppShell";
 import { currentMember, currentUser, membershipsOf } from "~/platform/access.server";
 import { config } from "~/platform/config.server";
 import { summarizeWorkspace } from "~/features/accounts/workspaces.server";
-import type { RoutePermissions } from "~/platform/permissions";
+import { can, type RoutePermissions } from "~/platform/permissions";
 
 export const permissions = { loader: "public" } satisfies RoutePermissions;
 
@@ -18,7 +18,7 @@ export async function loader({ request }: Route.LoaderArgs): Promise<ShellData> 
     role: member?.role ?? null,
     workspace: member ? await summarizeWorkspace(member.workspace) : null,
     workspaces: workspaces.map(({ workspace, role }) => ({ id: workspace.id, name: workspace.name, role })),
-    localMail: config().local,
+    localMail: config().local && can(member?.role, "mail.readLocal"),
   };
 }
 

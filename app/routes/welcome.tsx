@@ -1,4 +1,4 @@
-// For a signed-in person: start a workspace, or accept an invitation sent to their e-mail.
+// For a signed-in person: start a workspace, or accept an invitation sent to an address GitHub has verified for them.
 import { Form, redirect, useActionData } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/welcome";
@@ -6,7 +6,7 @@ import { PageHeader } from "~/components/common/PageHeader";
 import { membershipsOf, requireUser } from "~/platform/access.server";
 import { readForm } from "~/platform/body.server";
 import { formAction, ServiceError } from "~/platform/errors.server";
-import { acceptInvitation, invitationsForEmail } from "~/features/accounts/invitations.server";
+import { acceptInvitation, invitationsForAddresses } from "~/features/accounts/invitations.server";
 import { ROLE_LABELS, type RoutePermissions } from "~/platform/permissions";
 import { id } from "~/platform/params";
 import { commitSession, readSession } from "~/platform/session.server";
@@ -16,8 +16,8 @@ export const permissions = { loader: "signed-in", action: { create: "signed-in",
 
 export async function loader({ request }: Route.LoaderArgs) {
   const user = await requireUser(request);
-  const [invitations, memberships] = await Promise.all([invitationsForEmail(user.email), membershipsOf(user.id)]);
-  return { name: user.name, email: user.email, invitations, hasWorkspace: memberships.length > 0 };
+  const [invitations, memberships] = await Promise.all([invitationsForAddresses(user.verifiedEmails), membershipsOf(user.id)]);
+  return { name: user.name, addresses: user.verifiedEmails, invitations, hasWorkspace: memberships.length > 0 };
 }
 
 export const actionForm = z.discriminatedUnion("intent", [
@@ -57,9 +57,18 @@ export default function Welcome({ loaderData }: Route.ComponentProps) {
         </p>
       ) : null}
       <section className="rounded-lg border border-line bg-surface p-6">
-        <h2 className="text-lg font-semibold">Invitations for {loaderData.email}</h2>
+        <h2 className="text-lg font-semibold">Invitations for your verified addresses</h2>
+        {loaderData.addresses.length === 0 ? (
+          <p className="mt-2 text-ink-muted">
+            GitHub shows no verified e-mail address for your account. Verify an address on GitHub and sign in again to join a workspace you are invited to.
+          </p>
+        ) : (
+          <p className="mt-1 text-ink-muted">{loaderData.addresses.join(", ")}</p>
+        )}
         {loaderData.invitations.length === 0 ? (
-          <p className="mt-2 text-ink-muted">None waiting. Ask a workspace owner or lead to invite this e-mail address.</p>
+          loaderData.addresses.length === 0 ? null : (
+            <p className="mt-2 text-ink-muted">None waiting. Ask a workspace owner or lead to invite one of these addresses.</p>
+          )
         ) : (
           <ul className="mt-3 space-y-2">
             {loaderData.invitations.map((invitation) => (

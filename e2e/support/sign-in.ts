@@ -15,13 +15,14 @@ export async function signInAs(page: Page, login: string, returnTo = "/"): Promi
   await expect(page.getByLabel("Your account")).toBeVisible();
 }
 
-/** Someone who has never used Gaitloom, typed into the stand-in's form. */
-export async function signInAsNewPerson(page: Page, person: { login: string; name: string; email: string }, returnTo = "/") {
+/** Someone who has never used Gaitloom, typed into the stand-in's form; their address is verified unless `verified` is false. */
+export async function signInAsNewPerson(page: Page, person: { login: string; name: string; email: string; verified?: boolean }, returnTo = "/") {
   await page.goto(`/sign-in?returnTo=${encodeURIComponent(returnTo)}`);
   await page.getByRole("button", { name: "Sign in with GitHub" }).click();
   await page.getByLabel("Login").fill(person.login);
   await page.getByLabel("Name").fill(person.name);
   await page.getByLabel("E-mail").fill(person.email);
+  if (person.verified === false) await page.getByLabel("Leave this address unverified").check();
   await page.getByRole("button", { name: "Continue as this person" }).click();
 }
 

@@ -1,13 +1,15 @@
 // A local stand-in for GitHub's OAuth service, on 127.0.0.1 only: the
 // authorize page (pick a demo person or type a new one), the token exchange,
-// and the user and e-mails endpoints the app reads after sign-in.
+// and the user and e-mails endpoints the app reads after sign-in. A demo
+// person's address is verified; a typed-in person's too, unless left
+// unverified, so the app's handling of an unverified address can be tried.
 // Usage: tsx scripts/fakes/github.ts --port 3001 --client-id ID --client-secret SECRET
 import { createHash, randomBytes } from "node:crypto";
 import { createServer, type IncomingMessage, type ServerResponse } from "node:http";
 import { parseArgs } from "node:util";
 import { demoPeople } from "../../db/demo/scenario";
 
-type Person = { id: number; login: string; name: string; email: string };
+type Person = { id: number; login: string; name: string; email: string; verified: boolean };
 
 const { values } = parseArgs({
   options: {
@@ -23,12 +25,12 @@ const clientSecret = values["client-secret"]!;
 const codes = new Map<string, { person: Person; redirectUri: string; expires: number }>();
 const tokens = new Map<string, Person>();
 
-function personFor(login: string, name: string, email: string): Person {
+function personFor(login: string, name: string, email: string, verified: boolean): Person {
   const demo = demoPeople.find((person) => person.login === login);
-  if (demo) return { id: demo.githubId, login: demo.login, name: demo.name, email: demo.email };
+  if (demo) return { id: demo.githubId, login: demo.login, name: demo.name, email: demo.email, verified: true };
   // A stable id for a typed-in person, so signing in again finds the same user.
   const id = 2_000_000 + (createHash("sha256").update(login).digest().readUInt32BE(0) % 1_000_000);
-  return { id, login, name: name || login, email };
+  return { id, login, name: name || login, email, verified };
 }
 
 const escape = (text: string) => text.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
@@ -53,6 +55,7 @@ input[type=text],input[type=email]{width:100%;padding:.4rem;font:inherit}</style
 <label>Login <input type="text" name="login" required pattern="[A-Za-z0-9-]+"></label>
 <label>Name <input type="text" name="name"></label>
 <label>E-mail <input type="email" name="email" required></label>
+<label><input type="checkbox" name="unverified" value="yes"> Leave this address unverified</label>
 <button type="submit">Continue as this person</button></form></body></html>`;
 }
 
@@ -90,7 +93,8 @@ const server = createServer(async (request, response) => {
       if (!login || !email) return send(response, 400, "<p>A login and an e-mail are needed.</p>");
       const code = randomBytes(16).toString("hex");
       const redirectUri = form.get("redirect_uri") ?? "";
-      codes.set(code, { person: personFor(login, form.get("name") ?? "", email), redirectUri, expires: Date.now() + 60_000 });
+      const person = personFor(login, form.get("name") ?? "", email, form.get("unverified") !== "yes");
+      codes.set(code, { person, redirectUri, expires: Date.now() + 60_000 });
       const target = new URL(redirectUri);
       target.searchParams.set("code", code);
       target.searchParams.set("state", form.get("state") ?? "");
@@ -121,7 +125,7 @@ const server = createServer(async (request, response) => {
     if (url.pathname === "/user/emails" && request.method === "GET") {
       const person = bearer(request);
       if (!person) return send(response, 401, { message: "Bad credentials" });
-      return send(response, 200, [{ email: person.email, primary: true, verified: true, visibility: "private" }]);
+      return send(response, 200, [{ email: person.email, primary: true, verified: person.verified, visibility: "private" }]);
     }
     send(response, 404, { message: "Not Found" });
   } catch (error) {

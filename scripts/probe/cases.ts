@@ -4,7 +4,7 @@
 // a "verbatim" value goes into a URL or form body as written, so it can hold
 // malformed percent-encoding.
 import { can, type Action } from "../../app/platform/permissions";
-import type { Body, LargeBody, Sent } from "./http";
+import type { Answer, Body, LargeBody, Sent } from "./http";
 import type { Random } from "./prng";
 import type { Identity, Ids, World } from "./setup";
 import type { Field, Target } from "./targets";
@@ -16,7 +16,21 @@ export type Case = {
   /** What is hostile about it, in a few words. */
   note: string;
   sent: Sent;
+  /** What the answer must be, beyond no 5xx, where a case knows it. */
+  expect?: Expectation;
 };
+
+export type Expectation = { what: string; holds: (answer: Answer) => boolean };
+
+const pathOf = (location: string | null) => (location && URL.canParse(location, "http://app") ? new URL(location, "http://app").pathname : "");
+
+/** A request whose session has ended is a signed-out one: 401, or a page's redirect to sign in. */
+const SIGNED_OUT: Expectation = {
+  what: "refused as signed out (401, or a redirect to /sign-in)",
+  holds: (answer) => answer.status === 401 || (answer.status !== null && answer.status >= 300 && answer.status < 400 && pathOf(answer.location) === "/sign-in"),
+};
+
+const FORBIDDEN: Expectation = { what: "refused with 403", holds: (answer) => answer.status === 403 };
 
 type Value = { bytes: Buffer; verbatim?: boolean; json?: string };
 
@@ -411,7 +425,12 @@ function jsonFields(target: Target, ids: Ids, params: Record<string, string>, co
 
 export function build(target: Target, spec: Build, context: Context, family: string, note: string): Case {
   const { random } = context;
-  const identity = spec.identity;
+  let identity = spec.identity;
+  // Signing out a session other callers go on using would sign them out too: such a request goes with the throwaway session.
+  const cookie = identity.cookie;
+  if (target.endsSession && cookie && context.world.liveSessions.some((value) => cookie.includes(value))) {
+    identity = { ...identity, name: `${identity.name}, with the throwaway session`, cookie: context.world.throwaway };
+  }
   const ids = ownIds(context.world, identity);
   const validParamText = validParams(target.route.pattern, ids, random);
   const params: Record<string, Value> = Object.fromEntries(Object.entries(validParamText).map(([name, value]) => [name, text(value)]));
@@ -1196,6 +1215,31 @@ export const FAMILIES: Family[] = [
       const identity = random.chance(0.7) ? allowedIdentity(target, world, random) : anyIdentity(world, random);
       const query: [string, Value][] = random.chance(0.3) ? [["_routes", random.chance(0.5) ? text(target.route.id) : random.pick(MALFORMED_PERCENT)]] : [];
       return build(target, { identity, dataUrl: true, query }, context, "single fetch", "through the .data address");
+    },
+  },
+  {
+    name: "ended session",
+    weight: 3,
+    applies: (target) => target.needs !== "public",
+    make(target, context) {
+      const identity = context.random.pick(context.world.endedSessions);
+      return { ...build(target, { identity }, context, "ended session", identity.name), expect: SIGNED_OUT };
+    },
+  },
+  {
+    name: "another's invitation",
+    weight: 2,
+    applies: (target) => target.acceptsInvitation,
+    make(target, context) {
+      const { random, world } = context;
+      const callers = world.identities.filter((identity) => identity.cookie && !identity.authorization && identity.as !== "hostile");
+      const identity = random.pick(callers);
+      const invitation = world.foreignInvitation;
+      if (!invitation) return build(target, { identity }, context, "another's invitation", "none set aside (the app shows no local inbox)");
+      const spec = /:token/.test(target.route.pattern)
+        ? { identity, params: { token: text(invitation.token) } }
+        : { identity, fields: [["invitationId", text(invitation.id)] as [string, Value]] };
+      return { ...build(target, spec, context, "another's invitation", `accepted as ${identity.name}`), expect: FORBIDDEN };
     },
   },
   {

@@ -6,7 +6,9 @@
 // answer the handlers it entered; the probe prints per route and method how
 // many requests reached a handler and how they were answered, and ends with
 // "N server errors". It fails on any 5xx (but a 503 with Retry-After, a
-// refusal for now), on a redirect off the site, and on a loader, action or
+// refusal for now), on a redirect off the site, on an answer other than the
+// one a case expects (a session ended since must read as signed out, another
+// account's invitation must be refused with 403), and on a loader, action or
 // intent that no request reached.
 import { closeSync, openSync, readSync, statSync, writeFileSync } from "node:fs";
 import { parseArgs } from "node:util";
@@ -112,6 +114,7 @@ const reachedTargets = new Set<string>();
 const serverErrors: { item: Case; answer: Answer }[] = [];
 const offSite: { item: Case; answer: Answer }[] = [];
 const unanswered: { item: Case; answer: Answer }[] = [];
+const unexpected: { item: Case; answer: Answer }[] = [];
 let handlerEntries = 0;
 let sent = 0;
 let stoppedByClock = false;
@@ -142,6 +145,8 @@ function record(item: Case, answer: Answer) {
     family.serverErrors += 1;
     serverErrors.push({ item, answer });
   }
+  const forNow = answer.status === 503 && answer.retryAfter;
+  if (item.expect && answer.status !== null && !forNow && !isServerError(answer) && !item.expect.holds(answer)) unexpected.push({ item, answer });
   if (answer.location) {
     const target = URL.canParse(answer.location, origin) ? new URL(answer.location, origin) : null;
     // Signing in starts at GitHub's authorize page (the local stand-in's here).
@@ -235,6 +240,10 @@ if (serverErrors.length) {
   for (const entry of serverErrors.slice(0, 40)) console.log(describe(entry));
   if (options["app-log"]) printLogErrors(options["app-log"], logStart);
 }
+if (unexpected.length) {
+  say(`answers other than the case expects (first 20 of ${unexpected.length}):`);
+  for (const entry of unexpected.slice(0, 20)) console.log(`${describe(entry)}\n      expected: ${entry.item.expect!.what}`);
+}
 for (const target of unreached) say(`never reached: ${targetKey(target)}`);
 if (options.report) {
   writeFileSync(
@@ -250,6 +259,7 @@ if (options.report) {
         unreached: unreached.map(targetKey),
         serverErrors: serverErrors.map(reportEntry),
         offSite: offSite.map(reportEntry),
+        unexpected: unexpected.map((entry) => ({ ...reportEntry(entry), expected: entry.item.expect!.what })),
         unanswered: unanswered.map(reportEntry),
       },
       null,
@@ -260,8 +270,9 @@ if (options.report) {
 }
 if (offSite.length) console.log(`${offSite.length} redirects off the site`);
 if (unreached.length) console.log(`${unreached.length} loaders, actions or intents never reached`);
+if (unexpected.length) console.log(`${unexpected.length} answers other than expected`);
 console.log(`${serverErrors.length} server errors`);
-process.exit(serverErrors.length || unreached.length || offSite.length ? 1 : 0);
+process.exit(serverErrors.length || unreached.length || offSite.length || unexpected.length ? 1 : 0);
 
 function reportEntry({ item, answer }: { item: Case; answer: Answer }) {
   const body = item.sent.body;

@@ -4,6 +4,8 @@
 // revokes); a newcomer makes a second workspace with a robot, a gait, a
 // version, a calibration profile and an invitation, whose ids are the "other
 // workspace's" ones; the demo workspace's ids come from its API and pages.
+// Sessions are ended on purpose (signed out, signed out everywhere) to be
+// sent again, and an invitation no caller may accept is set aside.
 import { demoPeople } from "../../db/demo/scenario";
 import type { Role } from "../../db/schema";
 
@@ -40,6 +42,18 @@ export type World = {
   /** Each gait's draft sequence, by gait id (both workspaces). */
   sequences: Record<string, unknown>;
   openApi: unknown;
+  /** The session cookies other callers go on using: a target that ends the caller's session gets `throwaway` instead. */
+  liveSessions: string[];
+  /** A newcomer's session of its own to lose, for the targets that end the caller's session. */
+  throwaway: string;
+  /** Sessions ended since they were made (signed out, signed out everywhere): every request with one that needs more than "public" must be refused. */
+  endedSessions: Identity[];
+  /**
+   * An invitation into the demo workspace to an address no caller has
+   * verified: every caller's acceptance must be refused with 403. Left out of
+   * `ids`, so no request resends or revokes it.
+   */
+  foreignInvitation: { token: string; id: string } | null;
 };
 
 const UUID = /[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/g;
@@ -250,19 +264,45 @@ export async function prepareWorld(url: string, tag: string): Promise<World> {
   identities.push({ name: "outsider (session)", as: "outsider", cookie: outsider.header() });
   identities.push({ name: "outsider (token)", as: "outsider", authorization: `Bearer ${outsiderToken}` });
 
-  // The demo workspace: an invitation of its own (its link read from the local inbox when the app shows one).
-  // and a calibration profile.
+  // The demo workspace: an invitation of its own (its link read from the local inbox when the app shows one),
+  // one set aside that no caller may accept, and a calibration profile.
   await setup.call("/settings/members", {
     method: "POST",
     form: { intent: "invite", email: `probe-invitee-${tag}@example.test`, role: "viewer" },
     jar: jars.owner,
   });
+  const setAside = `probe-set-aside-${tag}@example.test`;
+  await setup.call("/settings/members", { method: "POST", form: { intent: "invite", email: setAside, role: "owner" }, jar: jars.owner });
   const demoWorkspace = (await setup.json<{ workspace: { id: string } }>("/api/v1/workspace", tokens.owner)).workspace.id;
   const [firstRobot] = (await setup.json<RobotList>("/api/v1/robots", tokens.owner)).robots;
   if (firstRobot) await setup.redirected(`/export/calibration/${firstRobot.id}`, { intent: "create", name: `probe ${tag}` }, jars.owner);
   const home = await discover(setup, tokens.owner, jars.owner, demoWorkspace, found);
   const inbox = await setup.call("/local/mail", { jar: jars.owner });
-  home.invitationTokens = [...new Set([...inbox.text.matchAll(/\/invitations\/([A-Za-z0-9_-]{16,})/g)].map((match) => match[1]))].slice(0, 5);
+  const escaped = setAside.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
+  const setAsideToken = inbox.text.match(new RegExp(`${escaped}[\\s\\S]*?/invitations/([A-Za-z0-9_-]{16,})`))?.[1];
+  const members = await setup.call("/settings/members", { jar: jars.owner });
+  const setAsideId = members.text.match(new RegExp(`${escaped}</td>[\\s\\S]*?name="invitationId" value="([0-9a-f-]{36})"`))?.[1];
+  const foreignInvitation = setAsideToken && setAsideId ? { token: setAsideToken, id: setAsideId } : null;
+  home.invitations = home.invitations.filter((id) => id !== setAsideId);
+  home.invitationTokens = [...new Set([...inbox.text.matchAll(/\/invitations\/([A-Za-z0-9_-]{16,})/g)].map((match) => match[1]))]
+    .filter((token) => token !== setAsideToken)
+    .slice(0, 5);
+
+  // Sessions ended on purpose: the lead's second session, signed out; a newcomer's two, ended everywhere from one.
+  const signedOut = await setup.signIn(person("lead").login);
+  const signedOutCookie = signedOut.header();
+  await setup.call("/sign-out", { method: "POST", jar: signedOut });
+  const everywhere = { login: `probe-everywhere-${tag}`, name: `Probe everywhere ${tag}`, email: `probe-everywhere-${tag}@example.test` };
+  const [kept, ending] = [await setup.signIn(everywhere.login, everywhere), await setup.signIn(everywhere.login, everywhere)];
+  const endedEverywhereCookie = kept.header();
+  const endAll = await setup.call("/account/sessions", { method: "POST", form: { intent: "end-all" }, jar: ending });
+  if (endAll.response.status !== 302) throw new Error(`Signing out everywhere answered ${endAll.response.status}: ${endAll.text.slice(0, 200)}`);
+  const endedSessions: Identity[] = [
+    { name: "session signed out since", as: "hostile", cookie: signedOutCookie },
+    { name: "session ended everywhere since", as: "hostile", cookie: endedEverywhereCookie },
+  ];
+  const throwawayLogin = `probe-throwaway-${tag}`;
+  const throwaway = (await setup.signIn(throwawayLogin, { name: `Probe throwaway ${tag}`, email: `${throwawayLogin}@example.test` })).header();
 
   // Hostile credentials: a revoked token, tokens and cookies never issued or tampered with, a signed-out cookie.
   const revoked = await setup.createToken(jars.firmware, `probe ${tag} revoked`);
@@ -282,11 +322,13 @@ export async function prepareWorld(url: string, tag: string): Promise<World> {
     { name: "signed-out cookie", as: "hostile", cookie: "gaitloom_session=" },
     { name: "garbage cookie", as: "hostile", cookie: "gaitloom_session=%E0%A4%A; theme=\u00ff; =; a" },
     { name: "cookie and token", as: "hostile", cookie: jars.viewer.header(), authorization: `Bearer ${tokens.owner}` },
+    ...endedSessions,
   );
   const forged = await forgedSessions(home, foreignWorkspace);
   identities.push(...forged);
 
   const openApi = await setup.json<unknown>("/api/v1/openapi.json", tokens.owner);
+  const liveSessions = [...Object.values(jars), outsider].map((jar) => jar.get("gaitloom_session") ?? "").filter(Boolean);
   return {
     origin: setup.origin,
     githubOrigin: setup.githubOrigin,
@@ -295,27 +337,33 @@ export async function prepareWorld(url: string, tag: string): Promise<World> {
     foreign,
     ...found,
     openApi,
+    liveSessions,
+    throwaway,
+    endedSessions,
+    foreignInvitation,
   };
 }
 
 /**
- * Sessions signed with the app's own secret (known when the probe started the
- * app) holding what a stale cookie can: a user deleted since, a workspace
- * left since. (What only the app writes, ids of the right shape, is taken as
- * given: a cookie with anything else would need the secret.)
+ * Cookies signed with the app's own secret (known when the probe started the
+ * app), so they pass the signature and must fail on what they hold: an id of
+ * no session, and values that are no session id at all (what the cookie held
+ * before sessions were kept in the database: the user and workspace
+ * themselves, of a user deleted since and of a workspace left since).
  */
 async function forgedSessions(ids: Ids, foreignWorkspace: string): Promise<Identity[]> {
   const secret = process.env.GAITLOOM_PROBE_SESSION_SECRET;
   if (!secret) return [];
   const { createCookie } = await import("react-router");
   const cookie = createCookie("gaitloom_session", { secrets: [secret], path: "/", httpOnly: true, sameSite: "lax" });
-  const sign = async (name: string, data: Record<string, unknown>): Promise<Identity> => ({
+  const sign = async (name: string, value: unknown): Promise<Identity> => ({
     name,
     as: "hostile",
-    cookie: (await cookie.serialize(data)).split(";")[0],
+    cookie: (await cookie.serialize(value)).split(";")[0],
   });
   return Promise.all([
-    sign("session of a deleted user", { userId: "00000000-0000-4000-8000-000000000000" }),
-    sign("session in a workspace left since", { userId: ids.users[0], workspaceId: foreignWorkspace }),
+    sign("signed id of no session", "x".repeat(43)),
+    sign("signed session data of a deleted user", { userId: "00000000-0000-4000-8000-000000000000" }),
+    sign("signed session data in a workspace left since", { userId: ids.users[0], workspaceId: foreignWorkspace }),
   ]);
 }

@@ -54,6 +54,10 @@ export type Target = {
   fields: Field[];
   /** Query parameters a loader reads. */
   query: Field[];
+  /** It ends the caller's session (sign-out, signing out everywhere): the probe sends it only with a session of its own to lose. */
+  endsSession: boolean;
+  /** It accepts an invitation (by the link's token, or by id): the set-aside invitation must be refused there. */
+  acceptsInvitation: boolean;
 };
 
 type ConfigEntry = { file: string; path?: string; index?: boolean; children?: ConfigEntry[] };
@@ -197,6 +201,20 @@ const QUERY_HINTS: Record<string, Field[]> = {
 
 const MULTIPART_INTENTS = new Set(["upload", "import-urdf"]);
 
+/** Actions that end the caller's session, by module and intent ("" for an action without intents). */
+const SESSION_ENDING: Record<string, string[]> = {
+  "routes/auth/sign-out.ts": [""],
+  "routes/account/sessions.tsx": ["end-all"],
+};
+const endsSession = (file: string, intent = "") => SESSION_ENDING[file]?.includes(intent) ?? false;
+
+/** Actions that accept an invitation, likewise. */
+const INVITATION_ACCEPTING: Record<string, string[]> = {
+  "routes/invitations/accept.tsx": [""],
+  "routes/welcome.tsx": ["accept"],
+};
+const acceptsInvitation = (file: string, intent = "") => INVITATION_ACCEPTING[file]?.includes(intent) ?? false;
+
 /** Every route of app/routes.ts with what its module exports and declares. */
 export async function loadRoutes(): Promise<RouteInfo[]> {
   const flat = flatten(routeConfig as ConfigEntry[], "");
@@ -228,7 +246,17 @@ export function targetsOf(routes: RouteInfo[]): Target[] {
     const declared = route.permissions;
     if (route.loader) {
       const query = QUERY_HINTS[route.file] ?? [];
-      targets.push({ route, kind: "loader", needs: (declared.loader as Requirement) ?? "public", method: "GET", body: "none", fields: [], query });
+      targets.push({
+        route,
+        kind: "loader",
+        needs: (declared.loader as Requirement) ?? "public",
+        method: "GET",
+        body: "none",
+        fields: [],
+        query,
+        endsSession: false,
+        acceptsInvitation: false,
+      });
     }
     if (!route.action) continue;
     const bySchema = schemaFields(route.schema);
@@ -236,7 +264,17 @@ export function targetsOf(routes: RouteInfo[]): Target[] {
     const body = route.api ? "json" : "form";
     if (route.intents === null) {
       const needs = (typeof declared.action === "string" ? declared.action : "public") as Requirement;
-      targets.push({ route, kind: "action", needs, method: "POST", body, fields: hints[""] ?? [], query: [] });
+      targets.push({
+        route,
+        kind: "action",
+        needs,
+        method: "POST",
+        body,
+        fields: hints[""] ?? [],
+        query: [],
+        endsSession: endsSession(route.file),
+        acceptsInvitation: acceptsInvitation(route.file),
+      });
       continue;
     }
     for (const intent of route.intents) {
@@ -244,7 +282,18 @@ export function targetsOf(routes: RouteInfo[]): Target[] {
       const named = (bySchema.get(intent) ?? []).map((name) => f(name));
       const extra = (hints[intent] ?? []).filter((hint) => !named.some((field) => field.name === hint.name));
       const fields = [...named.map((field) => hints[intent]?.find((hint) => hint.name === field.name) ?? field), ...extra];
-      targets.push({ route, kind: "action", intent, needs, method: "POST", body: MULTIPART_INTENTS.has(intent) ? "multipart" : body, fields, query: [] });
+      targets.push({
+        route,
+        kind: "action",
+        intent,
+        needs,
+        method: "POST",
+        body: MULTIPART_INTENTS.has(intent) ? "multipart" : body,
+        fields,
+        query: [],
+        endsSession: endsSession(route.file, intent),
+        acceptsInvitation: acceptsInvitation(route.file, intent),
+      });
     }
   }
   return targets;

@@ -34,6 +34,8 @@ const DESIGN_ROLES: Record<string, readonly [owner: boolean, lead: boolean, anim
   "members.remove":         [true,  false, false,   false,   false],
   // "lead | … invite (not owners)" (whom a lead may invite: invitableRoles, below)
   "invitations.manage":     [true,  true,  false,   false,   false],
+  // "owner | everything, including members …": the local inbox holds every invitation's link, which is as good as membership
+  "mail.readLocal":         [true,  false, false,   false,   false],
   // "Owner, lead and firmware may hold API tokens, which act with the holder's role"
   "tokens.manage":          [true,  true,  false,   true,    false],
   // "animator | edit robots and gaits"; "lead | everything an animator can"

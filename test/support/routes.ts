@@ -45,15 +45,21 @@ export type MakeRequest = (method: string, path: string, body?: { form?: Record<
 
 /** Requests as `caller` would send them from the app's own pages: their session cookie, and the Origin a mutation carries. */
 export async function requestsAs(caller: Caller, ids: DemoIds): Promise<MakeRequest> {
-  let cookie: string | null = null;
-  if (caller !== "signed-out") {
-    const session = await sessionStorage().getSession();
-    session.set("userId", ids.userIds[caller]);
-    session.set("workspaceId", ids.workspaceId);
-    cookie = (await commitSession(session)).split(";")[0];
-  }
+  return requestsWith(caller === "signed-out" ? null : await sessionCookieFor(ids.userIds[caller], ids.workspaceId));
+}
+
+/** The `name=value` pair of a session cookie for `userId`, as signing in would give (in `workspaceId` when named). */
+export async function sessionCookieFor(userId: string, workspaceId?: string): Promise<string> {
+  const session = await sessionStorage().getSession();
+  session.set("userId", userId);
+  if (workspaceId) session.set("workspaceId", workspaceId);
+  return (await commitSession(session)).split(";")[0];
+}
+
+/** Requests carrying `cookie` (null: none), with `extra` headers, as the app's own pages send them. */
+export function requestsWith(cookie: string | null, extra: Record<string, string> = {}): MakeRequest {
   return async (method, path, body) => {
-    const headers = new Headers();
+    const headers = new Headers(extra);
     if (cookie) headers.set("Cookie", cookie);
     let payload: BodyInit | undefined;
     if (body?.form) {

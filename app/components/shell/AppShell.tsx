@@ -138,6 +138,9 @@ function UserMenu({ data }: { data: ShellData | null }) {
         <Link to="/settings/tokens" className="block rounded px-2 py-1 text-sm hover:bg-sunken">
           API tokens
         </Link>
+        <Link to="/account/sessions" className="block rounded px-2 py-1 text-sm hover:bg-sunken">
+          Your sessions
+        </Link>
         <Form method="post" action="/sign-out">
           <button type="submit" className="block w-full rounded px-2 py-1 text-left text-sm hover:bg-sunken">
             Sign out

@@ -1,7 +1,9 @@
 // Invitations by e-mail: a single-use link that expires. Only a hash of the
 // link's token is stored; resending makes a new link and retires the old one.
+// Having the link is not enough to join: the account must have the invited
+// address verified on GitHub, since a link can be forwarded or read by others.
 import { randomBytes } from "node:crypto";
-import { and, desc, eq, gt, isNull } from "drizzle-orm";
+import { and, desc, eq, gt, inArray, isNull } from "drizzle-orm";
 import { invitations, memberships, users, workspaces, type Role } from "../../../db/schema";
 import { hashToken, type Member, type User } from "../../platform/access.server";
 import { recordAudit } from "../../platform/audit.server";
@@ -175,16 +177,16 @@ export async function invitationForToken(token: string): Promise<InvitationView>
   return { id, email, role, workspaceId, workspaceName: row.workspaceName, invitedBy: row.invitedBy, expiresAt };
 }
 
-/** Pending invitations addressed to the person's e-mail (offered on the welcome page). */
-export async function invitationsForEmail(email: string): Promise<InvitationView[]> {
+/** Pending invitations addressed to any of `addresses` (a person's verified ones, offered on the welcome page). */
+export async function invitationsForAddresses(addresses: readonly string[]): Promise<InvitationView[]> {
+  const lowered = [...new Set(addresses.map((address) => address.toLowerCase()))];
+  if (lowered.length === 0) return [];
   const rows = await database()
     .select({ invitation: invitations, workspaceName: workspaces.name, invitedBy: users.name })
     .from(invitations)
     .innerJoin(workspaces, eq(workspaces.id, invitations.workspaceId))
     .leftJoin(users, eq(users.id, invitations.invitedById))
-    .where(
-      and(eq(invitations.email, email.toLowerCase()), isNull(invitations.acceptedAt), isNull(invitations.revokedAt), gt(invitations.expiresAt, new Date())),
-    );
+    .where(and(inArray(invitations.email, lowered), isNull(invitations.acceptedAt), isNull(invitations.revokedAt), gt(invitations.expiresAt, new Date())));
   return rows.map(({ invitation, workspaceName, invitedBy }) => ({
     id: invitation.id,
     email: invitation.email,
@@ -196,19 +198,39 @@ export async function invitationsForEmail(email: string): Promise<InvitationView
   }));
 }
 
+/** Whether GitHub had verified `address` for the person at their last sign-in (e-mail addresses compared case aside). */
+export function hasVerified(user: Pick<User, "verifiedEmails">, address: string): boolean {
+  const wanted = address.toLowerCase();
+  return user.verifiedEmails.some((verified) => verified.toLowerCase() === wanted);
+}
+
+/** An address shown to someone it may not belong to: its first character and its domain ("d***@breakwater-lab.test"). */
+export function maskAddress(address: string): string {
+  const at = address.lastIndexOf("@");
+  return at <= 0 ? "***" : `${address[0]}***${address.slice(at)}`;
+}
+
+/** Why the person cannot accept an invitation to `address`, or null when they can. */
+export function addressRefusal(user: Pick<User, "verifiedEmails">, address: string): string | null {
+  if (hasVerified(user, address)) return null;
+  return (
+    `This invitation is for ${maskAddress(address)}, which is not a verified address of the GitHub account you signed in with. ` +
+    "Verify that address on GitHub and sign in again, or ask for an invitation to an address you have verified."
+  );
+}
+
 /**
- * Uses an invitation: by its link's token, or by id when it is addressed to
- * the person's own e-mail. Adds the membership once; the row lock makes a
- * double click or two tabs accept it only once.
+ * Uses an invitation, by its link's token or by id (the welcome page's), for
+ * a person whose verified addresses hold the invited one. Adds the membership
+ * once; the row lock makes a double click or two tabs accept it only once.
  */
 export async function acceptInvitation(user: User, by: { token: string } | { id: string }): Promise<{ workspaceId: string; role: Role }> {
   return database().transaction(async (tx) => {
     const condition = "token" in by ? eq(invitations.tokenHash, hashToken(by.token)) : eq(invitations.id, by.id);
     const [row] = await tx.select().from(invitations).where(condition).for("update");
     if (!row) throw new ServiceError(404, "not-found", "This invitation link is not valid. It may have been resent with a new link.");
-    if ("id" in by && row.email !== user.email.toLowerCase()) {
-      throw new ServiceError(403, "forbidden", "This invitation is addressed to someone else; use the link from the e-mail.");
-    }
+    const refused = addressRefusal(user, row.email);
+    if (refused) throw new ServiceError(403, "forbidden", refused);
     checkUsable(row);
     const [existing] = await tx
       .select()

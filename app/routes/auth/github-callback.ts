@@ -2,7 +2,7 @@
 import { data, redirect } from "react-router";
 import type { Route } from "./+types/github-callback";
 import { gitHubAuthenticator } from "~/platform/auth.server";
-import { commitSession, readSession, safeReturnTo } from "~/platform/session.server";
+import { readSession, safeReturnTo, startSession } from "~/platform/session.server";
 import type { RoutePermissions } from "~/platform/permissions";
 
 export const permissions = { loader: "public" } satisfies RoutePermissions;
@@ -16,8 +16,7 @@ export async function loader({ request }: Route.LoaderArgs) {
     const reason = error instanceof Error ? error.message : String(error);
     throw data({ message: `Sign-in with GitHub did not complete: ${reason} Try again from the sign-in page.` }, { status: 400 });
   }
-  const session = await readSession(request);
-  const returnTo = safeReturnTo(session.get("returnTo"));
-  session.set("userId", user.id);
-  return redirect(returnTo, { headers: { "Set-Cookie": await commitSession(session) } });
+  const visitor = await readSession(request);
+  const returnTo = safeReturnTo(visitor.get("returnTo"));
+  return redirect(returnTo, { headers: { "Set-Cookie": await startSession(visitor, user.id) } });
 }

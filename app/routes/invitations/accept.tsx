@@ -3,7 +3,7 @@ import { Form, redirect } from "react-router";
 import type { Route } from "./+types/accept";
 import { requireUser } from "~/platform/access.server";
 import { formAction, pageGuard } from "~/platform/errors.server";
-import { acceptInvitation, invitationForToken } from "~/features/accounts/invitations.server";
+import { acceptInvitation, addressRefusal, invitationForToken, maskAddress } from "~/features/accounts/invitations.server";
 import { ROLE_LABELS, type RoutePermissions } from "~/platform/permissions";
 import { commitSession, readSession } from "~/platform/session.server";
 
@@ -11,7 +11,16 @@ export const permissions = { loader: "signed-in", action: "signed-in" } satisfie
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const user = await requireUser(request);
-  return pageGuard(async () => ({ invitation: await invitationForToken(params.token), you: { name: user.name, email: user.email } }));
+  return pageGuard(async () => {
+    const { email, role, workspaceName, invitedBy } = await invitationForToken(params.token);
+    // Said before a try, and the address shown in full only to someone who has it.
+    const refusal = addressRefusal(user, email);
+    return {
+      invitation: { email: refusal ? maskAddress(email) : email, role, workspaceName, invitedBy },
+      refusal,
+      you: { name: user.name, login: user.login },
+    };
+  });
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
@@ -27,24 +36,36 @@ export async function action({ request, params }: Route.ActionArgs) {
 export const meta: Route.MetaFunction = () => [{ title: "Invitation · Gaitloom" }];
 
 export default function AcceptInvitation({ loaderData, actionData }: Route.ComponentProps) {
-  const { invitation, you } = loaderData;
+  const { invitation, refusal, you } = loaderData;
   return (
     <div className="mx-auto max-w-lg py-8">
       <h1 className="text-2xl font-semibold tracking-tight">Join {invitation.workspaceName}</h1>
       <p className="mt-2 text-ink-muted">
         {invitation.invitedBy ?? "Someone"} invited {invitation.email} to work in {invitation.workspaceName} as{" "}
-        <strong>{ROLE_LABELS[invitation.role].toLowerCase()}</strong>. You are signed in as {you.name} ({you.email}).
+        <strong>{ROLE_LABELS[invitation.role].toLowerCase()}</strong>. You are signed in with GitHub as {you.name} (@{you.login}).
       </p>
+      {refusal ? (
+        <div className="mt-4 rounded-md bg-danger-soft px-4 py-3 text-danger">
+          <p>{refusal}</p>
+          <Form method="post" action="/sign-out" className="mt-3">
+            <button type="submit" className="rounded-md border border-line bg-surface px-3 py-1 text-ink hover:bg-sunken">
+              Sign out
+            </button>
+          </Form>
+        </div>
+      ) : null}
       {actionData && "error" in actionData ? (
         <p role="alert" className="mt-4 rounded-md bg-danger-soft px-4 py-2 text-danger">
           {actionData.error}
         </p>
       ) : null}
-      <Form method="post" className="mt-6">
-        <button type="submit" className="rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover:bg-accent-strong">
-          Join as {ROLE_LABELS[invitation.role].toLowerCase()}
-        </button>
-      </Form>
+      {refusal ? null : (
+        <Form method="post" className="mt-6">
+          <button type="submit" className="rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover:bg-accent-strong">
+            Join as {ROLE_LABELS[invitation.role].toLowerCase()}
+          </button>
+        </Form>
+      )}
     </div>
   );
 }

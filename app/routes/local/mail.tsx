@@ -1,14 +1,17 @@
-// /local/mail: what the local fake SMTP server received (local and test mode only).
+// /local/mail: what the local fake SMTP server received (local and test mode
+// only), for the workspace's owner: it holds every invitation's link.
 import { data } from "react-router";
 import type { Route } from "./+types/mail";
 import { PageHeader } from "~/components/common/PageHeader";
+import { requireAccess } from "~/platform/access.server";
 import { formatTime } from "~/platform/format";
 import { localInbox } from "~/platform/mail.server";
 import type { RoutePermissions } from "~/platform/permissions";
 
-export const permissions = { loader: "public" } satisfies RoutePermissions;
+export const permissions = { loader: "mail.readLocal" } satisfies RoutePermissions;
 
-export async function loader() {
+export async function loader({ request }: Route.LoaderArgs) {
+  await requireAccess(request, permissions.loader);
   const messages = await localInbox();
   if (!messages) throw data({ message: "The local inbox exists only when Gaitloom runs on this machine." }, { status: 404 });
   return { messages };

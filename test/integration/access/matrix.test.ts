@@ -107,8 +107,10 @@ describe.each(cases.map((entry) => [entry.name, entry] as const))("%s", (_name, 
   test.each(callers)("as %s", async (caller) => {
     const needs = requirement(entry);
     const prepared = entry.prepare ? await entry.prepare(database(), ids, caller) : {};
+    // Signing the caller in stores their session: before the fingerprint, which judges only the route.
+    const request = await requestsAs(caller, ids);
     const before = await fingerprint();
-    const answer = await outcome(async () => entry.run(await requestsAs(caller, ids), ids, prepared));
+    const answer = await outcome(async () => entry.run(request, ids, prepared));
     if (allowed(needs, caller)) {
       const ok = answer.status < 400 || answer.status === entry.allowedStatus;
       expect(ok, `${caller} may call ${entry.name} (needs ${needs}) but got ${answer.status}`).toBe(true);

@@ -14,10 +14,12 @@ let ids: DemoIds;
 let owner: Member;
 let lead: Member;
 
+/** Someone who has signed in with GitHub, which verified their address. */
 async function newPerson(login: string): Promise<User> {
+  const email = `${login}@example.test`;
   const [user] = await database()
     .insert(users)
-    .values({ login, name: login, email: `${login}@example.test` })
+    .values({ login, name: login, email, verifiedEmails: [email] })
     .returning();
   return user;
 }

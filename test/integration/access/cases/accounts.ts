@@ -2,10 +2,11 @@
 import { randomBytes } from "node:crypto";
 import { eq } from "drizzle-orm";
 import { apiTokens, invitations, memberships, users } from "../../../../db/schema";
-import { act, load } from "../../../support/routes";
+import { act, load, sessionCookieFor, type Caller, type DemoIds } from "../../../support/routes";
 import { uniqueName } from "../../../support/names";
 import type { RouteCase } from "../support";
 import { hashToken } from "~/platform/access.server";
+import { publicSessionId, sessionStorage } from "~/platform/session.server";
 import * as root from "~/root";
 import * as healthz from "~/routes/healthz";
 import * as shell from "~/routes/shell";
@@ -17,6 +18,7 @@ import * as signOut from "~/routes/auth/sign-out";
 import * as workspaceSwitch from "~/routes/workspace-switch";
 import * as welcome from "~/routes/welcome";
 import * as acceptInvitation from "~/routes/invitations/accept";
+import * as accountSessions from "~/routes/account/sessions";
 import * as settingsLayout from "~/routes/settings/layout";
 import * as workspaceSettings from "~/routes/settings/workspace";
 import * as members from "~/routes/settings/members";
@@ -50,6 +52,18 @@ async function pendingInvitation(
     .values({ workspaceId, email: email.toLowerCase(), role, tokenHash: hashToken(token), expiresAt: new Date(Date.now() + 86_400_000) })
     .returning();
   return { token, invitationId: row.id };
+}
+
+/**
+ * An invitation to the caller's own (verified) address, into the demo
+ * workspace they are already in: accepting marks it and adds no membership.
+ */
+async function invitationToCaller(db: Parameters<NonNullable<RouteCase["prepare"]>>[0], ids: DemoIds, caller: Caller) {
+  const [user] = await db
+    .select({ email: users.email })
+    .from(users)
+    .where(eq(users.id, ids.userIds[caller === "signed-out" ? "viewer" : caller]));
+  return pendingInvitation(db, ids.workspaceId, "viewer", user.email);
 }
 
 export const cases: RouteCase[] = [
@@ -100,14 +114,7 @@ export const cases: RouteCase[] = [
     route: "routes/welcome.tsx",
     kind: "action",
     intent: "accept",
-    // Into the demo workspace the caller is already in: accepting marks the invitation and adds no membership.
-    prepare: async (db, ids, caller) => {
-      const [user] = await db
-        .select({ email: users.email })
-        .from(users)
-        .where(eq(users.id, ids.userIds[caller === "signed-out" ? "viewer" : caller]));
-      return pendingInvitation(db, ids.workspaceId, "viewer", user.email);
-    },
+    prepare: invitationToCaller,
     run: (req, _ids, { invitationId }) => req("POST", "/welcome", { form: { intent: "accept", invitationId } }).then((r) => act(welcome, r)),
   },
   {
@@ -121,8 +128,33 @@ export const cases: RouteCase[] = [
     name: "POST /invitations/:token (accept)",
     route: "routes/invitations/accept.tsx",
     kind: "action",
-    prepare: (db, ids) => pendingInvitation(db, ids.workspaceId),
+    prepare: invitationToCaller,
     run: (req, _ids, { token }) => req("POST", `/invitations/${token}`).then((r) => act(acceptInvitation, r, { token })),
+  },
+  {
+    name: "GET /account/sessions",
+    route: "routes/account/sessions.tsx",
+    kind: "loader",
+    run: (req) => req("GET", "/account/sessions").then((r) => load(accountSessions, r)),
+  },
+  {
+    name: "POST /account/sessions (end another of one's sessions)",
+    route: "routes/account/sessions.tsx",
+    kind: "action",
+    intent: "end",
+    prepare: async (_db, ids, caller) => {
+      const other = await sessionCookieFor(ids.userIds[caller === "signed-out" ? "viewer" : caller]);
+      const id = (await sessionStorage().getSession(other)).id;
+      return { sessionId: publicSessionId(id) };
+    },
+    run: (req, _ids, { sessionId }) => req("POST", "/account/sessions", { form: { intent: "end", sessionId } }).then((r) => act(accountSessions, r)),
+  },
+  {
+    name: "POST /account/sessions (sign out everywhere)",
+    route: "routes/account/sessions.tsx",
+    kind: "action",
+    intent: "end-all",
+    run: (req) => req("POST", "/account/sessions", { form: { intent: "end-all" } }).then((r) => act(accountSessions, r)),
   },
   {
     name: "GET /settings (layout)",
@@ -223,7 +255,12 @@ export const cases: RouteCase[] = [
     kind: "loader",
     run: (req) => req("GET", "/settings/audit").then((r) => load(audit, r)),
   },
-  { name: "GET /local/mail", route: "routes/local/mail.tsx", kind: "loader", run: () => localMail.loader() },
+  {
+    name: "GET /local/mail",
+    route: "routes/local/mail.tsx",
+    kind: "loader",
+    run: (req) => req("GET", "/local/mail").then((r) => load(localMail, r)),
+  },
   {
     name: "GET /gaits",
     route: "routes/gaits/list.tsx",
