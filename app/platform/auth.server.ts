@@ -5,7 +5,7 @@ import { Authenticator } from "remix-auth";
 import { users } from "../../db/schema";
 import { recordAudit } from "./audit.server";
 import { config } from "./config.server";
-import { database } from "./db.server";
+import { database, type Tx } from "./db.server";
 import { ConfigurableGitHubStrategy } from "./github-strategy.server";
 import type { User } from "./access.server";
 
@@ -53,13 +53,36 @@ async function fetchGitHubPerson(accessToken: string): Promise<GitHubPerson> {
   return { profile, email, verifiedEmails };
 }
 
+/**
+ * GitHub gives a login up and then to someone else; the earlier holder's row
+ * keeps its account under the old login marked with its GitHub id until they
+ * sign in again under their current one.
+ */
+async function releaseLogin(tx: Tx, login: string, keeperId: string | null): Promise<void> {
+  const [holder] = await tx.select().from(users).where(eq(users.login, login)).for("update");
+  if (!holder || holder.id === keeperId) return;
+  await tx
+    .update(users)
+    .set({ login: `${login}~${holder.githubId ?? holder.id}` })
+    .where(eq(users.id, holder.id));
+}
+
 export async function upsertGitHubUser({ profile, email, verifiedEmails }: GitHubPerson): Promise<User> {
   const db = database();
   const values = { githubId: profile.id, login: profile.login, name: profile.name || profile.login, email, verifiedEmails, avatarUrl: profile.avatar_url };
-  // A seeded or invited person may exist by login before their first sign-in.
-  const [byGitHub] = await db.select().from(users).where(eq(users.githubId, profile.id));
-  const [byLogin] = byGitHub ? [byGitHub] : await db.select().from(users).where(eq(users.login, profile.login));
-  const [user] = byLogin ? await db.update(users).set(values).where(eq(users.id, byLogin.id)).returning() : await db.insert(users).values(values).returning();
+  const user = await db.transaction(async (tx) => {
+    const [byGitHub] = await tx.select().from(users).where(eq(users.githubId, profile.id)).for("update");
+    if (byGitHub) {
+      await releaseLogin(tx, profile.login, byGitHub.id);
+      return (await tx.update(users).set(values).where(eq(users.id, byGitHub.id)).returning())[0];
+    }
+    // A seeded or invited person may exist by login before their first sign-in; a
+    // row linked to another GitHub account is that person's, whatever login they hold now.
+    const [byLogin] = await tx.select().from(users).where(eq(users.login, profile.login)).for("update");
+    if (byLogin && byLogin.githubId === null) return (await tx.update(users).set(values).where(eq(users.id, byLogin.id)).returning())[0];
+    await releaseLogin(tx, profile.login, null);
+    return (await tx.insert(users).values(values).returning())[0];
+  });
   await recordAudit({ workspaceId: null, actorId: user.id, action: "user.signed-in", targetType: "user", targetId: user.id });
   return user;
 }
