@@ -2,7 +2,6 @@ import { useCallback, useState } from "react";
 import { Link } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/compare";
-import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { Notice } from "~/components/common/Notice";
 import { PageHeader } from "~/components/common/PageHeader";
 import { ComparePicker } from "~/components/compare/ComparePicker";
@@ -160,10 +159,4 @@ export default function ComparePage({ loaderData }: Route.ComponentProps) {
   );
 }
 
-export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
-  return (
-    <div className="mx-auto max-w-2xl py-10">
-      <ErrorPanel error={error} />
-    </div>
-  );
-}
+export { RouteErrorBoundary as ErrorBoundary } from "~/components/common/ErrorPanel";

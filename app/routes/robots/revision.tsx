@@ -1,6 +1,5 @@
 import { data, Form, Link, redirect, useNavigation } from "react-router";
 import type { Route } from "./+types/revision";
-import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { PageHeader } from "~/components/common/PageHeader";
 import { RevisionHistory } from "~/components/robots/RevisionHistory";
 import { formatTime } from "~/platform/format";
@@ -107,10 +106,4 @@ export default function RevisionPage({ loaderData, actionData }: Route.Component
   );
 }
 
-export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
-  return (
-    <div className="mx-auto max-w-2xl py-10">
-      <ErrorPanel error={error} />
-    </div>
-  );
-}
+export { RouteErrorBoundary as ErrorBoundary } from "~/components/common/ErrorPanel";

@@ -1,6 +1,5 @@
 import { data, useFetcher } from "react-router";
 import type { Route } from "./+types/robot";
-import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { PageHeader } from "~/components/common/PageHeader";
 import { RevisionHistory } from "~/components/robots/RevisionHistory";
 import { formatTime } from "~/platform/format";
@@ -78,10 +77,4 @@ export default function RobotPage({ loaderData }: Route.ComponentProps) {
   );
 }
 
-export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
-  return (
-    <div className="mx-auto max-w-2xl py-10">
-      <ErrorPanel error={error} />
-    </div>
-  );
-}
+export { RouteErrorBoundary as ErrorBoundary } from "~/components/common/ErrorPanel";
