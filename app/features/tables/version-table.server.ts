@@ -15,6 +15,7 @@ import { ServiceError } from "../../platform/errors.server";
 import { runCoreTask } from "../../platform/worker-pool.server";
 import { robotOfRevision } from "../robots/index.server";
 import { MAX_SOLVE_LEG_FRAMES } from "../solver/index.server";
+import { withGait } from "../versions/index.server";
 import { tableEtag, type TableCalibration, type TableQuery } from "./query";
 import { tableCalibration, tableOrRefusal, type Downloader, type RenderedTable } from "./render.server";
 
@@ -48,12 +49,7 @@ const versionColumns = {
 };
 
 function selectVersions(db: Reader) {
-  return db
-    .select(versionColumns)
-    .from(gaitVersions)
-    .innerJoin(gaits, eq(gaits.id, gaitVersions.gaitId))
-    .innerJoin(robots, eq(robots.id, gaits.robotId))
-    .innerJoin(robotRevisions, eq(robotRevisions.id, gaitVersions.robotRevisionId));
+  return withGait(db.select(versionColumns).from(gaitVersions).$dynamic()).innerJoin(robotRevisions, eq(robotRevisions.id, gaitVersions.robotRevisionId));
 }
 
 type VersionRow = Awaited<ReturnType<ReturnType<typeof selectVersions>["where"]>>[number];

@@ -16,6 +16,7 @@ import { sendMail } from "../../platform/mail.server";
 import { isId } from "../../platform/params";
 import { recordReleaseTable } from "../tables/index.server";
 import { can, type Action } from "../../platform/permissions";
+import { withGait } from "./rows.server";
 import { stateWord } from "./state-labels";
 import type { Person, VersionSummary } from "./versions.server";
 
@@ -41,7 +42,7 @@ type LoadedVersion = {
 async function loadVersion(db: Reader, workspaceId: string, versionId: string): Promise<LoadedVersion> {
   // Checked here so a malformed id is a 404, not an SQL error that aborts the transaction.
   if (!isId(versionId)) throw new ServiceError(404, "not-found", "No such version in this workspace.");
-  const [row] = await db
+  const query = db
     .select({
       id: gaitVersions.id,
       number: gaitVersions.number,
@@ -58,8 +59,8 @@ async function loadVersion(db: Reader, workspaceId: string, versionId: string): 
       authorEmail: authors.email,
     })
     .from(gaitVersions)
-    .innerJoin(gaits, eq(gaits.id, gaitVersions.gaitId))
-    .innerJoin(robots, eq(robots.id, gaits.robotId))
+    .$dynamic();
+  const [row] = await withGait(query)
     .leftJoin(authors, eq(authors.id, gaitVersions.authorId))
     .where(and(eq(gaitVersions.id, versionId), eq(gaits.workspaceId, workspaceId)));
   if (!row) throw new ServiceError(404, "not-found", "No such version in this workspace.");
@@ -443,7 +444,7 @@ export async function reviewQueue(member: Member): Promise<ReviewQueue> {
   );
   const assignedFilter = and(eq(gaitVersions.state, "in-review"), eq(gaitVersions.reviewerId, member.user.id));
   const releaseFilter = can(member.role, "versions.release") ? eq(gaitVersions.state, "approved") : undefined;
-  const rows = await db
+  const query = db
     .select({
       versionId: gaitVersions.id,
       number: gaitVersions.number,
@@ -462,8 +463,8 @@ export async function reviewQueue(member: Member): Promise<ReviewQueue> {
       reviewerName: reviewersTable.name,
     })
     .from(gaitVersions)
-    .innerJoin(gaits, eq(gaits.id, gaitVersions.gaitId))
-    .innerJoin(robots, eq(robots.id, gaits.robotId))
+    .$dynamic();
+  const rows = await withGait(query)
     .leftJoin(authors, eq(authors.id, gaitVersions.authorId))
     .leftJoin(reviewersTable, eq(reviewersTable.id, gaitVersions.reviewerId))
     .where(and(eq(gaits.workspaceId, member.workspace.id), or(assignedFilter, mineFilter, releaseFilter)))
