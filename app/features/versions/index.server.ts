@@ -1,3 +1,3 @@
 // The version services other features use.
 export { canonicalJson } from "./content-hash.server";
-export { withGait } from "./rows.server";
+export { gaitColumns, withGait } from "./rows.server";

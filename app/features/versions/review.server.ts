@@ -6,7 +6,7 @@
 // audit log. The reviewer is mailed on a request, the author on each decision.
 import { and, asc, desc, eq, gt, inArray, or } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
-import { gaitVersions, gaits, memberships, reviewEvents, robots, users, type Role, type VersionState } from "../../../db/schema";
+import { gaitVersions, gaits, memberships, reviewEvents, users, type Role, type VersionState } from "../../../db/schema";
 import type { Member } from "../../platform/access.server";
 import { recordAudit } from "../../platform/audit.server";
 import { config } from "../../platform/config.server";
@@ -16,7 +16,7 @@ import { sendMail } from "../../platform/mail.server";
 import { isId } from "../../platform/params";
 import { recordReleaseTable } from "../tables/index.server";
 import { can, type Action } from "../../platform/permissions";
-import { withGait } from "./rows.server";
+import { gaitColumns, withGait } from "./rows.server";
 import { stateWord } from "./state-labels";
 import type { Person, VersionSummary } from "./versions.server";
 
@@ -50,10 +50,7 @@ async function loadVersion(db: Reader, workspaceId: string, versionId: string): 
       state: gaitVersions.state,
       summary: gaitVersions.summary,
       reviewerId: gaitVersions.reviewerId,
-      gaitId: gaits.id,
-      gaitName: gaits.name,
-      robotId: robots.id,
-      robotName: robots.name,
+      ...gaitColumns,
       authorId: authors.id,
       authorName: authors.name,
       authorEmail: authors.email,
@@ -454,9 +451,7 @@ export async function reviewQueue(member: Member): Promise<ReviewQueue> {
       summary: gaitVersions.summary,
       authorId: gaitVersions.authorId,
       reviewerId: gaitVersions.reviewerId,
-      gaitId: gaits.id,
-      gaitName: gaits.name,
-      robotName: robots.name,
+      ...gaitColumns,
       authorLogin: authors.login,
       authorName: authors.name,
       reviewerLogin: reviewersTable.login,

@@ -6,6 +6,9 @@ import { eq } from "drizzle-orm";
 import type { PgSelect } from "drizzle-orm/pg-core";
 import { gaitVersions, gaits, robots } from "../../../db/schema";
 
+/** The gait's and its robot's id and name, as a version's row carries them. */
+export const gaitColumns = { gaitId: gaits.id, gaitName: gaits.name, robotId: robots.id, robotName: robots.name };
+
 export function withGait<Query extends PgSelect>(query: Query) {
   return query.innerJoin(gaits, eq(gaits.id, gaitVersions.gaitId)).innerJoin(robots, eq(robots.id, gaits.robotId));
 }

@@ -25,7 +25,7 @@ import {
   type SequenceDiff,
 } from "../compare/index";
 import { versionContentHash } from "./content-hash.server";
-import { withGait } from "./rows.server";
+import { gaitColumns, withGait } from "./rows.server";
 import { database } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
 import { runCoreTask } from "../../platform/worker-pool.server";
@@ -474,10 +474,7 @@ async function versionDetail(where: SQL): Promise<VersionDetail | null> {
       ...versionColumns,
       sequence: gaitVersions.sequence,
       robotRevisionId: gaitVersions.robotRevisionId,
-      gaitId: gaits.id,
-      gaitName: gaits.name,
-      robotId: robots.id,
-      robotName: robots.name,
+      ...gaitColumns,
     })
     .from(gaitVersions)
     .$dynamic();
@@ -512,10 +509,7 @@ export async function listComparableVersions(
       number: gaitVersions.number,
       message: gaitVersions.message,
       state: gaitVersions.state,
-      gaitId: gaits.id,
-      gaitName: gaits.name,
-      robotId: robots.id,
-      robotName: robots.name,
+      ...gaitColumns,
     })
     .from(gaitVersions)
     .$dynamic();
