@@ -68,6 +68,21 @@ async function loadVersion(db: Reader, workspaceId: string, versionId: string): 
   };
 }
 
+/** A review step in the audit log: who took it, on which version of which gait, and what more `details` say. */
+function auditStep(tx: Tx, actor: Member, action: string, version: { id: string; gaitId: string; number: number }, details: Record<string, unknown> = {}) {
+  return recordAudit(
+    {
+      workspaceId: actor.workspace.id,
+      actorId: actor.user.id,
+      action,
+      targetType: "gait_version",
+      targetId: version.id,
+      details: { gaitId: version.gaitId, number: version.number, ...details },
+    },
+    tx,
+  );
+}
+
 /** Moves the version from one of `from` to `to`, or refuses with 409 when someone else moved it first. */
 async function moveState(tx: Tx, version: LoadedVersion, from: VersionState[], to: VersionState, extra: { reviewerId?: string } = {}): Promise<void> {
   const moved = await tx
@@ -215,17 +230,7 @@ export async function requestReview(
     }
     await moveState(tx, version, ["committed", "sent-back"], "in-review", { reviewerId: reviewer.id });
     await tx.insert(reviewEvents).values({ versionId: version.id, actorId: actor.user.id, fromState: version.state, toState: "in-review", comment });
-    await recordAudit(
-      {
-        workspaceId: actor.workspace.id,
-        actorId: actor.user.id,
-        action: "version.review-requested",
-        targetType: "gait_version",
-        targetId: version.id,
-        details: { gaitId: version.gaitId, number: version.number, from: version.state, reviewerId: reviewer.id, compareWith: baseline?.id ?? null },
-      },
-      tx,
-    );
+    await auditStep(tx, actor, "version.review-requested", version, { from: version.state, reviewerId: reviewer.id, compareWith: baseline?.id ?? null });
     return { version, reviewer, baseline };
   });
   const mailed = await deliver({
@@ -280,22 +285,10 @@ export async function approveVersion(
     await tx
       .insert(reviewEvents)
       .values({ versionId: version.id, actorId: actor.user.id, fromState: "in-review", toState: "approved", comment, overrideReason });
-    await recordAudit(
-      {
-        workspaceId: actor.workspace.id,
-        actorId: actor.user.id,
-        action: rules.needsReason.length > 0 ? "version.approved-with-override" : "version.approved",
-        targetType: "gait_version",
-        targetId: version.id,
-        details: {
-          gaitId: version.gaitId,
-          number: version.number,
-          errors: version.summary.errors ?? 0,
-          ...(overrideReason ? { override: { reasons: rules.needsReason, reason: overrideReason } } : {}),
-        },
-      },
-      tx,
-    );
+    await auditStep(tx, actor, rules.needsReason.length > 0 ? "version.approved-with-override" : "version.approved", version, {
+      errors: version.summary.errors ?? 0,
+      ...(overrideReason ? { override: { reasons: rules.needsReason, reason: overrideReason } } : {}),
+    });
     return { version, needs: rules.needsReason };
   });
   const mailed = await mailAuthor(version, actor, "approved", [
@@ -315,17 +308,7 @@ export async function sendBackVersion(actor: Member, versionId: string, input: {
     const version = await loadVersion(tx, actor.workspace.id, versionId);
     await moveState(tx, version, ["in-review"], "sent-back");
     await tx.insert(reviewEvents).values({ versionId: version.id, actorId: actor.user.id, fromState: "in-review", toState: "sent-back", comment });
-    await recordAudit(
-      {
-        workspaceId: actor.workspace.id,
-        actorId: actor.user.id,
-        action: "version.sent-back",
-        targetType: "gait_version",
-        targetId: version.id,
-        details: { gaitId: version.gaitId, number: version.number },
-      },
-      tx,
-    );
+    await auditStep(tx, actor, "version.sent-back", version);
     return version;
   });
   const mailed = await mailAuthor(version, actor, "sent-back", [
@@ -360,34 +343,14 @@ export async function releaseVersion(actor: Member, versionId: string, input: { 
       await tx
         .insert(reviewEvents)
         .values({ versionId: old.id, actorId: actor.user.id, fromState: "released", toState: "retired", comment: `Replaced by version ${version.number}.` });
-      await recordAudit(
-        {
-          workspaceId: actor.workspace.id,
-          actorId: actor.user.id,
-          action: "version.retired",
-          targetType: "gait_version",
-          targetId: old.id,
-          details: { gaitId: version.gaitId, number: old.number, replacedBy: version.number },
-        },
-        tx,
-      );
+      await auditStep(tx, actor, "version.retired", { id: old.id, gaitId: version.gaitId, number: old.number }, { replacedBy: version.number });
     }
     // Conditional: if the version left `approved` since it was read, this refuses and the retirement above rolls back.
     await moveState(tx, version, ["approved"], "released");
     // What the release ships, kept so its table can be reproduced byte for byte.
     await recordReleaseTable(tx, { versionId: version.id, releasedById: actor.user.id });
     await tx.insert(reviewEvents).values({ versionId: version.id, actorId: actor.user.id, fromState: "approved", toState: "released", comment });
-    await recordAudit(
-      {
-        workspaceId: actor.workspace.id,
-        actorId: actor.user.id,
-        action: "version.released",
-        targetType: "gait_version",
-        targetId: version.id,
-        details: { gaitId: version.gaitId, number: version.number, retired: retiredRows.map((row) => row.number) },
-      },
-      tx,
-    );
+    await auditStep(tx, actor, "version.released", version, { retired: retiredRows.map((row) => row.number) });
     return { version, retired: retiredRows[0]?.number ?? null };
   });
   const mailed = await mailAuthor(version, actor, "released", [
