@@ -1,7 +1,7 @@
 // @vitest-environment jsdom
 import { cleanup, render, screen } from "@testing-library/react";
 import { afterEach, describe, expect, it } from "vitest";
-import { OverrideField, ProfileField } from "~/components/export/TableFormatFields";
+import { OverrideField, ProfileField, QueryNumberField } from "~/components/export/TableFormatFields";
 
 afterEach(cleanup);
 
@@ -38,5 +38,31 @@ describe("the fields both angle-table forms share", () => {
     const input = screen.getByLabelText("Override reason") as HTMLInputElement;
     expect(input.value).toBe("legs free on the stand");
     expect(input.hasAttribute("aria-invalid")).toBe(false);
+  });
+
+  it("gives a number field its bounds and describes it by its help text when it has one", () => {
+    render(
+      <QueryNumberField
+        id="export-rate"
+        name="rate"
+        label="Rate (frames/s)"
+        min="0.1"
+        max="1000"
+        value=""
+        invalid
+        help="Another rate solves the gait again."
+      />,
+    );
+    const input = screen.getByLabelText("Rate (frames/s)") as HTMLInputElement;
+    expect([input.name, input.type, input.step, input.min, input.max]).toEqual(["rate", "number", "any", "0.1", "1000"]);
+    expect(input.getAttribute("aria-invalid")).toBe("true");
+    expect(screen.getByText("Another rate solves the gait again.").id).toBe(input.getAttribute("aria-describedby"));
+  });
+
+  it("leaves a number field without help undescribed and unmarked", () => {
+    render(<QueryNumberField id="bench-dwell" name="dwell" label="Pause at each end (ms)" step="1" min="0" max="10000" value={250} />);
+    const input = screen.getByLabelText("Pause at each end (ms)") as HTMLInputElement;
+    expect(input.value).toBe("250");
+    expect(input.hasAttribute("aria-describedby") || input.hasAttribute("aria-invalid")).toBe(false);
   });
 });
