@@ -4,6 +4,7 @@
 // the revision it started from; the server makes it the next revision or says why not.
 import { useCallback, useEffect, useId, useMemo, useRef, useState } from "react";
 import { Link, type FetcherWithComponents } from "react-router";
+import { IssueList } from "~/components/common/IssueList";
 import { RobotViews } from "~/components/robot-view";
 import type { Robot } from "~/kinematics";
 import { changedFields } from "~/features/robots/changes";
@@ -235,15 +236,7 @@ function SaveBar({
             <span aria-hidden>⚠ </span>
             {failure.error}
           </p>
-          {failure.details?.issues?.length ? (
-            <ul className="mt-1 list-inside list-disc">
-              {failure.details.issues.map((issue, index) => (
-                <li key={index}>
-                  <code className="font-mono">{issue.path}</code>: {issue.message}
-                </li>
-              ))}
-            </ul>
-          ) : null}
+          {failure.details?.issues?.length ? <IssueList issues={failure.details.issues} className="mt-1 list-inside list-disc" /> : null}
         </div>
       ) : null}
       <fetcher.Form method="post" action={`/robots/${robotId}`} className="flex flex-wrap items-center gap-3">

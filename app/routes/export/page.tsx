@@ -7,6 +7,7 @@ import { TableQueryForm, useTableBusy } from "~/components/export/TableQueryForm
 import type { Route } from "./+types/page";
 import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { EmptyState } from "~/components/common/EmptyState";
+import { IssueList } from "~/components/common/IssueList";
 import { PageHeader } from "~/components/common/PageHeader";
 import { SafetyNotice } from "~/components/export/SafetyNotice";
 import { TableResult } from "~/components/export/TableResult";
@@ -109,13 +110,7 @@ export default function ExportPage({ loaderData }: Route.ComponentProps) {
             {problem.message}
           </p>
           {problem.issues.length > 0 && !problem.needsOverride ? (
-            <ul className="mt-1 list-disc pl-8 text-sm">
-              {problem.issues.slice(0, 10).map((issue) => (
-                <li key={`${issue.path}:${issue.message}`}>
-                  <code className="font-mono">{issue.path}</code>: {issue.message}
-                </li>
-              ))}
-            </ul>
+            <IssueList issues={problem.issues.slice(0, 10)} className="mt-1 list-disc pl-8 text-sm" />
           ) : null}
         </div>
       ) : null}
