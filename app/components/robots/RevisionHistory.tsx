@@ -1,6 +1,7 @@
 // Every saved revision of a robot, newest first, with a link to view each and
 // to download its JSON; and the robot pages' button that downloads one.
 import { Link } from "react-router";
+import { Section } from "~/components/common/Section";
 import { formatTime } from "~/platform/format";
 
 export type RevisionRow = {
@@ -23,10 +24,7 @@ export function DownloadRevisionLink({ robotId, number }: { robotId: string; num
 /** The robot pages' section: its heading and the table. */
 export function RevisionHistory({ robotId, revisions, current }: { robotId: string; revisions: readonly RevisionRow[]; current?: number }) {
   return (
-    <section className="mt-10 space-y-2" aria-labelledby="revision-history">
-      <h2 id="revision-history" className="text-lg font-semibold">
-        Revision history
-      </h2>
+    <Section title="Revision history" className="mt-10 space-y-2">
       <div className="overflow-x-auto rounded-lg border border-line bg-surface">
         <table className="w-full border-collapse text-left text-sm">
           <caption className="sr-only">Revision history, newest first</caption>
@@ -77,6 +75,6 @@ export function RevisionHistory({ robotId, revisions, current }: { robotId: stri
           </tbody>
         </table>
       </div>
-    </section>
+    </Section>
   );
 }
