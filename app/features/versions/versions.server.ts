@@ -36,7 +36,8 @@ export type VersionSummary = SolveSummary & { cycleMs: number; loop: boolean };
 
 export type Person = { id: string; login: string; name: string } | null;
 
-type Committer = { userId: string; workspaceId: string };
+/** Who commits or restores: a person in a workspace. */
+export type Committer = { userId: string; workspaceId: string };
 
 const MESSAGE_LIMIT = 500;
 
