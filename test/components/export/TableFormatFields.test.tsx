@@ -41,22 +41,11 @@ describe("the fields both angle-table forms share", () => {
   });
 
   it("gives a number field its bounds and describes it by its help text when it has one", () => {
-    render(
-      <QueryNumberField
-        id="export-rate"
-        name="rate"
-        label="Rate (frames/s)"
-        min="0.1"
-        max="1000"
-        value=""
-        invalid
-        help="Another rate solves the gait again."
-      />,
-    );
-    const input = screen.getByLabelText("Rate (frames/s)") as HTMLInputElement;
-    expect([input.name, input.type, input.step, input.min, input.max]).toEqual(["rate", "number", "any", "0.1", "1000"]);
+    render(<QueryNumberField id="x-speed" name="speed" label="Speed" min="0.01" max="10" value="" invalid help="A fraction of the joint's limit." />);
+    const input = screen.getByLabelText("Speed") as HTMLInputElement;
+    expect([input.name, input.type, input.step, input.min, input.max]).toEqual(["speed", "number", "any", "0.01", "10"]);
     expect(input.getAttribute("aria-invalid")).toBe("true");
-    expect(screen.getByText("Another rate solves the gait again.").id).toBe(input.getAttribute("aria-describedby"));
+    expect(screen.getByText("A fraction of the joint's limit.").id).toBe(input.getAttribute("aria-describedby"));
   });
 
   it("leaves a number field without help undescribed and unmarked", () => {
