@@ -3,6 +3,7 @@
 // Fields are named by the profile's paths (joints.LF.femur.trimDeg), so each
 // issue the server finds is shown beside its field.
 import { Form } from "react-router";
+import { decimalInput } from "~/components/common/decimal-input";
 import { IssueList } from "~/components/common/IssueList";
 
 export type ProfileIssues = { path: string; message: string }[];
@@ -137,8 +138,7 @@ export function ProfileEditor({
                       <input
                         {...trim.attrs}
                         aria-label={`${leg.id} ${joint} trim, degrees`}
-                        inputMode="decimal"
-                        autoComplete="off"
+                        {...decimalInput}
                         defaultValue={own.trimDeg ?? ""}
                         placeholder="0"
                         className={`${input} w-20 text-right font-mono ${trim.messages.length ? "border-danger bg-danger-soft" : "border-line"}`}
