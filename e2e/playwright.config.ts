@@ -1,7 +1,6 @@
 import { defineConfig } from "@playwright/test";
+import { chromiumLaunchOptions } from "./support/chromium";
 
-// Debian's Chromium, never a downloaded browser. The flags keep it from
-// calling home: this machine's network is closed beyond loopback.
 export default defineConfig({
   testDir: ".",
   outputDir: "../.data/reports/e2e-artifacts",
@@ -15,17 +14,6 @@ export default defineConfig({
     baseURL: process.env.GAITLOOM_E2E_URL ?? "http://127.0.0.1:3100",
     trace: "retain-on-failure",
     screenshot: "only-on-failure",
-    launchOptions: {
-      executablePath: "/usr/bin/chromium",
-      args: [
-        "--no-sandbox",
-        "--disable-gpu",
-        "--disable-quic",
-        "--no-first-run",
-        "--disable-background-networking",
-        "--disable-component-update",
-        "--disable-sync",
-      ],
-    },
+    launchOptions: chromiumLaunchOptions,
   },
 });

@@ -50,6 +50,16 @@ test("an unknown address shows the 404 page inside the shell", async ({ page }) 
   await expect(page.getByRole("heading", { name: "Walking motions you can ship" })).toBeVisible();
 });
 
+test("a gait or robot that does not exist shows the page's 404 inside the shell", async ({ page }) => {
+  await signInAs(page, "kenji-wu");
+  for (const address of ["/gaits/999999", "/gaits/999999/versions/1", "/robots/999999", "/robots/999999/revisions/1"]) {
+    const response = await page.goto(address);
+    expect(response?.status(), address).toBe(404);
+    await expect(page.getByRole("heading", { name: "There is no page here" })).toBeVisible();
+    await expect(page.getByRole("navigation", { name: "Sections" })).toBeVisible();
+  }
+});
+
 test("the health check answers with the database reachable", async ({ request }) => {
   const response = await request.get("/healthz");
   expect(response.status()).toBe(200);

@@ -21,27 +21,8 @@ export {
   type Vec3,
 } from "./robot";
 export { formatIssues, formatPath } from "./issues";
-export {
-  BODY_HEIGHT_MM,
-  BODY_OFFSET_MM,
-  BODY_POINT_MM,
-  CYCLE_MS,
-  EASE_Y,
-  FOOT_MM,
-  FRAME_RATE_FPS,
-  FULL_TURN_DEG,
-  HALF_TURN_DEG,
-  JOINT_SPEED_DEG_S,
-  LINK_MM,
-  MASS_KG,
-  PULSE_US,
-  SERVO_CHANNEL,
-  STEP_HEIGHT_MM,
-  STRIDE_MM,
-  US_PER_DEG,
-  rangeText,
-  type Bound,
-} from "./bounds";
+// Every bound of the formats is public: the sequence schema and the forms read them too.
+export * from "./bounds";
 export { DEG_PER_RAD, RAD_PER_DEG } from "./angles";
 export { NEUTRAL_POSE, poseApply, poseRotation, poseUnapply } from "./body-pose";
 export { solveLeg, type JointLimitViolation } from "./solve-leg";

@@ -6,7 +6,7 @@ import { robotProblem } from "./definition-check";
 import { legConstants, type LegConstants } from "./leg-constants";
 import { forwardLegInto, limitBits, solveLegInto } from "./leg-kernel";
 import type { BodyPose, Robot } from "./robot";
-import { unreachableReason } from "./solve-leg";
+import { unreachableReason } from "./unreachable-reason";
 
 type NumberSink = { [index: number]: number };
 

@@ -1,21 +1,11 @@
 // solveLeg: the public, one-call leg solve (DESIGN.md, "Core module contracts").
 // For thousands of solves use createLegSolver, which keeps the per-leg constants.
 import { createPoseRotationCache } from "./body-pose";
-import { cachedLegConstants, type LegConstants } from "./leg-constants";
+import { cachedLegConstants } from "./leg-constants";
 import { solveLegInto } from "./leg-kernel";
 import { findLeg, type BodyPose, type JointAngles, type JointName, type Robot, type Vec3 } from "./robot";
-import {
-  COXA_AXIS_CLEARANCE_MM,
-  SOLVE_BEYOND_REACH,
-  SOLVE_COXA_LIMIT,
-  SOLVE_FEMUR_LIMIT,
-  SOLVE_INSIDE_FOLD,
-  SOLVE_INVALID_LEG,
-  SOLVE_NOT_FINITE,
-  SOLVE_ON_COXA_AXIS,
-  SOLVE_TIBIA_LIMIT,
-  SOLVE_UNREACHABLE,
-} from "./solve-status";
+import { SOLVE_COXA_LIMIT, SOLVE_FEMUR_LIMIT, SOLVE_TIBIA_LIMIT, SOLVE_UNREACHABLE } from "./solve-status";
+import { unreachableReason } from "./unreachable-reason";
 
 /** A joint outside its limits, all in servo degrees. */
 export type JointLimitViolation = { joint: JointName; valueDeg: number; minDeg: number; maxDeg: number };
@@ -59,27 +49,4 @@ export function solveLeg(robot: Robot, legId: string, foot: Vec3, bodyPose?: Bod
   if (bits & SOLVE_TIBIA_LIMIT) violations.push({ joint: "tibia", valueDeg: angles.tibia, minDeg: k.tibiaMinDeg, maxDeg: k.tibiaMaxDeg });
   if ((bits & SOLVE_UNREACHABLE) === 0) return { reachable: true, angles, violations };
   return { reachable: false, reason: unreachableReason(k, x, y, z, bits), angles, violations };
-}
-
-/** The human reason for an unreachable target (body-frame mm), naming the leg and the distance. */
-export function unreachableReason(k: LegConstants, x: number, y: number, z: number, bits: number): string {
-  if (bits & SOLVE_INVALID_LEG) return `leg ${k.id}: cannot be solved: ${k.problem ?? "its numbers are out of range"} (a definition parseRobot would refuse)`;
-  if (bits & SOLVE_NOT_FINITE) return `leg ${k.id}: the target (${x}, ${y}, ${z}) is not a finite point`;
-  const radius = Math.hypot(x - k.mountXMm, y - k.mountYMm);
-  if (bits & SOLVE_ON_COXA_AXIS) {
-    return `leg ${k.id}: the foot is ${mm(radius)} from the coxa axis, where the coxa angle is undefined (${mm(COXA_AXIS_CLEARANCE_MM)} needed)`;
-  }
-  const distance = Math.hypot(radius - k.coxaMm, z - k.mountZMm);
-  if (bits & SOLVE_BEYOND_REACH) {
-    return `leg ${k.id}: the foot is ${mm(distance)} from the femur joint, beyond full extension (${mm(k.reachMaxMm)})`;
-  }
-  if (bits & SOLVE_INSIDE_FOLD) {
-    return `leg ${k.id}: the foot is ${mm(distance)} from the femur joint, inside full fold (${mm(k.reachMinMm)})`;
-  }
-  return `leg ${k.id}: reachable`;
-}
-
-function mm(value: number): string {
-  // A finite target far enough out has a distance past the largest double.
-  return value < Infinity ? `${value.toFixed(1)} mm` : "over 1e308 mm";
 }

@@ -1,7 +1,7 @@
 // The frame around every page: top bar, navigation, and errors shown inside it.
 import { Outlet, useRouteLoaderData } from "react-router";
 import type { Route } from "./+types/shell";
-import { ErrorPanel } from "~/components/common/ErrorPanel";
+import { RouteErrorBoundary } from "~/components/common/ErrorPanel";
 import { AppShell, type ShellData } from "~/components/shell/AppShell";
 import { currentMember, currentUser, membershipsOf } from "~/platform/access.server";
 import { config } from "~/platform/config.server";
@@ -30,14 +30,12 @@ export default function Shell({ loaderData }: Route.ComponentProps) {
   );
 }
 
-export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
+export function ErrorBoundary() {
   // A child page failed: the shell's own data is usually still there.
   const data = useRouteLoaderData<typeof loader>("routes/shell");
   return (
     <AppShell data={data ?? null}>
-      <div className="mx-auto max-w-2xl py-10">
-        <ErrorPanel error={error} />
-      </div>
+      <RouteErrorBoundary />
     </AppShell>
   );
 }

@@ -6,6 +6,7 @@
 // React's render and commit) plus style and layout, not painting. Prints the
 // median and p95 against the target of one frame at 60 Hz (16 ms).
 import { chromium, type Page } from "@playwright/test";
+import { chromiumLaunchOptions } from "../../e2e/support/chromium";
 
 const BASE = process.env.GAITLOOM_BENCH_URL ?? "http://127.0.0.1:3350";
 const STEPS = 300;
@@ -89,18 +90,7 @@ async function scrub(page: Page): Promise<Timing> {
 
 const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
 
-const browser = await chromium.launch({
-  executablePath: "/usr/bin/chromium",
-  args: [
-    "--no-sandbox",
-    "--disable-gpu",
-    "--disable-quic",
-    "--no-first-run",
-    "--disable-background-networking",
-    "--disable-component-update",
-    "--disable-sync",
-  ],
-});
+const browser = await chromium.launch(chromiumLaunchOptions);
 try {
   const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
   const page = await context.newPage();

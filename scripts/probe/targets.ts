@@ -143,6 +143,9 @@ const FIELD_HINTS: Record<string, Record<string, Field[]>> = {
   "routes/api.v1/gaits/draft.ts": { "": [f("sequence", "sequence-json"), f("baseRevision", "number")] },
 };
 
+/** An angle table's query, as the export page and the table API read it. */
+const TABLE_QUERY = [f("format", "enum", ["csv", "json", "c"]), f("units", "enum", ["deg", "rad", "us"]), f("rate", "number"), f("profile"), f("override")];
+
 /** Query parameters a page or API route reads (the API's also come from its OpenAPI document at run time). */
 const QUERY_HINTS: Record<string, Field[]> = {
   "routes/auth/sign-in.tsx": [f("returnTo")],
@@ -157,15 +160,7 @@ const QUERY_HINTS: Record<string, Field[]> = {
     f("q"),
     f("flags"),
   ],
-  "routes/export/page.tsx": [
-    f("gait", "id"),
-    f("version", "number"),
-    f("format", "enum", ["csv", "json", "c"]),
-    f("units", "enum", ["deg", "rad", "us"]),
-    f("rate", "number"),
-    f("profile"),
-    f("override"),
-  ],
+  "routes/export/page.tsx": [f("gait", "id"), f("version", "number"), ...TABLE_QUERY],
   "routes/export/bring-up.tsx": [
     f("robot", "id"),
     f("kind", "enum", ["centre", "sweep"]),
@@ -178,13 +173,7 @@ const QUERY_HINTS: Record<string, Field[]> = {
     f("format", "enum", ["csv", "json", "c"]),
   ],
   "routes/export/calibration.tsx": [f("edit", "id"), f("saved", "number"), f("deleted")],
-  "routes/api.v1/export/table.ts": [
-    f("format", "enum", ["csv", "json", "c"]),
-    f("units", "enum", ["deg", "rad", "us"]),
-    f("rate", "number"),
-    f("profile"),
-    f("override"),
-  ],
+  "routes/api.v1/export/table.ts": [...TABLE_QUERY],
   "routes/api.v1/export/bench-table.ts": [
     f("kind", "enum", ["centre", "sweep"]),
     f("leg", "enum", ["LF", "RF"]),

@@ -6,11 +6,11 @@
 // or "NaN".
 import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
-import { angleTable, TableExportError, type TableFormat, type TableUnits } from "~/export/index";
+import { angleTable, type TableFormat, type TableUnits } from "~/export/index";
 import { generateGait, solveSequence, type SolvedSequence } from "~/gait/index";
 import { parseRobot, type Robot } from "~/kinematics/index";
 import { testRobotJson } from "../kinematics/support/test-robot";
-import { OVERRIDE, metaFor } from "./helpers";
+import { OVERRIDE, codeOf, metaFor } from "./helpers";
 
 function longestLegs(): Robot {
   const json = testRobotJson({ coxa: 2000, femur: 2000, tibia: 2000 });
@@ -25,16 +25,6 @@ const robot = longestLegs();
 const params = { template: "wave" as const, cycleMs: 2000, fps: 100, strideMm: 10000, turnDegPerCycle: 360, stepHeightMm: 1000, name: "Extreme wave" };
 const solved = solveSequence(robot, generateGait(robot, params));
 const gait = { robot, params };
-
-function codeOf(run: () => unknown): string | undefined {
-  try {
-    run();
-  } catch (error) {
-    if (error instanceof TableExportError) return error.code;
-    throw error;
-  }
-  return undefined;
-}
 
 describe("a table of the longest legs' gait holds finite numbers only", () => {
   const formats: TableFormat[] = ["csv", "json"];

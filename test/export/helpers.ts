@@ -9,11 +9,22 @@ import { join } from "node:path";
 import Papa from "papaparse";
 import { generateGait, solveSequence, type GaitParams, type Sequence, type SolvedSequence } from "~/gait/index";
 import { parseRobot, type Robot } from "~/kinematics/index";
-import type { TableUnits } from "~/export/index";
+import { TableExportError, type TableUnits } from "~/export/index";
 import { cIdentifier } from "~/export/c-header";
 import { UNIT_ROUNDING } from "~/export/rounding";
 import type { TableMetaInput } from "~/export/options";
 import { loadDemoRobot, type DemoRobotFile } from "../support/robots";
+
+/** The code of the TableExportError that `run` throws, or undefined when it throws none. */
+export function codeOf(run: () => unknown): string | undefined {
+  try {
+    run();
+  } catch (error) {
+    if (error instanceof TableExportError) return error.code;
+    throw error;
+  }
+  return undefined;
+}
 
 /** A robot definition changed and validated again (for servo settings the demo robots lack). */
 export function modifiedRobot(robot: Robot, change: (json: Robot) => void): Robot {

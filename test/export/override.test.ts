@@ -1,16 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { angleTable, angleTableMetadata, buildAngleTable, TABLE_FORMATS, TableExportError } from "~/export/index";
-import { OVERRIDE, demoGait, metaFor, readCsv, readJsonTable } from "./helpers";
-
-function codeOf(run: () => unknown): string | undefined {
-  try {
-    run();
-  } catch (error) {
-    if (error instanceof TableExportError) return error.code;
-    throw error;
-  }
-  return undefined;
-}
+import { angleTable, angleTableMetadata, buildAngleTable, TABLE_FORMATS, type TableExportError } from "~/export/index";
+import { OVERRIDE, codeOf, demoGait, metaFor, readCsv, readJsonTable } from "./helpers";
 
 // DESIGN.md / issue 8: a version with error-severity flags exports only with an override reason, written into the header.
 describe("override reason for versions with error flags (DESIGN.md, issue 8)", () => {

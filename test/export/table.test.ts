@@ -1,20 +1,10 @@
 import { describe, expect, it } from "vitest";
-import { angleTable, sweepTable, TABLE_MEDIA_TYPES, TableExportError, tableFileName } from "~/export/index";
+import { angleTable, sweepTable, TABLE_MEDIA_TYPES, tableFileName } from "~/export/index";
 import type { TableMetadata } from "~/export/table";
 import type { SolvedSequence } from "~/gait/index";
 import { JOINT_NAMES } from "~/kinematics/index";
 import { loadDemoRobot } from "../support/robots";
-import { OVERRIDE, demoGait, metaFor, modifiedRobot, readCsv, readJsonTable } from "./helpers";
-
-function codeOf(run: () => unknown): string | undefined {
-  try {
-    run();
-  } catch (error) {
-    if (error instanceof TableExportError) return error.code;
-    throw error;
-  }
-  return undefined;
-}
+import { OVERRIDE, codeOf, demoGait, metaFor, modifiedRobot, readCsv, readJsonTable } from "./helpers";
 
 describe("table layout (DESIGN.md: one row per frame, one column per joint in servo-channel order)", () => {
   it("columns follow the servo channels, not the robot's leg order, and are named leg.joint", () => {

@@ -1,4 +1,4 @@
-import { Link, isRouteErrorResponse } from "react-router";
+import { Link, isRouteErrorResponse, useRouteError } from "react-router";
 
 /** What went wrong, in words a person can act on, for 404s, refusals and crashes. */
 export function ErrorPanel({ error }: { error: unknown }) {
@@ -17,6 +17,19 @@ export function ErrorPanel({ error }: { error: unknown }) {
         </Link>
       </p>
     </section>
+  );
+}
+
+/**
+ * A page's ErrorBoundary: the panel in the page column. Route modules export
+ * it as theirs (`export { RouteErrorBoundary as ErrorBoundary } from …`); it
+ * reads the error itself, as a re-exported boundary is handed no props.
+ */
+export function RouteErrorBoundary() {
+  return (
+    <div className="mx-auto max-w-2xl py-10">
+      <ErrorPanel error={useRouteError()} />
+    </div>
   );
 }
 

@@ -3,6 +3,7 @@
 // keys are folded away.
 import { describeKeyChanges, type KeyDiff, type SequenceDiff } from "~/features/compare";
 import { describeChange } from "~/features/robots/changes";
+import { FramedTable, type Column } from "~/components/common/FramedTable";
 
 const STATUS_LOOKS: Record<KeyDiff["status"], { mark: string; label: string; className: string }> = {
   added: { mark: "+", label: "Added", className: "bg-ok-soft text-ok" },
@@ -10,6 +11,8 @@ const STATUS_LOOKS: Record<KeyDiff["status"], { mark: string; label: string; cla
   changed: { mark: "~", label: "Changed", className: "bg-warning-soft text-warning" },
   same: { mark: "=", label: "Same", className: "bg-sunken text-ink-muted" },
 };
+
+const KEY_COLUMNS: readonly Column[] = [{ label: "Track" }, { label: "Key" }, { label: "What" }, { label: "In A" }, { label: "In B" }];
 
 const round = (value: number) => (Math.round(value * 10) / 10).toFixed(1);
 
@@ -57,59 +60,36 @@ export function SequenceDiffTable({ diff }: { diff: SequenceDiff }) {
       {changedTracks.length === 0 ? (
         <p className="rounded-lg border border-line bg-surface px-4 py-3 text-sm text-ink-muted">Every key of A is in B, unchanged.</p>
       ) : (
-        <div className="overflow-x-auto rounded-lg border border-line bg-surface">
-          <table className="w-full border-collapse text-left text-sm" aria-label="Changed keys">
-            <thead className="border-b border-line text-xs text-ink-muted">
-              <tr>
-                <th scope="col" className="px-3 py-2 font-medium">
-                  Track
-                </th>
-                <th scope="col" className="px-3 py-2 font-medium">
-                  Key
-                </th>
-                <th scope="col" className="px-3 py-2 font-medium">
-                  What
-                </th>
-                <th scope="col" className="px-3 py-2 font-medium">
-                  In A
-                </th>
-                <th scope="col" className="px-3 py-2 font-medium">
-                  In B
-                </th>
-              </tr>
-            </thead>
-            <tbody>
-              {changedTracks.flatMap((track) =>
-                track.keys
-                  .filter((key) => key.status !== "same")
-                  .map((key, index) => {
-                    const look = STATUS_LOOKS[key.status];
-                    return (
-                      <tr key={`${track.track}-${index}`} className="border-b border-line align-top last:border-0" data-status={key.status}>
-                        <td className="px-3 py-1.5 font-mono">
-                          {track.track}
-                          {track.presence !== "both" ? (
-                            <span className="ml-1 font-sans text-xs text-ink-muted">({track.presence === "only-a" ? "only in A" : "only in B"})</span>
-                          ) : null}
-                        </td>
-                        <td className="px-3 py-1.5 whitespace-nowrap">
-                          <span className={`inline-flex items-center gap-1 rounded px-1.5 py-0.5 text-xs ${look.className}`}>
-                            <span aria-hidden="true">{look.mark}</span>
-                            {look.label}
-                          </span>
-                        </td>
-                        <td className="px-3 py-1.5">
-                          {key.status === "changed" ? describeKeyChanges(key.changes) : key.status === "added" ? "new key" : "key taken out"}
-                        </td>
-                        <td className="px-3 py-1.5 font-mono text-xs tabular-nums">{keyText(key.a)}</td>
-                        <td className="px-3 py-1.5 font-mono text-xs tabular-nums">{keyText(key.b)}</td>
-                      </tr>
-                    );
-                  }),
-              )}
-            </tbody>
-          </table>
-        </div>
+        <FramedTable label="Changed keys" columns={KEY_COLUMNS}>
+          {changedTracks.flatMap((track) =>
+            track.keys
+              .filter((key) => key.status !== "same")
+              .map((key, index) => {
+                const look = STATUS_LOOKS[key.status];
+                return (
+                  <tr key={`${track.track}-${index}`} className="border-b border-line align-top last:border-0" data-status={key.status}>
+                    <td className="px-3 py-1.5 font-mono">
+                      {track.track}
+                      {track.presence !== "both" ? (
+                        <span className="ml-1 font-sans text-xs text-ink-muted">({track.presence === "only-a" ? "only in A" : "only in B"})</span>
+                      ) : null}
+                    </td>
+                    <td className="px-3 py-1.5 whitespace-nowrap">
+                      <span className={`inline-flex items-center gap-1 rounded px-1.5 py-0.5 text-xs ${look.className}`}>
+                        <span aria-hidden="true">{look.mark}</span>
+                        {look.label}
+                      </span>
+                    </td>
+                    <td className="px-3 py-1.5">
+                      {key.status === "changed" ? describeKeyChanges(key.changes) : key.status === "added" ? "new key" : "key taken out"}
+                    </td>
+                    <td className="px-3 py-1.5 font-mono text-xs tabular-nums">{keyText(key.a)}</td>
+                    <td className="px-3 py-1.5 font-mono text-xs tabular-nums">{keyText(key.b)}</td>
+                  </tr>
+                );
+              }),
+          )}
+        </FramedTable>
       )}
     </div>
   );

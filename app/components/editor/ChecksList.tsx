@@ -3,6 +3,7 @@
 // solve (POST /api/v1/solve, after edits pause) and this browser's preview
 // (solved at once on every edit). The timeline always draws the preview.
 import { useId, useMemo, useState } from "react";
+import { Panel } from "~/components/common/Panel";
 import type { Flag } from "~/gait";
 import { flagRuns, framesText, runPlace, type FlagRun } from "~/features/gaits/editor/flag-runs";
 import { FLAG_LABELS } from "~/features/gaits/flag-labels";
@@ -40,11 +41,11 @@ export function ChecksList({ reference }: { reference: ReturnType<typeof useServ
   else status = `Server reference differs from the browser preview (server ${serverFlags.length} flags, preview ${previewFlags.length}).`;
 
   return (
-    <section aria-labelledby={`${id}-title`} className="rounded-lg border border-line bg-surface" data-testid="checks">
-      <header className="flex flex-wrap items-center justify-between gap-2 border-b border-line px-3 py-2">
-        <h2 id={`${id}-title`} className="font-semibold">
-          Checks
-        </h2>
+    <Panel
+      title="Checks"
+      layout="flex flex-wrap items-center justify-between gap-2"
+      testId="checks"
+      tools={
         <div role="radiogroup" aria-label="Whose checks to list" className="flex rounded-md border border-line text-sm">
           {(["server", "preview"] as const).map((value) => (
             <label key={value} className={`cursor-pointer px-2 py-0.5 ${source === value ? "bg-accent-soft text-accent-strong" : ""}`}>
@@ -53,7 +54,8 @@ export function ChecksList({ reference }: { reference: ReturnType<typeof useServ
             </label>
           ))}
         </div>
-      </header>
+      }
+    >
       <div className="px-3 py-2">
         <p className="text-xs text-ink-muted" role="status" data-testid="checks-status">
           {source === "server" ? status : "Browser preview: solved here at once on every edit, with the same engine as the server."}
@@ -85,7 +87,7 @@ export function ChecksList({ reference }: { reference: ReturnType<typeof useServ
           </button>
         ) : null}
       </div>
-    </section>
+    </Panel>
   );
 }
 

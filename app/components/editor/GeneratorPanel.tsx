@@ -7,6 +7,7 @@ import { NumberField } from "~/components/key-details/NumberField";
 import { hasHandEdits } from "~/features/gaits/editor/hand-edits";
 import { paramsOfSequence, suitableTemplates } from "~/features/gaits/editor/templates";
 import { useEditor, useEditorStore } from "~/stores/editor-context";
+import { Panel } from "~/components/common/Panel";
 
 type NumberParam = "cycleMs" | "fps" | "strideMm" | "stepHeightMm" | "directionDeg" | "turnDegPerCycle" | "bodyHeightMm" | "dutyFactor";
 
@@ -45,12 +46,7 @@ export function GeneratorPanel() {
   };
 
   return (
-    <section aria-labelledby="generator-title" className="rounded-lg border border-line bg-surface">
-      <header className="border-b border-line px-3 py-2">
-        <h2 id="generator-title" className="font-semibold">
-          Template and parameters
-        </h2>
-      </header>
+    <Panel title="Template and parameters">
       <div className="grid gap-3 p-3">
         <label className="flex flex-col text-xs text-ink-muted">
           Template
@@ -120,6 +116,6 @@ export function GeneratorPanel() {
           </button>
         </form>
       </dialog>
-    </section>
+    </Panel>
   );
 }

@@ -9,6 +9,7 @@ import { SOLVE_DEFAULTS } from "~/gait";
 import { useEditor } from "~/stores/editor-context";
 import { FootHandle } from "./FootHandle";
 import { frameGeometry, type FrameGeometry } from "./frame-geometry";
+import { Panel } from "~/components/common/Panel";
 
 export const TOP_VIEW_PX = 360;
 
@@ -36,15 +37,16 @@ export function RobotViewPanel() {
   const description = geometry ? describeFrame(frame, geometry) : "No preview: the sequence does not solve.";
 
   return (
-    <section aria-labelledby="robot-view-title" className="rounded-lg border border-line bg-surface [contain:content]">
-      <header className="flex items-baseline justify-between gap-2 border-b border-line px-3 py-2">
-        <h2 id="robot-view-title" className="font-semibold">
-          Robot view
-        </h2>
+    <Panel
+      title="Robot view"
+      layout="flex items-baseline justify-between gap-2"
+      className="[contain:content]"
+      tools={
         <p className="numeric text-sm text-ink-muted" aria-live="off">
           {geometry ? <MarginReadout marginMm={geometry.marginMm} /> : null}
         </p>
-      </header>
+      }
+    >
       <div className="grid gap-2 p-2">
         <figure className="relative">
           <TopView
@@ -75,7 +77,7 @@ export function RobotViewPanel() {
           <figcaption className="px-1 text-xs text-ink-muted">From the right, forward to the right; far-side legs dashed.</figcaption>
         </figure>
       </div>
-    </section>
+    </Panel>
   );
 }
 

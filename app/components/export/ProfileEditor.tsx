@@ -3,6 +3,8 @@
 // Fields are named by the profile's paths (joints.LF.femur.trimDeg), so each
 // issue the server finds is shown beside its field.
 import { Form } from "react-router";
+import { decimalInput } from "~/components/common/decimal-input";
+import { IssueList } from "~/components/common/IssueList";
 
 export type ProfileIssues = { path: string; message: string }[];
 
@@ -107,15 +109,7 @@ export function ProfileEditor({
             <Issues id={`${description.id}-issues`} messages={description.messages} />
           </label>
         </div>
-        {general.length ? (
-          <ul role="alert" className="rounded-md bg-danger-soft px-4 py-2 text-sm text-danger">
-            {general.map((issue) => (
-              <li key={`${issue.path}:${issue.message}`}>
-                <code className="font-mono">{issue.path}</code>: {issue.message}
-              </li>
-            ))}
-          </ul>
-        ) : null}
+        {general.length ? <IssueList issues={general} role="alert" className="rounded-md bg-danger-soft px-4 py-2 text-sm text-danger" /> : null}
         <table className="w-full border-collapse text-sm">
           <caption className="mb-1 text-left text-xs text-ink-muted">
             Empty fields keep the robot definition's value (shown greyed). Trim is added to every frame's servo angle, ±45° at most.
@@ -144,8 +138,7 @@ export function ProfileEditor({
                       <input
                         {...trim.attrs}
                         aria-label={`${leg.id} ${joint} trim, degrees`}
-                        inputMode="decimal"
-                        autoComplete="off"
+                        {...decimalInput}
                         defaultValue={own.trimDeg ?? ""}
                         placeholder="0"
                         className={`${input} w-20 text-right font-mono ${trim.messages.length ? "border-danger bg-danger-soft" : "border-line"}`}

@@ -10,6 +10,7 @@ import { legStroke } from "~/components/robot-view";
 import type { Joint, JointName } from "~/kinematics";
 import { useEditor } from "~/stores/editor-context";
 import { jointSeries, type JointSeries } from "./joint-series";
+import { Panel } from "~/components/common/Panel";
 
 const WIDTH = 600;
 const HEIGHT = 96;
@@ -156,13 +157,17 @@ export function JointPlots() {
   const leg = robot.legs[legIndex];
   const series = useMemo(() => (preview && leg ? jointSeries(preview, leg.id, loop) : null), [preview, leg, loop]);
   return (
-    <section aria-labelledby="joint-plots-title" className="rounded-lg border border-line bg-surface [contain:content]" data-testid="joint-plots">
-      <header className="flex items-baseline justify-between gap-2 border-b border-line px-3 py-2">
-        <h2 id="joint-plots-title" className="font-semibold">
+    <Panel
+      title={
+        <>
           Joint plots <span className="font-mono text-sm font-normal">{legId}</span>
-        </h2>
-        <p className="text-xs text-ink-muted">solid: angle · dashed: speed · shaded: past the joint limits</p>
-      </header>
+        </>
+      }
+      layout="flex items-baseline justify-between gap-2"
+      className="[contain:content]"
+      testId="joint-plots"
+      tools={<p className="text-xs text-ink-muted">solid: angle · dashed: speed · shaded: past the joint limits</p>}
+    >
       <div className="grid gap-1 p-2">
         {series && leg ? (
           series.map((entry) => (
@@ -180,6 +185,6 @@ export function JointPlots() {
           <p className="p-2 text-sm text-ink-muted">No preview: the sequence does not solve.</p>
         )}
       </div>
-    </section>
+    </Panel>
   );
 }

@@ -10,17 +10,13 @@ import { useEditor, useEditorStore } from "~/stores/editor-context";
 import type { KeyRef } from "~/stores/editor-store";
 import { BezierEditor } from "./BezierEditor";
 import { NumberField } from "./NumberField";
+import { Panel } from "~/components/common/Panel";
 
 export function KeyDetails() {
   const selection = useEditor((state) => state.selection);
   const key = useEditor((state) => (state.selection ? keyAt(state.sequence, state.selection) : undefined));
   return (
-    <section aria-labelledby="key-details-title" className="rounded-lg border border-line bg-surface">
-      <header className="border-b border-line px-3 py-2">
-        <h2 id="key-details-title" className="font-semibold">
-          Key details
-        </h2>
-      </header>
+    <Panel title="Key details">
       <div className="p-3">
         {!selection || !key ? (
           <p className="text-sm text-ink-muted">Select a key on the Timeline to see and change it.</p>
@@ -30,7 +26,7 @@ export function KeyDetails() {
           <LegKeyForm keyRef={selection} keyData={key as LegKey} />
         )}
       </div>
-    </section>
+    </Panel>
   );
 }
 

@@ -2,6 +2,7 @@
 // field (one undo step per change), put back with Escape; a value that is not
 // a number is shown as such and not committed.
 import { useEffect, useId, useState } from "react";
+import { decimalInput } from "~/components/common/decimal-input";
 
 export type NumberFieldProps = {
   label: string;
@@ -56,10 +57,7 @@ export function NumberField({ label, value, onCommit, unit, placeholder, disable
       </label>
       <input
         id={id}
-        type="text"
-        inputMode="decimal"
-        autoComplete="off"
-        spellCheck={false}
+        {...decimalInput}
         disabled={disabled}
         value={text}
         placeholder={placeholder}

@@ -1,11 +1,12 @@
 // The robot seen from its right side: forward to the right, the ground line at
 // the body height below the body origin, legs of the near (right) side in front.
-import { memo, useId, useMemo } from "react";
+import { memo, useMemo } from "react";
 import { legSide, type Robot } from "~/kinematics";
 import { sideFrame, type ViewFrame } from "./frame";
 import { FootMarker } from "./FootMarker";
 import { legStroke } from "./leg-colours";
 import type { LegPosture } from "./leg-postures";
+import { ViewPicture } from "./ViewPicture";
 
 export type SideViewProps = {
   robot: Robot;
@@ -21,23 +22,19 @@ export type SideViewProps = {
 
 export function SideView({ robot, postures, bodyHeightMm = robot.standHeight, highlightLegId, width = 360, height = 180, label, description }: SideViewProps) {
   const frame = useMemo(() => sideFrame(robot, width, height, bodyHeightMm), [robot, width, height, bodyHeightMm]);
-  const titleId = useId();
-  const descriptionId = useId();
   // Far-side (left) legs first, so the near side is drawn over them.
   const ordered = useMemo(() => {
     const near = (posture: LegPosture) => legSide(robot, robot.legs[posture.index]) === "right";
     return [...postures].sort((a, b) => Number(near(a)) - Number(near(b)));
   }, [robot, postures]);
   return (
-    <svg
-      viewBox={`0 0 ${width} ${height}`}
+    <ViewPicture
+      width={width}
+      height={height}
       className="h-auto w-full"
-      role="img"
-      aria-labelledby={titleId}
-      aria-describedby={description ? descriptionId : undefined}
+      label={label ?? `Side view of ${robot.name}, from the right`}
+      description={description}
     >
-      <title id={titleId}>{label ?? `Side view of ${robot.name}, from the right`}</title>
-      {description ? <desc id={descriptionId}>{description}</desc> : null}
       <SideStatic robot={robot} frame={frame} bodyHeightMm={bodyHeightMm} />
       {ordered.map((posture) => {
         const leg = robot.legs[posture.index];
@@ -61,7 +58,7 @@ export function SideView({ robot, postures, bodyHeightMm = robot.standHeight, hi
           </g>
         );
       })}
-    </svg>
+    </ViewPicture>
   );
 }
 

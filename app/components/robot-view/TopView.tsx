@@ -2,12 +2,13 @@
 // height, and the legs. Fast enough to redraw every frame of a playback: the
 // frame and the rings depend on the robot only and are drawn in a memoised layer.
 import { arc, curveLinearClosed, line } from "d3-shape";
-import { memo, useId, useMemo } from "react";
+import { memo, useMemo } from "react";
 import { RAD_PER_DEG, type ReachRing, type Robot } from "~/kinematics";
 import { topFrame, type ViewFrame } from "./frame";
 import { legFill, legStroke } from "./leg-colours";
 import type { LegPosture } from "./leg-postures";
 import { FootMarker } from "./FootMarker";
+import { ViewPicture } from "./ViewPicture";
 
 export type TopViewProps = {
   robot: Robot;
@@ -24,18 +25,14 @@ export type TopViewProps = {
 
 export function TopView({ robot, postures, rings, highlightLegId, width = 360, height = 360, label, description }: TopViewProps) {
   const frame = useMemo(() => topFrame(robot, width, height), [robot, width, height]);
-  const titleId = useId();
-  const descriptionId = useId();
   return (
-    <svg
-      viewBox={`0 0 ${width} ${height}`}
+    <ViewPicture
+      width={width}
+      height={height}
       className="mx-auto h-auto max-h-[28rem] w-full"
-      role="img"
-      aria-labelledby={titleId}
-      aria-describedby={description ? descriptionId : undefined}
+      label={label ?? `Top view of ${robot.name}`}
+      description={description}
     >
-      <title id={titleId}>{label ?? `Top view of ${robot.name}`}</title>
-      {description ? <desc id={descriptionId}>{description}</desc> : null}
       <TopStatic robot={robot} frame={frame} rings={rings} />
       <g>
         {postures.map((posture) => {
@@ -56,7 +53,7 @@ export function TopView({ robot, postures, rings, highlightLegId, width = 360, h
           );
         })}
       </g>
-    </svg>
+    </ViewPicture>
   );
 }
 

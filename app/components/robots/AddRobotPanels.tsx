@@ -2,7 +2,7 @@
 // or the starter template), an uploaded definition, or an imported URDF file.
 import { useId } from "react";
 import { Form, Link, useNavigation } from "react-router";
-import type { DefinitionIssue } from "~/kinematics";
+import { IssueList } from "~/components/common/IssueList";
 import { STARTER_LEG_COUNTS } from "~/features/robots/starter";
 import type { AddResult } from "~/features/robots/results";
 
@@ -142,21 +142,11 @@ function AddAnswer({ result }: { result: AddResult }) {
         <span aria-hidden>⚠ </span>
         {result.error}
       </p>
-      {result.details?.issues?.length ? <IssueList issues={result.details.issues} /> : null}
+      {result.details?.issues?.length ? (
+        <IssueList issues={result.details.issues} whole="(the whole file)" className="mt-2 space-y-1" aria-label="Problems found" />
+      ) : null}
       {result.details?.report?.length ? <ImportReport lines={result.details.report} /> : null}
     </div>
-  );
-}
-
-export function IssueList({ issues }: { issues: readonly DefinitionIssue[] }) {
-  return (
-    <ul className="mt-2 space-y-1" aria-label="Problems found">
-      {issues.map((issue, index) => (
-        <li key={`${issue.path}-${index}`}>
-          <code className="font-mono">{issue.path || "(the whole file)"}</code>: {issue.message}
-        </li>
-      ))}
-    </ul>
   );
 }
 

@@ -3,16 +3,14 @@
 import { memo, useMemo } from "react";
 import { legBackground } from "~/components/robot-view";
 import { JOINT_NAMES } from "~/kinematics";
-import { getAt } from "~/features/robots/paths";
-import { rowFieldData, sliceSignature, useEditorData, type Slice } from "./robot-form-context";
+import { legsOf, rowFieldData, sliceSignature, useEditorData, type Slice } from "./robot-form-context";
 import { CheckboxField, NumberField } from "./fields";
 
 const th = "px-2 py-1.5 font-medium text-right";
 
 export function JointTable() {
   const data = useEditorData();
-  const legs = getAt(data.document, ["legs"]);
-  const list = Array.isArray(legs) ? legs : [];
+  const list = legsOf(data);
   return (
     <div className="overflow-x-auto rounded-lg border border-line bg-surface">
       <table className="w-full border-collapse text-sm">

@@ -2,16 +2,14 @@
 // Rows are memoised: typing in one leg re-renders that leg's row only.
 import { memo, useMemo } from "react";
 import { legBackground } from "~/components/robot-view";
-import { getAt } from "~/features/robots/paths";
-import { rowFieldData, sliceSignature, useEditorActions, useEditorData, type Slice } from "./robot-form-context";
+import { legsOf, rowFieldData, sliceSignature, useEditorActions, useEditorData, type LegDocument, type Slice } from "./robot-form-context";
 import { NumberField, SideField, TextField } from "./fields";
 
 const th = "px-2 py-1.5 font-medium";
 
 export function LegTable({ onRemove }: { onRemove?: (index: number) => void }) {
   const data = useEditorData();
-  const legs = getAt(data.document, ["legs"]);
-  const list = Array.isArray(legs) ? legs : [];
+  const list = legsOf(data);
   return (
     <div className="overflow-x-auto rounded-lg border border-line bg-surface">
       <table className="w-full border-collapse text-sm">
@@ -44,8 +42,6 @@ export function LegTable({ onRemove }: { onRemove?: (index: number) => void }) {
     </div>
   );
 }
-
-type LegDocument = { id?: unknown; mount?: { y?: unknown } } | undefined;
 
 const LegRow = memo(function LegRow({
   index,

@@ -1,15 +1,14 @@
 // The optional rest pose: servo angles of the robot lying on its belly, powered down.
 import { legBackground } from "~/components/robot-view";
 import { getAt } from "~/features/robots/paths";
-import { fieldData, isLocked, useEditorActions, useEditorData } from "./robot-form-context";
+import { fieldData, isLocked, legsOf, useEditorActions, useEditorData } from "./robot-form-context";
 import { NumberField } from "./fields";
 
 export function RestPoseSection({ onToggle }: { onToggle: (on: boolean) => void }) {
   const data = useEditorData();
   const { mode } = useEditorActions();
   const rest = getAt(data.document, ["rest"]);
-  const legs = getAt(data.document, ["legs"]);
-  const ids = (Array.isArray(legs) ? legs : []).map((leg, index) => ({ id: typeof leg?.id === "string" ? leg.id : "", index }));
+  const ids = legsOf(data).map((leg, index) => ({ id: typeof leg?.id === "string" ? leg.id : "", index }));
   const on = rest !== undefined;
   const locked = isLocked(mode, ["rest"]);
   return (

@@ -2,8 +2,10 @@
 // side views. The working copy is checked with parseRobot on every change and
 // each problem is shown next to its field. Save sends the whole definition with
 // the revision it started from; the server makes it the next revision or says why not.
-import { useCallback, useEffect, useId, useMemo, useRef, useState } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { Link, type FetcherWithComponents } from "react-router";
+import { IssueList } from "~/components/common/IssueList";
+import { Section } from "~/components/common/Section";
 import { RobotViews } from "~/components/robot-view";
 import type { Robot } from "~/kinematics";
 import { changedFields } from "~/features/robots/changes";
@@ -73,7 +75,6 @@ export function RobotEditor({ robotId, initial, baseRevision, mode, saveFetcher 
   };
 
   const editing = mode !== "read";
-  const headings = { views: useId(), body: useId(), legs: useId(), joints: useId(), rest: useId() };
 
   return (
     <EditorActionsProvider value={actions}>
@@ -86,50 +87,35 @@ export function RobotEditor({ robotId, initial, baseRevision, mode, saveFetcher 
           ) : null}
           {editing ? <IssueSummary issues={check.issues} fieldFor={formFieldIdFor} /> : null}
 
-          <section aria-labelledby={headings.views} className="space-y-2">
-            <h2 id={headings.views} className="text-lg font-semibold">
-              Neutral stance
-            </h2>
+          <Section title="Neutral stance">
             {check.robot || !editing ? null : (
               <p className="text-sm text-warning">
                 <span aria-hidden>⚠ </span>The views show the last valid definition until the problems are fixed.
               </p>
             )}
             <RobotViews robot={viewRobot} />
-          </section>
+          </Section>
 
-          <section aria-labelledby={headings.body} className="space-y-2">
-            <h2 id={headings.body} className="text-lg font-semibold">
-              Body
-            </h2>
+          <Section title="Body">
             <BodySection />
-          </section>
+          </Section>
 
-          <section aria-labelledby={headings.legs} className="space-y-2">
-            <h2 id={headings.legs} className="text-lg font-semibold">
-              Legs
-            </h2>
+          <Section title="Legs">
             <LegTable onRemove={mode === "edit" ? removeLeg : undefined} />
             {mode === "edit" ? <LegTools robot={check.robot} onApply={(next, note) => replaceAll(next, note)} /> : null}
             <p role="status" aria-live="polite" className="text-sm text-ok">
               {toolNote}
             </p>
-          </section>
+          </Section>
 
-          <section aria-labelledby={headings.joints} className="space-y-2">
-            <h2 id={headings.joints} className="text-lg font-semibold">
-              Joints and servos
-            </h2>
+          <Section title="Joints and servos">
             <p className="text-sm text-ink-muted">
               Limits are in servo degrees; servo angle = geometric angle − zero offset. Pulse = centre ± µs/° × servo angle, the sign flipped when reversed.
             </p>
             <JointTable />
-          </section>
+          </Section>
 
-          <section aria-labelledby={headings.rest} className="space-y-2">
-            <h2 id={headings.rest} className="text-lg font-semibold">
-              Rest pose
-            </h2>
+          <Section title="Rest pose">
             <RestPoseSection
               onToggle={(on) => {
                 if (!on) replaceAll(setAt(document, ["rest"], undefined), "Removed the rest pose.");
@@ -138,7 +124,7 @@ export function RobotEditor({ robotId, initial, baseRevision, mode, saveFetcher 
                 else setToolNote("Fix the problems listed above before adding a rest pose.");
               }}
             />
-          </section>
+          </Section>
 
           {editing && saveFetcher ? (
             <SaveBar
@@ -235,15 +221,7 @@ function SaveBar({
             <span aria-hidden>⚠ </span>
             {failure.error}
           </p>
-          {failure.details?.issues?.length ? (
-            <ul className="mt-1 list-inside list-disc">
-              {failure.details.issues.map((issue, index) => (
-                <li key={index}>
-                  <code className="font-mono">{issue.path}</code>: {issue.message}
-                </li>
-              ))}
-            </ul>
-          ) : null}
+          {failure.details?.issues?.length ? <IssueList issues={failure.details.issues} className="mt-1 list-inside list-disc" /> : null}
         </div>
       ) : null}
       <fetcher.Form method="post" action={`/robots/${robotId}`} className="flex flex-wrap items-center gap-3">

@@ -1,5 +1,6 @@
 // Inputs of the robot editor. Each shows the value it is given and that path's
 // validation messages right under it, and writes through the editor's actions.
+import { decimalInput } from "~/components/common/decimal-input";
 import { fieldId, type FieldPath } from "~/features/robots/paths";
 import { isLocked, useEditorActions, type FieldData } from "./robot-form-context";
 
@@ -40,10 +41,7 @@ export function NumberField({ path, label, data, width = "w-16", placeholder }: 
     <>
       <input
         id={id}
-        type="text"
-        inputMode="decimal"
-        autoComplete="off"
-        spellCheck={false}
+        {...decimalInput}
         aria-label={label}
         {...describedBy(id, messages)}
         readOnly={isLocked(mode, path)}

@@ -36,6 +36,15 @@ export function useEditorActions(): EditorActions {
   return actions;
 }
 
+/** A leg of the working document, as far as the tables read it before it validates. */
+export type LegDocument = { id?: unknown; mount?: { y?: unknown } } | undefined;
+
+/** The working document's legs: a list, empty while the document holds anything else there. */
+export function legsOf(data: EditorData): readonly LegDocument[] {
+  const legs = getAt(data.document, ["legs"]);
+  return Array.isArray(legs) ? legs : [];
+}
+
 export function useEditorData(): EditorData {
   const data = useContext(DataContext);
   if (!data) throw new Error("robot editor sections need an EditorDataProvider");

@@ -14,6 +14,7 @@ import {
   type KeyboardCoordinateGetter,
 } from "@dnd-kit/core";
 import { useCallback, useEffect, useId, useMemo, useRef } from "react";
+import { Panel } from "~/components/common/Panel";
 import { legBackground } from "~/components/robot-view";
 import { legLayout } from "~/gait";
 import { keyAt } from "~/features/gaits/editor/key-edits";
@@ -125,13 +126,7 @@ export function Timeline() {
 
   const dndId = useId();
   return (
-    <section aria-labelledby={`${dndId}-title`} className="rounded-lg border border-line bg-surface [contain:layout_style]">
-      <header className="flex flex-wrap items-center gap-x-4 gap-y-2 border-b border-line px-3 py-2">
-        <h2 id={`${dndId}-title`} className="font-semibold">
-          Timeline
-        </h2>
-        <KeyTools />
-      </header>
+    <Panel title="Timeline" layout="flex flex-wrap items-center gap-x-4 gap-y-2" className="[contain:layout_style]" tools={<KeyTools />}>
       <DndContext
         id={dndId}
         sensors={sensors}
@@ -176,7 +171,7 @@ export function Timeline() {
         </div>
       </DndContext>
       <TimelineLegend />
-    </section>
+    </Panel>
   );
 }
 

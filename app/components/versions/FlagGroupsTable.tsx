@@ -1,6 +1,15 @@
 // A version's flags grouped by kind, leg and joint, with the frames they fall on.
 import type { FlagGroup } from "~/features/compare";
 import { FLAG_LABELS } from "~/features/gaits/flag-labels";
+import { FramedTable, type Column } from "~/components/common/FramedTable";
+
+const COLUMNS: readonly Column[] = [
+  { label: "Check" },
+  { label: "Where" },
+  { label: "Frames", align: "right" },
+  { label: "Frame numbers" },
+  { label: "Worst" },
+];
 
 export function FlagGroupsTable({ groups, label = "Flags of this version" }: { groups: readonly FlagGroup[]; label?: string }) {
   if (groups.length === 0) {
@@ -11,45 +20,22 @@ export function FlagGroupsTable({ groups, label = "Flags of this version" }: { g
     );
   }
   return (
-    <div className="overflow-x-auto rounded-lg border border-line bg-surface">
-      <table className="w-full border-collapse text-left text-sm" aria-label={label}>
-        <thead className="border-b border-line text-xs text-ink-muted">
-          <tr>
-            <th scope="col" className="px-3 py-2 font-medium">
-              Check
-            </th>
-            <th scope="col" className="px-3 py-2 font-medium">
-              Where
-            </th>
-            <th scope="col" className="px-3 py-2 text-right font-medium">
-              Frames
-            </th>
-            <th scope="col" className="px-3 py-2 font-medium">
-              Frame numbers
-            </th>
-            <th scope="col" className="px-3 py-2 font-medium">
-              Worst
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {groups.map((group) => (
-            <tr key={`${group.kind}-${group.leg}-${group.joint}-${group.severity}`} className="border-b border-line align-top last:border-0">
-              <td className="px-3 py-2 whitespace-nowrap">
-                <span className={group.severity === "error" ? "text-danger" : "text-warning"}>
-                  <span aria-hidden="true">{group.severity === "error" ? "✕ " : "▲ "}</span>
-                  <span className="sr-only">{group.severity}: </span>
-                </span>
-                {FLAG_LABELS[group.kind]}
-              </td>
-              <td className="px-3 py-2 font-mono whitespace-nowrap">{[group.leg, group.joint].filter(Boolean).join(" ") || "body"}</td>
-              <td className="px-3 py-2 text-right font-mono tabular-nums">{group.count}</td>
-              <td className="max-w-48 px-3 py-2 font-mono text-xs break-words tabular-nums">{group.frames}</td>
-              <td className="px-3 py-2 text-xs text-ink-muted">{group.example}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <FramedTable label={label} columns={COLUMNS}>
+      {groups.map((group) => (
+        <tr key={`${group.kind}-${group.leg}-${group.joint}-${group.severity}`} className="border-b border-line align-top last:border-0">
+          <td className="px-3 py-2 whitespace-nowrap">
+            <span className={group.severity === "error" ? "text-danger" : "text-warning"}>
+              <span aria-hidden="true">{group.severity === "error" ? "✕ " : "▲ "}</span>
+              <span className="sr-only">{group.severity}: </span>
+            </span>
+            {FLAG_LABELS[group.kind]}
+          </td>
+          <td className="px-3 py-2 font-mono whitespace-nowrap">{[group.leg, group.joint].filter(Boolean).join(" ") || "body"}</td>
+          <td className="px-3 py-2 text-right font-mono tabular-nums">{group.count}</td>
+          <td className="max-w-48 px-3 py-2 font-mono text-xs break-words tabular-nums">{group.frames}</td>
+          <td className="px-3 py-2 text-xs text-ink-muted">{group.example}</td>
+        </tr>
+      ))}
+    </FramedTable>
   );
 }

@@ -54,6 +54,22 @@ function SortHeader({ query, sort, align = "left" }: { query: VersionQueryValues
   );
 }
 
+/** The row's pick as side A or B of the comparison form. */
+function CompareCell({ side, row, picked }: { side: "A" | "B"; row: VersionTableRow; picked: boolean }) {
+  return (
+    <td className="px-2 py-2 text-center">
+      <input
+        type="radio"
+        name={side.toLowerCase()}
+        value={row.id}
+        form={COMPARE_FORM}
+        defaultChecked={picked}
+        aria-label={`Compare version ${row.number} as ${side}`}
+      />
+    </td>
+  );
+}
+
 export function VersionTable({ gaitId, rows, allVersions, query, canRestore, draftRevision, restoring }: VersionTableProps) {
   const byNumber = [...allVersions].sort((x, y) => y.number - x.number);
   const defaultB = byNumber[0]?.id;
@@ -121,26 +137,8 @@ export function VersionTable({ gaitId, rows, allVersions, query, canRestore, dra
                   <FlagCounts errors={row.errors} warnings={row.warnings} />
                 </td>
                 <td className="px-3 py-2 text-right font-mono whitespace-nowrap tabular-nums">{formatNumber(row.worstMarginMm, 1, "mm")}</td>
-                <td className="px-2 py-2 text-center">
-                  <input
-                    type="radio"
-                    name="a"
-                    value={row.id}
-                    form={COMPARE_FORM}
-                    defaultChecked={row.id === defaultA}
-                    aria-label={`Compare version ${row.number} as A`}
-                  />
-                </td>
-                <td className="px-2 py-2 text-center">
-                  <input
-                    type="radio"
-                    name="b"
-                    value={row.id}
-                    form={COMPARE_FORM}
-                    defaultChecked={row.id === defaultB}
-                    aria-label={`Compare version ${row.number} as B`}
-                  />
-                </td>
+                <CompareCell side="A" row={row} picked={row.id === defaultA} />
+                <CompareCell side="B" row={row} picked={row.id === defaultB} />
                 <td className="px-3 py-2 whitespace-nowrap">
                   {canRestore ? (
                     <Form method="post" preventScrollReset>

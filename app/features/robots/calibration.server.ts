@@ -16,7 +16,7 @@ import {
 } from "../../export/index";
 import { JOINT_NAMES, type Robot } from "../../kinematics/index";
 import { recordAudit } from "../../platform/audit.server";
-import { database, isUniqueViolation, type Reader } from "../../platform/db.server";
+import { database, isUniqueViolation, type Reader, type Writer } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
 import { isDecimal } from "../../platform/params";
 import { robotOfRevision } from "./revision-robot.server";
@@ -183,6 +183,11 @@ const nameTakenError = (name: string, robot: string) =>
     field: "name",
   });
 
+/** A profile's change in the audit log, on its robot: which profile, its name and revision in `details`. */
+function auditProfile(tx: Writer, actor: CalibrationActor, action: string, robotId: string, details: Record<string, unknown>) {
+  return recordAudit({ workspaceId: actor.workspaceId, actorId: actor.userId, action, targetType: "robot", targetId: robotId, details }, tx);
+}
+
 export async function createProfile(actor: CalibrationActor, robotId: string, json: unknown, db: Database = database()): Promise<StoredProfile> {
   const target = await calibrationRobot(actor.workspaceId, robotId, db);
   const profile = checkProfile(target.robot, json);
@@ -193,17 +198,7 @@ export async function createProfile(actor: CalibrationActor, robotId: string, js
         .insert(calibrationProfiles)
         .values({ robotId, name: profile.name, profile, revision: 1, updatedById: actor.userId })
         .returning({ id: calibrationProfiles.id });
-      await recordAudit(
-        {
-          workspaceId: actor.workspaceId,
-          actorId: actor.userId,
-          action: "calibration.created",
-          targetType: "robot",
-          targetId: robotId,
-          details: { profileId: row.id, name: profile.name, revision: 1 },
-        },
-        tx,
-      );
+      await auditProfile(tx, actor, "calibration.created", robotId, { profileId: row.id, name: profile.name, revision: 1 });
       const [stored] = await selectProfiles(tx).where(eq(calibrationProfiles.id, row.id));
       return storedProfile(stored);
     });
@@ -246,17 +241,7 @@ export async function updateProfile(
         .where(and(eq(calibrationProfiles.id, profileId), eq(calibrationProfiles.robotId, robotId), eq(calibrationProfiles.revision, baseRevision)))
         .returning({ id: calibrationProfiles.id });
       if (updated.length === 0) await staleOrMissing(tx, robotId, profileId, baseRevision);
-      await recordAudit(
-        {
-          workspaceId: actor.workspaceId,
-          actorId: actor.userId,
-          action: "calibration.updated",
-          targetType: "robot",
-          targetId: robotId,
-          details: { profileId, name: profile.name, revision: baseRevision + 1 },
-        },
-        tx,
-      );
+      await auditProfile(tx, actor, "calibration.updated", robotId, { profileId, name: profile.name, revision: baseRevision + 1 });
       const [stored] = await selectProfiles(tx).where(eq(calibrationProfiles.id, profileId));
       return storedProfile(stored);
     });
@@ -281,17 +266,7 @@ export async function deleteProfile(
       .where(and(eq(calibrationProfiles.id, profileId), eq(calibrationProfiles.robotId, robotId), eq(calibrationProfiles.revision, baseRevision)))
       .returning({ name: calibrationProfiles.name });
     if (deleted.length === 0) await staleOrMissing(tx, robotId, profileId, baseRevision);
-    await recordAudit(
-      {
-        workspaceId: actor.workspaceId,
-        actorId: actor.userId,
-        action: "calibration.deleted",
-        targetType: "robot",
-        targetId: robotId,
-        details: { profileId, name: deleted[0].name, revision: baseRevision },
-      },
-      tx,
-    );
+    await auditProfile(tx, actor, "calibration.deleted", robotId, { profileId, name: deleted[0].name, revision: baseRevision });
     return { name: deleted[0].name };
   });
 }

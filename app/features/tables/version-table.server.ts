@@ -5,7 +5,7 @@
 // name the representation with an ETag. The bytes come from app/export, so a
 // released table can be made again byte for byte.
 import { and, desc, eq } from "drizzle-orm";
-import { gaitVersions, gaits, robotRevisions, robots, type VersionState } from "../../../db/schema";
+import { gaitVersions, gaits, robotRevisions, type VersionState } from "../../../db/schema";
 import { EXPORTER_VERSION, type TableFormat, type TableUnits } from "../../export/index";
 import { MAX_FRAMES, SOLVER_VERSION, parseSequence, type Sequence } from "../../gait/index";
 import type { Robot } from "../../kinematics/index";
@@ -15,6 +15,7 @@ import { ServiceError } from "../../platform/errors.server";
 import { runCoreTask } from "../../platform/worker-pool.server";
 import { robotOfRevision } from "../robots/index.server";
 import { MAX_SOLVE_LEG_FRAMES } from "../solver/index.server";
+import { gaitColumns, withGait } from "../versions/index.server";
 import { tableEtag, type TableCalibration, type TableQuery } from "./query";
 import { tableCalibration, tableOrRefusal, type Downloader, type RenderedTable } from "./render.server";
 
@@ -38,22 +39,14 @@ const versionColumns = {
   state: gaitVersions.state,
   contentHash: gaitVersions.contentHash,
   sequenceJson: gaitVersions.sequence,
-  gaitId: gaits.id,
-  gaitName: gaits.name,
+  ...gaitColumns,
   workspaceId: gaits.workspaceId,
-  robotId: robots.id,
-  robotName: robots.name,
   robotRevision: robotRevisions.number,
   definition: robotRevisions.definition,
 };
 
 function selectVersions(db: Reader) {
-  return db
-    .select(versionColumns)
-    .from(gaitVersions)
-    .innerJoin(gaits, eq(gaits.id, gaitVersions.gaitId))
-    .innerJoin(robots, eq(robots.id, gaits.robotId))
-    .innerJoin(robotRevisions, eq(robotRevisions.id, gaitVersions.robotRevisionId));
+  return withGait(db.select(versionColumns).from(gaitVersions).$dynamic()).innerJoin(robotRevisions, eq(robotRevisions.id, gaitVersions.robotRevisionId));
 }
 
 type VersionRow = Awaited<ReturnType<ReturnType<typeof selectVersions>["where"]>>[number];

@@ -6,7 +6,7 @@
 // audit log. The reviewer is mailed on a request, the author on each decision.
 import { and, asc, desc, eq, gt, inArray, or } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
-import { gaitVersions, gaits, memberships, reviewEvents, robots, users, type Role, type VersionState } from "../../../db/schema";
+import { gaitVersions, gaits, memberships, reviewEvents, users, type Role, type VersionState } from "../../../db/schema";
 import type { Member } from "../../platform/access.server";
 import { recordAudit } from "../../platform/audit.server";
 import { config } from "../../platform/config.server";
@@ -16,6 +16,7 @@ import { sendMail } from "../../platform/mail.server";
 import { isId } from "../../platform/params";
 import { recordReleaseTable } from "../tables/index.server";
 import { can, type Action } from "../../platform/permissions";
+import { gaitColumns, withGait } from "./rows.server";
 import { stateWord } from "./state-labels";
 import type { Person, VersionSummary } from "./versions.server";
 
@@ -41,7 +42,7 @@ type LoadedVersion = {
 async function loadVersion(db: Reader, workspaceId: string, versionId: string): Promise<LoadedVersion> {
   // Checked here so a malformed id is a 404, not an SQL error that aborts the transaction.
   if (!isId(versionId)) throw new ServiceError(404, "not-found", "No such version in this workspace.");
-  const [row] = await db
+  const query = db
     .select({
       id: gaitVersions.id,
       number: gaitVersions.number,
@@ -49,17 +50,14 @@ async function loadVersion(db: Reader, workspaceId: string, versionId: string): 
       state: gaitVersions.state,
       summary: gaitVersions.summary,
       reviewerId: gaitVersions.reviewerId,
-      gaitId: gaits.id,
-      gaitName: gaits.name,
-      robotId: robots.id,
-      robotName: robots.name,
+      ...gaitColumns,
       authorId: authors.id,
       authorName: authors.name,
       authorEmail: authors.email,
     })
     .from(gaitVersions)
-    .innerJoin(gaits, eq(gaits.id, gaitVersions.gaitId))
-    .innerJoin(robots, eq(robots.id, gaits.robotId))
+    .$dynamic();
+  const [row] = await withGait(query)
     .leftJoin(authors, eq(authors.id, gaitVersions.authorId))
     .where(and(eq(gaitVersions.id, versionId), eq(gaits.workspaceId, workspaceId)));
   if (!row) throw new ServiceError(404, "not-found", "No such version in this workspace.");
@@ -68,6 +66,21 @@ async function loadVersion(db: Reader, workspaceId: string, versionId: string): 
     summary: (row.summary ?? {}) as Partial<VersionSummary>,
     author: row.authorId ? { id: row.authorId, name: row.authorName ?? "", email: row.authorEmail ?? "" } : null,
   };
+}
+
+/** A review step in the audit log: who took it, on which version of which gait, and what more `details` say. */
+function auditStep(tx: Tx, actor: Member, action: string, version: { id: string; gaitId: string; number: number }, details: Record<string, unknown> = {}) {
+  return recordAudit(
+    {
+      workspaceId: actor.workspace.id,
+      actorId: actor.user.id,
+      action,
+      targetType: "gait_version",
+      targetId: version.id,
+      details: { gaitId: version.gaitId, number: version.number, ...details },
+    },
+    tx,
+  );
 }
 
 /** Moves the version from one of `from` to `to`, or refuses with 409 when someone else moved it first. */
@@ -217,17 +230,7 @@ export async function requestReview(
     }
     await moveState(tx, version, ["committed", "sent-back"], "in-review", { reviewerId: reviewer.id });
     await tx.insert(reviewEvents).values({ versionId: version.id, actorId: actor.user.id, fromState: version.state, toState: "in-review", comment });
-    await recordAudit(
-      {
-        workspaceId: actor.workspace.id,
-        actorId: actor.user.id,
-        action: "version.review-requested",
-        targetType: "gait_version",
-        targetId: version.id,
-        details: { gaitId: version.gaitId, number: version.number, from: version.state, reviewerId: reviewer.id, compareWith: baseline?.id ?? null },
-      },
-      tx,
-    );
+    await auditStep(tx, actor, "version.review-requested", version, { from: version.state, reviewerId: reviewer.id, compareWith: baseline?.id ?? null });
     return { version, reviewer, baseline };
   });
   const mailed = await deliver({
@@ -282,22 +285,10 @@ export async function approveVersion(
     await tx
       .insert(reviewEvents)
       .values({ versionId: version.id, actorId: actor.user.id, fromState: "in-review", toState: "approved", comment, overrideReason });
-    await recordAudit(
-      {
-        workspaceId: actor.workspace.id,
-        actorId: actor.user.id,
-        action: rules.needsReason.length > 0 ? "version.approved-with-override" : "version.approved",
-        targetType: "gait_version",
-        targetId: version.id,
-        details: {
-          gaitId: version.gaitId,
-          number: version.number,
-          errors: version.summary.errors ?? 0,
-          ...(overrideReason ? { override: { reasons: rules.needsReason, reason: overrideReason } } : {}),
-        },
-      },
-      tx,
-    );
+    await auditStep(tx, actor, rules.needsReason.length > 0 ? "version.approved-with-override" : "version.approved", version, {
+      errors: version.summary.errors ?? 0,
+      ...(overrideReason ? { override: { reasons: rules.needsReason, reason: overrideReason } } : {}),
+    });
     return { version, needs: rules.needsReason };
   });
   const mailed = await mailAuthor(version, actor, "approved", [
@@ -317,17 +308,7 @@ export async function sendBackVersion(actor: Member, versionId: string, input: {
     const version = await loadVersion(tx, actor.workspace.id, versionId);
     await moveState(tx, version, ["in-review"], "sent-back");
     await tx.insert(reviewEvents).values({ versionId: version.id, actorId: actor.user.id, fromState: "in-review", toState: "sent-back", comment });
-    await recordAudit(
-      {
-        workspaceId: actor.workspace.id,
-        actorId: actor.user.id,
-        action: "version.sent-back",
-        targetType: "gait_version",
-        targetId: version.id,
-        details: { gaitId: version.gaitId, number: version.number },
-      },
-      tx,
-    );
+    await auditStep(tx, actor, "version.sent-back", version);
     return version;
   });
   const mailed = await mailAuthor(version, actor, "sent-back", [
@@ -362,34 +343,14 @@ export async function releaseVersion(actor: Member, versionId: string, input: { 
       await tx
         .insert(reviewEvents)
         .values({ versionId: old.id, actorId: actor.user.id, fromState: "released", toState: "retired", comment: `Replaced by version ${version.number}.` });
-      await recordAudit(
-        {
-          workspaceId: actor.workspace.id,
-          actorId: actor.user.id,
-          action: "version.retired",
-          targetType: "gait_version",
-          targetId: old.id,
-          details: { gaitId: version.gaitId, number: old.number, replacedBy: version.number },
-        },
-        tx,
-      );
+      await auditStep(tx, actor, "version.retired", { id: old.id, gaitId: version.gaitId, number: old.number }, { replacedBy: version.number });
     }
     // Conditional: if the version left `approved` since it was read, this refuses and the retirement above rolls back.
     await moveState(tx, version, ["approved"], "released");
     // What the release ships, kept so its table can be reproduced byte for byte.
     await recordReleaseTable(tx, { versionId: version.id, releasedById: actor.user.id });
     await tx.insert(reviewEvents).values({ versionId: version.id, actorId: actor.user.id, fromState: "approved", toState: "released", comment });
-    await recordAudit(
-      {
-        workspaceId: actor.workspace.id,
-        actorId: actor.user.id,
-        action: "version.released",
-        targetType: "gait_version",
-        targetId: version.id,
-        details: { gaitId: version.gaitId, number: version.number, retired: retiredRows.map((row) => row.number) },
-      },
-      tx,
-    );
+    await auditStep(tx, actor, "version.released", version, { retired: retiredRows.map((row) => row.number) });
     return { version, retired: retiredRows[0]?.number ?? null };
   });
   const mailed = await mailAuthor(version, actor, "released", [
@@ -443,7 +404,7 @@ export async function reviewQueue(member: Member): Promise<ReviewQueue> {
   );
   const assignedFilter = and(eq(gaitVersions.state, "in-review"), eq(gaitVersions.reviewerId, member.user.id));
   const releaseFilter = can(member.role, "versions.release") ? eq(gaitVersions.state, "approved") : undefined;
-  const rows = await db
+  const query = db
     .select({
       versionId: gaitVersions.id,
       number: gaitVersions.number,
@@ -453,17 +414,15 @@ export async function reviewQueue(member: Member): Promise<ReviewQueue> {
       summary: gaitVersions.summary,
       authorId: gaitVersions.authorId,
       reviewerId: gaitVersions.reviewerId,
-      gaitId: gaits.id,
-      gaitName: gaits.name,
-      robotName: robots.name,
+      ...gaitColumns,
       authorLogin: authors.login,
       authorName: authors.name,
       reviewerLogin: reviewersTable.login,
       reviewerName: reviewersTable.name,
     })
     .from(gaitVersions)
-    .innerJoin(gaits, eq(gaits.id, gaitVersions.gaitId))
-    .innerJoin(robots, eq(robots.id, gaits.robotId))
+    .$dynamic();
+  const rows = await withGait(query)
     .leftJoin(authors, eq(authors.id, gaitVersions.authorId))
     .leftJoin(reviewersTable, eq(reviewersTable.id, gaitVersions.reviewerId))
     .where(and(eq(gaits.workspaceId, member.workspace.id), or(assignedFilter, mineFilter, releaseFilter)))

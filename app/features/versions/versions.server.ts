@@ -4,7 +4,7 @@
 // Content never changes after the insert (a trigger refuses it); review state
 // moves in app/features/versions/review.server.ts.
 import { and, asc, desc, eq, ilike, max, sql, type SQL } from "drizzle-orm";
-import { alias } from "drizzle-orm/pg-core";
+import { alias, type PgSelect } from "drizzle-orm/pg-core";
 import { gaitVersions, gaits, reviewEvents, robotRevisions, robots, users, type VersionState } from "../../../db/schema";
 import { parseSequence, sequenceIssuesForRobot, type Flag, type Sequence, type SolveSummary, type SolvedSequence } from "../../gait/index";
 import type { Robot } from "../../kinematics/index";
@@ -25,6 +25,7 @@ import {
   type SequenceDiff,
 } from "../compare/index";
 import { versionContentHash } from "./content-hash.server";
+import { gaitColumns, withGait } from "./rows.server";
 import { database } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
 import { runCoreTask } from "../../platform/worker-pool.server";
@@ -35,7 +36,8 @@ export type VersionSummary = SolveSummary & { cycleMs: number; loop: boolean };
 
 export type Person = { id: string; login: string; name: string } | null;
 
-type Committer = { userId: string; workspaceId: string };
+/** Who commits or restores: a person in a workspace. */
+export type Committer = { userId: string; workspaceId: string };
 
 const MESSAGE_LIMIT = 500;
 
@@ -386,11 +388,9 @@ function versionRow(row: VersionSelect): VersionRow {
   };
 }
 
-function versionsSelect(db: Database) {
-  return db
-    .select(versionColumns)
-    .from(gaitVersions)
-    .innerJoin(gaits, eq(gaits.id, gaitVersions.gaitId))
+/** A query of versions that reads versionColumns: with the gait, the pinned robot revision, the author and the reviewer. */
+function withVersionColumns<Query extends PgSelect>(query: Query) {
+  return withGait(query)
     .innerJoin(robotRevisions, eq(robotRevisions.id, gaitVersions.robotRevisionId))
     .leftJoin(authors, eq(authors.id, gaitVersions.authorId))
     .leftJoin(reviewers, eq(reviewers.id, gaitVersions.reviewerId));
@@ -417,7 +417,7 @@ export async function listVersions(workspaceId: string, gaitId: string, query: V
   if (query.flags === "clean") filters.push(sql`${errorsOf} = 0 and ${warningsOf} = 0`);
   const column = SORT_COLUMNS[query.sort];
   const order = query.dir === "asc" ? sql`${column} asc nulls last` : sql`${column} desc nulls last`;
-  const rows = await versionsSelect(db)
+  const rows = await withVersionColumns(db.select(versionColumns).from(gaitVersions).$dynamic())
     .where(and(...filters))
     .orderBy(order, desc(gaitVersions.number));
   return rows.map(versionRow);
@@ -470,24 +470,16 @@ async function versionEvents(versionId: string): Promise<ReviewEvent[]> {
 }
 
 async function versionDetail(where: SQL): Promise<VersionDetail | null> {
-  const db = database();
-  const [row] = await db
+  const query = database()
     .select({
       ...versionColumns,
       sequence: gaitVersions.sequence,
       robotRevisionId: gaitVersions.robotRevisionId,
-      gaitId: gaits.id,
-      gaitName: gaits.name,
-      robotId: robots.id,
-      robotName: robots.name,
+      ...gaitColumns,
     })
     .from(gaitVersions)
-    .innerJoin(gaits, eq(gaits.id, gaitVersions.gaitId))
-    .innerJoin(robots, eq(robots.id, gaits.robotId))
-    .innerJoin(robotRevisions, eq(robotRevisions.id, gaitVersions.robotRevisionId))
-    .leftJoin(authors, eq(authors.id, gaitVersions.authorId))
-    .leftJoin(reviewers, eq(reviewers.id, gaitVersions.reviewerId))
-    .where(where);
+    .$dynamic();
+  const [row] = await withVersionColumns(query).where(where);
   if (!row) return null;
   return {
     ...versionRow(row),
@@ -512,22 +504,17 @@ export function getVersionById(workspaceId: string, versionId: string): Promise<
 export async function listComparableVersions(
   workspaceId: string,
 ): Promise<{ id: string; number: number; message: string; state: VersionState; gaitId: string; gaitName: string; robotId: string; robotName: string }[]> {
-  return database()
+  const query = database()
     .select({
       id: gaitVersions.id,
       number: gaitVersions.number,
       message: gaitVersions.message,
       state: gaitVersions.state,
-      gaitId: gaits.id,
-      gaitName: gaits.name,
-      robotId: robots.id,
-      robotName: robots.name,
+      ...gaitColumns,
     })
     .from(gaitVersions)
-    .innerJoin(gaits, eq(gaits.id, gaitVersions.gaitId))
-    .innerJoin(robots, eq(robots.id, gaits.robotId))
-    .where(eq(gaits.workspaceId, workspaceId))
-    .orderBy(asc(robots.name), asc(gaits.name), desc(gaitVersions.number));
+    .$dynamic();
+  return withGait(query).where(eq(gaits.workspaceId, workspaceId)).orderBy(asc(robots.name), asc(gaits.name), desc(gaitVersions.number));
 }
 
 // ---------------------------------------------------------------------------

@@ -1,16 +1,16 @@
 // /export: a gait version's angle table for firmware — choose the version
 // (the released one by default), format, units, rate and calibration profile;
 // preview the rows; download it; copy the command for the build script.
-import { Form, Link, useNavigation, useSubmit } from "react-router";
-import { OverrideField, ProfileField, ShowTableButton, TableFormatFields, fieldClass, labelClass } from "~/components/export/TableFormatFields";
+import { Link } from "react-router";
+import { OverrideField, ProfileField, QueryNumberField, SelectField, TableFormatFields } from "~/components/export/TableFormatFields";
+import { TableQueryForm, useTableBusy } from "~/components/export/TableQueryForm";
 import type { Route } from "./+types/page";
 import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { EmptyState } from "~/components/common/EmptyState";
+import { IssueList } from "~/components/common/IssueList";
 import { PageHeader } from "~/components/common/PageHeader";
-import { CopyCommand } from "~/components/export/CopyCommand";
 import { SafetyNotice } from "~/components/export/SafetyNotice";
-import { TableFacts } from "~/components/export/TableFacts";
-import { TablePreview } from "~/components/export/TablePreview";
+import { TableResult } from "~/components/export/TableResult";
 import { requireAccess } from "~/platform/access.server";
 import { config } from "~/platform/config.server";
 import { listGaits } from "~/features/gaits/gaits.server";
@@ -31,9 +31,7 @@ export const meta: Route.MetaFunction = () => [{ title: "Export an angle table �
 
 export default function ExportPage({ loaderData }: Route.ComponentProps) {
   const { gaits, gait, version, versions, profiles, query, problem, table, download, release, sequence } = loaderData;
-  const submit = useSubmit();
-  const navigation = useNavigation();
-  const busy = navigation.state === "loading" && navigation.location?.pathname === "/export";
+  const busy = useTableBusy();
   if (!gait) {
     return (
       <>
@@ -42,17 +40,6 @@ export default function ExportPage({ loaderData }: Route.ComponentProps) {
       </>
     );
   }
-  const onChange = (event: React.FormEvent<HTMLFormElement>) => {
-    const target = event.target as HTMLInputElement | HTMLSelectElement;
-    // Text fields wait for Enter or the button; choices show their table at once.
-    if (target.tagName !== "SELECT") return;
-    const form = new FormData(event.currentTarget);
-    // Another gait starts from its own released version, without the old gait's profile.
-    const dropped = target.name === "gait" ? ["version", "profile"] : [];
-    const search = new URLSearchParams();
-    for (const [key, value] of form) if (typeof value === "string" && value !== "" && !dropped.includes(key)) search.set(key, value);
-    submit(search, { method: "get", replace: true, preventScrollReset: true });
-  };
   return (
     <>
       <PageHeader title="Export an angle table" lead="Per-frame joint angles in servo-channel order, for the firmware to play back.">
@@ -64,60 +51,43 @@ export default function ExportPage({ loaderData }: Route.ComponentProps) {
         </Link>
       </PageHeader>
       <SafetyNotice />
-      <Form
-        method="get"
-        onChange={onChange}
-        className="grid grid-cols-2 gap-4 rounded-lg border border-line bg-surface p-5 lg:grid-cols-4"
-        aria-label="Table options"
-      >
-        <div className="col-span-2">
-          <label htmlFor="export-gait" className={labelClass}>
-            Gait
-          </label>
-          <select id="export-gait" name="gait" defaultValue={gait.id} key={`gait-${gait.id}`} className={fieldClass}>
-            {gaits.map((entry) => (
-              <option key={entry.id} value={entry.id}>
-                {entry.name} — {entry.robotName}
-                {entry.releasedVersion !== null ? ` (released v${entry.releasedVersion})` : ""}
-              </option>
-            ))}
-          </select>
-        </div>
-        <div className="col-span-2">
-          <label htmlFor="export-version" className={labelClass}>
-            Version
-          </label>
-          <select id="export-version" name="version" defaultValue={String(version)} key={`version-${gait.id}-${version}`} className={fieldClass}>
-            {gait.releasedVersion !== null ? <option value="released">Released (currently v{gait.releasedVersion}) — for build scripts</option> : null}
-            {versions.map((entry) => (
-              <option key={entry.number} value={entry.number}>
-                v{entry.number} · {stateWord(entry.state)} · {entry.errors} errors, {entry.warnings} warnings — {entry.message}
-              </option>
-            ))}
-          </select>
-        </div>
+      {/* Another gait starts from its own released version, without the old gait's profile. */}
+      <TableQueryForm label="Table options" resets="gait" dropped={["version", "profile"]} busy={busy}>
+        <SelectField id="export-gait" name="gait" label="Gait" value={gait.id} resetKey={`gait-${gait.id}`} className="col-span-2">
+          {gaits.map((entry) => (
+            <option key={entry.id} value={entry.id}>
+              {entry.name} — {entry.robotName}
+              {entry.releasedVersion !== null ? ` (released v${entry.releasedVersion})` : ""}
+            </option>
+          ))}
+        </SelectField>
+        <SelectField
+          id="export-version"
+          name="version"
+          label="Version"
+          value={String(version)}
+          resetKey={`version-${gait.id}-${version}`}
+          className="col-span-2"
+        >
+          {gait.releasedVersion !== null ? <option value="released">Released (currently v{gait.releasedVersion}) — for build scripts</option> : null}
+          {versions.map((entry) => (
+            <option key={entry.number} value={entry.number}>
+              v{entry.number} · {stateWord(entry.state)} · {entry.errors} errors, {entry.warnings} warnings — {entry.message}
+            </option>
+          ))}
+        </SelectField>
         <TableFormatFields idPrefix="export" format={query.format} units={query.units} />
-        <div>
-          <label htmlFor="export-rate" className={labelClass}>
-            Rate (frames/s)
-          </label>
-          <input
-            id="export-rate"
-            name="rate"
-            type="number"
-            min="0.1"
-            max="1000"
-            step="any"
-            defaultValue={query.rate ?? ""}
-            placeholder={sequence ? `${sequence.fps} (its own)` : ""}
-            aria-describedby="rate-help"
-            aria-invalid={problem?.parameter === "rate" || undefined}
-            className={`${fieldClass} text-right`}
-          />
-          <p id="rate-help" className="mt-1 text-xs text-ink-muted">
-            Another rate solves the gait again; nothing is interpolated.
-          </p>
-        </div>
+        <QueryNumberField
+          id="export-rate"
+          name="rate"
+          label="Rate (frames/s)"
+          min="0.1"
+          max="1000"
+          value={query.rate ?? ""}
+          placeholder={sequence ? `${sequence.fps} (its own)` : ""}
+          invalid={problem?.parameter === "rate"}
+          help="Another rate solves the gait again; nothing is interpolated."
+        />
         <ProfileField idPrefix="export" profiles={profiles} value={query.profile} resetKey={gait.id} invalid={problem?.parameter === "profile"}>
           <Link to={`/export/calibration/${gait.robotId}`} className="mt-1 block text-xs text-accent underline underline-offset-2">
             {loaderData.canCalibrate ? "Edit" : "See"} the calibration profiles of {gait.robotName}
@@ -131,8 +101,7 @@ export default function ExportPage({ loaderData }: Route.ComponentProps) {
           placeholder="e.g. bench test with the legs free, the support flags do not apply"
           help="Only for a version with error flags or clamped pulses; written into the table's header and the audit log."
         />
-        <ShowTableButton busy={busy} />
-      </Form>
+      </TableQueryForm>
 
       {problem ? (
         <div role="alert" className="mt-4 rounded-md border border-danger bg-danger-soft px-4 py-3 text-danger">
@@ -141,60 +110,34 @@ export default function ExportPage({ loaderData }: Route.ComponentProps) {
             {problem.message}
           </p>
           {problem.issues.length > 0 && !problem.needsOverride ? (
-            <ul className="mt-1 list-disc pl-8 text-sm">
-              {problem.issues.slice(0, 10).map((issue) => (
-                <li key={`${issue.path}:${issue.message}`}>
-                  <code className="font-mono">{issue.path}</code>: {issue.message}
-                </li>
-              ))}
-            </ul>
+            <IssueList issues={problem.issues.slice(0, 10)} className="mt-1 list-disc pl-8 text-sm" />
           ) : null}
         </div>
       ) : null}
 
       {table && download ? (
-        <div className="mt-6 grid gap-6 xl:grid-cols-[minmax(0,1fr)_24rem]">
-          <section aria-labelledby="preview-heading" className={`min-w-0 ${busy ? "opacity-60" : ""}`}>
-            <div className="mb-2 flex items-center justify-between gap-3">
-              <h2 id="preview-heading" className="text-lg font-semibold">
-                Preview
+        <TableResult table={table} download={download} busy={busy}>
+          {release ? (
+            <section aria-labelledby="release-heading" className="rounded-lg border border-line bg-surface p-4 text-sm">
+              <h2 id="release-heading" className="mb-1 font-semibold">
+                Release record
               </h2>
-              <a href={download.path} download={download.fileName} className="rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover:bg-accent-strong">
-                Download {download.fileName}
-              </a>
-            </div>
-            <TablePreview preview={table.preview} />
-          </section>
-          <aside className="space-y-4">
-            <section aria-labelledby="facts-heading" className="rounded-lg border border-line bg-surface p-4">
-              <h2 id="facts-heading" className="mb-2 font-semibold">
-                In the table's header
-              </h2>
-              <TableFacts facts={table.facts} />
+              <p>
+                Released table <code className="font-mono text-xs break-all">{release.tableSha256}</code>, made with exporter {release.exporterVersion} and
+                solver {release.solverVersion} from <code className="font-mono text-xs">{release.tableFormat}</code>.
+              </p>
+              {release.matches === true ? <p className="mt-1 text-ok">✓ This table is the released one, byte for byte.</p> : null}
+              {release.matches === false ? (
+                <p className="mt-1 text-danger">✕ This table differs from the released one: the exporter or solver changed since.</p>
+              ) : null}
+              {release.matches === null ? (
+                <a href={release.path} className="mt-1 inline-block text-accent underline underline-offset-2">
+                  Download the released table as recorded
+                </a>
+              ) : null}
             </section>
-            {release ? (
-              <section aria-labelledby="release-heading" className="rounded-lg border border-line bg-surface p-4 text-sm">
-                <h2 id="release-heading" className="mb-1 font-semibold">
-                  Release record
-                </h2>
-                <p>
-                  Released table <code className="font-mono text-xs break-all">{release.tableSha256}</code>, made with exporter {release.exporterVersion} and
-                  solver {release.solverVersion} from <code className="font-mono text-xs">{release.tableFormat}</code>.
-                </p>
-                {release.matches === true ? <p className="mt-1 text-ok">✓ This table is the released one, byte for byte.</p> : null}
-                {release.matches === false ? (
-                  <p className="mt-1 text-danger">✕ This table differs from the released one: the exporter or solver changed since.</p>
-                ) : null}
-                {release.matches === null ? (
-                  <a href={release.path} className="mt-1 inline-block text-accent underline underline-offset-2">
-                    Download the released table as recorded
-                  </a>
-                ) : null}
-              </section>
-            ) : null}
-            <CopyCommand command={download.command} />
-          </aside>
-        </div>
+          ) : null}
+        </TableResult>
       ) : null}
     </>
   );

@@ -2,9 +2,9 @@ import { useCallback, useState } from "react";
 import { Link } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/compare";
-import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { Notice } from "~/components/common/Notice";
 import { PageHeader } from "~/components/common/PageHeader";
+import { Section } from "~/components/common/Section";
 import { ComparePicker } from "~/components/compare/ComparePicker";
 import { ComparePlayback } from "~/components/compare/ComparePlayback";
 import { JointOverlayPlots } from "~/components/compare/JointOverlayPlots";
@@ -105,40 +105,25 @@ export default function ComparePage({ loaderData }: Route.ComponentProps) {
               <span aria-hidden="true">= </span>A and B have the same content hash: they play exactly the same.
             </p>
           ) : null}
-          <section aria-labelledby="metrics-heading" className="space-y-2">
-            <h2 id="metrics-heading" className="text-lg font-semibold">
-              Metric deltas
-            </h2>
+          <Section title="Metric deltas">
             <MetricDeltaTable rows={comparison.metrics} />
-          </section>
-          <section aria-labelledby="playback-heading" className="space-y-2">
-            <h2 id="playback-heading" className="text-lg font-semibold">
-              Robot views
-            </h2>
+          </Section>
+          <Section title="Robot views">
             <ComparePlayback
               a={{ label: `A: ${label(comparison.a)}`, robot: comparison.a.robotDefinition, playback: comparison.a.playback }}
               b={{ label: `B: ${label(comparison.b)}`, robot: comparison.b.robotDefinition, playback: comparison.b.playback }}
               onFraction={onFraction}
             />
-          </section>
-          <section aria-labelledby="joints-heading" className="space-y-2">
-            <h2 id="joints-heading" className="text-lg font-semibold">
-              Joint plots
-            </h2>
+          </Section>
+          <Section title="Joint plots">
             <JointOverlayPlots overlays={comparison.overlays} fraction={fraction} labels={{ a: label(comparison.a), b: label(comparison.b) }} />
-          </section>
-          <section aria-labelledby="keys-heading" className="space-y-2">
-            <h2 id="keys-heading" className="text-lg font-semibold">
-              Changed keys
-            </h2>
+          </Section>
+          <Section title="Changed keys">
             <SequenceDiffTable diff={comparison.diff} />
-          </section>
-          <section aria-labelledby="robot-heading" className="space-y-2">
-            <h2 id="robot-heading" className="text-lg font-semibold">
-              Robot revision
-            </h2>
+          </Section>
+          <Section title="Robot revision">
             <RobotRevisionDiff diff={comparison.robotDiff} robotName={comparison.a.gait.robotName} />
-          </section>
+          </Section>
           <section aria-labelledby="flags-heading" className="grid gap-4 lg:grid-cols-2">
             <h2 id="flags-heading" className="text-lg font-semibold lg:col-span-2">
               Flagged frames
@@ -160,10 +145,4 @@ export default function ComparePage({ loaderData }: Route.ComponentProps) {
   );
 }
 
-export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
-  return (
-    <div className="mx-auto max-w-2xl py-10">
-      <ErrorPanel error={error} />
-    </div>
-  );
-}
+export { RouteErrorBoundary as ErrorBoundary } from "~/components/common/ErrorPanel";

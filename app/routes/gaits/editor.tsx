@@ -4,7 +4,6 @@
 import { data } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/editor";
-import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { EditorScreen } from "~/components/editor/EditorScreen";
 import { requireAccess } from "~/platform/access.server";
 import { readForm } from "~/platform/body.server";
@@ -79,10 +78,4 @@ export default function GaitEditor({ loaderData }: Route.ComponentProps) {
   );
 }
 
-export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
-  return (
-    <div className="mx-auto max-w-2xl py-10">
-      <ErrorPanel error={error} />
-    </div>
-  );
-}
+export { RouteErrorBoundary as ErrorBoundary } from "~/components/common/ErrorPanel";

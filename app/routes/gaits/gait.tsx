@@ -1,7 +1,6 @@
 import { data, Link, useNavigation } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/gait";
-import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { Notice } from "~/components/common/Notice";
 import { PageHeader } from "~/components/common/PageHeader";
 import { DraftPanel } from "~/components/versions/DraftPanel";
@@ -146,10 +145,4 @@ export default function GaitPage({ loaderData, actionData }: Route.ComponentProp
   );
 }
 
-export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
-  return (
-    <div className="mx-auto max-w-2xl py-10">
-      <ErrorPanel error={error} />
-    </div>
-  );
-}
+export { RouteErrorBoundary as ErrorBoundary } from "~/components/common/ErrorPanel";

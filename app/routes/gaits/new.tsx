@@ -5,6 +5,7 @@ import { useMemo, useState } from "react";
 import { Form, Link, redirect, useNavigation } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/new";
+import { decimalInput } from "~/components/common/decimal-input";
 import { Notice } from "~/components/common/Notice";
 import { PageHeader } from "~/components/common/PageHeader";
 import { requireAccess } from "~/platform/access.server";
@@ -90,9 +91,7 @@ function NumberInput({
       <input
         id={id}
         name={name}
-        type="text"
-        inputMode="decimal"
-        autoComplete="off"
+        {...decimalInput}
         defaultValue={defaultValue}
         placeholder={placeholder}
         aria-invalid={error || undefined}

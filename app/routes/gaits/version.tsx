@@ -1,7 +1,6 @@
 import { data, Form, Link, useNavigation } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/version";
-import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { Notice } from "~/components/common/Notice";
 import { PageHeader } from "~/components/common/PageHeader";
 import { FlagGroupsTable } from "~/components/versions/FlagGroupsTable";
@@ -221,10 +220,4 @@ export default function VersionPage({ loaderData, actionData }: Route.ComponentP
   );
 }
 
-export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
-  return (
-    <div className="mx-auto max-w-2xl py-10">
-      <ErrorPanel error={error} />
-    </div>
-  );
-}
+export { RouteErrorBoundary as ErrorBoundary } from "~/components/common/ErrorPanel";

@@ -1,8 +1,7 @@
-import { data, Form, Link, redirect, useNavigation } from "react-router";
+import { Form, Link, redirect, useNavigation } from "react-router";
 import type { Route } from "./+types/revision";
-import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { PageHeader } from "~/components/common/PageHeader";
-import { RevisionHistory } from "~/components/robots/RevisionHistory";
+import { DownloadRevisionLink, RevisionHistory } from "~/components/robots/RevisionHistory";
 import { formatTime } from "~/platform/format";
 import { RobotEditor } from "~/components/robots/RobotForm";
 import { requireAccess } from "~/platform/access.server";
@@ -11,9 +10,10 @@ import { readFormWithin } from "~/platform/body.server";
 import { formAction, ServiceError } from "~/platform/errors.server";
 import { revisionParams } from "~/features/robots/params";
 import { restoreFromForm } from "~/features/robots/save.server";
-import { getRevision, getRobot } from "~/features/robots/robots.server";
+import { getRevision } from "~/features/robots/robots.server";
+import { loadRobotPage, notFoundPage } from "./robot-page.server";
 
-const notFound = () => data({ message: "There is no such robot revision in your workspace." }, { status: 404 });
+const NOT_FOUND = "There is no such robot revision in your workspace.";
 
 export { restoreForm as actionForm } from "~/features/robots/params";
 
@@ -22,17 +22,15 @@ export { restoreForm as actionForm } from "~/features/robots/params";
 export const permissions = { loader: "robots.read", action: { restore: "robots.calibrate" } } satisfies RoutePermissions;
 
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { workspace, role } = await requireAccess(request, permissions.loader);
-  const parsed = revisionParams.safeParse(params);
-  if (!parsed.success) throw notFound();
-  const [found, robot] = await Promise.all([getRevision(workspace.id, parsed.data.robotId, parsed.data.number), getRobot(workspace.id, parsed.data.robotId)]);
-  if (!found || !robot) throw notFound();
+  const { member, address, robot } = await loadRobotPage(request, permissions.loader, revisionParams, params, NOT_FOUND);
+  const found = await getRevision(member.workspace.id, address.robotId, address.number);
+  if (!found) throw notFoundPage(NOT_FOUND);
   return {
     robot: found.robot,
     revision: found.revision,
     latestNumber: found.latestNumber,
     revisions: robot.revisions,
-    canRestore: can(role, "robots.calibrate"),
+    canRestore: can(member.role, "robots.calibrate"),
   };
 }
 
@@ -40,7 +38,7 @@ export async function action({ request, params }: Route.ActionArgs) {
   const member = await requireAccess(request, permissions.action.restore);
   return formAction(async () => {
     const parsed = revisionParams.safeParse(params);
-    if (!parsed.success) throw new ServiceError(404, "not-found", "There is no such robot revision in your workspace.");
+    if (!parsed.success) throw new ServiceError(404, "not-found", NOT_FOUND);
     const body = await readFormWithin(request, 16 * 1024);
     if (!body.ok) throw body.tooLarge ? new ServiceError(413, "too-large", "The request is too large.") : body.refusal;
     await restoreFromForm(body.form, { member, robotId: parsed.data.robotId, number: parsed.data.number });
@@ -66,13 +64,7 @@ export default function RevisionPage({ loaderData, actionData }: Route.Component
         <Link to={`/robots/${robot.id}`} className="rounded-md border border-line bg-surface px-3 py-1.5 text-sm font-medium hover:bg-sunken">
           Back to the robot
         </Link>
-        <a
-          href={`/robots/${robot.id}/revisions/${revision.number}/download`}
-          download
-          className="rounded-md border border-line bg-surface px-3 py-1.5 text-sm font-medium hover:bg-sunken"
-        >
-          Download JSON
-        </a>
+        <DownloadRevisionLink robotId={robot.id} number={revision.number} />
       </PageHeader>
       <div className="mb-4 flex flex-wrap items-center gap-3 rounded-lg border border-line bg-sunken px-4 py-3 text-sm">
         <span>{newest ? "This is the newest revision." : `An old revision, read only. The newest is revision ${latestNumber}.`}</span>
@@ -97,20 +89,9 @@ export default function RevisionPage({ loaderData, actionData }: Route.Component
         </p>
       ) : null}
       <RobotEditor key={revision.number} robotId={robot.id} initial={revision.definition} baseRevision={latestNumber} mode="read" />
-      <section className="mt-10 space-y-2" aria-labelledby="revision-history">
-        <h2 id="revision-history" className="text-lg font-semibold">
-          Revision history
-        </h2>
-        <RevisionHistory robotId={robot.id} revisions={revisions} current={revision.number} />
-      </section>
+      <RevisionHistory robotId={robot.id} revisions={revisions} current={revision.number} />
     </>
   );
 }
 
-export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
-  return (
-    <div className="mx-auto max-w-2xl py-10">
-      <ErrorPanel error={error} />
-    </div>
-  );
-}
+export { RouteErrorBoundary as ErrorBoundary } from "~/components/common/ErrorPanel";

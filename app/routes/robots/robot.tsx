@@ -1,8 +1,7 @@
-import { data, useFetcher } from "react-router";
+import { useFetcher } from "react-router";
 import type { Route } from "./+types/robot";
-import { ErrorPanel } from "~/components/common/ErrorPanel";
 import { PageHeader } from "~/components/common/PageHeader";
-import { RevisionHistory } from "~/components/robots/RevisionHistory";
+import { DownloadRevisionLink, RevisionHistory } from "~/components/robots/RevisionHistory";
 import { formatTime } from "~/platform/format";
 import { RobotEditor } from "~/components/robots/RobotForm";
 import { requireAccess } from "~/platform/access.server";
@@ -12,9 +11,9 @@ import { formAction, ServiceError } from "~/platform/errors.server";
 import { robotParams } from "~/features/robots/params";
 import type { SaveRefusalDetails, SavedRevision } from "~/features/robots/results";
 import { saveFromForm, SAVE_BODY_LIMIT_BYTES } from "~/features/robots/save.server";
-import { getRobot } from "~/features/robots/robots.server";
+import { loadRobotPage } from "./robot-page.server";
 
-const notFound = () => data({ message: "There is no robot at this address in your workspace." }, { status: 404 });
+const NOT_FOUND = "There is no robot at this address in your workspace.";
 
 export { saveForm as actionForm } from "~/features/robots/params";
 
@@ -23,11 +22,8 @@ export { saveForm as actionForm } from "~/features/robots/params";
 export const permissions = { loader: "robots.read", action: { save: "robots.calibrate" } } satisfies RoutePermissions;
 
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { workspace, role } = await requireAccess(request, permissions.loader);
-  const parsed = robotParams.safeParse(params);
-  if (!parsed.success) throw notFound();
-  const robot = await getRobot(workspace.id, parsed.data.robotId);
-  if (!robot) throw notFound();
+  const { member, robot } = await loadRobotPage(request, permissions.loader, robotParams, params, NOT_FOUND);
+  const { role } = member;
   return {
     robot,
     mode: can(role, "robots.edit") ? ("edit" as const) : can(role, "robots.calibrate") ? ("calibrate" as const) : ("read" as const),
@@ -38,7 +34,7 @@ export async function action({ request, params }: Route.ActionArgs) {
   const member = await requireAccess(request, permissions.action.save);
   return formAction<SavedRevision, SaveRefusalDetails>(async () => {
     const parsed = robotParams.safeParse(params);
-    if (!parsed.success) throw new ServiceError(404, "not-found", "There is no robot at this address in your workspace.");
+    if (!parsed.success) throw new ServiceError(404, "not-found", NOT_FOUND);
     return saveFromForm(await readFormWithin(request, SAVE_BODY_LIMIT_BYTES), { member, robotId: parsed.data.robotId });
   });
 }
@@ -55,33 +51,16 @@ export default function RobotPage({ loaderData }: Route.ComponentProps) {
         title={robot.name}
         lead={`Revision ${latest.number}, saved ${formatTime(latest.createdAt)}${latest.author ? ` by ${latest.author.name}` : ""}. ${latest.definition.legs.length} legs.`}
       >
-        <a
-          href={`/robots/${robot.id}/revisions/${latest.number}/download`}
-          download
-          className="rounded-md border border-line bg-surface px-3 py-1.5 text-sm font-medium hover:bg-sunken"
-        >
-          Download JSON
-        </a>
+        <DownloadRevisionLink robotId={robot.id} number={latest.number} />
       </PageHeader>
       {mode === "read" ? (
         <p className="mb-4 rounded-lg border border-line bg-sunken px-4 py-3 text-sm text-ink-muted">You can read this robot; your role cannot change it.</p>
       ) : null}
       {/* A new revision (our save or someone else's, on reload) starts a fresh working copy. */}
       <RobotEditor key={latest.number} robotId={robot.id} initial={latest.definition} baseRevision={latest.number} mode={mode} saveFetcher={saveFetcher} />
-      <section className="mt-10 space-y-2" aria-labelledby="revision-history">
-        <h2 id="revision-history" className="text-lg font-semibold">
-          Revision history
-        </h2>
-        <RevisionHistory robotId={robot.id} revisions={robot.revisions} current={latest.number} />
-      </section>
+      <RevisionHistory robotId={robot.id} revisions={robot.revisions} current={latest.number} />
     </>
   );
 }
 
-export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
-  return (
-    <div className="mx-auto max-w-2xl py-10">
-      <ErrorPanel error={error} />
-    </div>
-  );
-}
+export { RouteErrorBoundary as ErrorBoundary } from "~/components/common/ErrorPanel";

@@ -1,8 +1,8 @@
 // @vitest-environment jsdom
 import { cleanup, render, screen } from "@testing-library/react";
-import { createRoutesStub, data, useRouteError } from "react-router";
+import { createRoutesStub, data } from "react-router";
 import { afterEach, describe, expect, test } from "vitest";
-import { ErrorPanel } from "~/components/common/ErrorPanel";
+import { RouteErrorBoundary } from "~/components/common/ErrorPanel";
 
 afterEach(cleanup);
 
@@ -13,17 +13,11 @@ function renderFailingRoute(fail: () => never) {
       loader: fail,
       Component: () => null,
       HydrateFallback: () => null,
-      ErrorBoundary: () => {
-        // createRoutesStub hands the error to the boundary through the router.
-        return <RouteError />;
-      },
+      // As a route module re-exports it: no props, the error read from the router.
+      ErrorBoundary: () => <RouteErrorBoundary />,
     },
   ]);
   render(<Stub initialEntries={["/"]} />);
-}
-
-function RouteError() {
-  return <ErrorPanel error={useRouteError()} />;
 }
 
 describe("ErrorPanel", () => {

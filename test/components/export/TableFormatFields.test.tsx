@@ -1,7 +1,7 @@
 // @vitest-environment jsdom
 import { cleanup, render, screen } from "@testing-library/react";
 import { afterEach, describe, expect, it } from "vitest";
-import { OverrideField, ProfileField } from "~/components/export/TableFormatFields";
+import { OverrideField, ProfileField, QueryNumberField } from "~/components/export/TableFormatFields";
 
 afterEach(cleanup);
 
@@ -38,5 +38,20 @@ describe("the fields both angle-table forms share", () => {
     const input = screen.getByLabelText("Override reason") as HTMLInputElement;
     expect(input.value).toBe("legs free on the stand");
     expect(input.hasAttribute("aria-invalid")).toBe(false);
+  });
+
+  it("gives a number field its bounds and describes it by its help text when it has one", () => {
+    render(<QueryNumberField id="x-speed" name="speed" label="Speed" min="0.01" max="10" value="" invalid help="A fraction of the joint's limit." />);
+    const input = screen.getByLabelText("Speed") as HTMLInputElement;
+    expect([input.name, input.type, input.step, input.min, input.max]).toEqual(["speed", "number", "any", "0.01", "10"]);
+    expect(input.getAttribute("aria-invalid")).toBe("true");
+    expect(screen.getByText("A fraction of the joint's limit.").id).toBe(input.getAttribute("aria-describedby"));
+  });
+
+  it("leaves a number field without help undescribed and unmarked", () => {
+    render(<QueryNumberField id="bench-dwell" name="dwell" label="Pause at each end (ms)" step="1" min="0" max="10000" value={250} />);
+    const input = screen.getByLabelText("Pause at each end (ms)") as HTMLInputElement;
+    expect(input.value).toBe("250");
+    expect(input.hasAttribute("aria-describedby") || input.hasAttribute("aria-invalid")).toBe(false);
   });
 });

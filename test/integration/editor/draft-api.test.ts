@@ -8,6 +8,7 @@ import { beforeAll, describe, expect, test } from "vitest";
 import { auditLog, gaitVersions, gaits, robotRevisions, robots, workspaces } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
 import { act, demoIds, load, outcome, requestsAs, type ApiRefusal, type Caller, type DemoIds, type FormRefusal, type LoaderData } from "../../support/routes";
+import { addRobotRevision, newestRobotRevision } from "../../support/robot-revisions";
 import { robotOf } from "../../support/robots";
 import { sequenceOf } from "./support";
 import { generateGait, parseSequence } from "~/gait";
@@ -245,16 +246,7 @@ describe("moving the draft to the robot's newest revision", () => {
   test("pins the newest revision, bumps the draft revision, writes the audit log; a second move is refused as already done", async () => {
     const id = ids.gaitIds["Crawl"];
     const before = await stored(id);
-    const [latest] = await database()
-      .select()
-      .from(robotRevisions)
-      .where(eq(robotRevisions.robotId, before.robotId))
-      .orderBy(desc(robotRevisions.number))
-      .limit(1);
-    const [newer] = await database()
-      .insert(robotRevisions)
-      .values({ robotId: before.robotId, number: latest.number + 1, definition: latest.definition, message: "re-measured" })
-      .returning();
+    const { latest, newer } = await addRobotRevision(database(), before.robotId, { message: "re-measured" });
     const answer = await move("animator", before.draftRevision, id);
     expect(answer.status).toBe(200);
     expect(answer.body).toMatchObject({ ok: true, from: latest.number, to: newer.number, revision: before.draftRevision + 1 });
@@ -280,12 +272,7 @@ describe("moving the draft to the robot's newest revision", () => {
   test("a newest revision the draft does not fit (a leg renamed) is refused with 422 and nothing moves; a stale base gets 409", async () => {
     const id = ids.gaitIds["Trot"];
     const before = await stored(id);
-    const [latest] = await database()
-      .select()
-      .from(robotRevisions)
-      .where(eq(robotRevisions.robotId, before.robotId))
-      .orderBy(desc(robotRevisions.number))
-      .limit(1);
+    const latest = await newestRobotRevision(database(), before.robotId);
     const renamed = robotOf(latest.definition);
     const oldId = renamed.legs[0].id;
     renamed.legs[0].id = "XF";
@@ -293,17 +280,13 @@ describe("moving the draft to the robot's newest revision", () => {
       renamed.rest.XF = renamed.rest[oldId];
       delete renamed.rest[oldId];
     }
-    await database()
-      .insert(robotRevisions)
-      .values({ robotId: before.robotId, number: latest.number + 1, definition: renamed });
+    await addRobotRevision(database(), before.robotId, { definition: renamed });
     const refused = await move<FormRefusal>("lead", before.draftRevision, id);
     expect(refused.status).toBe(422);
     expect(refused.body.error).toMatch(/^The draft does not fit robot revision \d+: legs\.XF is missing/);
     expect((await stored(id)).draftRobotRevisionId).toBe(before.draftRobotRevisionId);
 
-    await database()
-      .insert(robotRevisions)
-      .values({ robotId: before.robotId, number: latest.number + 2, definition: latest.definition });
+    await addRobotRevision(database(), before.robotId, { definition: latest.definition });
     const stale = await move("lead", before.draftRevision - 1, id);
     expect(stale.status).toBe(409);
     expect((await stored(id)).draftRobotRevisionId).toBe(before.draftRobotRevisionId);

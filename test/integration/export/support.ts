@@ -5,6 +5,7 @@ import { and, desc, eq } from "drizzle-orm";
 import { apiTokens, auditLog, gaitVersions, gaits, memberships, robotRevisions, robots, users, workspaces, type Role } from "../../../db/schema";
 import { parseSequence, type Sequence } from "~/gait";
 import { parseRobot, type Robot } from "~/kinematics";
+import { withGait } from "~/features/versions/index.server";
 import { hashToken } from "~/platform/access.server";
 import { database } from "~/platform/db.server";
 import * as tableRoute from "~/routes/api.v1/export/table";
@@ -50,7 +51,7 @@ export async function storedVersion(
   gaitId: string,
   number: number,
 ): Promise<{ id: string; contentHash: string; sequence: Sequence; robot: Robot; robotRevision: number; gaitName: string; robotName: string }> {
-  const [row] = await database()
+  const query = database()
     .select({
       id: gaitVersions.id,
       contentHash: gaitVersions.contentHash,
@@ -61,9 +62,9 @@ export async function storedVersion(
       robotName: robots.name,
     })
     .from(gaitVersions)
-    .innerJoin(gaits, eq(gaits.id, gaitVersions.gaitId))
+    .$dynamic();
+  const [row] = await withGait(query)
     .innerJoin(robotRevisions, eq(robotRevisions.id, gaitVersions.robotRevisionId))
-    .innerJoin(robots, eq(robots.id, gaits.robotId))
     .where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.number, number)));
   const sequence = parseSequence(row.sequence);
   const robot = parseRobot(row.definition);

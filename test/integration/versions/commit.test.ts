@@ -4,25 +4,21 @@ import { beforeAll, describe, expect, test } from "vitest";
 import { auditLog, gaitVersions, gaits, reviewEvents, robotRevisions } from "../../../db/schema";
 import { changeDraft } from "../../support/drafts";
 import { uniqueName } from "../../support/names";
-import { act, memberAs, outcome, refusal, requestsAs, type DemoIds } from "../../support/routes";
+import { act, outcome, refusal, requestsAs, type DemoIds } from "../../support/routes";
 import { parseSequence, solveSequence } from "~/gait/index";
 import { parseRobot } from "~/kinematics";
 import type { Member } from "~/platform/access.server";
 import { versionContentHash } from "~/features/versions/content-hash.server";
 import { database } from "~/platform/db.server";
-import { commitDraft, restoreDraft } from "~/features/versions/versions.server";
+import { commitDraft, restoreDraft, type Committer } from "~/features/versions/versions.server";
 import * as gaitPage from "~/routes/gaits/gait";
-import { draftRevisionOf, setUp } from "./support";
+import { draftRevisionOf, setUpCommitting } from "./support";
 
 let ids: DemoIds;
 let animator: Member;
+let committer: Committer;
 
-beforeAll(async () => {
-  ids = await setUp();
-  animator = await memberAs("animator", ids);
-});
-
-const committer = () => ({ userId: animator.user.id, workspaceId: ids.workspaceId });
+beforeAll(async () => ({ ids, animator, committer } = await setUpCommitting()));
 
 describe("commitDraft", () => {
   test("makes the next numbered version with the message, author, pinned revision, full sequence, solved summary and content hash", async () => {
@@ -30,7 +26,7 @@ describe("commitDraft", () => {
     await changeDraft(database(), gaitId);
     const [gait] = await database().select().from(gaits).where(eq(gaits.id, gaitId));
     const message = uniqueName("A calmer wave");
-    const committed = await commitDraft(committer(), gaitId, `  ${message}  `);
+    const committed = await commitDraft(committer, gaitId, `  ${message}  `);
     const [row] = await database().select().from(gaitVersions).where(eq(gaitVersions.id, committed.id));
     const [revision] = await database().select().from(robotRevisions).where(eq(robotRevisions.id, gait.draftRobotRevisionId!));
     const robot = parseRobot(revision.definition);
@@ -63,7 +59,7 @@ describe("commitDraft", () => {
     const messages = [uniqueName("First"), uniqueName("Second"), uniqueName("Third")];
     for (const message of messages) {
       await changeDraft(database(), gaitId);
-      await commitDraft(committer(), gaitId, message);
+      await commitDraft(committer, gaitId, message);
     }
     const rows = await database().select().from(gaitVersions).where(eq(gaitVersions.gaitId, gaitId)).orderBy(asc(gaitVersions.number));
     expect(rows.map((row) => row.number)).toEqual([1, 2, 3, 4, 5]);
@@ -73,13 +69,13 @@ describe("commitDraft", () => {
   test("refuses an empty message, a gait of another workspace, and a draft that moved on since the page was loaded", async () => {
     const gaitId = ids.gaitIds["Wave creep"];
     await changeDraft(database(), gaitId);
-    expect((await refusal(() => commitDraft(committer(), gaitId, "   "))).field).toBe("message");
-    expect((await refusal(() => commitDraft({ ...committer(), workspaceId: "00000000-0000-4000-8000-000000000000" }, gaitId, "x"))).status).toBe(404);
+    expect((await refusal(() => commitDraft(committer, gaitId, "   "))).field).toBe("message");
+    expect((await refusal(() => commitDraft({ ...committer, workspaceId: "00000000-0000-4000-8000-000000000000" }, gaitId, "x"))).status).toBe(404);
     const current = await draftRevisionOf(gaitId);
-    const stale = await refusal(() => commitDraft(committer(), gaitId, "stale", undefined, { draftRevision: current - 1 }));
+    const stale = await refusal(() => commitDraft(committer, gaitId, "stale", undefined, { draftRevision: current - 1 }));
     expect(stale.status).toBe(409);
     expect(stale.message).toMatch(/draft changed/);
-    await expect(commitDraft(committer(), gaitId, uniqueName("Fresh"), undefined, { draftRevision: current })).resolves.toMatchObject({
+    await expect(commitDraft(committer, gaitId, uniqueName("Fresh"), undefined, { draftRevision: current })).resolves.toMatchObject({
       number: expect.any(Number),
     });
   });
@@ -106,14 +102,14 @@ describe("a new draft from any version (restore / branch)", () => {
       .from(gaitVersions)
       .where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.number, 1)));
     const before = await draftRevisionOf(gaitId);
-    const restored = await restoreDraft(committer(), gaitId, first.id, before);
+    const restored = await restoreDraft(committer, gaitId, first.id, before);
     expect(restored).toEqual({ draftRevision: before + 1, number: 1 });
     const [gait] = await database().select().from(gaits).where(eq(gaits.id, gaitId));
     expect(gait.draftSequence).toEqual(first.sequence);
     expect(gait.draftRobotRevisionId).toBe(first.robotRevisionId);
     expect(gait.draftUpdatedById).toBe(animator.user.id);
     // Committing it gives a new number with the same content (and hash) as version 1.
-    const again = await commitDraft(committer(), gaitId, uniqueName("Back to the first trot"));
+    const again = await commitDraft(committer, gaitId, uniqueName("Back to the first trot"));
     expect(again.contentHash).toBe(first.contentHash);
     expect(again.number).toBe(3);
     const [audit] = await database()
@@ -130,7 +126,7 @@ describe("a new draft from any version (restore / branch)", () => {
       .from(gaitVersions)
       .where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.number, 1)));
     const seen = await draftRevisionOf(gaitId);
-    const [winner, loser] = await Promise.allSettled([restoreDraft(committer(), gaitId, first.id, seen), restoreDraft(committer(), gaitId, first.id, seen)]);
+    const [winner, loser] = await Promise.allSettled([restoreDraft(committer, gaitId, first.id, seen), restoreDraft(committer, gaitId, first.id, seen)]);
     const outcomes = [winner, loser].map((result) => result.status);
     expect(outcomes.sort()).toEqual(["fulfilled", "rejected"]);
     const rejected = [winner, loser].find((result) => result.status === "rejected") as PromiseRejectedResult;

@@ -4,10 +4,10 @@ import { eq } from "drizzle-orm";
 import { gaitVersions, gaits, type VersionState } from "../../../db/schema";
 import { changeDraft } from "../../support/drafts";
 import { uniqueName } from "../../support/names";
-import { demoIds, type DemoIds } from "../../support/routes";
+import { demoIds, memberAs, type DemoIds } from "../../support/routes";
 import type { Member } from "~/platform/access.server";
 import { database } from "~/platform/db.server";
-import { commitDraft } from "~/features/versions/versions.server";
+import { commitDraft, type Committer } from "~/features/versions/versions.server";
 import { seedDemo } from "../../../db/seed";
 
 export const MAIL_API = process.env.MAIL_INBOX_URL ?? "http://127.0.0.1:2626";
@@ -17,12 +17,22 @@ export async function setUp(): Promise<DemoIds> {
   return demoIds(database());
 }
 
+/** A member as commitDraft and restoreDraft take the committer. */
+export const committerOf = (member: Member, ids: DemoIds): Committer => ({ userId: member.user.id, workspaceId: ids.workspaceId });
+
+/** The demo for a file whose tests commit as the animator: the ids, the animator, and the animator as committer. */
+export async function setUpCommitting(): Promise<{ ids: DemoIds; animator: Member; committer: Committer }> {
+  const ids = await setUp();
+  const animator = await memberAs("animator", ids);
+  return { ids, animator, committer: committerOf(animator, ids) };
+}
+
 /** Changes the gait's draft and commits it as `author`, then moves the version straight to `state` (as the seed does). */
 export async function versionIn(ids: DemoIds, gaitName: string, state: VersionState, author: Member, options: { reviewerId?: string; message?: string } = {}) {
   const message = options.message ?? uniqueName("Test version");
   // An unchanged draft would be the newest version again, which a commit refuses.
   await changeDraft(database(), ids.gaitIds[gaitName]);
-  const version = await commitDraft({ userId: author.user.id, workspaceId: ids.workspaceId }, ids.gaitIds[gaitName], message);
+  const version = await commitDraft(committerOf(author, ids), ids.gaitIds[gaitName], message);
   if (state !== "committed") {
     await database()
       .update(gaitVersions)

@@ -7,23 +7,17 @@ import { beforeAll, describe, expect, test } from "vitest";
 import { gaitVersions } from "../../../db/schema";
 import { changeDraft } from "../../support/drafts";
 import { uniqueName } from "../../support/names";
-import { act, memberAs, outcome, refusal, requestsAs, type DemoIds } from "../../support/routes";
-import type { Member } from "~/platform/access.server";
+import { act, outcome, refusal, requestsAs, type DemoIds } from "../../support/routes";
 import { database } from "~/platform/db.server";
 import { ServiceError } from "~/platform/errors.server";
-import { commitDraft, restoreDraft } from "~/features/versions/versions.server";
+import { commitDraft, restoreDraft, type Committer } from "~/features/versions/versions.server";
 import * as gaitPage from "~/routes/gaits/gait";
-import { draftRevisionOf, setUp } from "./support";
+import { draftRevisionOf, setUpCommitting } from "./support";
 
 let ids: DemoIds;
-let animator: Member;
+let committer: Committer;
 
-beforeAll(async () => {
-  ids = await setUp();
-  animator = await memberAs("animator", ids);
-});
-
-const committer = () => ({ userId: animator.user.id, workspaceId: ids.workspaceId });
+beforeAll(async () => ({ ids, committer } = await setUpCommitting()));
 const versionsOf = (gaitId: string) => database().select().from(gaitVersions).where(eq(gaitVersions.gaitId, gaitId));
 
 describe("a commit of the newest version's content", () => {
@@ -31,7 +25,7 @@ describe("a commit of the newest version's content", () => {
     const gaitId = ids.gaitIds["Ripple turn left"];
     await changeDraft(database(), gaitId);
     const before = (await versionsOf(gaitId)).length;
-    const results = await Promise.allSettled(Array.from({ length: 20 }, (_, racer) => commitDraft(committer(), gaitId, uniqueName(`Racer ${racer}`))));
+    const results = await Promise.allSettled(Array.from({ length: 20 }, (_, racer) => commitDraft(committer, gaitId, uniqueName(`Racer ${racer}`))));
     const made = results.filter((result) => result.status === "fulfilled").map((result) => result.value);
     expect(made, "commits that made a version").toHaveLength(1);
     const refusals = results.filter((result) => result.status === "rejected").map((result) => result.reason as unknown);
@@ -48,7 +42,7 @@ describe("a commit of the newest version's content", () => {
     const gaitId = ids.gaitIds["Wave creep"];
     const rows = await versionsOf(gaitId);
     const newest = rows.reduce((a, b) => (a.number > b.number ? a : b));
-    const refused = await refusal(() => commitDraft(committer(), gaitId, uniqueName("Nothing new")));
+    const refused = await refusal(() => commitDraft(committer, gaitId, uniqueName("Nothing new")));
     expect(refused.status).toBe(409);
     expect(refused.message).toContain(`version ${newest.number}`);
     expect(refused.record).toMatchObject({ versionId: newest.id, number: newest.number });
@@ -59,7 +53,7 @@ describe("a commit of the newest version's content", () => {
     const gaitId = ids.gaitIds["Crawl"];
     const before = (await versionsOf(gaitId)).length;
     await changeDraft(database(), gaitId);
-    await expect(commitDraft(committer(), gaitId, uniqueName("Changed"))).resolves.toMatchObject({ number: before + 1 });
+    await expect(commitDraft(committer, gaitId, uniqueName("Changed"))).resolves.toMatchObject({ number: before + 1 });
   });
 
   test("content equal to an older version, not the newest, is a new version (going back is a change)", async () => {
@@ -69,8 +63,8 @@ describe("a commit of the newest version's content", () => {
       .from(gaitVersions)
       .where(and(eq(gaitVersions.gaitId, gaitId), eq(gaitVersions.number, 1)));
     const before = (await versionsOf(gaitId)).length;
-    await restoreDraft(committer(), gaitId, first.id, await draftRevisionOf(gaitId));
-    const again = await commitDraft(committer(), gaitId, uniqueName("Back to the first trot"));
+    await restoreDraft(committer, gaitId, first.id, await draftRevisionOf(gaitId));
+    const again = await commitDraft(committer, gaitId, uniqueName("Back to the first trot"));
     expect(again).toMatchObject({ number: before + 1, contentHash: first.contentHash });
   });
 

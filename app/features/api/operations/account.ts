@@ -1,5 +1,5 @@
 // /api/v1/workspace: who the caller is.
-import { AUTH, errorsFor, json, ref, type Json, type OpenApiPaths } from "./common";
+import { AUTH, answers, uuid, type Json, type OpenApiPaths } from "./common";
 
 export function accountPaths(): OpenApiPaths {
   return {
@@ -9,7 +9,7 @@ export function accountPaths(): OpenApiPaths {
         summary: "Which workspace and role a token or session acts with",
         description: "Build scripts call it first to check their token.",
         tags: ["Account"],
-        responses: { "200": { description: "The workspace, role and person.", content: json(ref("Workspace")) }, ...errorsFor(...AUTH) },
+        responses: answers("The workspace, role and person.", "Workspace", ...AUTH),
       },
     },
   };
@@ -21,7 +21,7 @@ export function accountSchemas(): Record<string, Json> {
       type: "object",
       required: ["workspace", "role", "user", "via"],
       properties: {
-        workspace: { type: "object", properties: { id: { type: "string", format: "uuid" }, slug: { type: "string" }, name: { type: "string" } } },
+        workspace: { type: "object", properties: { id: uuid, slug: { type: "string" }, name: { type: "string" } } },
         role: { type: "string", enum: ["owner", "lead", "animator", "firmware", "viewer"] },
         user: { type: "object", properties: { login: { type: "string" }, name: { type: "string" } } },
         via: { type: "string", enum: ["token", "session"] },

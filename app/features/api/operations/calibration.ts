@@ -1,5 +1,5 @@
 // /api/v1/robots/{robotId}/calibration-profiles: the names a table download's `profile=` takes.
-import { AUTH, errorsFor, json, person, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
+import { BY_ID, answers, dateTime, listOf, person, ref, uuid, uuidPath, type Json, type OpenApiPaths } from "./common";
 
 export function calibrationPaths(): OpenApiPaths {
   return {
@@ -10,7 +10,7 @@ export function calibrationPaths(): OpenApiPaths {
         description: "Names to give as `profile=` when downloading a table; each profile's revision goes up with every save.",
         tags: ["Robots"],
         parameters: [uuidPath("robotId", "The robot.")],
-        responses: { "200": { description: "The profiles by name.", content: json(ref("CalibrationProfiles")) }, ...errorsFor(400, ...AUTH, 404) },
+        responses: answers("The profiles by name.", "CalibrationProfiles", ...BY_ID),
       },
     },
   };
@@ -22,20 +22,14 @@ export function calibrationSchemas(): Record<string, Json> {
       type: "object",
       properties: {
         robot: { type: "object", properties: { id: { type: "string" }, name: { type: "string" }, revision: { type: "integer" } } },
-        profiles: {
-          type: "array",
-          items: {
-            type: "object",
-            properties: {
-              id: { type: "string", format: "uuid" },
-              name: { type: "string" },
-              revision: { type: "integer", description: "Goes up with every save; the table header names it." },
-              updatedAt: { type: "string", format: "date-time" },
-              updatedBy: person,
-              profile: ref("CalibrationProfile"),
-            },
-          },
-        },
+        profiles: listOf({
+          id: uuid,
+          name: { type: "string" },
+          revision: { type: "integer", description: "Goes up with every save; the table header names it." },
+          updatedAt: dateTime,
+          updatedBy: person,
+          profile: ref("CalibrationProfile"),
+        }),
       },
     },
   };

@@ -39,6 +39,15 @@ export type OpenApiDocument = {
   components: { securitySchemes: Json; schemas: Record<string, Json>; responses: Record<string, OpenApiResponse> };
 };
 
+/** An id, as every uuid column is written. */
+export const uuid = { type: "string", format: "uuid" };
+
+/** A moment, as every timestamp is written. */
+export const dateTime = { type: "string", format: "date-time" };
+
+/** A list of objects with these properties. */
+export const listOf = (properties: Json) => ({ type: "array", items: { type: "object", properties } });
+
 export const ref = (name: string) => ({ $ref: `#/components/schemas/${name}` });
 export const json = (schema: Json) => ({ "application/json": { schema } });
 
@@ -104,6 +113,15 @@ export const errorsFor = (...statuses: Status[]) =>
 /** The statuses every authenticated route may answer. */
 export const AUTH: Status[] = [401, 403, 429];
 
+/** The refusals of a read of one thing its path names by id: a malformed id, access, no such thing. */
+export const BY_ID: Status[] = [400, ...AUTH, 404];
+
+/** An operation's responses: one JSON document, the `schema` component, or the refusals `statuses` name. */
+export const answers = (description: string, schema: string, ...statuses: Status[]) => ({
+  "200": { description, content: json(ref(schema)) },
+  ...errorsFor(...statuses),
+});
+
 /** The shared refusals that errorsFor refers to, each an Error body. */
 export function errorResponses(): Record<string, OpenApiResponse> {
   const responses: Record<string, OpenApiResponse> = Object.fromEntries(
@@ -156,7 +174,7 @@ export const uuidPath = (name: string, what: string): OpenApiParameter => ({
   in: "path",
   required: true,
   description: what,
-  schema: { type: "string", format: "uuid" },
+  schema: uuid,
 });
 
 export const etagResponses = (description: string) => ({

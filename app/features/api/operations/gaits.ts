@@ -1,7 +1,7 @@
 // /api/v1/gaits/{gaitId}/draft: a gait's working draft, read and saved.
 import { z } from "zod";
 import { draftSaveBody } from "../../gaits/index.server";
-import { AUTH, errorsFor, json, person, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
+import { BY_ID, answers, json, person, ref, uuid, uuidPath, type Json, type OpenApiPaths } from "./common";
 
 export function draftPaths(): OpenApiPaths {
   const draftSave = z.toJSONSchema(draftSaveBody, { io: "input", target: "draft-2020-12" }) as Json & { properties: Json };
@@ -13,7 +13,7 @@ export function draftPaths(): OpenApiPaths {
         summary: "The gait's working draft and its revision",
         tags: ["Gaits"],
         parameters: [uuidPath("gaitId", "The gait.")],
-        responses: { "200": { description: "The draft.", content: json(ref("Draft")) }, ...errorsFor(400, ...AUTH, 404) },
+        responses: answers("The draft.", "Draft", ...BY_ID),
       },
       put: {
         operationId: "saveDraft",
@@ -23,7 +23,7 @@ export function draftPaths(): OpenApiPaths {
         tags: ["Gaits"],
         parameters: [uuidPath("gaitId", "The gait.")],
         requestBody: { required: true, content: json({ ...draftSaveSchema, properties: { ...draftSave.properties, sequence: ref("Sequence") } }) },
-        responses: { "200": { description: "The new draft revision.", content: json(ref("DraftSaved")) }, ...errorsFor(400, ...AUTH, 404, 409, 413, 422) },
+        responses: answers("The new draft revision.", "DraftSaved", ...BY_ID, 409, 413, 422),
       },
     },
   };
@@ -34,7 +34,7 @@ export function draftSchemas(): Record<string, Json> {
     Draft: {
       type: "object",
       properties: {
-        gaitId: { type: "string", format: "uuid" },
+        gaitId: uuid,
         name: { type: "string" },
         revision: { type: "integer", description: "Send it back as baseRevision when saving." },
         updatedAt: { type: "string" },

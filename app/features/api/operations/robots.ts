@@ -1,5 +1,5 @@
 // /api/v1/robots: robot definitions and their revisions.
-import { AUTH, errorsFor, json, person, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
+import { AUTH, BY_ID, answers, dateTime, listOf, person, ref, uuid, uuidPath, type Json, type OpenApiPaths } from "./common";
 
 export function robotPaths(): OpenApiPaths {
   return {
@@ -8,7 +8,7 @@ export function robotPaths(): OpenApiPaths {
         operationId: "listRobots",
         summary: "The workspace's robots",
         tags: ["Robots"],
-        responses: { "200": { description: "Robots with their newest revision.", content: json(ref("RobotList")) }, ...errorsFor(...AUTH) },
+        responses: answers("Robots with their newest revision.", "RobotList", ...AUTH),
       },
     },
     "/api/v1/robots/{robotId}": {
@@ -17,7 +17,7 @@ export function robotPaths(): OpenApiPaths {
         summary: "One robot: its newest definition and the list of revisions",
         tags: ["Robots"],
         parameters: [uuidPath("robotId", "The robot.")],
-        responses: { "200": { description: "The robot.", content: json(ref("RobotDetail")) }, ...errorsFor(400, ...AUTH, 404) },
+        responses: answers("The robot.", "RobotDetail", ...BY_ID),
       },
     },
     "/api/v1/robots/{robotId}/revisions/{number}": {
@@ -29,7 +29,7 @@ export function robotPaths(): OpenApiPaths {
           uuidPath("robotId", "The robot."),
           { name: "number", in: "path", required: true, description: "The revision number.", schema: { type: "integer", minimum: 1 } },
         ],
-        responses: { "200": { description: "The revision.", content: json(ref("RobotRevision")) }, ...errorsFor(400, ...AUTH, 404) },
+        responses: answers("The revision.", "RobotRevision", ...BY_ID),
       },
     },
   };
@@ -40,32 +40,26 @@ export function robotSchemas(): Record<string, Json> {
     RobotList: {
       type: "object",
       properties: {
-        robots: {
-          type: "array",
-          items: {
-            type: "object",
-            properties: {
-              id: { type: "string", format: "uuid" },
-              name: { type: "string" },
-              legCount: { type: "integer" },
-              latestRevision: { type: "integer" },
-              updatedAt: { type: "string", format: "date-time" },
-              url: { type: "string" },
-            },
-          },
-        },
+        robots: listOf({
+          id: uuid,
+          name: { type: "string" },
+          legCount: { type: "integer" },
+          latestRevision: { type: "integer" },
+          updatedAt: dateTime,
+          url: { type: "string" },
+        }),
       },
     },
     RevisionSummary: {
       type: "object",
-      properties: { number: { type: "integer" }, message: { type: "string" }, author: person, createdAt: { type: "string", format: "date-time" } },
+      properties: { number: { type: "integer" }, message: { type: "string" }, author: person, createdAt: dateTime },
     },
     RobotDetail: {
       type: "object",
       properties: {
-        id: { type: "string", format: "uuid" },
+        id: uuid,
         name: { type: "string" },
-        createdAt: { type: "string", format: "date-time" },
+        createdAt: dateTime,
         latest: { allOf: [ref("RevisionSummary"), { type: "object", properties: { definition: ref("Robot") } }] },
         revisions: { type: "array", items: ref("RevisionSummary") },
       },

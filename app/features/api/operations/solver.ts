@@ -1,7 +1,7 @@
 // /api/v1/solve and /api/v1/ik: the gait engine, stateless.
 import { COLUMNS_ENCODING, COLUMNS_LAYOUT, FLAG_KINDS } from "../../../gait/index";
 import { MAX_ANSWER_FLAGS, MAX_ANSWER_LEG_FRAMES, MAX_SOLVE_LEG_FRAMES, SOLVE_LAYOUTS } from "../../solver/index.server";
-import { AUTH, errorsFor, json, ref, type Json, type OpenApiPaths } from "./common";
+import { AUTH, answers, errorsFor, json, listOf, ref, type Json, type OpenApiPaths } from "./common";
 
 export function solverPaths(): OpenApiPaths {
   return {
@@ -34,7 +34,7 @@ export function solverPaths(): OpenApiPaths {
         description: "Closed-form leg IK per foot, with reachability, limit violations and pulse widths. Bodies up to 256 KiB.",
         tags: ["Solver"],
         requestBody: { required: true, content: json(ref("IkRequest")) },
-        responses: { "200": { description: "Angles per leg.", content: json(ref("IkResult")) }, ...errorsFor(400, ...AUTH, 413, 422, 503) },
+        responses: answers("Angles per leg.", "IkResult", 400, ...AUTH, 413, 422, 503),
       },
     },
   };
@@ -135,33 +135,27 @@ export function solverSchemas(): Record<string, Json> {
       description: 'options.layout "frames" (the default).',
       required: ["frames", "flags", "summary"],
       properties: {
-        frames: {
-          type: "array",
-          items: {
+        frames: listOf({
+          index: { type: "integer" },
+          timeMs: { type: "number" },
+          body: bodyPose,
+          legs: {
             type: "object",
-            properties: {
-              index: { type: "integer" },
-              timeMs: { type: "number" },
-              body: bodyPose,
-              legs: {
-                type: "object",
-                additionalProperties: {
-                  type: "object",
-                  properties: {
-                    contact: { type: "string", enum: ["stance", "swing"] },
-                    foot: vec3,
-                    reachable: { type: "boolean" },
-                    angles: jointAngles,
-                    pulses: jointAngles,
-                  },
-                },
+            additionalProperties: {
+              type: "object",
+              properties: {
+                contact: { type: "string", enum: ["stance", "swing"] },
+                foot: vec3,
+                reachable: { type: "boolean" },
+                angles: jointAngles,
+                pulses: jointAngles,
               },
-              support: { type: "array", items: { type: "array", items: { type: "number" } } },
-              com: { type: "array", items: { type: "number" } },
-              marginMm: { type: ["number", "null"] },
             },
           },
-        },
+          support: { type: "array", items: { type: "array", items: { type: "number" } } },
+          com: { type: "array", items: { type: "number" } },
+          marginMm: { type: ["number", "null"] },
+        }),
         flags: { type: "array", items: ref("Flag") },
         summary: ref("SolveSummary"),
       },

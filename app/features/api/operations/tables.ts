@@ -3,7 +3,7 @@ import { TABLE_FORMAT, TABLE_MEDIA_TYPES } from "../../../export/index";
 import { NUMBER_PATTERN } from "../../../platform/params";
 import { RELEASE_TABLE, benchQuerySchema, tableQuerySchema } from "../../tables/index.server";
 import { MAX_SOLVE_LEG_FRAMES } from "../../solver/index.server";
-import { AUTH, errorsFor, etagResponses, ifNoneMatch, queryParameters, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
+import { BY_ID, errorsFor, etagResponses, ifNoneMatch, listOf, queryParameters, ref, uuidPath, type Json, type OpenApiPaths } from "./common";
 
 const tableHeadersDoc = {
   ETag: {
@@ -44,7 +44,7 @@ export function benchTablePaths(): OpenApiPaths {
         responses: {
           "200": { description: "The table as a file.", headers: tableHeadersDoc, content: tableContent },
           ...etagResponses("The table is"),
-          ...errorsFor(400, ...AUTH, 404, 409, 422, 503),
+          ...errorsFor(...BY_ID, 409, 422, 503),
         },
       },
     },
@@ -82,7 +82,7 @@ export function angleTablePaths(): OpenApiPaths {
         responses: {
           "200": { description: "The table as a file.", headers: tableHeadersDoc, content: tableContent },
           ...etagResponses("The table is"),
-          ...errorsFor(400, ...AUTH, 404, 409, 422, 503),
+          ...errorsFor(...BY_ID, 409, 422, 503),
         },
       },
     },
@@ -124,26 +124,14 @@ export function tableSchemas(): Record<string, Json> {
             safety: { type: "array", items: { type: "string" } },
           },
         },
-        channels: {
-          type: "array",
-          items: {
-            type: "object",
-            properties: {
-              column: { type: "integer" },
-              channel: { type: "integer" },
-              leg: { type: "string" },
-              joint: { type: "string" },
-              name: { type: "string" },
-            },
-          },
-        },
-        frames: {
-          type: "array",
-          items: {
-            type: "object",
-            properties: { index: { type: "integer" }, timeMs: { type: "number" }, values: { type: "array", items: { type: "number" } } },
-          },
-        },
+        channels: listOf({
+          column: { type: "integer" },
+          channel: { type: "integer" },
+          leg: { type: "string" },
+          joint: { type: "string" },
+          name: { type: "string" },
+        }),
+        frames: listOf({ index: { type: "integer" }, timeMs: { type: "number" }, values: { type: "array", items: { type: "number" } } }),
       },
     },
   };

@@ -1,9 +1,10 @@
 // Access cases for the gait editor: the new-gait page, the editor page and
 // its move-to-newest-robot action, and the draft API.
-import { desc, eq } from "drizzle-orm";
-import { gaits, robotRevisions } from "../../../../db/schema";
+import { eq } from "drizzle-orm";
+import { gaits } from "../../../../db/schema";
 import { act, load } from "../../../support/routes";
 import { uniqueName } from "../../../support/names";
+import { addRobotRevision } from "../../../support/robot-revisions";
 import type { RouteCase } from "../support";
 import * as draftApi from "~/routes/api.v1/gaits/draft";
 import * as editor from "~/routes/gaits/editor";
@@ -61,10 +62,7 @@ export const cases: RouteCase[] = [
     // A newer robot revision for every caller, so that an allowed move has somewhere to go.
     prepare: async (db, ids) => {
       const gait = await draftOf(db, ids.gaitIds[EDITED]);
-      const [latest] = await db.select().from(robotRevisions).where(eq(robotRevisions.robotId, gait.robotId)).orderBy(desc(robotRevisions.number)).limit(1);
-      await db
-        .insert(robotRevisions)
-        .values({ robotId: gait.robotId, number: latest.number + 1, definition: latest.definition, message: "matrix: same robot again" });
+      await addRobotRevision(db, gait.robotId, { message: "matrix: same robot again" });
       return { baseRevision: String(gait.draftRevision) };
     },
     run: (req, ids, prepared) =>

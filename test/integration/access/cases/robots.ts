@@ -1,8 +1,7 @@
 // Access cases for the robot pages, downloads and the robot API.
-import { desc, eq } from "drizzle-orm";
-import { robotRevisions } from "../../../../db/schema";
 import { act, load, multipart } from "../../../support/routes";
 import { uniqueName } from "../../../support/names";
+import { addRobotRevision, newestRobotRevision } from "../../../support/robot-revisions";
 import { demoRobotJson, fixtureText } from "../../../support/robots";
 import type { RouteCase } from "../support";
 import * as apiList from "~/routes/api.v1/robots/list";
@@ -24,7 +23,7 @@ type Db = Parameters<NonNullable<RouteCase["prepare"]>>[0];
 
 /** The robot's newest revision, with a calibration-only change (allowed to firmware too) ready to save on top of it. */
 async function calibrationEdit(db: Db, robotId: string) {
-  const [latest] = await db.select().from(robotRevisions).where(eq(robotRevisions.robotId, robotId)).orderBy(desc(robotRevisions.number)).limit(1);
+  const latest = await newestRobotRevision(db, robotId);
   const definition = structuredClone(latest.definition) as typeof demoJson;
   definition.legs[0].joints.coxa.zeroOffsetDeg = (++counter % 40) / 10 + 0.05;
   return { baseRevision: String(latest.number), definition: JSON.stringify(definition) };
@@ -95,10 +94,9 @@ export const cases: RouteCase[] = [
     intent: "restore",
     // Revision 1 differs from the newest only in calibration, so firmware may restore it too.
     prepare: async (db, ids) => {
-      const { baseRevision, definition } = await calibrationEdit(db, ids.robotIds[ROBOT]);
-      const number = Number(baseRevision) + 1;
-      await db.insert(robotRevisions).values({ robotId: ids.robotIds[ROBOT], number, definition: JSON.parse(definition), message: "matrix prepare" });
-      return { baseRevision: String(number) };
+      const { definition } = await calibrationEdit(db, ids.robotIds[ROBOT]);
+      const { newer } = await addRobotRevision(db, ids.robotIds[ROBOT], { definition: JSON.parse(definition), message: "matrix prepare" });
+      return { baseRevision: String(newer.number) };
     },
     run: (req, ids, prepared) =>
       req("POST", `/robots/${ids.robotIds[ROBOT]}/revisions/1`, { form: { intent: "restore", baseRevision: prepared.baseRevision } }).then((r) =>
