@@ -4,6 +4,7 @@ import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { auditLog, gaitVersions, reviewEvents } from "../../../db/schema";
 import { demoPeople } from "../../../db/demo/scenario";
+import { mailStackForFile } from "../../support/mail";
 import { act, memberAs, outcome, refusal, requestsAs, type DemoIds } from "../../support/routes";
 import type { Member } from "~/platform/access.server";
 import { database } from "~/platform/db.server";
@@ -16,6 +17,9 @@ let owner: Member;
 let lead: Member;
 let animator: Member;
 const email = (role: string) => demoPeople.find((person) => person.role === role)!.email;
+
+// The steps' mail goes out through this file's own SMTP fake and job runner.
+mailStackForFile();
 
 beforeAll(async () => {
   ids = await setUp();
@@ -30,7 +34,7 @@ describe("requesting a review", () => {
     const base = await versionIn(ids, "Tripod cruise", "committed", animator);
     const version = await versionIn(ids, "Tripod cruise", "committed", animator);
     const outcome = await requestReview(animator, version.id, { reviewerId: lead.user.id, comment: "Check the front legs", compareWithId: base.id });
-    expect(outcome).toMatchObject({ state: "in-review", mailed: true, reviewer: lead.user.name });
+    expect(outcome).toMatchObject({ state: "in-review", mails: 1, reviewer: lead.user.name });
     const [row] = await database().select().from(gaitVersions).where(eq(gaitVersions.id, version.id));
     expect(row).toMatchObject({ state: "in-review", reviewerId: lead.user.id });
     expect((await eventsOf(version.id)).at(-1)).toMatchObject({
