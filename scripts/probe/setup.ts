@@ -252,16 +252,22 @@ export async function prepareWorld(url: string, tag: string): Promise<World> {
 
   // The demo workspace: an invitation of its own (its link read from the local inbox when the app shows one).
   // and a calibration profile.
+  const invitee = `probe-invitee-${tag}@example.test`;
   await setup.call("/settings/members", {
     method: "POST",
-    form: { intent: "invite", email: `probe-invitee-${tag}@example.test`, role: "viewer" },
+    form: { intent: "invite", email: invitee, role: "viewer" },
     jar: jars.owner,
   });
   const demoWorkspace = (await setup.json<{ workspace: { id: string } }>("/api/v1/workspace", tokens.owner)).workspace.id;
   const [firstRobot] = (await setup.json<RobotList>("/api/v1/robots", tokens.owner)).robots;
   if (firstRobot) await setup.redirected(`/export/calibration/${firstRobot.id}`, { intent: "create", name: `probe ${tag}` }, jars.owner);
   const home = await discover(setup, tokens.owner, jars.owner, demoWorkspace, found);
-  const inbox = await setup.call("/local/mail", { jar: jars.owner });
+  // The job runner mails the invitation after the answer: wait a little for it (not at all without a local inbox).
+  let inbox = await setup.call("/local/mail", { jar: jars.owner });
+  for (let tries = 0; inbox.response.ok && !inbox.text.includes(invitee) && tries < 50; tries++) {
+    await new Promise((resolve) => setTimeout(resolve, 200));
+    inbox = await setup.call("/local/mail", { jar: jars.owner });
+  }
   home.invitationTokens = [...new Set([...inbox.text.matchAll(/\/invitations\/([A-Za-z0-9_-]{16,})/g)].map((match) => match[1]))].slice(0, 5);
 
   // Hostile credentials: a revoked token, tokens and cookies never issued or tampered with, a signed-out cookie.
