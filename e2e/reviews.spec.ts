@@ -126,6 +126,9 @@ test("an animator commits two versions and asks for review; the lead compares th
   expect(approved.text).toContain("Joint speeds are within limits; good to go.");
   const released = await mailAbout(emailOf("theo-brandt"), messageB, /released/);
   expect(released.subject).toBe(`${GAIT} v${numberB} released by Mara Lindqvist`);
+  // Firmware downloads the table, so it hears of the release too.
+  const toFirmware = await mailAbout(emailOf("priya-sandoval"), messageB, /released/);
+  expect(toFirmware.text).toContain(`/export?gait=`);
   await page.goto("/reviews");
   await expect(page.getByRole("listitem", { name: `${GAIT} v${numberB}` })).toContainText("Released");
 });
