@@ -3,8 +3,9 @@
 // gait is released. Every step is a conditional update inside a transaction
 // (`… where id = $1 and state = 'in-review'`), so a double click or two people
 // at once cannot skip a state; every step is written to review_events and the
-// audit log. The reviewer is mailed on a request, the author on each decision;
-// the mail is queued in the step's own transaction (app/platform/outbox.server.ts).
+// audit log. The reviewer is mailed on a request, the author on each decision,
+// and a release also every firmware member (they download the table); the
+// mail is queued in the step's own transaction (app/platform/outbox.server.ts).
 import { and, asc, desc, eq, gt, inArray, or } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { gaitVersions, gaits, memberships, reviewEvents, robots, users, type Role, type VersionState } from "../../../db/schema";
@@ -142,6 +143,45 @@ function authorMail(
 }
 
 const sender = (actor: Member) => ({ workspaceId: actor.workspace.id, senderId: actor.user.id });
+
+const tableUrl = (version: { gaitId: string; number: number }) => `${config().publicUrl}/export?gait=${version.gaitId}&version=${version.number}`;
+
+/**
+ * A release's mail: the author's, and one to each firmware member of the
+ * workspace, who download the table; one per address (an author who is also
+ * firmware, two accounts of one person), none to the releaser.
+ */
+async function releaseMails(tx: Tx, version: LoadedVersion, actor: Member, lines: string[]): Promise<OutgoingMail[]> {
+  const firmware = await tx
+    .select({ id: users.id, email: users.email })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(and(eq(memberships.workspaceId, actor.workspace.id), eq(memberships.role, "firmware")))
+    // Of two accounts under one address, the older one's spelling is used.
+    .orderBy(asc(users.createdAt), asc(users.id));
+  const mails = authorMail(version, actor, "released", [...lines, `Its angle table: ${tableUrl(version)}`]);
+  const mailed = new Set([actor.user.email.toLowerCase(), ...mails.map((mail) => mail.to.toLowerCase())]);
+  for (const member of firmware) {
+    const address = member.email.toLowerCase();
+    if (member.id === actor.user.id || !address || mailed.has(address)) continue;
+    mailed.add(address);
+    mails.push({
+      topic: "release",
+      target: aboutVersion(version),
+      to: member.email,
+      subject: `${version.gaitName} v${version.number} released by ${actor.user.name}`,
+      text: [
+        `${actor.user.name} released version ${version.number} of “${version.gaitName}” on ${version.robotName}: “${version.message}”.`,
+        "",
+        ...lines,
+        "",
+        `Its angle table: ${tableUrl(version)}`,
+        `Open the version: ${versionUrl(version)}`,
+      ].join("\n"),
+    });
+  }
+  return mails;
+}
 
 // ---------------------------------------------------------------------------
 // Who may review
@@ -407,7 +447,7 @@ export async function releaseVersion(actor: Member, versionId: string, input: { 
     const mails = await queueMail(
       tx,
       sender(actor),
-      authorMail(version, actor, "released", [
+      await releaseMails(tx, version, actor, [
         ...(comment ? [`Comment: ${comment}`] : []),
         retired ? `It replaces version ${retired}, which is now retired.` : "It is the first released version of this gait.",
         "Firmware can now download its angle table.",
