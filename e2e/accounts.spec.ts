@@ -41,8 +41,14 @@ test("an owner invites a new person by e-mail; they follow the link and land in 
   await page.getByLabel("E-mail").fill(newcomer.email);
   await page.getByLabel("Role").last().selectOption("firmware");
   await page.getByRole("button", { name: "Send invitation" }).click();
-  await expect(page.getByRole("status")).toContainText(`Invitation sent to ${newcomer.email}`);
-  await expect(page.getByRole("table", { name: "Pending invitations" }).getByRole("cell", { name: newcomer.email, exact: true })).toBeVisible();
+  await expect(page.getByRole("status")).toContainText(`Invitation for ${newcomer.email} created; its e-mail is queued.`);
+  const pending = page.getByRole("table", { name: "Pending invitations" }).getByRole("row").filter({ hasText: newcomer.email });
+  await expect(pending.getByRole("cell", { name: newcomer.email, exact: true })).toBeVisible();
+  // The job runner sends it; the page follows until it has.
+  await expect(pending.getByText(/^(queued|sent)$/)).toBeVisible();
+  await expect(pending.getByText("sent", { exact: true })).toBeVisible({ timeout: 15_000 });
+  // Following the mail keeps the answer to the invitation on the page.
+  await expect(page.getByRole("status")).toContainText(`Invitation for ${newcomer.email} created`);
 
   // The mail, as the local inbox page shows it.
   await page.goto("/local/mail");

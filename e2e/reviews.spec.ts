@@ -64,8 +64,11 @@ test("an animator commits two versions and asks for review; the lead compares th
   await page.getByLabel("Compare with").selectOption({ label: `v${numberA} — ${messageA}` });
   await page.getByLabel("Note to the reviewer").fill("Shorter cycle; please check the joint speeds.");
   await page.getByRole("button", { name: "Request review" }).click();
-  await expect(page.getByRole("status")).toContainText("Review requested from Mara Lindqvist");
+  await expect(page.getByRole("status")).toContainText("Review requested from Mara Lindqvist. E-mail to Mara Lindqvist: queued.");
   await expect(page.getByLabel("Review", { exact: true }).getByText("In review with Mara Lindqvist.")).toBeVisible();
+  // The animator sees the request's mail queued, and (below, once the lead has it) sent.
+  const sentMail = page.getByRole("list", { name: "Your e-mails about this version" }).getByRole("listitem").filter({ hasText: "Review request" });
+  await expect(sentMail).toContainText(emailOf("mara-lindqvist"));
 
   // The lead, in a browser of her own, follows the e-mail.
   const context = await browser.newContext();
@@ -75,6 +78,8 @@ test("an animator commits two versions and asks for review; the lead compares th
   expect(request.subject).toBe(`Review requested: ${GAIT} v${numberB} (${ROBOT})`);
   const link = request.text.match(/https?:\/\/\S+\/gaits\/compare\?a=\S+&b=\S+/)?.[0];
   expect(link, "the review e-mail links to the comparison").toBeTruthy();
+  await expect(sentMail.getByText("sent", { exact: true })).toBeVisible();
+  await expect(page.getByRole("status")).toContainText("Review requested from Mara Lindqvist.");
   await lead.goto(link!);
   await expect(lead.getByRole("heading", { level: 1, name: "Compare versions" })).toBeVisible();
   await expect(lead.getByRole("article", { name: `A: ${GAIT} v${numberA}` })).toContainText(messageA);
@@ -121,6 +126,9 @@ test("an animator commits two versions and asks for review; the lead compares th
   expect(approved.text).toContain("Joint speeds are within limits; good to go.");
   const released = await mailAbout(emailOf("theo-brandt"), messageB, /released/);
   expect(released.subject).toBe(`${GAIT} v${numberB} released by Mara Lindqvist`);
+  // Firmware downloads the table, so it hears of the release too.
+  const toFirmware = await mailAbout(emailOf("priya-sandoval"), messageB, /released/);
+  expect(toFirmware.text).toContain(`/export?gait=`);
   await page.goto("/reviews");
   await expect(page.getByRole("listitem", { name: `${GAIT} v${numberB}` })).toContainText("Released");
 });

@@ -48,6 +48,8 @@ rm -rf "$SERVE_DIR" && mkdir -p "$SERVE_DIR" && cp -r "$ROOT/build" "$SERVE_DIR/
 
 services_start_fakes "$FAKE_BASE" $((FAKE_BASE + 1)) $((FAKE_BASE + 2))
 export PUBLIC_URL="http://127.0.0.1:$APP_PORT" SESSION_SECRET="probe-$RANDOM$RANDOM"
+services_start_job_runner probe-jobs "$LOG_DIR/jobs.log" "$SERVE_DIR/build"
+service_wait_log probe-jobs "$LOG_DIR/jobs.log" "$JOB_RUNNER_READY"
 service_start probe-app "$LOG_DIR/app.log" env NODE_ENV=production HOST=127.0.0.1 PORT="$APP_PORT" \
   GAITLOOM_PROBE_COUNTS=1 GAITLOOM_RATE_LIMITS=off \
   bash -c 'cd "$1" && exec node "$2/server.js" build/server/index.js' serve "$SERVE_DIR" "$ROOT"

@@ -34,8 +34,11 @@ say "building the app"
 (cd "$ROOT" && npx react-router build >"$LOG_DIR/build.log" 2>&1) || die "The build failed." "$(tail -n 20 "$LOG_DIR/build.log")"
 
 export PUBLIC_URL="http://127.0.0.1:$APP_PORT"
+services_start_job_runner jobs "$LOG_DIR/jobs.log" "$ROOT/build"
+service_wait_log jobs "$LOG_DIR/jobs.log" "$JOB_RUNNER_READY"
 service_start app - env NODE_ENV=production HOST=127.0.0.1 PORT="$APP_PORT" node server.js build/server/index.js
 service_wait_port app "$APP_PORT"
 say "Gaitloom is running: $PUBLIC_URL  (Ctrl-C stops the app and its database)"
 say "sign in as a demo person through the local GitHub stand-in; mail the app sends is at $PUBLIC_URL/local/mail (for the owner, Ines Okafor)"
+say "the job runner sends it (its log: $LOG_DIR/jobs.log)"
 wait "$(cat "$RUN_DIR/app.pid")" || true

@@ -66,6 +66,9 @@ if (cd "$ROOT" && npx react-router build >"$REPORTS/build.log" 2>&1); then
     # (The server finds its assets at build/client relative to its working folder.)
     SERVE_DIR="$DATA_DIR/test-serve-$APP_PORT"
     rm -rf "$SERVE_DIR" && mkdir -p "$SERVE_DIR" && cp -r "$ROOT/build" "$SERVE_DIR/build"
+    # The job runner of the same build, delivering the browser tests' mail to the SMTP fake.
+    services_start_job_runner test-jobs "$REPORTS/jobs.log" "$SERVE_DIR/build"
+    ( service_wait_log test-jobs "$REPORTS/jobs.log" "$JOB_RUNNER_READY" ) || warn "the job runner did not start; the browser tests' mail stays queued"
     # The probe's switches (scripts/probe.sh), honoured for loopback requests only.
     service_start test-app "$REPORTS/app.log" env NODE_ENV=production HOST=127.0.0.1 PORT="$APP_PORT" \
       GAITLOOM_PROBE_COUNTS=1 GAITLOOM_RATE_LIMITS=off \

@@ -39,6 +39,20 @@ export function config() {
       from: process.env.MAIL_FROM ?? "Gaitloom <gaitloom@127.0.0.1>",
       // The local fake's message list, shown in the app's inbox page (never in production).
       inboxUrl: local ? (process.env.MAIL_INBOX_URL ?? "http://127.0.0.1:2526") : null,
+      // Delivery by the job runner: a failed try is retried up to retryLimit times, the
+      // n-th retry after retryDelay·2^(n−1) to twice that (pg-boss's backoff). Production:
+      // 8 retries from 15 s give up after 1.1 to 2.1 hours; npm start after 8.5 to 17
+      // minutes; npm test after 31 to 62 seconds.
+      retryLimit: Number(process.env.GAITLOOM_MAIL_RETRY_LIMIT ?? (mode === "test" ? 5 : 8)),
+      retryDelaySeconds: Number(process.env.GAITLOOM_MAIL_RETRY_DELAY_S ?? (mode === "production" ? 15 : mode === "local" ? 2 : 1)),
+    },
+    // The job runner (app/jobs): how often an idle worker asks for a job, how often
+    // work that lost its job is looked for, and how long a stop waits for running jobs.
+    jobs: {
+      pollSeconds: Number(process.env.GAITLOOM_JOB_POLL_S ?? (local ? 0.5 : 2)),
+      sweepSeconds: Number(process.env.GAITLOOM_JOB_SWEEP_S ?? (local ? 5 : 60)),
+      // Under the 5 s the start and test scripts give a service before they kill it.
+      stopTimeoutMs: 4_000,
     },
     // Counted in PostgreSQL, shared by every app process (app/platform/rate-limit.server.ts).
     rateLimits: {

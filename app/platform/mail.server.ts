@@ -1,4 +1,5 @@
-// Outgoing e-mail over SMTP (locally: the fake SMTP server started by the scripts).
+// The SMTP connection (locally: the fake SMTP server started by the scripts).
+// Only the job runner sends (app/platform/outbox.server.ts); actions queue.
 import nodemailer, { type Transporter } from "nodemailer";
 import { config } from "./config.server";
 
@@ -8,8 +9,15 @@ export type Mail = { to: string; subject: string; text: string };
 
 export async function sendMail(mail: Mail): Promise<void> {
   const settings = config().mail;
-  transport ??= nodemailer.createTransport(settings.smtpUrl);
+  // Short timeouts: the runner holds the mail's row locked while it sends, and
+  // a server that hangs should count as a failed try, retried later.
+  transport ??= nodemailer.createTransport({ url: settings.smtpUrl, connectionTimeout: 10_000, greetingTimeout: 10_000, socketTimeout: 30_000 });
   await transport.sendMail({ from: settings.from, ...mail });
+}
+
+export function closeMailTransport(): void {
+  transport?.close();
+  transport = undefined;
 }
 
 export type InboxMessage = { id: string; receivedAt: string; from: string; to: string[]; subject: string; text: string };

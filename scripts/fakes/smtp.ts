@@ -48,6 +48,10 @@ const smtp = new SMTPServer({
   },
 });
 
+// A client that drops its connection (a reset mid-DATA: a runner killed while
+// sending) is an error of that connection only; unhandled, it ended the process.
+smtp.on("error", (error) => console.error(`fake SMTP: a connection failed: ${error.message}`));
+
 const api = createServer((request, response) => {
   const url = new URL(request.url ?? "/", "http://127.0.0.1");
   const json = (status: number, body: unknown) => {

@@ -76,6 +76,35 @@ services_start_fakes() {
   service_wait_port fake-smtp "$mail_port" "$LOG_DIR/fake-smtp.log"
 }
 
+# Waits until NAME's LOGFILE holds a line matching PATTERN (grep -E); fails with the log when it dies first.
+service_wait_log() {
+  local name="$1" log="$2" pattern="$3" i
+  for i in $(seq 1 300); do
+    grep -qE "$pattern" "$log" 2>/dev/null && return 0
+    service_is_running "$name" || die "$name stopped before it was ready." "Last lines of $log:" "$(tail -n 20 "$log")"
+    sleep 0.2
+  done
+  die "$name was not ready within 60 s." "Last lines of $log:" "$(tail -n 20 "$log")"
+}
+
+# The job runner (app/jobs): delivers the mail outbox and works the other
+# queues, on $DATABASE_URL, mailing through $SMTP_URL. From a build when one is
+# given (its folder holding server/job-runner.js), else from the source with
+# tsx. Wait for it with: service_wait_log NAME LOGFILE "$JOB_RUNNER_READY"
+# services_start_job_runner NAME LOGFILE [BUILD_DIR]
+JOB_RUNNER_READY='^\[jobs\] ready'
+services_start_job_runner() {
+  local name="$1" log="$2" build="${3:-}"
+  # Emptied first: the ready line of an earlier run must not count.
+  : >"$log"
+  if [ -n "$build" ]; then
+    service_start "$name" "$log" node "$build/server/job-runner.js"
+  else
+    # tsx's loader in the one process: the tsx command would SIGKILL it when slow to confirm a SIGTERM.
+    service_start "$name" "$log" node --import tsx app/jobs/job-runner.ts
+  fi
+}
+
 # A session secret of this checkout's own, made once and kept in .data.
 local_session_secret() {
   local file="$DATA_DIR/session-secret"

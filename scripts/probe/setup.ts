@@ -266,9 +266,10 @@ export async function prepareWorld(url: string, tag: string): Promise<World> {
 
   // The demo workspace: an invitation of its own (its link read from the local inbox when the app shows one),
   // one set aside that no caller may accept, and a calibration profile.
+  const invitee = `probe-invitee-${tag}@example.test`;
   await setup.call("/settings/members", {
     method: "POST",
-    form: { intent: "invite", email: `probe-invitee-${tag}@example.test`, role: "viewer" },
+    form: { intent: "invite", email: invitee, role: "viewer" },
     jar: jars.owner,
   });
   const setAside = `probe-set-aside-${tag}@example.test`;
@@ -277,7 +278,12 @@ export async function prepareWorld(url: string, tag: string): Promise<World> {
   const [firstRobot] = (await setup.json<RobotList>("/api/v1/robots", tokens.owner)).robots;
   if (firstRobot) await setup.redirected(`/export/calibration/${firstRobot.id}`, { intent: "create", name: `probe ${tag}` }, jars.owner);
   const home = await discover(setup, tokens.owner, jars.owner, demoWorkspace, found);
-  const inbox = await setup.call("/local/mail", { jar: jars.owner });
+  // The job runner mails the invitations after the answer: wait a little for them (not at all without a local inbox).
+  let inbox = await setup.call("/local/mail", { jar: jars.owner });
+  for (let tries = 0; inbox.response.ok && !(inbox.text.includes(invitee) && inbox.text.includes(setAside)) && tries < 50; tries++) {
+    await new Promise((resolve) => setTimeout(resolve, 200));
+    inbox = await setup.call("/local/mail", { jar: jars.owner });
+  }
   const escaped = setAside.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
   const setAsideToken = inbox.text.match(new RegExp(`${escaped}[\\s\\S]*?/invitations/([A-Za-z0-9_-]{16,})`))?.[1];
   const members = await setup.call("/settings/members", { jar: jars.owner });

@@ -1,17 +1,19 @@
 // Invitations by e-mail: a single-use link that expires. Only a hash of the
-// link's token is stored; resending makes a new link and retires the old one.
-// Having the link is not enough to join: the account must have the invited
-// address verified on GitHub, since a link can be forwarded or read by others.
+// link's token is stored (the queued mail's copy loses it once sent); resending
+// makes a new link and retires the old one. The mail is queued in the
+// invitation's own transaction: both are saved, or neither. Having the link is
+// not enough to join: the account must have the invited address verified on
+// GitHub, since a link can be forwarded or read by others.
 import { randomBytes } from "node:crypto";
 import { and, desc, eq, gt, inArray, isNull } from "drizzle-orm";
 import { invitations, memberships, users, workspaces, type Role } from "../../../db/schema";
 import { hashToken, type Member, type User } from "../../platform/access.server";
 import { recordAudit } from "../../platform/audit.server";
 import { config } from "../../platform/config.server";
-import { database } from "../../platform/db.server";
+import { database, type Tx } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
 import { formatDate } from "../../platform/format";
-import { sendMail } from "../../platform/mail.server";
+import { latestMailFor, queueMail, type MailStatus } from "../../platform/outbox.server";
 import { invitableRoles, ROLE_LABELS } from "../../platform/permissions";
 
 export const INVITATION_DAYS = 7;
@@ -25,30 +27,39 @@ function newLink(): { token: string; tokenHash: string; expiresAt: Date } {
   return { token, tokenHash: hashToken(token), expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000) };
 }
 
-async function mailInvitation(invitation: InvitationRow, token: string, inviter: User, workspaceName: string) {
+async function queueInvitationMail(tx: Tx, invitation: InvitationRow, token: string, inviter: User, workspaceName: string) {
   const link = `${config().publicUrl}/invitations/${token}`;
-  await sendMail({
-    to: invitation.email,
-    subject: `${inviter.name} invited you to ${workspaceName} on Gaitloom`,
-    text: [
-      `${inviter.name} invited you to join ${workspaceName} on Gaitloom as ${ROLE_LABELS[invitation.role].toLowerCase()}.`,
-      "",
-      `Accept the invitation: ${link}`,
-      "",
-      `The link works once and expires on ${formatDate(invitation.expiresAt)}.`,
-      "If you did not expect this, you can ignore this e-mail.",
-    ].join("\n"),
-  });
+  await queueMail(tx, { workspaceId: invitation.workspaceId, senderId: inviter.id }, [
+    {
+      topic: "invitation",
+      target: { type: "invitation", id: invitation.id },
+      to: invitation.email,
+      subject: `${inviter.name} invited you to ${workspaceName} on Gaitloom`,
+      text: [
+        `${inviter.name} invited you to join ${workspaceName} on Gaitloom as ${ROLE_LABELS[invitation.role].toLowerCase()}.`,
+        "",
+        `Accept the invitation: ${link}`,
+        "",
+        `The link works once and expires on ${formatDate(invitation.expiresAt)}.`,
+        "If you did not expect this, you can ignore this e-mail.",
+      ].join("\n"),
+    },
+  ]);
 }
 
-export async function listInvitations(workspaceId: string): Promise<(InvitationRow & { invitedBy: string | null })[]> {
+/** The workspace's pending invitations, each with the state of its newest mail (null for one from before the outbox). */
+export async function listInvitations(workspaceId: string): Promise<(InvitationRow & { invitedBy: string | null; mail: MailStatus | null })[]> {
   const rows = await database()
     .select({ invitation: invitations, invitedBy: users.name })
     .from(invitations)
     .leftJoin(users, eq(users.id, invitations.invitedById))
     .where(and(eq(invitations.workspaceId, workspaceId), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)))
     .orderBy(desc(invitations.createdAt));
-  return rows.map((row) => ({ ...row.invitation, invitedBy: row.invitedBy }));
+  const mail = await latestMailFor(
+    "invitation",
+    rows.map((row) => row.invitation.id),
+  );
+  return rows.map((row) => ({ ...row.invitation, invitedBy: row.invitedBy, mail: mail.get(row.invitation.id) ?? null }));
 }
 
 export async function invite(actor: Member, email: string, role: Role): Promise<InvitationRow> {
@@ -93,9 +104,9 @@ export async function invite(actor: Member, email: string, role: Role): Promise<
       },
       tx,
     );
+    await queueInvitationMail(tx, row, link.token, actor.user, actor.workspace.name);
     return row;
   });
-  await mailInvitation(invitation, link.token, actor.user, actor.workspace.name);
   return invitation;
 }
 
@@ -116,8 +127,8 @@ async function pendingInvitation(actor: Member, invitationId: string): Promise<I
 export async function resendInvitation(actor: Member, invitationId: string): Promise<void> {
   const row = await pendingInvitation(actor, invitationId);
   const link = newLink();
-  const [updated] = await database().transaction(async (tx) => {
-    const result = await tx
+  await database().transaction(async (tx) => {
+    const [updated] = await tx
       .update(invitations)
       .set({ tokenHash: link.tokenHash, expiresAt: link.expiresAt, lastSentAt: new Date(), sendCount: row.sendCount + 1 })
       .where(eq(invitations.id, row.id))
@@ -133,9 +144,8 @@ export async function resendInvitation(actor: Member, invitationId: string): Pro
       },
       tx,
     );
-    return result;
+    await queueInvitationMail(tx, updated, link.token, actor.user, actor.workspace.name);
   });
-  await mailInvitation(updated, link.token, actor.user, actor.workspace.name);
 }
 
 export async function revokeInvitation(actor: Member, invitationId: string): Promise<void> {

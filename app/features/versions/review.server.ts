@@ -3,7 +3,9 @@
 // gait is released. Every step is a conditional update inside a transaction
 // (`… where id = $1 and state = 'in-review'`), so a double click or two people
 // at once cannot skip a state; every step is written to review_events and the
-// audit log. The reviewer is mailed on a request, the author on each decision.
+// audit log. The reviewer is mailed on a request, the author on each decision,
+// and a release also every firmware member (they download the table); the
+// mail is queued in the step's own transaction (app/platform/outbox.server.ts).
 import { and, asc, desc, eq, gt, inArray, or } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { gaitVersions, gaits, memberships, reviewEvents, users, type Role, type VersionState } from "../../../db/schema";
@@ -12,7 +14,7 @@ import { recordAudit } from "../../platform/audit.server";
 import { config } from "../../platform/config.server";
 import { database, type Reader, type Tx } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
-import { sendMail } from "../../platform/mail.server";
+import { queueMail, type OutgoingMail } from "../../platform/outbox.server";
 import { isId } from "../../platform/params";
 import { recordReleaseTable } from "../tables/index.server";
 import { can, type Action } from "../../platform/permissions";
@@ -124,38 +126,74 @@ function checksLine(summary: Partial<VersionSummary>): string {
   return `Checks: ${summary.errors ?? 0} error flag(s), ${summary.warnings ?? 0} warning flag(s), ${margin}.`;
 }
 
-/** Sends after the transaction has committed; a mail server that is down never undoes a review step. */
-async function deliver(mail: { to: string; subject: string; text: string }): Promise<boolean> {
-  try {
-    await sendMail(mail);
-    return true;
-  } catch (error) {
-    console.error(`review mail to ${mail.to} failed:`, error);
-    return false;
-  }
-}
+const aboutVersion = (version: LoadedVersion) => ({ type: "gait_version", id: version.id });
 
-async function mailAuthor(
+/** The author's mail about a decision; none when the author decides (the page shows the outcome). */
+function authorMail(
   version: LoadedVersion,
   actor: Member,
   decided: Extract<VersionState, "approved" | "sent-back" | "released">,
   lines: string[],
-): Promise<boolean> {
-  // No mail to oneself: the author who decides sees the outcome on the page.
-  if (!version.author || version.author.id === actor.user.id || !version.author.email) return false;
+): OutgoingMail[] {
+  if (!version.author || version.author.id === actor.user.id || !version.author.email) return [];
   const decision = stateWord(decided);
-  return deliver({
-    to: version.author.email,
-    subject: `${version.gaitName} v${version.number} ${decision} by ${actor.user.name}`,
-    text: [
-      `${actor.user.name} ${decision} version ${version.number} of “${version.gaitName}” on ${version.robotName}: “${version.message}”.`,
-      "",
-      ...lines,
-      ...(lines.length > 0 ? [""] : []),
-      `Open the version: ${versionUrl(version)}`,
-      `Your reviews: ${config().publicUrl}/reviews`,
-    ].join("\n"),
-  });
+  return [
+    {
+      topic: decided === "released" ? "release" : "review-decision",
+      target: aboutVersion(version),
+      to: version.author.email,
+      subject: `${version.gaitName} v${version.number} ${decision} by ${actor.user.name}`,
+      text: [
+        `${actor.user.name} ${decision} version ${version.number} of “${version.gaitName}” on ${version.robotName}: “${version.message}”.`,
+        "",
+        ...lines,
+        ...(lines.length > 0 ? [""] : []),
+        `Open the version: ${versionUrl(version)}`,
+        `Your reviews: ${config().publicUrl}/reviews`,
+      ].join("\n"),
+    },
+  ];
+}
+
+const sender = (actor: Member) => ({ workspaceId: actor.workspace.id, senderId: actor.user.id });
+
+const tableUrl = (version: { gaitId: string; number: number }) => `${config().publicUrl}/export?gait=${version.gaitId}&version=${version.number}`;
+
+/**
+ * A release's mail: the author's, and one to each firmware member of the
+ * workspace, who download the table; one per address (an author who is also
+ * firmware, two accounts of one person), none to the releaser.
+ */
+async function releaseMails(tx: Tx, version: LoadedVersion, actor: Member, lines: string[]): Promise<OutgoingMail[]> {
+  const firmware = await tx
+    .select({ id: users.id, email: users.email })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(and(eq(memberships.workspaceId, actor.workspace.id), eq(memberships.role, "firmware")))
+    // Of two accounts under one address, the older one's spelling is used.
+    .orderBy(asc(users.createdAt), asc(users.id));
+  const mails = authorMail(version, actor, "released", [...lines, `Its angle table: ${tableUrl(version)}`]);
+  const mailed = new Set([actor.user.email.toLowerCase(), ...mails.map((mail) => mail.to.toLowerCase())]);
+  for (const member of firmware) {
+    const address = member.email.toLowerCase();
+    if (member.id === actor.user.id || !address || mailed.has(address)) continue;
+    mailed.add(address);
+    mails.push({
+      topic: "release",
+      target: aboutVersion(version),
+      to: member.email,
+      subject: `${version.gaitName} v${version.number} released by ${actor.user.name}`,
+      text: [
+        `${actor.user.name} released version ${version.number} of “${version.gaitName}” on ${version.robotName}: “${version.message}”.`,
+        "",
+        ...lines,
+        "",
+        `Its angle table: ${tableUrl(version)}`,
+        `Open the version: ${versionUrl(version)}`,
+      ].join("\n"),
+    });
+  }
+  return mails;
 }
 
 // ---------------------------------------------------------------------------
@@ -193,7 +231,8 @@ export function approvalRules(version: { authorId: string | null; errors: number
 // ---------------------------------------------------------------------------
 // The steps
 
-export type StepOutcome = { state: VersionState; mailed: boolean };
+/** The version's new state and how many mails the step queued. */
+export type StepOutcome = { state: VersionState; mails: number };
 
 /** committed or sent-back → in-review, assigned to a reviewer who may approve; mails the reviewer with a comparison link. */
 export async function requestReview(
@@ -204,7 +243,7 @@ export async function requestReview(
   requirePermission(actor, "versions.requestReview", "request reviews");
   const comment = cleanText(input.comment, COMMENT_LIMIT, "comment", "The note to the reviewer");
   const db = database();
-  const { version, reviewer, baseline } = await db.transaction(async (tx) => {
+  const { reviewer, mails } = await db.transaction(async (tx) => {
     const version = await loadVersion(tx, actor.workspace.id, versionId);
     if (!isId(input.reviewerId)) throw new ServiceError(422, "invalid", "Choose a reviewer from this workspace.", { field: "reviewerId" });
     const [reviewer] = await tx
@@ -231,25 +270,31 @@ export async function requestReview(
     await moveState(tx, version, ["committed", "sent-back"], "in-review", { reviewerId: reviewer.id });
     await tx.insert(reviewEvents).values({ versionId: version.id, actorId: actor.user.id, fromState: version.state, toState: "in-review", comment });
     await auditStep(tx, actor, "version.review-requested", version, { from: version.state, reviewerId: reviewer.id, compareWith: baseline?.id ?? null });
-    return { version, reviewer, baseline };
+    const mails = await queueMail(tx, sender(actor), [
+      {
+        topic: "review-request",
+        target: aboutVersion(version),
+        to: reviewer.email,
+        subject: `Review requested: ${version.gaitName} v${version.number} (${version.robotName})`,
+        text: [
+          `${actor.user.name} asks you to review version ${version.number} of “${version.gaitName}” on ${version.robotName}: “${version.message}”.`,
+          "",
+          checksLine(version.summary),
+          ...(comment ? ["", `Note: ${comment}`] : []),
+          "",
+          ...(baseline
+            ? [
+                `Compare with ${baseline.gaitName === version.gaitName ? "" : `${baseline.gaitName} `}v${baseline.number}: ${compareUrl(baseline.id, version.id)}`,
+              ]
+            : []),
+          `Open the version to approve or send it back: ${versionUrl(version)}`,
+          `Everything waiting for you: ${config().publicUrl}/reviews`,
+        ].join("\n"),
+      },
+    ]);
+    return { reviewer, mails };
   });
-  const mailed = await deliver({
-    to: reviewer.email,
-    subject: `Review requested: ${version.gaitName} v${version.number} (${version.robotName})`,
-    text: [
-      `${actor.user.name} asks you to review version ${version.number} of “${version.gaitName}” on ${version.robotName}: “${version.message}”.`,
-      "",
-      checksLine(version.summary),
-      ...(comment ? ["", `Note: ${comment}`] : []),
-      "",
-      ...(baseline
-        ? [`Compare with ${baseline.gaitName === version.gaitName ? "" : `${baseline.gaitName} `}v${baseline.number}: ${compareUrl(baseline.id, version.id)}`]
-        : []),
-      `Open the version to approve or send it back: ${versionUrl(version)}`,
-      `Everything waiting for you: ${config().publicUrl}/reviews`,
-    ].join("\n"),
-  });
-  return { state: "in-review", mailed, reviewer: reviewer.name };
+  return { state: "in-review", mails, reviewer: reviewer.name };
 }
 
 /** in-review → approved. Not one's own version (an owner may, with a reason); error flags need a reason too. */
@@ -262,7 +307,7 @@ export async function approveVersion(
   const comment = cleanText(input.comment, COMMENT_LIMIT, "comment", "The comment");
   const reason = cleanText(input.overrideReason, REASON_LIMIT, "overrideReason", "The override reason");
   const db = database();
-  const { version, needs } = await db.transaction(async (tx) => {
+  const { needs, mails } = await db.transaction(async (tx) => {
     const version = await loadVersion(tx, actor.workspace.id, versionId);
     if (version.state !== "in-review")
       throw new ServiceError(
@@ -289,14 +334,19 @@ export async function approveVersion(
       errors: version.summary.errors ?? 0,
       ...(overrideReason ? { override: { reasons: rules.needsReason, reason: overrideReason } } : {}),
     });
-    return { version, needs: rules.needsReason };
+    const needs = rules.needsReason;
+    const mails = await queueMail(
+      tx,
+      sender(actor),
+      authorMail(version, actor, "approved", [
+        ...(comment ? [`Comment: ${comment}`] : []),
+        ...(needs.length > 0 ? [`Approved with an override (${needs.join(", ")}): ${reason}`] : []),
+        "A lead or an owner can now release it.",
+      ]),
+    );
+    return { needs, mails };
   });
-  const mailed = await mailAuthor(version, actor, "approved", [
-    ...(comment ? [`Comment: ${comment}`] : []),
-    ...(needs.length > 0 ? [`Approved with an override (${needs.join(", ")}): ${reason}`] : []),
-    "A lead or an owner can now release it.",
-  ]);
-  return { state: "approved", mailed, override: needs };
+  return { state: "approved", mails, override: needs };
 }
 
 /** in-review → sent-back, with a comment saying what to change. */
@@ -304,18 +354,21 @@ export async function sendBackVersion(actor: Member, versionId: string, input: {
   requirePermission(actor, "versions.decide", "send versions back");
   const comment = cleanText(input.comment, COMMENT_LIMIT, "comment", "The comment");
   if (comment.length === 0) throw new ServiceError(422, "invalid", "Say what needs to change: sending a version back needs a comment.", { field: "comment" });
-  const version = await database().transaction(async (tx) => {
+  const mails = await database().transaction(async (tx) => {
     const version = await loadVersion(tx, actor.workspace.id, versionId);
     await moveState(tx, version, ["in-review"], "sent-back");
     await tx.insert(reviewEvents).values({ versionId: version.id, actorId: actor.user.id, fromState: "in-review", toState: "sent-back", comment });
     await auditStep(tx, actor, "version.sent-back", version);
-    return version;
+    return queueMail(
+      tx,
+      sender(actor),
+      authorMail(version, actor, "sent-back", [
+        `Comment: ${comment}`,
+        "Start a new draft from it, change what the comment asks, commit and request review again.",
+      ]),
+    );
   });
-  const mailed = await mailAuthor(version, actor, "sent-back", [
-    `Comment: ${comment}`,
-    "Start a new draft from it, change what the comment asks, commit and request review again.",
-  ]);
-  return { state: "sent-back", mailed };
+  return { state: "sent-back", mails };
 }
 
 /**
@@ -326,7 +379,7 @@ export async function sendBackVersion(actor: Member, versionId: string, input: {
 export async function releaseVersion(actor: Member, versionId: string, input: { comment?: string } = {}): Promise<StepOutcome & { retired: number | null }> {
   requirePermission(actor, "versions.release", "release versions");
   const comment = cleanText(input.comment, COMMENT_LIMIT, "comment", "The comment");
-  const { version, retired } = await database().transaction(async (tx) => {
+  const { retired, mails } = await database().transaction(async (tx) => {
     const version = await loadVersion(tx, actor.workspace.id, versionId);
     await tx.select({ id: gaits.id }).from(gaits).where(eq(gaits.id, version.gaitId)).for("update");
     // Read again under the gait's lock: another release may have finished while this one waited.
@@ -351,14 +404,19 @@ export async function releaseVersion(actor: Member, versionId: string, input: { 
     await recordReleaseTable(tx, { versionId: version.id, releasedById: actor.user.id });
     await tx.insert(reviewEvents).values({ versionId: version.id, actorId: actor.user.id, fromState: "approved", toState: "released", comment });
     await auditStep(tx, actor, "version.released", version, { retired: retiredRows.map((row) => row.number) });
-    return { version, retired: retiredRows[0]?.number ?? null };
+    const retired = retiredRows[0]?.number ?? null;
+    const mails = await queueMail(
+      tx,
+      sender(actor),
+      await releaseMails(tx, version, actor, [
+        ...(comment ? [`Comment: ${comment}`] : []),
+        retired ? `It replaces version ${retired}, which is now retired.` : "It is the first released version of this gait.",
+        "Firmware can now download its angle table.",
+      ]),
+    );
+    return { retired, mails };
   });
-  const mailed = await mailAuthor(version, actor, "released", [
-    ...(comment ? [`Comment: ${comment}`] : []),
-    retired ? `It replaces version ${retired}, which is now retired.` : "It is the first released version of this gait.",
-    "Firmware can now download its angle table.",
-  ]);
-  return { state: "released", mailed, retired };
+  return { state: "released", mails, retired };
 }
 
 // ---------------------------------------------------------------------------

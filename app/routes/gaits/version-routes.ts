@@ -9,6 +9,6 @@ export const versionPages: RouteConfigEntry[] = [
   // POST intent=commit (message, draftRevision?); intent=restore (versionId, draftRevision)
   route(":gaitId", "routes/gaits/gait.tsx"),
   // one version, its checks and review history
-  // POST intent=request-review, approve, send-back or release
+  // POST intent=request-review, approve, send-back, release or resend-mail
   route(":gaitId/versions/:number", "routes/gaits/version.tsx"),
 ];

@@ -6,6 +6,8 @@ import { PageHeader } from "~/components/common/PageHeader";
 import { FlagGroupsTable } from "~/components/versions/FlagGroupsTable";
 import { ReviewActions } from "~/components/versions/ReviewActions";
 import { ReviewHistory } from "~/components/versions/ReviewHistory";
+import { SentMailList } from "~/components/versions/SentMailList";
+import { useFreshWhile } from "~/components/common/useFreshWhile";
 import { StateBadge } from "~/components/versions/StateBadge";
 import { VersionFacts } from "~/components/versions/VersionFacts";
 import { formatTime } from "~/platform/format";
@@ -15,6 +17,7 @@ import { formAction, ServiceError, type FormError } from "~/platform/errors.serv
 import { can, type RoutePermissions } from "~/platform/permissions";
 import { id, versionNumber } from "~/platform/params";
 import { readIntentForm } from "~/platform/intent-form.server";
+import { mailSentAbout, resendMail } from "~/platform/outbox.server";
 import { approvalRules, approveVersion, releaseVersion, requestReview, reviewersFor, sendBackVersion } from "~/features/versions/review.server";
 import { getGait, getVersion, listVersions, solveVersion } from "~/features/versions/versions.server";
 
@@ -40,13 +43,21 @@ export const actionForm = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("approve"), comment: text, overrideReason: text }),
   z.object({ intent: z.literal("send-back"), comment: text }),
   z.object({ intent: z.literal("release"), comment: text }),
+  z.object({ intent: z.literal("resend-mail"), mailId: id("That is not an e-mail of this version.") }),
 ]);
 
 type Intent = z.infer<typeof actionForm>["intent"];
 
 export const permissions = {
   loader: "gaits.read",
-  action: { "request-review": "versions.requestReview", approve: "versions.decide", "send-back": "versions.decide", release: "versions.release" },
+  action: {
+    "request-review": "versions.requestReview",
+    approve: "versions.decide",
+    "send-back": "versions.decide",
+    release: "versions.release",
+    // Whoever sent a version's mail took one of the steps above, all open to this permission; the service checks the sender.
+    "resend-mail": "versions.requestReview",
+  },
 } satisfies RoutePermissions;
 
 export async function loader({ request, params }: Route.LoaderArgs) {
@@ -55,10 +66,11 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   if (!parsed.success) throw notFound();
   const [version, gait] = await Promise.all([getVersion(workspace.id, parsed.data.gaitId, parsed.data.number), getGait(workspace.id, parsed.data.gaitId)]);
   if (!version || !gait) throw notFound();
-  const [solved, reviewers, siblings] = await Promise.all([
+  const [solved, reviewers, siblings, mails] = await Promise.all([
     solveVersion(version),
     reviewersFor(workspace.id, version.author?.id ?? null),
     listVersions(workspace.id, gait.id),
+    mailSentAbout({ type: "gait_version", id: version.id }, user.id),
   ]);
   const others = siblings.filter((sibling) => sibling.id !== version.id).map(({ id, number, message, state }) => ({ id, number, message, state }));
   const previous = others.filter((other) => other.number < version.number).sort((x, y) => y.number - x.number)[0] ?? null;
@@ -72,6 +84,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     others,
     previousId: previous?.id ?? null,
     releasedId: released?.id ?? null,
+    // What the signed-in person's review steps mailed, and how it went.
+    mails,
     approval: approvalRules({ authorId: version.author?.id ?? null, errors: version.errors }, { userId: user.id, role }),
     can: {
       requestReview: can(role, "versions.requestReview"),
@@ -90,9 +104,10 @@ export type VersionActionData = { ok: true; intent: Intent; notice: string } | F
  *   intent=approve, comment?, overrideReason?
  *   intent=send-back, comment
  *   intent=release, comment?
+ *   intent=resend-mail, mailId (a failed mail the signed-in person sent about this version)
  */
 export async function action({ request, params }: Route.ActionArgs) {
-  const mailNote = (mailed: boolean, whom: string) => (mailed ? ` ${whom} has been e-mailed.` : "");
+  const mailNote = (mails: number, whom: string) => (mails === 0 ? "" : mails === 1 ? ` E-mail to ${whom}: queued.` : ` E-mails to ${mails} people: queued.`);
   return formAction(async (): Promise<VersionActionData> => {
     const { member, form: input } = await readIntentForm(request, actionForm, permissions.action);
     const parsed = versionParams.safeParse(params);
@@ -105,21 +120,25 @@ export async function action({ request, params }: Route.ActionArgs) {
           comment: input.comment,
           compareWithId: input.compareWithId || null,
         });
-        return { ok: true, intent: input.intent, notice: `Review requested from ${outcome.reviewer}.${mailNote(outcome.mailed, outcome.reviewer)}` };
+        return { ok: true, intent: input.intent, notice: `Review requested from ${outcome.reviewer}.${mailNote(outcome.mails, outcome.reviewer)}` };
       }
       case "approve": {
         const outcome = await approveVersion(member, version.id, { comment: input.comment, overrideReason: input.overrideReason });
         const override = outcome.override.length > 0 ? " with an override, recorded in the audit log" : "";
-        return { ok: true, intent: input.intent, notice: `Version ${version.number} approved${override}.${mailNote(outcome.mailed, "The author")}` };
+        return { ok: true, intent: input.intent, notice: `Version ${version.number} approved${override}.${mailNote(outcome.mails, "the author")}` };
       }
       case "send-back": {
         const outcome = await sendBackVersion(member, version.id, { comment: input.comment });
-        return { ok: true, intent: input.intent, notice: `Version ${version.number} sent back.${mailNote(outcome.mailed, "The author")}` };
+        return { ok: true, intent: input.intent, notice: `Version ${version.number} sent back.${mailNote(outcome.mails, "the author")}` };
       }
       case "release": {
         const outcome = await releaseVersion(member, version.id, { comment: input.comment });
         const retired = outcome.retired ? ` Version ${outcome.retired} is now retired.` : "";
-        return { ok: true, intent: input.intent, notice: `Version ${version.number} released.${retired}${mailNote(outcome.mailed, "The author")}` };
+        return { ok: true, intent: input.intent, notice: `Version ${version.number} released.${retired}${mailNote(outcome.mails, "the author")}` };
+      }
+      case "resend-mail": {
+        const mail = await resendMail(member, input.mailId, { type: "gait_version", id: version.id });
+        return { ok: true, intent: input.intent, notice: `E-mail to ${mail.to}: queued again.` };
       }
     }
   });
@@ -130,7 +149,19 @@ export const meta: Route.MetaFunction = ({ loaderData }) => [
 ];
 
 export default function VersionPage({ loaderData, actionData }: Route.ComponentProps) {
-  const { version, gait, flagGroups, reviewers, others, previousId, releasedId, approval, can: allowed } = loaderData;
+  // The job runner sends the mail after the answer: follow it until it is out.
+  const {
+    version,
+    gait,
+    flagGroups,
+    reviewers,
+    others,
+    previousId,
+    releasedId,
+    mails,
+    approval,
+    can: allowed,
+  } = useFreshWhile(loaderData, (data) => data.mails.some((mail) => mail.state === "queued"));
   const navigation = useNavigation();
   const busy = navigation.state === "submitting" ? String(navigation.formData?.get("intent") ?? "") : null;
   const result = actionData as VersionActionData | undefined;
@@ -199,6 +230,7 @@ export default function VersionPage({ loaderData, actionData }: Route.ComponentP
             error={error}
             succeeded={success?.intent ?? null}
           />
+          <SentMailList mails={mails} busy={busy === "resend-mail"} />
           {allowed.edit ? (
             <Form method="post" action={`/gaits/${gait.id}`} className="rounded-lg border border-line bg-surface p-4 text-sm">
               <input type="hidden" name="intent" value="restore" />

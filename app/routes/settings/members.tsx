@@ -2,7 +2,9 @@
 import { Form, useNavigation } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/members";
+import { MailState } from "~/components/common/MailState";
 import { Notice } from "~/components/common/Notice";
+import { useFreshWhile } from "~/components/common/useFreshWhile";
 import { requireAccess } from "~/platform/access.server";
 import { readForm } from "~/platform/body.server";
 import { requireIntentAccess } from "~/platform/intent-form.server";
@@ -61,11 +63,11 @@ export async function action({ request }: Route.ActionArgs) {
         return { success: "Member removed." };
       case "invite": {
         const invitation = await invite(member, command.email, parseRole(command.role));
-        return { success: `Invitation sent to ${invitation.email}.` };
+        return { success: `Invitation for ${invitation.email} created; its e-mail is queued.` };
       }
       case "resend":
         await resendInvitation(member, command.invitationId);
-        return { success: "Invitation sent again with a new link; the old link no longer works." };
+        return { success: "Invitation made again with a new link, its e-mail queued; the old link no longer works." };
       case "revoke":
         await revokeInvitation(member, command.invitationId);
         return { success: "Invitation revoked." };
@@ -78,7 +80,10 @@ export const meta: Route.MetaFunction = () => [{ title: "Members · Gaitloom" }]
 const button = "rounded-md border border-line px-3 py-1 text-sm hover:bg-sunken";
 
 export default function Members({ loaderData, actionData }: Route.ComponentProps) {
-  const { members, invitations, canChangeRoles, canRemove, invitable, you } = loaderData;
+  // The job runner sends the mail after the answer: follow it until it is out.
+  const { members, invitations, canChangeRoles, canRemove, invitable, you } = useFreshWhile(loaderData, (data) =>
+    data.invitations.some((invitation) => invitation.mail?.state === "queued"),
+  );
   const busy = useNavigation().state === "submitting";
   return (
     <div className="space-y-8">
@@ -191,6 +196,7 @@ export default function Members({ loaderData, actionData }: Route.ComponentProps
                   <th className="py-2 font-medium">E-mail</th>
                   <th className="py-2 font-medium">Role</th>
                   <th className="py-2 font-medium">Invited by</th>
+                  <th className="py-2 font-medium">Mail</th>
                   <th className="py-2 text-right font-medium">Expires</th>
                   <th className="py-2">
                     <span className="sr-only">Actions</span>
@@ -203,6 +209,7 @@ export default function Members({ loaderData, actionData }: Route.ComponentProps
                     <td className="py-2">{invitation.email}</td>
                     <td className="py-2">{ROLE_LABELS[invitation.role]}</td>
                     <td className="py-2">{invitation.invitedBy ?? "—"}</td>
+                    <td className="py-2">{invitation.mail ? <MailState state={invitation.mail.state} error={invitation.mail.lastError} /> : "—"}</td>
                     <td className="py-2 text-right">
                       {new Date(invitation.expiresAt) < new Date() ? <span className="text-warning">expired</span> : formatDate(invitation.expiresAt)}
                     </td>

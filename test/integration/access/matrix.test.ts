@@ -4,11 +4,12 @@
 // allowed callers succeed, the others get 401/403 (or the sign-in redirect)
 // and change nothing in the database.
 import { sql } from "drizzle-orm";
-import { beforeAll, describe, expect, test } from "vitest";
+import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { seedDemo } from "../../../db/seed";
 import routeConfig from "~/routes";
 import { database } from "~/platform/db.server";
 import { PERMISSIONS, ROLES, can, requirementOf, type Requirement, type RoutePermissions } from "~/platform/permissions";
+import { MailFake } from "../../support/mail";
 import { type Caller, type DemoIds, demoIds, outcome, requestsAs } from "../../support/routes";
 import type { RouteCase } from "./support";
 
@@ -67,9 +68,18 @@ async function fingerprint(): Promise<string> {
 }
 
 let ids: DemoIds;
+// The local inbox page reads an SMTP fake's messages: one of this file's own, so the matrix needs no other.
+let inbox: MailFake | undefined;
+
 beforeAll(async () => {
   await seedDemo(database());
   ids = await demoIds(database());
+  inbox = await MailFake.start();
+  process.env.MAIL_INBOX_URL = inbox.inboxUrl;
+}, 60_000);
+
+afterAll(async () => {
+  await inbox?.stop();
 });
 
 describe("every route module declares what its loader, action and each intent need, and the matrix runs each", () => {

@@ -2,13 +2,15 @@ import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { invitations, memberships, users } from "../../../db/schema";
 import { seedDemo } from "../../../db/seed";
+import { mailStackForFile, waitForMail } from "../../support/mail";
 import { uniqueName } from "../../support/names";
 import { demoIds, memberAs, refusal, type DemoIds } from "../../support/routes";
 import type { Member, User } from "~/platform/access.server";
 import { database } from "~/platform/db.server";
 import { acceptInvitation, invitationForToken, invite, resendInvitation, revokeInvitation } from "~/features/accounts/invitations.server";
 
-const MAIL_API = process.env.MAIL_INBOX_URL ?? "http://127.0.0.1:2626";
+// The invitations' mail goes out through this file's own SMTP fake and job runner.
+const mail = mailStackForFile();
 
 let ids: DemoIds;
 let owner: Member;
@@ -24,9 +26,10 @@ async function newPerson(login: string): Promise<User> {
   return user;
 }
 
-async function linkTokenFor(email: string): Promise<string> {
-  const messages = (await (await fetch(`${MAIL_API}/messages?to=${encodeURIComponent(email)}`)).json()) as { text: string }[];
-  const token = messages[0]?.text.match(/\/invitations\/(\S+)/)?.[1];
+/** The link token of the newest invitation mail to `email`, once `count` of them have arrived. */
+async function linkTokenFor(email: string, count = 1): Promise<string> {
+  const messages = await waitForMail(mail.fake().inboxUrl, email, { count });
+  const token = messages.length >= count ? messages[0].text.match(/\/invitations\/(\S+)/)?.[1] : undefined;
   if (!token) throw new Error(`no invitation mail for ${email}`);
   return token;
 }
@@ -72,7 +75,7 @@ describe("invitations", () => {
     const row = await invite(owner, person.email, "viewer");
     const first = await linkTokenFor(person.email);
     await resendInvitation(owner, row.id);
-    const second = await linkTokenFor(person.email);
+    const second = await linkTokenFor(person.email, 2);
     expect(second).not.toBe(first);
     expect((await refusal(() => invitationForToken(first))).status).toBe(404);
     await revokeInvitation(owner, row.id);

@@ -2,8 +2,10 @@
 // (retiring the previous release), with their rules, records and e-mails.
 import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, test } from "vitest";
-import { auditLog, gaitVersions, reviewEvents } from "../../../db/schema";
+import { auditLog, gaitVersions, memberships, reviewEvents, users, type Role } from "../../../db/schema";
 import { demoPeople } from "../../../db/demo/scenario";
+import { mailStackForFile, sleep } from "../../support/mail";
+import { uniqueName } from "../../support/names";
 import { act, memberAs, outcome, refusal, requestsAs, type DemoIds } from "../../support/routes";
 import type { Member } from "~/platform/access.server";
 import { database } from "~/platform/db.server";
@@ -16,6 +18,27 @@ let owner: Member;
 let lead: Member;
 let animator: Member;
 const email = (role: string) => demoPeople.find((person) => person.role === role)!.email;
+
+// The steps' mail goes out through this file's own SMTP fake and job runner.
+const mail = mailStackForFile();
+
+/** A new member of the demo workspace with `role` (and the address given, or one of their own). */
+async function newMember(role: Role, email?: string) {
+  const login = uniqueName(role);
+  const [user] = await database()
+    .insert(users)
+    .values({ login, name: login, email: email ?? `${login}@example.test` })
+    .returning();
+  await database().insert(memberships).values({ workspaceId: ids.workspaceId, userId: user.id, role });
+  return user;
+}
+
+/** How many mails about `needle` reached `to` once the runner is done: a wait for the first, then a pause for any second. */
+async function countMail(to: string, needle: string, expectAtLeastOne: boolean): Promise<number> {
+  if (expectAtLeastOne) await mailsTo(to, needle);
+  else await sleep(1_500);
+  return (await mail.fake().messages(to)).filter((message) => message.text.includes(needle)).length;
+}
 
 beforeAll(async () => {
   ids = await setUp();
@@ -30,7 +53,7 @@ describe("requesting a review", () => {
     const base = await versionIn(ids, "Tripod cruise", "committed", animator);
     const version = await versionIn(ids, "Tripod cruise", "committed", animator);
     const outcome = await requestReview(animator, version.id, { reviewerId: lead.user.id, comment: "Check the front legs", compareWithId: base.id });
-    expect(outcome).toMatchObject({ state: "in-review", mailed: true, reviewer: lead.user.name });
+    expect(outcome).toMatchObject({ state: "in-review", mails: 1, reviewer: lead.user.name });
     const [row] = await database().select().from(gaitVersions).where(eq(gaitVersions.id, version.id));
     expect(row).toMatchObject({ state: "in-review", reviewerId: lead.user.id });
     expect((await eventsOf(version.id)).at(-1)).toMatchObject({
@@ -149,6 +172,38 @@ describe("releasing", () => {
     const [mail] = await mailsTo(email("animator"), version.message);
     expect(mail.subject).toContain("released");
     expect(mail.text).toContain(`replaces version ${previous.number}`);
+  });
+
+  test("a release is mailed to the version's author and to every firmware member of the workspace (they download the table), never to the releaser, once per address", async () => {
+    // A second firmware engineer, and a second account of the demo one under the same address (as GitHub may give).
+    const firmware = await newMember("firmware");
+    const priya = email("firmware");
+    await newMember("firmware", priya.toUpperCase());
+    const version = await versionIn(ids, "Wave climb", "approved", animator);
+    const released = await releaseVersion(lead, version.id, { comment: "For the pier trials" });
+    expect(released).toMatchObject({ state: "released", mails: 3 });
+    expect(await countMail(email("animator"), version.message, true)).toBe(1);
+    expect(await countMail(firmware.email, version.message, true)).toBe(1);
+    expect(await countMail(priya, version.message, true)).toBe(1);
+    expect(await countMail(email("lead"), version.message, false)).toBe(0);
+    const [notice] = await mailsTo(firmware.email, version.message);
+    expect(notice.subject).toBe(`Wave climb v${version.number} released by ${lead.user.name}`);
+    expect(notice.text).toContain(`/export?gait=${version.gaitId}&version=${version.number}`);
+  });
+
+  test("an author who is now a firmware member hears of the release once; an owner releasing their own version is not mailed", async () => {
+    const author = await newMember("animator");
+    const asAuthor = await memberAs("animator", { ...ids, userIds: { ...ids.userIds, animator: author.id } });
+    const version = await versionIn(ids, "Ripple turn left", "approved", asAuthor);
+    await database().update(memberships).set({ role: "firmware" }).where(eq(memberships.userId, author.id));
+    await releaseVersion(lead, version.id);
+    expect(await countMail(author.email, version.message, true)).toBe(1);
+
+    const own = await versionIn(ids, "Tripod cruise", "approved", owner);
+    const released = await releaseVersion(owner, own.id);
+    expect(await countMail(email("firmware"), own.message, true)).toBe(1);
+    expect(await countMail(email("owner"), own.message, false)).toBe(0);
+    expect(released.mails).toBeGreaterThanOrEqual(1);
   });
 
   test("two approved versions released at once: one released version per gait, the other retired, none lost", async () => {

@@ -1,16 +1,16 @@
 // Helpers of the version and review integration tests: fresh versions in a
-// chosen state, reading states back, and the local fake SMTP server's messages.
+// chosen state, reading states back, and the mail a test file's own SMTP fake
+// received (test/support/mail.ts).
 import { eq } from "drizzle-orm";
 import { gaitVersions, gaits, type VersionState } from "../../../db/schema";
 import { changeDraft } from "../../support/drafts";
+import { waitForMail, type InboxMail } from "../../support/mail";
 import { uniqueName } from "../../support/names";
 import { demoIds, memberAs, type DemoIds } from "../../support/routes";
 import type { Member } from "~/platform/access.server";
 import { database } from "~/platform/db.server";
 import { commitDraft, type Committer } from "~/features/versions/versions.server";
 import { seedDemo } from "../../../db/seed";
-
-export const MAIL_API = process.env.MAIL_INBOX_URL ?? "http://127.0.0.1:2626";
 
 export async function setUp(): Promise<DemoIds> {
   await seedDemo(database());
@@ -52,15 +52,9 @@ export async function draftRevisionOf(gaitId: string): Promise<number> {
   return row.draftRevision;
 }
 
-export type Mail = { subject: string; text: string; to: string[] };
-
-/** Mails to `to` whose text contains `needle`, newest first, waiting up to `timeoutMs` for at least one. */
-export async function mailsTo(to: string, needle: string, timeoutMs = 5_000): Promise<Mail[]> {
-  const deadline = Date.now() + timeoutMs;
-  for (;;) {
-    const response = await fetch(`${MAIL_API}/messages?to=${encodeURIComponent(to)}`);
-    const found = ((await response.json()) as Mail[]).filter((mail) => mail.text.includes(needle));
-    if (found.length > 0 || Date.now() > deadline) return found;
-    await new Promise((resolve) => setTimeout(resolve, 100));
-  }
+/** Mails to `to` whose text contains `needle`, newest first, waiting up to `timeoutMs` for at least one (the file's `mailStackForFile` fake). */
+export async function mailsTo(to: string, needle: string, timeoutMs = 15_000): Promise<InboxMail[]> {
+  const inbox = process.env.MAIL_INBOX_URL;
+  if (!inbox) throw new Error("no SMTP fake: call mailStackForFile() in the test file");
+  return waitForMail(inbox, to, { needle, timeoutMs });
 }

@@ -1,9 +1,10 @@
 // Access cases for the gait page, versions, review steps, the comparison and the versions API.
 import { and, desc, eq } from "drizzle-orm";
-import { gaitVersions, gaits, type VersionState } from "../../../../db/schema";
+import { gaitVersions, gaits, mailOutbox, type VersionState } from "../../../../db/schema";
 import { type DemoIds, act, load } from "../../../support/routes";
 import { changeDraft } from "../../../support/drafts";
 import { uniqueName } from "../../../support/names";
+import type { Caller } from "../../../support/routes";
 import type { RouteCase } from "../support";
 import { commitDraft } from "~/features/versions/versions.server";
 import * as apiVersions from "~/routes/api.v1/gaits/versions";
@@ -24,6 +25,28 @@ async function versionIn(db: Db, ids: DemoIds, state: VersionState) {
   const version = await commitDraft({ userId: ids.userIds.animator, workspaceId: ids.workspaceId }, gaitId, uniqueName("Matrix version"), db);
   if (state !== "committed") await db.update(gaitVersions).set({ state, reviewerId: ids.userIds.lead }).where(eq(gaitVersions.id, version.id));
   return { gaitId, number: String(version.number), versionId: version.id };
+}
+
+/** A version in review whose review-request mail, sent by `caller`, failed: what "Send again" acts on. */
+async function failedMail(db: Db, ids: DemoIds, caller: Caller) {
+  const version = await versionIn(db, ids, "in-review");
+  const [mail] = await db
+    .insert(mailOutbox)
+    .values({
+      workspaceId: ids.workspaceId,
+      senderId: caller === "signed-out" ? null : ids.userIds[caller],
+      topic: "review-request",
+      targetType: "gait_version",
+      targetId: version.versionId,
+      to: "reviewer@example.test",
+      subject: "Review requested",
+      body: "Please review.",
+      state: "failed",
+      attempts: 3,
+      failedAt: new Date(),
+    })
+    .returning({ id: mailOutbox.id });
+  return { ...version, mailId: mail.id };
 }
 
 async function draftState(db: Db, ids: DemoIds) {
@@ -106,6 +129,15 @@ export const cases: RouteCase[] = [
     ...versionStep("send-back", "in-review", () => ({ comment: "Lift the rear legs higher" })),
   },
   { name: "POST /gaits/:gaitId/versions/:number (release)", ...versionStep("release", "approved") },
+  {
+    name: "POST /gaits/:gaitId/versions/:number (send a failed mail again)",
+    route: "routes/gaits/version.tsx",
+    kind: "action",
+    intent: "resend-mail",
+    prepare: failedMail,
+    run: (req, _ids, { gaitId, number, mailId }) =>
+      req("POST", `/gaits/${gaitId}/versions/${number}`, { form: { intent: "resend-mail", mailId } }).then((r) => act(versionPage, r, { gaitId, number })),
+  },
   {
     name: "GET /gaits/compare?a=&b=",
     route: "routes/gaits/compare.tsx",
