@@ -2,7 +2,7 @@
 // this tree's build, against the database of the app under test, with the
 // limits on (the app under test runs with GAITLOOM_RATE_LIMITS=off for the
 // probe). Its people make the token; the two extra processes count it.
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test, type Page } from "./support/test";
 import { spawn, type ChildProcess } from "node:child_process";
 import { once } from "node:events";
 import { createServer } from "node:net";

@@ -1,7 +1,7 @@
 // Sessions end for good in the browser: signing out, and signing out
 // everywhere from the list of one's sessions. The people here are new ones
 // of their own, so no other spec's session of a demo person is ended.
-import { expect, test } from "@playwright/test";
+import { expect, test } from "./support/test";
 import { signInAsNewPerson } from "./support/sign-in";
 
 const newcomer = (label: string) => {
