@@ -12,7 +12,8 @@ afterEach(cleanup);
 const document = openApiDocument(apiPermissions()) as unknown as ApiDocument;
 
 describe("ApiReference", () => {
-  test("one card per operation, with its method, path and summary", () => {
+  // Thirty-odd role queries, each working out every card's accessible name: over 5 s on a busy 2-core machine.
+  test("one card per operation, with its method, path and summary", { timeout: 30_000 }, () => {
     render(<ApiReference document={document} />);
     for (const [path, methods] of Object.entries(document.paths)) {
       for (const [method, operation] of Object.entries(methods)) {
