@@ -2,8 +2,8 @@
 // screens, small muted column headings; the caller gives the body's rows.
 import type { ReactNode } from "react";
 
-/** A column heading; numbers are right-aligned under a right-aligned heading. */
-export type Column = { label: string; align?: "right" };
+/** A column heading; numbers are right-aligned under a right-aligned heading; a hidden label is for screen readers only (a column of actions). */
+export type Column = { label: string; align?: "right"; hidden?: boolean };
 
 export function FramedTable({ label, columns, children }: { label: string; columns: readonly Column[]; children: ReactNode }) {
   return (
@@ -13,7 +13,7 @@ export function FramedTable({ label, columns, children }: { label: string; colum
           <tr>
             {columns.map((column) => (
               <th key={column.label} scope="col" className={column.align === "right" ? "px-3 py-2 text-right font-medium" : "px-3 py-2 font-medium"}>
-                {column.label}
+                {column.hidden ? <span className="sr-only">{column.label}</span> : column.label}
               </th>
             ))}
           </tr>

@@ -29,8 +29,19 @@ function Options({ versions }: { versions: readonly PickableVersion[] }) {
   );
 }
 
+/** The version picked as side A or B. */
+function SidePicker({ side, versions, value }: { side: "A" | "B"; versions: readonly PickableVersion[]; value: string | null }) {
+  return (
+    <label className="space-y-1 text-sm">
+      <span className="font-medium">{side}</span>
+      <select name={side.toLowerCase()} defaultValue={value ?? ""} required className="w-full rounded-md border border-line bg-canvas px-2 py-1.5 text-sm">
+        <Options versions={versions} />
+      </select>
+    </label>
+  );
+}
+
 export function ComparePicker({ versions, a, b }: { versions: readonly PickableVersion[]; a: string | null; b: string | null }) {
-  const select = "w-full rounded-md border border-line bg-canvas px-2 py-1.5 text-sm";
   return (
     <Form
       method="get"
@@ -38,18 +49,8 @@ export function ComparePicker({ versions, a, b }: { versions: readonly PickableV
       aria-label="Choose versions to compare"
       key={`${a}-${b}`}
     >
-      <label className="space-y-1 text-sm">
-        <span className="font-medium">A</span>
-        <select name="a" defaultValue={a ?? ""} required className={select}>
-          <Options versions={versions} />
-        </select>
-      </label>
-      <label className="space-y-1 text-sm">
-        <span className="font-medium">B</span>
-        <select name="b" defaultValue={b ?? ""} required className={select}>
-          <Options versions={versions} />
-        </select>
-      </label>
+      <SidePicker side="A" versions={versions} value={a} />
+      <SidePicker side="B" versions={versions} value={b} />
       <button type="submit" className="rounded-md bg-accent px-4 py-1.5 text-sm font-medium text-on-accent hover:bg-accent-strong">
         Compare
       </button>

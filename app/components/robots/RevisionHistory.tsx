@@ -1,6 +1,7 @@
 // Every saved revision of a robot, newest first, with a link to view each and
 // to download its JSON; and the robot pages' button that downloads one.
 import { Link } from "react-router";
+import { FramedTable, type Column } from "~/components/common/FramedTable";
 import { Section } from "~/components/common/Section";
 import { formatTime } from "~/platform/format";
 
@@ -10,6 +11,14 @@ export type RevisionRow = {
   author: { login: string; name: string } | null;
   createdAt: Date | string;
 };
+
+const COLUMNS: readonly Column[] = [
+  { label: "Revision", align: "right" },
+  { label: "Message" },
+  { label: "Author" },
+  { label: "Saved", align: "right" },
+  { label: "Actions", hidden: true },
+];
 
 const downloadPath = (robotId: string, number: number) => `/robots/${robotId}/revisions/${number}/download`;
 
@@ -25,56 +34,40 @@ export function DownloadRevisionLink({ robotId, number }: { robotId: string; num
 export function RevisionHistory({ robotId, revisions, current }: { robotId: string; revisions: readonly RevisionRow[]; current?: number }) {
   return (
     <Section title="Revision history" className="mt-10 space-y-2">
-      <div className="overflow-x-auto rounded-lg border border-line bg-surface">
-        <table className="w-full border-collapse text-left text-sm">
-          <caption className="sr-only">Revision history, newest first</caption>
-          <thead className="border-b border-line text-xs text-ink-muted">
-            <tr>
-              <th className="px-3 py-2 text-right font-medium">Revision</th>
-              <th className="px-3 py-2 font-medium">Message</th>
-              <th className="px-3 py-2 font-medium">Author</th>
-              <th className="px-3 py-2 text-right font-medium">Saved</th>
-              <th className="px-3 py-2 font-medium">
-                <span className="sr-only">Actions</span>
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {revisions.map((revision, index) => (
-              <tr key={revision.number} className={`border-b border-line last:border-0 ${revision.number === current ? "bg-accent-soft" : ""}`}>
-                <td className="px-3 py-2 text-right font-mono tabular-nums">
-                  {revision.number}
-                  {index === 0 ? <span className="ml-2 rounded bg-sunken px-1.5 py-0.5 font-sans text-xs text-ink-muted">newest</span> : null}
-                </td>
-                <td className="px-3 py-2">{revision.message || <span className="text-ink-muted">(no message)</span>}</td>
-                <td className="px-3 py-2">{revision.author?.name ?? <span className="text-ink-muted">unknown</span>}</td>
-                <td className="px-3 py-2 text-right whitespace-nowrap tabular-nums">
-                  <time dateTime={new Date(revision.createdAt).toISOString()}>{formatTime(revision.createdAt)}</time>
-                </td>
-                <td className="px-3 py-2 whitespace-nowrap">
-                  <span className="flex justify-end gap-3">
-                    <Link
-                      to={`/robots/${robotId}/revisions/${revision.number}`}
-                      className="text-accent underline underline-offset-2"
-                      aria-label={`View revision ${revision.number}`}
-                    >
-                      View
-                    </Link>
-                    <a
-                      href={downloadPath(robotId, revision.number)}
-                      download
-                      className="text-accent underline underline-offset-2"
-                      aria-label={`Download JSON of revision ${revision.number}`}
-                    >
-                      Download JSON
-                    </a>
-                  </span>
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <FramedTable label="Revision history, newest first" columns={COLUMNS}>
+        {revisions.map((revision, index) => (
+          <tr key={revision.number} className={`border-b border-line last:border-0 ${revision.number === current ? "bg-accent-soft" : ""}`}>
+            <td className="px-3 py-2 text-right font-mono tabular-nums">
+              {revision.number}
+              {index === 0 ? <span className="ml-2 rounded bg-sunken px-1.5 py-0.5 font-sans text-xs text-ink-muted">newest</span> : null}
+            </td>
+            <td className="px-3 py-2">{revision.message || <span className="text-ink-muted">(no message)</span>}</td>
+            <td className="px-3 py-2">{revision.author?.name ?? <span className="text-ink-muted">unknown</span>}</td>
+            <td className="px-3 py-2 text-right whitespace-nowrap tabular-nums">
+              <time dateTime={new Date(revision.createdAt).toISOString()}>{formatTime(revision.createdAt)}</time>
+            </td>
+            <td className="px-3 py-2 whitespace-nowrap">
+              <span className="flex justify-end gap-3">
+                <Link
+                  to={`/robots/${robotId}/revisions/${revision.number}`}
+                  className="text-accent underline underline-offset-2"
+                  aria-label={`View revision ${revision.number}`}
+                >
+                  View
+                </Link>
+                <a
+                  href={downloadPath(robotId, revision.number)}
+                  download
+                  className="text-accent underline underline-offset-2"
+                  aria-label={`Download JSON of revision ${revision.number}`}
+                >
+                  Download JSON
+                </a>
+              </span>
+            </td>
+          </tr>
+        ))}
+      </FramedTable>
     </Section>
   );
 }

@@ -2,8 +2,11 @@
 // the planned feet from DESIGN.md's formulas (helpers.straightWalkFoot), each
 // solved on its own with the kinematics' solveLeg, then the limits of
 // DESIGN.md applied by hand: joint limits, |Δangle|·fps against maxSpeedDegS
-// between frames, and the loop's last-to-first step.
+// between frames, and the loop's last-to-first step. straightTripod makes the
+// walk with the engine as well, from the same parameters, for the comparison.
+import { generateGait, solveSequence, type GaitParams } from "~/gait/index";
 import { JOINT_NAMES, neutralStance, solveLeg, type Robot } from "~/kinematics/index";
+import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
 import { straightWalkFoot } from "../helpers";
 
 export type ExpectedFlag = { kind: string; frame: number; leg: string; joint?: string; value: number; limit: number };
@@ -69,4 +72,30 @@ export function expectedStraightWalkFlags(
 /** A flag as a short comparable line: kind, frame, leg, joint. */
 export function flagKey(flag: { kind: string; frame: number; leg?: string; joint?: string }): string {
   return `${flag.kind} frame ${flag.frame} ${flag.leg ?? "-"} ${flag.joint ?? "-"}`;
+}
+
+/**
+ * A straight tripod walk of the six-legged demo robot, solved by the engine,
+ * and the flags worked out for the same walk without it (the engine gives only
+ * the legs' lift-off phases); `ease` is the swing's ease as a function.
+ */
+export function straightTripod(
+  walk: { strideMm: number; cycleMs: number; fps: number; stepHeightMm: number; swingEase?: GaitParams["swingEase"] },
+  ease: (s: number) => number,
+) {
+  const robot = loadDemoRobot(DEMO_ROBOTS.six);
+  const sequence = generateGait(robot, { template: "tripod", ...walk });
+  const solved = solveSequence(robot, sequence);
+  const expected = expectedStraightWalkFlags(robot, {
+    phase: sequence.generator.phase!,
+    // The tripod's: half the cycle on the ground.
+    dutyFactor: 0.5,
+    strideMm: walk.strideMm,
+    stepHeightMm: walk.stepHeightMm,
+    bodyHeightMm: robot.standHeight,
+    frames: Math.round((walk.cycleMs * walk.fps) / 1000),
+    fps: walk.fps,
+    ease,
+  });
+  return { robot, sequence, solved, expected };
 }

@@ -1,26 +1,12 @@
 import { describe, expect, it } from "vitest";
-import { generateGait, solveSequence } from "~/gait/index";
-import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
-import { expectedStraightWalkFlags, flagKey } from "./expected";
+import { flagKey, straightTripod } from "./expected";
 
 // A deliberately too-long stride: 320 mm a cycle for the six-legged demo robot
 // drives the coxa past ±45° at the ends of the stroke. The expected flags come
 // from DESIGN.md's foot path and the kinematics' solveLeg, not from the engine.
 describe("too-long stride: joint-limit flags exactly where DESIGN.md's foot path leaves the joint limits", () => {
-  const robot = loadDemoRobot(DEMO_ROBOTS.six);
   const linear = [0, 0, 1, 1] as [number, number, number, number];
-  const sequence = generateGait(robot, { template: "tripod", strideMm: 320, cycleMs: 2000, fps: 25, stepHeightMm: 25, swingEase: linear });
-  const solved = solveSequence(robot, sequence);
-  const expected = expectedStraightWalkFlags(robot, {
-    phase: sequence.generator.phase!,
-    dutyFactor: 0.5,
-    strideMm: 320,
-    stepHeightMm: 25,
-    bodyHeightMm: robot.standHeight,
-    frames: 50,
-    fps: 25,
-    ease: (s) => s,
-  });
+  const { solved, expected } = straightTripod({ strideMm: 320, cycleMs: 2000, fps: 25, stepHeightMm: 25, swingEase: linear }, (s) => s);
 
   it("every foot stays reachable (only the limits are passed)", () => {
     expect(expected.unreachable).toBe(0);

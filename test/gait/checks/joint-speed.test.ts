@@ -1,27 +1,14 @@
 import { describe, expect, it } from "vitest";
-import { CSS_EASE, generateGait, solveSequence } from "~/gait/index";
-import { DEMO_ROBOTS, loadDemoRobot } from "../../support/robots";
+import { CSS_EASE, solveSequence } from "~/gait/index";
 import { cssCubicBezier } from "../helpers";
-import { expectedStraightWalkFlags, flagKey } from "./expected";
+import { flagKey, straightTripod } from "./expected";
 
 // A deliberately too-fast cycle: a tripod step of 40 mm in 500 ms turns some
 // joints faster than their maxSpeedDegS. Joint speed is |Δangle| · fps between
 // frames (DESIGN.md); the expected frames come from DESIGN.md's foot path, the
 // W3C cubic-bezier definition of `ease` and the kinematics' solveLeg.
 describe("too-fast cycle: joint-speed flags exactly where |Δangle|·fps exceeds maxSpeedDegS", () => {
-  const robot = loadDemoRobot(DEMO_ROBOTS.six);
-  const sequence = generateGait(robot, { template: "tripod", strideMm: 40, cycleMs: 500, fps: 50, stepHeightMm: 25 });
-  const solved = solveSequence(robot, sequence);
-  const expected = expectedStraightWalkFlags(robot, {
-    phase: sequence.generator.phase!,
-    dutyFactor: 0.5,
-    strideMm: 40,
-    stepHeightMm: 25,
-    bodyHeightMm: robot.standHeight,
-    frames: 25,
-    fps: 50,
-    ease: cssCubicBezier(...CSS_EASE),
-  });
+  const { robot, sequence, solved, expected } = straightTripod({ strideMm: 40, cycleMs: 500, fps: 50, stepHeightMm: 25 }, cssCubicBezier(...CSS_EASE));
 
   it("flags the same frames, legs and joints, with speeds to 1e-6 °/s, and nothing else", () => {
     const want = expected.flags.map(flagKey).sort();
