@@ -7,24 +7,13 @@
 // a form posted with JavaScript off goes through the origin guard (the
 // Referrer-Policy lets Chromium name our origin).
 import http from "node:http";
+import { expectedPagePolicy } from "../test/support/page-policy";
 import { signInAs } from "./support/sign-in";
 import { expect, test, type APIResponse, type Page } from "./support/test";
 
 const signInOrigin = new URL(process.env.GITHUB_OAUTH_URL ?? "https://github.com").origin;
 
-/** The page policy of docs/decisions/010-headers.md, with `nonce`. */
-const pagePolicy = (nonce: string) =>
-  [
-    "default-src 'self'",
-    `script-src 'self' 'nonce-${nonce}'`,
-    "style-src 'self'",
-    "style-src-attr 'unsafe-inline'",
-    "img-src 'self' data:",
-    "object-src 'none'",
-    "base-uri 'self'",
-    `form-action 'self' ${signInOrigin}`,
-    "frame-ancestors 'none'",
-  ].join("; ");
+const pagePolicy = (nonce: string) => expectedPagePolicy(nonce, signInOrigin);
 
 const NOTHING_POLICY = "default-src 'none'; frame-ancestors 'none'";
 

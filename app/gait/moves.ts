@@ -38,12 +38,10 @@ const STEP_NEEDED_MM = 0.5;
 const IN_AIR_MM = 0.01;
 // Folding and unfolding follow the joints, not a straight line: a folded leg
 // sits near its inner reach, and a straight line from there to the ground cuts
-// through it. The joint path is sampled into this many keys.
-const UNFOLD_STEPS = 16;
-// Height (mm) a folding foot aims to clear the ground by mid-way, lifting the femur if needed.
-const UNFOLD_CLEARANCE_MM = 10;
-const FEMUR_LIFT_STEP_DEG = 2.5;
-const FEMUR_LIFT_MAX_DEG = 45;
+// through it. The joint path is sampled into `steps` keys; mid-way the foot
+// aims to clear the ground by `clearanceMm`, lifting the femur in steps of
+// `femurLiftStepDeg` up to `femurLiftMaxDeg` if needed.
+const UNFOLD = { steps: 16, clearanceMm: 10, femurLiftStepDeg: 2.5, femurLiftMaxDeg: 45 } as const;
 // Planned angles keep this far (degrees) inside the joint limits: sampled paths follow them only closely.
 const LIMIT_MARGIN_DEG = 1;
 // Standing points are tried at these fractions of the way from the mount to the footprint, nearest the footprint first.
@@ -108,12 +106,12 @@ function unfoldPath(robot: Robot, legId: string, ground: Vec3, restOffset: BodyP
   const easeInOut = easingFor(CSS_EASE_IN_OUT);
   let best: Vec3[] = [restFoot, ground];
   let bestScore = Number.NEGATIVE_INFINITY;
-  for (let liftDeg = 0; liftDeg <= FEMUR_LIFT_MAX_DEG; liftDeg += FEMUR_LIFT_STEP_DEG) {
+  for (let liftDeg = 0; liftDeg <= UNFOLD.femurLiftMaxDeg; liftDeg += UNFOLD.femurLiftStepDeg) {
     const path: Vec3[] = [];
     // Worst shortfall below the wanted height (negative: short of it).
     let score = Number.POSITIVE_INFINITY;
-    for (let step = 0; step <= UNFOLD_STEPS; step += 1) {
-      const s = easeInOut(step / UNFOLD_STEPS);
+    for (let step = 0; step <= UNFOLD.steps; step += 1) {
+      const s = easeInOut(step / UNFOLD.steps);
       const lift = s < UNFOLD_LIFT_SHARE ? smoothStep(s / UNFOLD_LIFT_SHARE) : smoothStep((1 - s) / UNFOLD_LIFT_SHARE);
       const move = smoothStep((s - UNFOLD_LIFT_SHARE) / (1 - 2 * UNFOLD_LIFT_SHARE));
       const plainFemur = rest.femur + (target.angles.femur - rest.femur) * move;
@@ -124,8 +122,8 @@ function unfoldPath(robot: Robot, legId: string, ground: Vec3, restOffset: BodyP
         femur: Math.min(plainFemur + liftDeg * lift, Math.max(femurMaxDeg - LIMIT_MARGIN_DEG, plainFemur)),
         tibia: rest.tibia + (target.angles.tibia - rest.tibia) * move,
       };
-      const foot = step === 0 ? restFoot : step === UNFOLD_STEPS ? ground : forwardLeg(robot, legId, angles, restOffset);
-      if (step > 0 && step < UNFOLD_STEPS) score = Math.min(score, foot[2] + bodyHeightMm - clearanceMm * Math.min(lift, swingLift(1, s) * 2));
+      const foot = step === 0 ? restFoot : step === UNFOLD.steps ? ground : forwardLeg(robot, legId, angles, restOffset);
+      if (step > 0 && step < UNFOLD.steps) score = Math.min(score, foot[2] + bodyHeightMm - clearanceMm * Math.min(lift, swingLift(1, s) * 2));
       path.push(foot);
     }
     if (score >= 0) return path;
@@ -181,7 +179,7 @@ function planMove(robot: Robot, gait: Sequence, options: MoveOptions): Plan {
   const restOffset: BodyPose = { x: 0, y: 0, z: restBodyHeightMm - bodyHeightMm, roll: 0, pitch: 0, yaw: 0 };
   const risePoses = RISE_SAMPLES.map((s) => blendPose(restOffset, startOffset, s));
   const stepHeightMm = gait.generator.stepHeightMm;
-  const clearanceMm = Math.min(stepHeightMm, UNFOLD_CLEARANCE_MM);
+  const clearanceMm = Math.min(stepHeightMm, UNFOLD.clearanceMm);
   const legs = robot.legs.map((leg): MoveLeg => {
     const solved = first.legs[leg.id];
     const firstFoot = poseApply(startOffset, solved.foot);

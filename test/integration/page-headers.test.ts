@@ -8,6 +8,7 @@
 import { createRequestHandler, UNSAFE_withComponentProps, UNSAFE_withErrorBoundaryProps, type ServerBuild } from "react-router";
 import { beforeAll, describe, expect, test } from "vitest";
 import { seedDemo } from "../../db/seed";
+import { expectedPagePolicy } from "../support/page-policy";
 import { demoIds, requestsAs, type Caller, type DemoIds } from "../support/routes";
 import * as entry from "~/entry.server";
 import { config } from "~/platform/config.server";
@@ -92,19 +93,7 @@ async function answer(caller: Caller, path: string, method = "GET"): Promise<Res
   return handle(await request(method, path));
 }
 
-/** The page policy of docs/decisions/010-headers.md, with `nonce`. */
-const pagePolicy = (nonce: string) =>
-  [
-    "default-src 'self'",
-    `script-src 'self' 'nonce-${nonce}'`,
-    "style-src 'self'",
-    "style-src-attr 'unsafe-inline'",
-    "img-src 'self' data:",
-    "object-src 'none'",
-    "base-uri 'self'",
-    `form-action 'self' ${new URL(config().github.oauthUrl).origin}`,
-    "frame-ancestors 'none'",
-  ].join("; ");
+const pagePolicy = (nonce: string) => expectedPagePolicy(nonce, new URL(config().github.oauthUrl).origin);
 
 const nonceOf = (response: Response) => /'nonce-([^']*)'/.exec(response.headers.get("Content-Security-Policy") ?? "")?.[1];
 
