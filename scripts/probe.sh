@@ -8,7 +8,8 @@
 # GitHub stand-in to sign in through). Otherwise it starts its own: a build of
 # this tree on 127.0.0.1:$GAITLOOM_PROBE_PORT (3300) with a database of its own
 # in the project-local cluster and the local fakes on the next three ports
-# (or from $GAITLOOM_PROBE_FAKE_PORT_BASE). Arguments go to scripts/probe/run.ts:
+# (or from $GAITLOOM_PROBE_FAKE_PORT_BASE), and two more app processes with
+# the rate limits on (ports + 4 and + 5) for the limit they share. Arguments go to scripts/probe/run.ts:
 # --seed N, --count N (requests), --seconds N (wall-clock cap), --concurrency N.
 set -euo pipefail
 source "$(dirname "$0")/lib/common.sh"
@@ -54,7 +55,17 @@ service_start probe-app "$LOG_DIR/app.log" env NODE_ENV=production HOST=127.0.0.
   GAITLOOM_PROBE_COUNTS=1 GAITLOOM_RATE_LIMITS=off \
   bash -c 'cd "$1" && exec node "$2/server.js" build/server/index.js' serve "$SERVE_DIR" "$ROOT"
 service_wait_port probe-app "$APP_PORT" "$LOG_DIR/app.log"
+# Two more processes on the same database with the rate limits on: one token's
+# calls spread over both must meet one allowance (decision 009).
+LIMITED_APPS=""
+for port in $((APP_PORT + 4)) $((APP_PORT + 5)); do
+  port_in_use "$port" && die "Port $port on 127.0.0.1 is taken (the probe's rate-limited apps use GAITLOOM_PROBE_PORT + 4 and + 5)."
+  service_start "probe-limited-$port" "$LOG_DIR/limited-$port.log" env NODE_ENV=production HOST=127.0.0.1 PORT="$port" \
+    bash -c 'cd "$1" && exec node "$2/server.js" build/server/index.js' serve "$SERVE_DIR" "$ROOT"
+  service_wait_port "probe-limited-$port" "$port" "$LOG_DIR/limited-$port.log"
+  LIMITED_APPS="${LIMITED_APPS:+$LIMITED_APPS,}http://127.0.0.1:$port"
+done
 
 say "probing $PUBLIC_URL (the app's log: $LOG_DIR/app.log)"
 (cd "$ROOT" && GAITLOOM_PROBE_SESSION_SECRET="$SESSION_SECRET" npx tsx scripts/probe/run.ts --url "$PUBLIC_URL" \
-  --app-log "$LOG_DIR/app.log" --report "$LOG_DIR/report.json" "$@")
+  --app-log "$LOG_DIR/app.log" --report "$LOG_DIR/report.json" --limited-apps "$LIMITED_APPS" "$@")

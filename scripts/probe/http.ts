@@ -22,6 +22,8 @@ export type Answer = {
   /** The handlers the app entered (its X-Gaitloom-Probe-Reached header): "routes/robots/list action", … */
   reached: string[];
   location: string | null;
+  /** Every header as sent, by lower-case name, so a header sent twice shows ({} when no answer came). */
+  headers: Record<string, string[]>;
   /** Retry-After, on a refusal for now (a full worker queue: 503). */
   retryAfter: string | null;
   /** The start of the answer's body, for the report. */
@@ -65,7 +67,7 @@ export function send(origin: URL, sent: Sent, agent: Agent, timeoutMs: number): 
       req = httpRequest({ host: origin.hostname, port: origin.port, method: sent.method, path: sent.path, headers, agent, setHost: !("Host" in headers) });
     } catch (error) {
       // Node refused to send it (a character it will not put on the wire): not the app's doing.
-      resolve({ status: null, reached: [], location: null, retryAfter: null, excerpt: "", error: `not sent: ${(error as Error).message}`, ms: 0 });
+      resolve({ status: null, reached: [], location: null, headers: {}, retryAfter: null, excerpt: "", error: `not sent: ${(error as Error).message}`, ms: 0 });
       return;
     }
     const timer = setTimeout(() => {
@@ -89,6 +91,7 @@ export function send(origin: URL, sent: Sent, agent: Agent, timeoutMs: number): 
             .split(",")
             .map((entry) => entry.trim())
             .filter(Boolean),
+          headers: headersAsSent(res.rawHeaders),
           retryAfter: typeof res.headers["retry-after"] === "string" ? res.headers["retry-after"] : null,
           location: typeof res.headers.location === "string" ? res.headers.location : ((res.headers["x-remix-redirect"] as string | undefined) ?? null),
           excerpt: Buffer.concat(chunks).subarray(0, EXCERPT_BYTES).toString("utf8"),
@@ -102,7 +105,7 @@ export function send(origin: URL, sent: Sent, agent: Agent, timeoutMs: number): 
     req.on("error", (error) => {
       // Writing on after an early answer (a 413 before the body was all sent) fails: the answer stands.
       if (answered) return;
-      finish({ status: null, reached: [], location: null, retryAfter: null, excerpt: "", error: error.message });
+      finish({ status: null, reached: [], location: null, headers: {}, retryAfter: null, excerpt: "", error: error.message });
     });
     if (!body) {
       req.end();
@@ -113,6 +116,12 @@ export function send(origin: URL, sent: Sent, agent: Agent, timeoutMs: number): 
       void writeLarge(req, body, () => answered || done).then((complete) => (written = complete));
     }
   });
+}
+
+function headersAsSent(raw: string[]): Record<string, string[]> {
+  const headers: Record<string, string[]> = {};
+  for (let i = 0; i + 1 < raw.length; i += 2) (headers[raw[i].toLowerCase()] ??= []).push(raw[i + 1]);
+  return headers;
 }
 
 /** Writes the body until it is all sent (true) or the answer came first (false). */

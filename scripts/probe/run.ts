@@ -13,9 +13,11 @@
 import { closeSync, openSync, readSync, statSync, writeFileSync } from "node:fs";
 import { parseArgs } from "node:util";
 import { allowedIdentity, build, everyField, FAMILIES, type Case, type Context } from "./cases";
+import { headerProblems } from "./headers";
 import { bodySize, isLargeBody, makeAgent, send, type Answer } from "./http";
 import { random } from "./prng";
 import { isLoopbackHost, prepareWorld } from "./setup";
+import { probeSharedLimit, TOKEN_CALLS_A_MINUTE, type SharedLimitResult } from "./shared-limit";
 import { addOpenApiDetails, loadRoutes, targetsOf, type Target } from "./targets";
 
 const { values: options } = parseArgs({
@@ -28,6 +30,8 @@ const { values: options } = parseArgs({
     timeout: { type: "string", default: "30" },
     "app-log": { type: "string" },
     report: { type: "string" },
+    // Two or more apps on the probe's database with the rate limits on, for the shared-limit check.
+    "limited-apps": { type: "string" },
   },
 });
 
@@ -52,8 +56,14 @@ try {
 } catch {
   die(`${options.url} is not a URL.`);
 }
-if (origin.protocol !== "http:" || !isLoopbackHost(origin.hostname)) {
-  die(`Refusing to probe ${origin.origin}: the probe sends hostile requests to loopback only (127.0.0.1, localhost, ::1).`);
+const limitedApps = (options["limited-apps"] ?? "")
+  .split(",")
+  .filter(Boolean)
+  .map((url) => (URL.canParse(url) ? new URL(url) : die(`--limited-apps: ${url} is not a URL.`)));
+for (const app of [origin, ...limitedApps]) {
+  if (app.protocol !== "http:" || !isLoopbackHost(app.hostname)) {
+    die(`Refusing to probe ${app.origin}: the probe sends hostile requests to loopback only (127.0.0.1, localhost, ::1).`);
+  }
 }
 
 const startedAt = performance.now();
@@ -115,6 +125,8 @@ const serverErrors: { item: Case; answer: Answer }[] = [];
 const offSite: { item: Case; answer: Answer }[] = [];
 const unanswered: { item: Case; answer: Answer }[] = [];
 const unexpected: { item: Case; answer: Answer }[] = [];
+const badHeaders: { item: Case; answer: Answer; problems: string[] }[] = [];
+const nonces = new Set<string>();
 let handlerEntries = 0;
 let sent = 0;
 let stoppedByClock = false;
@@ -147,12 +159,22 @@ function record(item: Case, answer: Answer) {
   }
   const forNow = answer.status === 503 && answer.retryAfter;
   if (item.expect && answer.status !== null && !forNow && !isServerError(answer) && !item.expect.holds(answer)) unexpected.push({ item, answer });
+  if (answer.status !== null) {
+    const problems = headerProblems(answer, { signInOrigin: world.githubOrigin, personal: carriesLiveSession(item), method: item.sent.method, nonces });
+    if (problems.length) badHeaders.push({ item, answer, problems });
+  }
   if (answer.location) {
     const target = URL.canParse(answer.location, origin) ? new URL(answer.location, origin) : null;
     // Signing in starts at GitHub's authorize page (the local stand-in's here).
     const toGitHub = target?.origin === world.githubOrigin && target.pathname === "/login/oauth/authorize";
     if (!target || (target.origin !== origin.origin && !toGitHub)) offSite.push({ item, answer });
   }
+}
+
+/** The request carries one session cookie, and it is one of the sessions that stay signed in. */
+function carriesLiveSession(item: Case): boolean {
+  const sessions = (item.sent.headers.Cookie ?? "").split(/;\s*/).filter((pair) => pair.startsWith("gaitloom_session="));
+  return sessions.length === 1 && world.liveSessions.includes(sessions[0].slice("gaitloom_session=".length));
 }
 
 const countsBefore = await appCounts();
@@ -176,6 +198,11 @@ async function worker() {
 await Promise.all(Array.from({ length: concurrency }, worker));
 agent.destroy();
 const countsAfter = await appCounts();
+let sharedLimit: SharedLimitResult | null = null;
+if (limitedApps.length > 1) {
+  say(`one token, ${2 * TOKEN_CALLS_A_MINUTE} calls spread over ${limitedApps.length} app processes with the limits on`);
+  sharedLimit = await probeSharedLimit(limitedApps, world.limitToken, world.githubOrigin);
+}
 
 // ---------------------------------------------------------------------------
 // The report
@@ -244,6 +271,16 @@ if (unexpected.length) {
   say(`answers other than the case expects (first 20 of ${unexpected.length}):`);
   for (const entry of unexpected.slice(0, 20)) console.log(`${describe(entry)}\n      expected: ${entry.item.expect!.what}`);
 }
+if (badHeaders.length) {
+  say(`answers without the headers of decision 010 (first 20 of ${badHeaders.length}):`);
+  for (const entry of badHeaders.slice(0, 20)) console.log(`${describe(entry)}\n      ${entry.problems.join("\n      ")}`);
+}
+if (sharedLimit) {
+  say(
+    `shared limit: ${sharedLimit.answered200} of ${sharedLimit.sent} calls answered 200 and ${sharedLimit.refused429} refused 429 across ${limitedApps.length} app processes (allowance ${TOKEN_CALLS_A_MINUTE} a minute)`,
+  );
+  for (const problem of sharedLimit.problems.slice(0, 20)) console.log(`  ${problem}`);
+}
 for (const target of unreached) say(`never reached: ${targetKey(target)}`);
 if (options.report) {
   writeFileSync(
@@ -261,6 +298,8 @@ if (options.report) {
         offSite: offSite.map(reportEntry),
         unexpected: unexpected.map((entry) => ({ ...reportEntry(entry), expected: entry.item.expect!.what })),
         unanswered: unanswered.map(reportEntry),
+        sharedLimit,
+        badHeaders: badHeaders.map((entry) => ({ ...reportEntry(entry), problems: entry.problems })),
       },
       null,
       1,
@@ -271,8 +310,11 @@ if (options.report) {
 if (offSite.length) console.log(`${offSite.length} redirects off the site`);
 if (unreached.length) console.log(`${unreached.length} loaders, actions or intents never reached`);
 if (unexpected.length) console.log(`${unexpected.length} answers other than expected`);
+if (badHeaders.length) console.log(`${badHeaders.length} answers without the headers every answer carries`);
+console.log(`${nonces.size} pages, each with a nonce of its own`);
+if (sharedLimit?.problems.length) console.log(`the limit two app processes share: ${sharedLimit.problems.length} problems`);
 console.log(`${serverErrors.length} server errors`);
-process.exit(serverErrors.length || unreached.length || offSite.length || unexpected.length ? 1 : 0);
+process.exit(serverErrors.length || unreached.length || offSite.length || unexpected.length || badHeaders.length || sharedLimit?.problems.length ? 1 : 0);
 
 function reportEntry({ item, answer }: { item: Case; answer: Answer }) {
   const body = item.sent.body;

@@ -54,6 +54,8 @@ export type World = {
    * `ids`, so no request resends or revokes it.
    */
   foreignInvitation: { token: string; id: string } | null;
+  /** A token of firmware's no other case uses, for the limit two app processes share. */
+  limitToken: string;
 };
 
 const UUID = /[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/g;
@@ -333,6 +335,7 @@ export async function prepareWorld(url: string, tag: string): Promise<World> {
   const forged = await forgedSessions(home, foreignWorkspace);
   identities.push(...forged);
 
+  const limitToken = await setup.createToken(jars.firmware, `probe ${tag} shared limit`);
   const openApi = await setup.json<unknown>("/api/v1/openapi.json", tokens.owner);
   const liveSessions = [...Object.values(jars), outsider].map((jar) => jar.get("gaitloom_session") ?? "").filter(Boolean);
   return {
@@ -347,6 +350,7 @@ export async function prepareWorld(url: string, tag: string): Promise<World> {
     throwaway,
     endedSessions,
     foreignInvitation,
+    limitToken,
   };
 }
 
