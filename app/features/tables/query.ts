@@ -210,7 +210,7 @@ export function tableHeaders(etag: string, rendered?: RenderedTable): Headers {
     // Private (it came with credentials), and checked with If-None-Match before every reuse.
     "Cache-Control": "private, no-cache",
     Vary: "Authorization, Cookie",
-    "X-Content-Type-Options": "nosniff",
+    // X-Content-Type-Options comes from server.js, on every answer: set here too, it went out twice.
   });
   if (!rendered) return headers;
   const { meta } = rendered.data;
