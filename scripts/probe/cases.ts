@@ -504,6 +504,15 @@ export type Family = {
 };
 
 const isAction = (target: Target) => target.kind === "action";
+/** A family that applies to every action, sent as a caller allowed to reach it. */
+const everyAction = (name: string, weight: number, make: (target: Target, context: Context & { identity: Identity }) => Case): Family => ({
+  name,
+  weight,
+  applies: isAction,
+  make: (target, context) => make(target, asAllowed(target, context)),
+});
+/** The context with an identity allowed to reach `target`: most families send as a caller who may. */
+const asAllowed = (target: Target, context: Context) => ({ ...context, identity: allowedIdentity(target, context.world, context.random) });
 const isLoader = (target: Target) => target.kind === "loader";
 const fieldsOf = (target: Target, kinds: Field["kind"][]) => [...target.fields, ...target.query].filter((field) => kinds.includes(field.kind));
 const hasParam = (target: Target) => /[:*]/.test(target.route.pattern);
@@ -890,62 +899,43 @@ export const FAMILIES: Family[] = [
       return build(target, { identity, origin, headers }, context, "cross-origin", origin === null ? "no Origin" : `Origin: ${origin || "(empty)"}`);
     },
   },
-  {
-    name: "content-type",
-    weight: 5,
-    applies: isAction,
-    make(target, context) {
-      const { random, world } = context;
-      const identity = allowedIdentity(target, world, random);
-      const choice = target.body === "json" ? random.pick(CROSS_CONTENT_TYPES_FOR_JSON) : random.pick(CROSS_CONTENT_TYPES_FOR_FORMS);
-      return build(target, { identity, body: choice.body(target), contentType: choice.contentType }, context, "content-type", choice.note);
-    },
-  },
-  {
-    name: "empty body",
-    weight: 3,
-    applies: isAction,
-    make(target, context) {
-      const { random, world } = context;
-      const identity = allowedIdentity(target, world, random);
-      const choice = random.pick([
-        { body: Buffer.alloc(0), contentType: target.body === "json" ? "application/json" : "application/x-www-form-urlencoded", note: "an empty body" },
-        { body: Buffer.alloc(0), contentType: null, note: "no body and no Content-Type" },
-        { body: Buffer.from(" \n\t"), contentType: target.body === "json" ? "application/json" : "application/x-www-form-urlencoded", note: "whitespace only" },
-        { body: Buffer.from(`intent=${target.intent ?? ""}`), contentType: "application/x-www-form-urlencoded", note: "only the intent" },
-        { body: Buffer.alloc(0), contentType: "multipart/form-data; boundary=abc", note: "an empty multipart body" },
-      ]);
-      return build(target, { identity, body: choice.body, contentType: choice.contentType }, context, "empty body", choice.note);
-    },
-  },
-  {
-    name: "over the limit",
-    weight: 3,
-    applies: isAction,
-    make(target, context) {
-      const { random, world } = context;
-      const identity = allowedIdentity(target, world, random);
-      const size = random.weighted([
-        [5, 17 * 1024],
-        [4, 70 * 1024],
-        [3, 290 * 1024],
-        [2, 1200 * 1024],
-        [2, 2200 * 1024],
-        [1, 9 * 1024 * 1024],
-        [1, 17 * 1024 * 1024],
-      ]);
-      const chunked = random.chance(0.5);
-      const { body, contentType } = largeBody(target, size, chunked, random);
-      return build(target, { identity, body, contentType }, context, "over the limit", `${Math.round(size / 1024)} KB ${chunked ? "chunked" : "declared"}`);
-    },
-  },
+  everyAction("content-type", 5, (target, context) => {
+    const { random, identity } = context;
+    const choice = target.body === "json" ? random.pick(CROSS_CONTENT_TYPES_FOR_JSON) : random.pick(CROSS_CONTENT_TYPES_FOR_FORMS);
+    return build(target, { identity, body: choice.body(target), contentType: choice.contentType }, context, "content-type", choice.note);
+  }),
+  everyAction("empty body", 3, (target, context) => {
+    const { random, identity } = context;
+    const choice = random.pick([
+      { body: Buffer.alloc(0), contentType: target.body === "json" ? "application/json" : "application/x-www-form-urlencoded", note: "an empty body" },
+      { body: Buffer.alloc(0), contentType: null, note: "no body and no Content-Type" },
+      { body: Buffer.from(" \n\t"), contentType: target.body === "json" ? "application/json" : "application/x-www-form-urlencoded", note: "whitespace only" },
+      { body: Buffer.from(`intent=${target.intent ?? ""}`), contentType: "application/x-www-form-urlencoded", note: "only the intent" },
+      { body: Buffer.alloc(0), contentType: "multipart/form-data; boundary=abc", note: "an empty multipart body" },
+    ]);
+    return build(target, { identity, body: choice.body, contentType: choice.contentType }, context, "empty body", choice.note);
+  }),
+  everyAction("over the limit", 3, (target, context) => {
+    const { random, identity } = context;
+    const size = random.weighted([
+      [5, 17 * 1024],
+      [4, 70 * 1024],
+      [3, 290 * 1024],
+      [2, 1200 * 1024],
+      [2, 2200 * 1024],
+      [1, 9 * 1024 * 1024],
+      [1, 17 * 1024 * 1024],
+    ]);
+    const chunked = random.chance(0.5);
+    const { body, contentType } = largeBody(target, size, chunked, random);
+    return build(target, { identity, body, contentType }, context, "over the limit", `${Math.round(size / 1024)} KB ${chunked ? "chunked" : "declared"}`);
+  }),
   {
     name: "invalid JSON",
     weight: 3,
     applies: (target) => target.body === "json" || fieldsOf(target, ["robot-json", "sequence-json", "calibration-json"]).length > 0,
     make(target, context) {
-      const { random, world } = context;
-      const identity = allowedIdentity(target, world, random);
+      const { random, identity } = asAllowed(target, context);
       const bad = random.pick(INVALID_JSON);
       if (target.body === "json") return build(target, { identity, body: Buffer.from(bad) }, context, "invalid JSON", JSON.stringify(bad));
       const field = random.pick(fieldsOf(target, ["robot-json", "sequence-json", "calibration-json"]));
@@ -957,8 +947,7 @@ export const FAMILIES: Family[] = [
     weight: 3,
     applies: (target) => target.body === "json" || fieldsOf(target, ["robot-json", "sequence-json", "calibration-json", "robot-file"]).length > 0,
     make(target, context) {
-      const { random, world } = context;
-      const identity = allowedIdentity(target, world, random);
+      const { random, identity } = asAllowed(target, context);
       const { text: json, note } = deepJson(random);
       if (target.body === "json") {
         if (random.chance(0.5) || !target.fields.length) return build(target, { identity, body: Buffer.from(json) }, context, "deep or huge JSON", note);
@@ -1160,8 +1149,7 @@ export const FAMILIES: Family[] = [
     weight: 3,
     applies: (target) => fieldsOf(target, ["urdf-file"]).length > 0,
     make(target, context) {
-      const { random, world } = context;
-      const identity = allowedIdentity(target, world, random);
+      const { random, identity } = asAllowed(target, context);
       const choice = random.pick(URDFS);
       return build(target, { identity, fields: [["file", text(choice.text)]] }, context, "URDF", choice.note);
     },
@@ -1171,8 +1159,7 @@ export const FAMILIES: Family[] = [
     weight: 4,
     applies: (target) => fieldsOf(target, ["robot-json", "robot-file"]).length > 0,
     make(target, context) {
-      const { random, world } = context;
-      const identity = allowedIdentity(target, world, random);
+      const { random, world, identity } = asAllowed(target, context);
       const ids = ownIds(world, identity);
       const robotId = ids.robots.length ? random.pick(ids.robots) : "";
       const { robot, note } = hostileRobot(world.definitions[robotId], random);
@@ -1185,8 +1172,7 @@ export const FAMILIES: Family[] = [
     weight: 3,
     applies: (target) => fieldsOf(target, ["sequence-json"]).length > 0 || target.fields.some((field) => field.name === "cycleMs"),
     make(target, context) {
-      const { random, world } = context;
-      const identity = allowedIdentity(target, world, random);
+      const { random, world, identity } = asAllowed(target, context);
       if (!fieldsOf(target, ["sequence-json"]).length) {
         const fields: [string, Value][] = [
           ["cycleMs", text(random.pick(["600000", "1e9", "99999999999"]))],
