@@ -9,6 +9,7 @@ import { database } from "~/platform/db.server";
 import { sessionStorage } from "~/platform/session.server";
 import * as gitHubSignIn from "~/routes/auth/github";
 import * as signIn from "~/routes/auth/sign-in";
+import * as gaitList from "~/routes/gaits/list";
 import * as workspaceSwitch from "~/routes/workspace-switch";
 
 let ids: DemoIds;
@@ -63,5 +64,22 @@ describe("POST /workspace returns to a checked address", () => {
     const answer = await outcome(async () => act(workspaceSwitch, await request("POST", "/workspace", { form: { workspaceId: ids.workspaceId, returnTo } })));
     expect(answer.status).toBe(302);
     expect(answer.location).toBe(expected);
+  });
+});
+
+describe("a page asked for while signed out sends to sign-in with its own address", () => {
+  test("the path and query, encoded", async () => {
+    const request = await requestsAs("signed-out", ids);
+    const answer = await outcome(async () => load(gaitList, await request("GET", "/gaits?sort=date")));
+    expect(answer.status).toBe(302);
+    expect(answer.location).toBe(`/sign-in?returnTo=${encodeURIComponent("/gaits?sort=date")}`);
+  });
+
+  // The probe's 16 KB query once gave a Location longer than Node's 16 KB header limit; sign-in would drop it anyway (2 KB at most).
+  test("only the path when the query makes the address longer than sign-in keeps", async () => {
+    const request = await requestsAs("signed-out", ids);
+    const answer = await outcome(async () => load(gaitList, await request("GET", `/gaits?q=${"x".repeat(16 * 1024)}`)));
+    expect(answer.status).toBe(302);
+    expect(answer.location).toBe(`/sign-in?returnTo=${encodeURIComponent("/gaits")}`);
   });
 });
