@@ -9,7 +9,7 @@ import type { Database } from "../../db/client";
 import { database } from "./db.server";
 import { type Action, can, refusal } from "./permissions";
 import { checkFailedTokenAttempts, countFailedTokenAttempt, countRequest, type Verdict } from "./rate-limit.server";
-import { readSession } from "./session.server";
+import { readSession, RETURN_TO_LIMIT } from "./session.server";
 
 export type User = typeof users.$inferSelect;
 export type Workspace = typeof workspaces.$inferSelect;
@@ -50,7 +50,9 @@ export async function requireUser(request: Request): Promise<User> {
   if (user) return user;
   if (isRead(request)) {
     const url = new URL(request.url);
-    throw redirect(`/sign-in?returnTo=${encodeURIComponent(url.pathname + url.search)}`);
+    // Sign-in keeps 2 KB of return address at most: a longer one goes back to the path alone, or home.
+    const address = [url.pathname + url.search, url.pathname].find((candidate) => candidate.length <= RETURN_TO_LIMIT) ?? "/";
+    throw redirect(`/sign-in?returnTo=${encodeURIComponent(address)}`);
   }
   throw data({ message: "Sign in first." }, { status: 401 });
 }

@@ -149,7 +149,7 @@ export async function startSession(previous: AppSession, userId: string): Promis
 export const publicSessionId = (id: string): string => createHash("sha256").update(id).digest("hex");
 
 // Longer than this, the address would crowd the session cookie (about 4 KB in all).
-const RETURN_TO_LIMIT = 2048;
+export const RETURN_TO_LIMIT = 2048;
 // eslint-disable-next-line no-control-regex -- control characters are what it finds
 const CONTROL_OR_BACKSLASH = /[\u0000-\u001f\u007f\\]/;
 
