@@ -355,7 +355,13 @@ export async function saveRevision(save: SaveRequest): Promise<SavedRevision> {
           action: "robot.save",
           targetType: "robot",
           targetId: robot.id,
-          details: { revision: number, changedFields: changes.length },
+          // The name as saved, so the entry names the robot even after a later rename or deletion.
+          details: {
+            name: definition.name,
+            ...(definition.name !== robot.name ? { renamedFrom: robot.name } : {}),
+            revision: number,
+            changedFields: changes.length,
+          },
         },
         tx,
       );
