@@ -92,7 +92,10 @@ const STATUS_RESPONSES = {
   401: ["Unauthorized", "No session and no bearer token, a malformed Authorization header, or an unknown or revoked token."],
   403: ["Forbidden", "The role cannot do this (the message says which), or a cookie-carrying mutation from another origin."],
   404: ["NotFound", "Nothing by that id in the caller's workspace (another workspace's things are not found either)."],
-  409: ["Conflict", "A conflict with the current state: a stale revision, or a table that needs an override reason."],
+  409: [
+    "Conflict",
+    "A conflict with the current state: a stale revision, a table that needs an override reason, or a delete refused while the object is not archived or something still references it (`details.reason`, and `details.references` lists what).",
+  ],
   413: ["PayloadTooLarge", "The body is larger than the route's limit (the message gives both sizes)."],
   422: ["Unprocessable", "The input is well-formed but invalid: `details` lists the issues as `{ path, message }`."],
   429: [
