@@ -89,7 +89,7 @@ const ERROR_CODES: ApiErrorCode[] = [
 
 const STATUS_RESPONSES = {
   400: ["BadRequest", "The request is malformed: a parameter or the JSON body; `details.parameter` names a bad query parameter."],
-  401: ["Unauthorized", "No session and no bearer token, a malformed Authorization header, or an unknown or revoked token."],
+  401: ["Unauthorized", "No session and no bearer token, a malformed Authorization header, or an unknown, revoked or expired token (the message says which)."],
   403: ["Forbidden", "The role cannot do this (the message says which), or a cookie-carrying mutation from another origin."],
   404: ["NotFound", "Nothing by that id in the caller's workspace (another workspace's things are not found either)."],
   409: [
