@@ -31,7 +31,7 @@ export function ArchiveControls({ kind, id, name, archivedAt, can, variant = "pa
   if (!can.archive && !can.delete && archivedAt === null) return null;
   const references = answer && "error" in answer ? (answer.details?.references ?? []) : [];
   return (
-    <div className={`flex flex-col gap-2 ${variant === "page" ? "items-end" : "items-start"}`}>
+    <div className={variant === "page" ? "relative flex items-center" : "flex flex-col items-start gap-2"}>
       <div className="flex flex-wrap items-center gap-2">
         {archivedAt !== null && variant === "page" ? (
           <span className="rounded-full bg-sunken px-2.5 py-1 text-xs font-medium text-ink-muted">Archived {formatDate(archivedAt)}</span>
@@ -52,52 +52,55 @@ export function ArchiveControls({ kind, id, name, archivedAt, can, variant = "pa
           </button>
         ) : null}
       </div>
-      {confirming ? (
-        <div
-          role="group"
-          aria-label={`Delete ${name} for good?`}
-          className="flex max-w-md flex-wrap items-center gap-2 rounded-md border border-danger bg-danger-soft px-3 py-2 text-sm"
-        >
-          <span className="text-danger">Delete {name} for good? This cannot be undone.</span>
-          <button
-            type="button"
-            className="rounded-md bg-danger px-3 py-1 font-medium text-on-accent disabled:opacity-60"
-            disabled={busy}
-            onClick={() => {
-              setConfirming(false);
-              post("delete");
-            }}
+      {/* On a page, what follows opens below the buttons, over the page, so the header keeps its height. */}
+      <div className={variant === "page" ? "absolute top-full right-0 z-10 mt-2 flex w-max max-w-md flex-col items-end gap-2" : "contents"}>
+        {confirming ? (
+          <div
+            role="group"
+            aria-label={`Delete ${name} for good?`}
+            className="flex max-w-md flex-wrap items-center gap-2 rounded-md border border-danger bg-danger-soft px-3 py-2 text-sm"
           >
-            Delete for good
-          </button>
-          <button type="button" className={button} onClick={() => setConfirming(false)}>
-            Keep it
-          </button>
-        </div>
-      ) : null}
-      {answer && "error" in answer ? (
-        <div role="alert" className="max-w-md rounded-md bg-danger-soft px-3 py-2 text-sm text-danger">
-          <p>{answer.error}</p>
-          {references.some((reference) => reference.kind === "gait") ? (
-            <ul className="mt-1 list-disc pl-5">
-              {references
-                .filter((reference) => reference.kind === "gait")
-                .map((reference) => (
-                  <li key={reference.id}>
-                    <Link to={`/gaits/${reference.id}`} className="underline underline-offset-2">
-                      {reference.name}
-                    </Link>
-                  </li>
-                ))}
-            </ul>
-          ) : null}
-        </div>
-      ) : null}
-      {answer && "ok" in answer ? (
-        <p role="status" className="max-w-md rounded-md bg-ok-soft px-3 py-2 text-sm text-ok">
-          {answer.notice}
-        </p>
-      ) : null}
+            <span className="text-danger">Delete {name} for good? This cannot be undone.</span>
+            <button
+              type="button"
+              className="rounded-md bg-danger px-3 py-1 font-medium text-on-accent disabled:opacity-60"
+              disabled={busy}
+              onClick={() => {
+                setConfirming(false);
+                post("delete");
+              }}
+            >
+              Delete for good
+            </button>
+            <button type="button" className={button} onClick={() => setConfirming(false)}>
+              Keep it
+            </button>
+          </div>
+        ) : null}
+        {answer && "error" in answer ? (
+          <div role="alert" className="max-w-md rounded-md bg-danger-soft px-3 py-2 text-sm text-danger shadow-sm">
+            <p>{answer.error}</p>
+            {references.some((reference) => reference.kind === "gait") ? (
+              <ul className="mt-1 list-disc pl-5">
+                {references
+                  .filter((reference) => reference.kind === "gait")
+                  .map((reference) => (
+                    <li key={reference.id}>
+                      <Link to={`/gaits/${reference.id}`} className="underline underline-offset-2">
+                        {reference.name}
+                      </Link>
+                    </li>
+                  ))}
+              </ul>
+            ) : null}
+          </div>
+        ) : null}
+        {answer && "ok" in answer ? (
+          <p role="status" className="max-w-md rounded-md bg-ok-soft px-3 py-2 text-sm text-ok shadow-sm">
+            {answer.notice}
+          </p>
+        ) : null}
+      </div>
     </div>
   );
 }

@@ -111,7 +111,9 @@ export default function Audit({ loaderData }: Route.ComponentProps) {
   const last = page.newerCount + page.entries.length;
   return (
     <div className="space-y-4">
+      {/* Keyed by the filter in the address, so the fields show it after every navigation (Clear, a link, back). */}
       <Form
+        key={["who", "object", "action", "q"].map((name) => searchParams.get(name) ?? "").join("|")}
         method="get"
         role="search"
         aria-label="Filter the audit log"
@@ -176,7 +178,7 @@ export default function Audit({ loaderData }: Route.ComponentProps) {
             Show
           </button>
           {filtered ? (
-            <Link to="." className="rounded-md border border-line px-3 py-1.5 text-sm font-medium hover:bg-sunken">
+            <Link to="/settings/audit" className="rounded-md border border-line px-3 py-1.5 text-sm font-medium hover:bg-sunken">
               Clear
             </Link>
           ) : null}
@@ -189,7 +191,9 @@ export default function Audit({ loaderData }: Route.ComponentProps) {
             ? filtered
               ? "No entry matches this filter."
               : "Nothing has been recorded yet."
-            : `Entries ${first}–${last} of ${page.total}${filtered ? " that match" : ""}, newest first.`}
+            : page.total === 1
+              ? `1 entry${filtered ? " matches" : ""}.`
+              : `Entries ${first}–${last} of ${page.total}${filtered ? " that match" : ""}, newest first.`}
         </p>
         <PageLinks newer={page.newer} older={page.older} atNewest={page.newerCount === 0} pageLink={pageLink} />
       </nav>
@@ -200,14 +204,12 @@ export default function Audit({ loaderData }: Route.ComponentProps) {
             Audit log entries {first} to {last}, newest first
           </caption>
           <colgroup>
-            <col className="w-44" />
-            <col className="w-44" />
+            <col className="w-48" />
             <col />
           </colgroup>
           <thead className="border-b border-line text-ink-muted">
             <tr>
               <th className="px-4 py-2 font-medium">When (UTC)</th>
-              <th className="px-4 py-2 font-medium">Who</th>
               <th className="px-4 py-2 font-medium">What</th>
             </tr>
           </thead>
@@ -215,7 +217,6 @@ export default function Audit({ loaderData }: Route.ComponentProps) {
             {page.entries.map((entry) => (
               <tr key={entry.id} className="border-b border-line align-top last:border-0">
                 <td className="px-4 py-2 font-mono text-xs whitespace-nowrap tabular-nums">{formatTime(entry.at, { seconds: true, zone: false })}</td>
-                <td className="px-4 py-2 break-words">{entry.actor?.name ?? <span className="text-ink-muted">Gaitloom</span>}</td>
                 <td className="px-4 py-2 break-words">
                   <Sentence parts={entry.sentence} />
                   <details className="mt-1">
