@@ -42,6 +42,8 @@ async function seedRobot(options: { archived?: boolean; gait?: string } = {}) {
 }
 
 test.use({ viewport: { width: 1440, height: 900 } });
+// Each test is a journey through four or five pages with an axe run on most: two journeys' time on a loaded 2-core machine.
+test.describe.configure({ timeout: 120_000 });
 
 test("an animator archives a robot from its page; it leaves the list, waits under Archived, and comes back when restored", async ({ page }) => {
   const robot = await seedRobot();
