@@ -73,7 +73,7 @@ const lifetime = (days: number) => (days === 365 ? "1 year" : `${days} days`);
 export default function Tokens({ loaderData, actionData }: Route.ComponentProps) {
   const created = actionData && "created" in actionData ? actionData.created : null;
   return (
-    <div className="max-w-3xl space-y-6">
+    <div className="max-w-4xl space-y-6">
       <p className="text-ink-muted">
         A token acts with your role in {loaderData.workspace} and nowhere else. Send it as{" "}
         <code className="font-mono">Authorization: Bearer &lt;token&gt;</code> to {loaderData.apiUrl}.
@@ -145,9 +145,9 @@ export default function Tokens({ loaderData, actionData }: Route.ComponentProps)
               <tr key={token.id} className="border-b border-line last:border-0">
                 <td className="px-4 py-2 font-medium">{token.name}</td>
                 <td className="px-4 py-2 font-mono">{token.prefix}…</td>
-                <td className="px-4 py-2 text-right">{when(token.createdAt)}</td>
-                <td className="px-4 py-2 text-right">{when(token.lastUsedAt)}</td>
-                <td className="px-4 py-2 text-right">
+                <td className="px-4 py-2 text-right whitespace-nowrap tabular-nums">{when(token.createdAt)}</td>
+                <td className="px-4 py-2 text-right whitespace-nowrap tabular-nums">{when(token.lastUsedAt)}</td>
+                <td className="px-4 py-2 text-right whitespace-nowrap tabular-nums">
                   {token.expiresAt === null ? (
                     "never"
                   ) : new Date(token.expiresAt).getTime() <= loaderData.now ? (
