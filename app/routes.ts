@@ -3,6 +3,7 @@
 // matrix and the OpenAPI document read it there.
 import { type RouteConfig, index, layout, prefix, route } from "@react-router/dev/routes";
 import { exportApi } from "./routes/api.v1/export/routes";
+import { gaitArchiveApi } from "./routes/api.v1/gaits/archive-routes";
 import { editorApi } from "./routes/api.v1/gaits/editor-routes";
 import { versionApi } from "./routes/api.v1/gaits/version-routes";
 import { robotApi } from "./routes/api.v1/robots/routes";
@@ -19,6 +20,7 @@ export default [
     route("ik", "routes/api.v1/solver/ik.ts"),
     ...robotApi,
     ...editorApi,
+    ...gaitArchiveApi,
     ...versionApi,
     ...exportApi,
     // Any other address under /api/v1: a JSON 404, not the shell's HTML page.
@@ -35,7 +37,7 @@ export default [
     route("account/sessions", "routes/account/sessions.tsx"),
     route("invitations/:token", "routes/invitations/accept.tsx"),
     ...prefix("robots", robotPages),
-    ...prefix("gaits", [index("routes/gaits/list.tsx"), ...editorPages, ...versionPages]),
+    ...prefix("gaits", [index("routes/gaits/list.tsx"), route(":gaitId/archive", "routes/gaits/archive.ts"), ...editorPages, ...versionPages]),
     route("reviews", "routes/reviews.tsx"),
     ...exportPages,
     route("settings", "routes/settings/layout.tsx", [

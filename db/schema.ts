@@ -56,6 +56,9 @@ export const robots = pgTable(
     name: text("name").notNull(),
     createdById: uuid("created_by_id").references(() => users.id),
     createdAt: createdAt(),
+    // Archived: kept and restorable, hidden from the usual lists (decision 012).
+    archivedAt: timestamp("archived_at", { withTimezone: true }),
+    archivedById: uuid("archived_by_id").references(() => users.id, { onDelete: "set null" }),
   },
   (table) => [unique("robots_workspace_name").on(table.workspaceId, table.name)],
 );
@@ -98,6 +101,9 @@ export const gaits = pgTable(
     draftUpdatedById: uuid("draft_updated_by_id").references(() => users.id),
     createdById: uuid("created_by_id").references(() => users.id),
     createdAt: createdAt(),
+    // Archived: kept and restorable, hidden from the usual lists (decision 012).
+    archivedAt: timestamp("archived_at", { withTimezone: true }),
+    archivedById: uuid("archived_by_id").references(() => users.id, { onDelete: "set null" }),
   },
   (table) => [unique("gaits_robot_name").on(table.robotId, table.name)],
 );
@@ -226,6 +232,8 @@ export const apiTokens = pgTable(
     prefix: text("prefix").notNull(),
     lastUsedAt: timestamp("last_used_at", { withTimezone: true }),
     revokedAt: timestamp("revoked_at", { withTimezone: true }),
+    // Chosen at creation; null: the token does not expire. Past it the token answers 401.
+    expiresAt: timestamp("expires_at", { withTimezone: true }),
     createdAt: createdAt(),
   },
   (table) => [index("api_tokens_user").on(table.userId)],
@@ -246,7 +254,13 @@ export const auditLog = pgTable(
       .default(sql`'{}'::jsonb`),
     createdAt: createdAt(),
   },
-  (table) => [index("audit_log_workspace_time").on(table.workspaceId, table.createdAt)],
+  (table) => [
+    index("audit_log_workspace_time").on(table.workspaceId, table.createdAt),
+    // The log page reads newest first by id (its paging key), filtered by person or by object.
+    index("audit_log_workspace_id").on(table.workspaceId, table.id),
+    index("audit_log_actor_id").on(table.actorId, table.id),
+    index("audit_log_target").on(table.targetType, table.targetId),
+  ],
 );
 
 /**

@@ -5,6 +5,7 @@ import { and, asc, eq, isNull, sql } from "drizzle-orm";
 import { data, redirect } from "react-router";
 import { apiTokens, memberships, users, workspaces, type Role } from "../../db/schema";
 import { apiError } from "./errors.server";
+import { formatTime } from "./format";
 import type { Database } from "../../db/client";
 import { database } from "./db.server";
 import { type Action, can, refusal } from "./permissions";
@@ -88,6 +89,13 @@ export async function requireApiAccess(request: Request, action: Action): Promis
       await countFailedTokenAttempt();
       throw apiError(401, "unauthorized", "This API token is unknown or revoked.");
     }
+    if ("expired" in member) {
+      throw apiError(
+        401,
+        "unauthorized",
+        `This API token (${member.expired.name}) expired at ${formatTime(member.expired.at)}; create a new one in Settings → API tokens.`,
+      );
+    }
     refuseOver(await countRequest("token", member.tokenId!), "Too many requests with this token");
     if (!can(member.role, action)) throw apiError(403, "forbidden", refusal(member.role, action));
     return member;
@@ -125,12 +133,14 @@ function prepareTokenLookup(db: Database) {
   );
 }
 
-async function memberForToken(token: string): Promise<ApiMember | null> {
+/** The member a token acts as; the token's name and end when it has expired; null when it is unknown, revoked or its holder may no longer hold one. */
+async function memberForToken(token: string): Promise<ApiMember | { expired: { name: string; at: Date } } | null> {
   const db = database();
   let lookup = tokenLookups.get(db);
   if (!lookup) tokenLookups.set(db, (lookup = prepareTokenLookup(db)));
   const [row] = await lookup.execute({ tokenHash: hashToken(token) });
   if (!row || !can(row.role, "tokens.manage")) return null;
+  if (row.token.expiresAt && row.token.expiresAt.getTime() <= Date.now()) return { expired: { name: row.token.name, at: row.token.expiresAt } };
   // Last-used time to the minute is enough, and saves a write per request.
   const now = new Date();
   if (!row.token.lastUsedAt || now.getTime() - row.token.lastUsedAt.getTime() > 60_000) {

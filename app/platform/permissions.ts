@@ -31,8 +31,11 @@ export const PERMISSIONS = {
   // Robots: geometry and limits by editors; servo mapping and calibration also by firmware.
   "robots.edit": editors,
   "robots.calibrate": [...editors, "firmware"],
+  // Archiving and restoring are edits (robots.edit, gaits.edit); deleting for good is the owner's.
+  "robots.delete": ["owner"],
   // Gaits and their versions.
   "gaits.edit": editors,
+  "gaits.delete": ["owner"],
   "versions.commit": editors,
   "versions.requestReview": editors,
   "versions.decide": leads,
@@ -62,7 +65,9 @@ const ACTION_PHRASES: Record<Action, string> = {
   "tokens.manage": "hold API tokens",
   "robots.edit": "edit robots",
   "robots.calibrate": "edit servo mapping and calibration",
+  "robots.delete": "delete robots",
   "gaits.edit": "edit gaits",
+  "gaits.delete": "delete gaits",
   "versions.commit": "commit versions",
   "versions.requestReview": "request reviews",
   "versions.decide": "approve or send back versions",

@@ -42,6 +42,10 @@ const DESIGN_ROLES: Record<string, readonly [owner: boolean, lead: boolean, anim
   "robots.edit":            [true,  true,  true,    false,   false],
   // "firmware | … edit servo mapping and calibration of robots", and "animator | edit robots" includes them
   "robots.calibrate":       [true,  true,  true,    true,    false],
+  // Deleting for good is beyond "edit robots and gaits" (animator) and so beyond "everything an animator can" (lead);
+  // "Owner/admin — manages the workspace, robots, members and roles"; "owner | everything". Archiving is an edit (robots.edit, gaits.edit).
+  "robots.delete":          [true,  false, false,   false,   false],
+  "gaits.delete":           [true,  false, false,   false,   false],
   // "animator | edit robots and gaits"
   "gaits.edit":             [true,  true,  true,    false,   false],
   // "animator | … commit versions"

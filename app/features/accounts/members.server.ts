@@ -1,7 +1,7 @@
 // Members of a workspace: who they are, role changes and removal. A
 // workspace always keeps at least one owner.
-import { and, asc, count, desc, eq, inArray, isNull, or } from "drizzle-orm";
-import { auditLog, memberships, users, type Role } from "../../../db/schema";
+import { and, asc, count, eq } from "drizzle-orm";
+import { memberships, users, type Role } from "../../../db/schema";
 import { recordAudit } from "../../platform/audit.server";
 import { database, type Tx } from "../../platform/db.server";
 import { ServiceError } from "../../platform/errors.server";
@@ -31,12 +31,14 @@ export function parseRole(value: unknown): Role {
   throw new ServiceError(422, "invalid", `Unknown role "${String(value)}"; choose one of ${ROLES.join(", ")}.`, { field: "role" });
 }
 
+/** The membership, locked, with the person's name (which the audit entry records, so it says whose role changed). */
 async function lockedMembership(tx: Tx, workspaceId: string, userId: string) {
   const [row] = await tx
-    .select()
+    .select({ role: memberships.role, name: users.name })
     .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
     .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)))
-    .for("update");
+    .for("update", { of: memberships });
   if (!row) throw new ServiceError(404, "not-found", "That person is not a member of this workspace.");
   return row;
 }
@@ -75,7 +77,7 @@ export async function changeRole(actor: Member, userId: string, role: Role): Pro
         action: "member.role-changed",
         targetType: "user",
         targetId: userId,
-        details: { from: current.role, to: role },
+        details: { member: current.name, from: current.role, to: role },
       },
       tx,
     );
@@ -97,7 +99,7 @@ export async function removeMember(actor: Member, userId: string): Promise<void>
         action: "member.removed",
         targetType: "user",
         targetId: userId,
-        details: { role: current.role },
+        details: { member: current.name, role: current.role },
       },
       tx,
     );
@@ -110,33 +112,4 @@ export async function ownerCount(workspaceId: string): Promise<number> {
     .from(memberships)
     .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.role, "owner")));
   return row.n;
-}
-
-export type AuditRow = { id: number; at: Date; action: string; actor: string | null; targetType: string | null; targetId: string | null; details: unknown };
-
-export async function listAudit(workspaceId: string, limit = 200): Promise<AuditRow[]> {
-  return database()
-    .select({
-      id: auditLog.id,
-      at: auditLog.createdAt,
-      action: auditLog.action,
-      actor: users.name,
-      targetType: auditLog.targetType,
-      targetId: auditLog.targetId,
-      details: auditLog.details,
-    })
-    .from(auditLog)
-    .leftJoin(users, eq(users.id, auditLog.actorId))
-    .where(
-      or(
-        eq(auditLog.workspaceId, workspaceId),
-        // Sign-ins belong to no workspace; show those of this workspace's members.
-        and(
-          isNull(auditLog.workspaceId),
-          inArray(auditLog.actorId, database().select({ id: memberships.userId }).from(memberships).where(eq(memberships.workspaceId, workspaceId))),
-        ),
-      ),
-    )
-    .orderBy(desc(auditLog.id))
-    .limit(limit);
 }

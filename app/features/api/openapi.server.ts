@@ -17,7 +17,7 @@ import { matchesIfNoneMatch } from "../tables/index.server";
 import { accountPaths, accountSchemas } from "./operations/account";
 import { calibrationPaths, calibrationSchemas } from "./operations/calibration";
 import { errorResponses, errorSchemas, permission, type OpenApiDocument, type OpenApiOperation, type OpenApiPaths } from "./operations/common";
-import { draftPaths, draftSchemas } from "./operations/gaits";
+import { draftPaths, draftSchemas, gaitArchivePaths } from "./operations/gaits";
 import { robotPaths, robotSchemas } from "./operations/robots";
 import { documentPaths, generatedSchemas, schemaPaths } from "./operations/schemas";
 import { solverPaths, solverSchemas } from "./operations/solver";
@@ -91,6 +91,7 @@ function buildDocument(publicUrl: string, permissions: ApiPermissions): OpenApiD
         ...schemaPaths(),
         ...versionPaths(),
         ...draftPaths(),
+        ...gaitArchivePaths(),
         ...angleTablePaths(),
         ...documentPaths(),
       },

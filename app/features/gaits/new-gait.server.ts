@@ -1,7 +1,7 @@
 // Starting a gait: the robots to choose from (with the templates that suit
 // each), and the new gait row with its first draft, pinned to the robot's
 // newest revision. Also the copy that keeps someone's edits after a stale save.
-import { and, desc, eq } from "drizzle-orm";
+import { and, desc, eq, isNull } from "drizzle-orm";
 import { z } from "zod";
 import { gaits, robotRevisions, robots } from "../../../db/schema";
 import type { Database } from "../../../db/client";
@@ -30,7 +30,8 @@ export async function robotChoices(workspaceId: string, db: Database = database(
     .selectDistinctOn([robots.id], { id: robots.id, name: robots.name, revision: robotRevisions.number, definition: robotRevisions.definition })
     .from(robots)
     .innerJoin(robotRevisions, eq(robotRevisions.robotId, robots.id))
-    .where(eq(robots.workspaceId, workspaceId))
+    // An archived robot is out of the usual lists, this one too.
+    .where(and(eq(robots.workspaceId, workspaceId), isNull(robots.archivedAt)))
     .orderBy(robots.id, desc(robotRevisions.number));
   const choices: RobotChoice[] = [];
   for (const row of rows) {

@@ -1,7 +1,7 @@
 // Robots of a workspace: lists, pages, revisions, and the writes that make new
 // revisions. Every save is a new immutable robot_revisions row, written in one
 // transaction with optimistic concurrency on the revision number it started from.
-import { and, desc, eq, ne, sql } from "drizzle-orm";
+import { and, desc, eq, isNotNull, isNull, ne, sql } from "drizzle-orm";
 import { robotRevisions, robots, users, type Role } from "../../../db/schema";
 import { parseRobot, type DefinitionIssue, type Robot } from "~/kinematics";
 import { recordAudit } from "../../platform/audit.server";
@@ -20,6 +20,7 @@ export type RobotListItem = {
   legCount: number;
   latestRevision: number;
   updatedAt: Date;
+  archivedAt: Date | null;
 };
 
 export type RevisionAuthor = { login: string; name: string } | null;
@@ -37,11 +38,14 @@ export type RobotDetail = {
   id: string;
   name: string;
   createdAt: Date;
+  /** When the robot was archived; null while it is in use. */
+  archivedAt: Date | null;
   latest: RevisionDetail;
   revisions: RevisionSummary[];
 };
 
-export async function listRobots(workspaceId: string): Promise<RobotListItem[]> {
+/** The workspace's robots by name: those in use, or (`archived`) the archived ones, or (`"any"`) both. */
+export async function listRobots(workspaceId: string, { archived = false }: { archived?: boolean | "any" } = {}): Promise<RobotListItem[]> {
   const rows = await database()
     .selectDistinctOn([robots.id], {
       id: robots.id,
@@ -49,10 +53,11 @@ export async function listRobots(workspaceId: string): Promise<RobotListItem[]> 
       latestRevision: robotRevisions.number,
       updatedAt: robotRevisions.createdAt,
       legCount: sql<number>`coalesce(jsonb_array_length(${robotRevisions.definition} -> 'legs'), 0)`.mapWith(Number),
+      archivedAt: robots.archivedAt,
     })
     .from(robots)
     .innerJoin(robotRevisions, eq(robotRevisions.robotId, robots.id))
-    .where(eq(robots.workspaceId, workspaceId))
+    .where(and(eq(robots.workspaceId, workspaceId), archived === "any" ? undefined : archived ? isNotNull(robots.archivedAt) : isNull(robots.archivedAt)))
     .orderBy(robots.id, desc(robotRevisions.number));
   return rows.sort((a, b) => a.name.localeCompare(b.name));
 }
@@ -109,6 +114,7 @@ export async function getRobot(workspaceId: string, robotId: string): Promise<Ro
     id: robot.id,
     name: robot.name,
     createdAt: robot.createdAt,
+    archivedAt: robot.archivedAt,
     latest: { ...summaryOf(rows[0]), definition: rows[0].definition as Robot },
     revisions: rows.map(summaryOf),
   };
@@ -355,7 +361,13 @@ export async function saveRevision(save: SaveRequest): Promise<SavedRevision> {
           action: "robot.save",
           targetType: "robot",
           targetId: robot.id,
-          details: { revision: number, changedFields: changes.length },
+          // The name as saved, so the entry names the robot even after a later rename or deletion.
+          details: {
+            name: definition.name,
+            ...(definition.name !== robot.name ? { renamedFrom: robot.name } : {}),
+            revision: number,
+            changedFields: changes.length,
+          },
         },
         tx,
       );

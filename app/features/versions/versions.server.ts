@@ -226,6 +226,8 @@ export type GaitDetail = {
   versionCount: number;
   latestVersion: number | null;
   releasedVersion: number | null;
+  /** When the gait was archived; null while it is in use. */
+  archivedAt: Date | null;
 };
 
 export async function getGait(workspaceId: string, gaitId: string): Promise<GaitDetail | null> {
@@ -278,6 +280,7 @@ export async function getGait(workspaceId: string, gaitId: string): Promise<Gait
   return {
     id: row.gait.id,
     name: row.gait.name,
+    archivedAt: row.gait.archivedAt,
     description: row.gait.description,
     robot: { id: row.gait.robotId, name: row.robotName, latestRevision: latestRobot?.number ?? 0 },
     draft: {

@@ -12,7 +12,10 @@ import * as openapi from "./export/openapi";
 import * as sequenceSchema from "./export/sequence-schema";
 import * as table from "./export/table";
 import * as draft from "./gaits/draft";
+import * as gaitArchive from "./gaits/archive";
+import * as gait from "./gaits/gait";
 import * as versions from "./gaits/versions";
+import * as robotArchive from "./robots/archive";
 import * as robotList from "./robots/list";
 import * as robotRevision from "./robots/revision";
 import * as robot from "./robots/robot";
@@ -29,8 +32,11 @@ export function apiPermissions(): ApiPermissions {
     "/api/v1/ik": ik.permissions,
     "/api/v1/robots": robotList.permissions,
     "/api/v1/robots/{robotId}": robot.permissions,
+    "/api/v1/robots/{robotId}/archive": robotArchive.permissions,
     "/api/v1/robots/{robotId}/revisions/{number}": robotRevision.permissions,
     "/api/v1/schema/robot.json": robotSchema.permissions,
+    "/api/v1/gaits/{gaitId}": gait.permissions,
+    "/api/v1/gaits/{gaitId}/archive": gaitArchive.permissions,
     "/api/v1/gaits/{gaitId}/draft": draft.permissions,
     "/api/v1/gaits/{gaitId}/versions": versions.permissions,
     "/api/v1/gaits/{gaitId}/versions/{number}/table": table.permissions,

@@ -3,6 +3,7 @@ import { z } from "zod";
 import type { Route } from "./+types/gait";
 import { Notice } from "~/components/common/Notice";
 import { PageHeader } from "~/components/common/PageHeader";
+import { ArchiveControls } from "~/components/archive/ArchiveControls";
 import { DraftPanel } from "~/components/versions/DraftPanel";
 import { VersionFilters } from "~/components/versions/VersionFilters";
 import { VersionTable } from "~/components/versions/VersionTable";
@@ -54,7 +55,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     allVersions: all.map(({ id, number, message }) => ({ id, number, message })),
     authors,
     query,
-    can: { commit: can(role, "versions.commit"), edit: can(role, "gaits.edit") },
+    can: { commit: can(role, "versions.commit"), edit: can(role, "gaits.edit"), delete: can(role, "gaits.delete") },
   };
 }
 
@@ -113,6 +114,7 @@ export default function GaitPage({ loaderData, actionData }: Route.ComponentProp
             Edit the draft
           </Link>
         ) : null}
+        <ArchiveControls kind="gait" id={gait.id} name={gait.name} archivedAt={gait.archivedAt} can={{ archive: allowed.edit, delete: allowed.delete }} />
       </PageHeader>
       <Notice error={error && error.field !== "message" ? error.error : null} success={success?.notice} />
       <DraftPanel

@@ -1,7 +1,10 @@
 import { Link, redirect, useSearchParams } from "react-router";
+import { z } from "zod";
 import type { Route } from "./+types/list";
 import { EmptyState } from "~/components/common/EmptyState";
 import { PageHeader } from "~/components/common/PageHeader";
+import { ArchiveControls, ArchiveFilter } from "~/components/archive/ArchiveControls";
+import { Notice } from "~/components/common/Notice";
 import { AddRobotPanel, type AddPanel } from "~/components/robots/AddRobotPanels";
 import { requireAccess } from "~/platform/access.server";
 import { permissionOfEveryIntent } from "~/platform/intent-form.server";
@@ -20,9 +23,24 @@ export const permissions = {
   action: { create: "robots.edit", upload: "robots.edit", "import-urdf": "robots.edit" },
 } satisfies RoutePermissions;
 
+/** `show=archived` lists the archived robots; `deleted` names one just deleted, for the notice. */
+const listQuery = z.object({
+  show: z.literal("archived").optional().catch(undefined),
+  deleted: z.string().max(120).optional().catch(undefined),
+});
+
 export async function loader({ request }: Route.LoaderArgs) {
   const { workspace, role } = await requireAccess(request, permissions.loader);
-  return { robots: await listRobots(workspace.id), canEdit: can(role, "robots.edit") };
+  const search = new URL(request.url).searchParams;
+  const query = listQuery.parse({ show: search.get("show") ?? undefined, deleted: search.get("deleted") ?? undefined });
+  const archived = query.show === "archived";
+  return {
+    robots: await listRobots(workspace.id, { archived }),
+    archived,
+    deleted: query.deleted ?? null,
+    canEdit: can(role, "robots.edit"),
+    canDelete: can(role, "robots.delete"),
+  };
 }
 
 export async function action({ request }: Route.ActionArgs) {
@@ -44,7 +62,7 @@ const PANELS: { panel: AddPanel; label: string }[] = [
 const panelOf = (value: string | null): AddPanel | null => (value === "new" || value === "upload" || value === "urdf" ? value : null);
 
 export default function RobotList({ loaderData, actionData }: Route.ComponentProps) {
-  const { robots, canEdit } = loaderData;
+  const { robots, archived, deleted, canEdit, canDelete } = loaderData;
   const [searchParams] = useSearchParams();
   const open = panelOf(searchParams.get("add"));
   return (
@@ -66,8 +84,54 @@ export default function RobotList({ loaderData, actionData }: Route.ComponentPro
           : null}
       </PageHeader>
       {canEdit && open ? <AddRobotPanel panel={open} robots={robots} result={actionData ?? null} /> : null}
+      <ArchiveFilter archived={archived} label="Which robots" hrefs={{ inUse: "/robots", archived: "/robots?show=archived" }} />
+      <Notice success={deleted ? `${deleted} is deleted, with its revisions and calibration profiles.` : null} />
       {robots.length === 0 ? (
-        <EmptyState title="No robots yet">Add a robot by uploading its definition or importing a URDF file.</EmptyState>
+        archived ? (
+          <EmptyState title="No archived robots">
+            A robot archived from its page is kept here, out of the usual lists, until it is restored or deleted.
+          </EmptyState>
+        ) : (
+          <EmptyState title="No robots yet">Add a robot by uploading its definition or importing a URDF file.</EmptyState>
+        )
+      ) : archived ? (
+        <table className="w-full border-collapse rounded-lg bg-surface text-left" aria-label="Archived robots">
+          <thead className="border-b border-line text-sm text-ink-muted">
+            <tr>
+              <th className="px-4 py-2 font-medium">Name</th>
+              <th className="px-4 py-2 text-right font-medium">Legs</th>
+              <th className="px-4 py-2 text-right font-medium">Revision</th>
+              <th className="px-4 py-2 text-right font-medium">Archived</th>
+              <th className="px-4 py-2">
+                <span className="sr-only">Restore or delete</span>
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            {robots.map((robot) => (
+              <tr key={robot.id} className="border-b border-line align-top last:border-0">
+                <td className="px-4 py-2 font-medium">
+                  <Link to={`/robots/${robot.id}`} className="text-accent underline-offset-4 hover:underline">
+                    {robot.name}
+                  </Link>
+                </td>
+                <td className="px-4 py-2 text-right tabular-nums">{robot.legCount}</td>
+                <td className="px-4 py-2 text-right tabular-nums">{robot.latestRevision}</td>
+                <td className="px-4 py-2 text-right tabular-nums">{robot.archivedAt ? formatDate(robot.archivedAt) : "—"}</td>
+                <td className="px-4 py-2">
+                  <ArchiveControls
+                    kind="robot"
+                    id={robot.id}
+                    name={robot.name}
+                    archivedAt={robot.archivedAt}
+                    can={{ archive: canEdit, delete: canDelete }}
+                    variant="row"
+                  />
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
       ) : (
         <table className="w-full border-collapse overflow-hidden rounded-lg bg-surface text-left">
           <thead className="border-b border-line text-sm text-ink-muted">

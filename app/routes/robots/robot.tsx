@@ -1,6 +1,7 @@
 import { useFetcher } from "react-router";
 import type { Route } from "./+types/robot";
 import { PageHeader } from "~/components/common/PageHeader";
+import { ArchiveControls } from "~/components/archive/ArchiveControls";
 import { DownloadRevisionLink, RevisionHistory } from "~/components/robots/RevisionHistory";
 import { formatTime } from "~/platform/format";
 import { RobotEditor } from "~/components/robots/RobotForm";
@@ -27,6 +28,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   return {
     robot,
     mode: can(role, "robots.edit") ? ("edit" as const) : can(role, "robots.calibrate") ? ("calibrate" as const) : ("read" as const),
+    archive: { archive: can(role, "robots.edit"), delete: can(role, "robots.delete") },
   };
 }
 
@@ -42,7 +44,7 @@ export async function action({ request, params }: Route.ActionArgs) {
 export const meta: Route.MetaFunction = ({ loaderData }) => [{ title: `${loaderData?.robot.name ?? "Robot"} · Robots · Gaitloom` }];
 
 export default function RobotPage({ loaderData }: Route.ComponentProps) {
-  const { robot, mode } = loaderData;
+  const { robot, mode, archive } = loaderData;
   const latest = robot.latest;
   const saveFetcher = useFetcher<typeof action>();
   return (
@@ -52,6 +54,7 @@ export default function RobotPage({ loaderData }: Route.ComponentProps) {
         lead={`Revision ${latest.number}, saved ${formatTime(latest.createdAt)}${latest.author ? ` by ${latest.author.name}` : ""}. ${latest.definition.legs.length} legs.`}
       >
         <DownloadRevisionLink robotId={robot.id} number={latest.number} />
+        <ArchiveControls kind="robot" id={robot.id} name={robot.name} archivedAt={robot.archivedAt} can={archive} />
       </PageHeader>
       {mode === "read" ? (
         <p className="mb-4 rounded-lg border border-line bg-sunken px-4 py-3 text-sm text-ink-muted">You can read this robot; your role cannot change it.</p>

@@ -6,6 +6,8 @@ export const robotPages: RouteConfigEntry[] = [
   index("routes/robots/list.tsx"),
   // one robot's definition; POST save
   route(":robotId", "routes/robots/robot.tsx"),
+  // POST archive, restore or delete the robot (a GET goes to its page)
+  route(":robotId/archive", "routes/robots/archive.ts"),
   // an old revision; POST restore
   route(":robotId/revisions/:number", "routes/robots/revision.tsx"),
   // the revision's JSON as a file

@@ -2,6 +2,7 @@
 import { Form } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/tokens";
+import { CopyButton } from "~/components/common/CopyButton";
 import { Notice } from "~/components/common/Notice";
 import { requireAccess } from "~/platform/access.server";
 import { readForm } from "~/platform/body.server";
@@ -10,18 +11,38 @@ import { config } from "~/platform/config.server";
 import { formAction, ServiceError } from "~/platform/errors.server";
 import { formatTime } from "~/platform/format";
 import { id } from "~/platform/params";
-import { createToken, listTokens, revokeToken } from "~/features/accounts/tokens.server";
+import { createToken, listTokens, revokeToken, TOKEN_LIFETIMES_DAYS } from "~/features/accounts/tokens.server";
 import type { RoutePermissions } from "~/platform/permissions";
 
 export const permissions = { loader: "tokens.manage", action: { create: "tokens.manage", revoke: "tokens.manage" } } satisfies RoutePermissions;
 
 export async function loader({ request }: Route.LoaderArgs) {
   const member = await requireAccess(request, permissions.loader);
-  return { tokens: await listTokens(member), workspace: member.workspace.name, apiUrl: `${config().publicUrl}/api/v1` };
+  return {
+    tokens: await listTokens(member),
+    workspace: member.workspace.name,
+    apiUrl: `${config().publicUrl}/api/v1`,
+    lifetimes: TOKEN_LIFETIMES_DAYS,
+    now: Date.now(),
+  };
 }
 
 export const actionForm = z.discriminatedUnion("intent", [
-  z.object({ intent: z.literal("create"), name: z.string() }),
+  z.object({
+    intent: z.literal("create"),
+    name: z.string(),
+    // Days the token lasts, or "never"; absent (an older page, a script) reads as never.
+    expires: z
+      .union([
+        z.literal("never"),
+        z
+          .string()
+          .regex(/^[1-9][0-9]{0,3}$/, "expires must be a number of days or never")
+          .transform(Number),
+      ])
+      .optional()
+      .transform((value) => (value === undefined || value === "never" ? null : value)),
+  }),
   z.object({ intent: z.literal("revoke"), tokenId: id("That is not a valid token id.") }),
 ]);
 
@@ -29,11 +50,14 @@ export async function action({ request }: Route.ActionArgs) {
   const member = await requireAccess(request, permissionOfEveryIntent(permissions.action));
   return formAction(async () => {
     const parsed = actionForm.safeParse(Object.fromEntries(await readForm(request)));
-    if (!parsed.success) throw new ServiceError(400, "bad-request", parsed.error.issues[0]?.message ?? "The form was incomplete.");
+    if (!parsed.success) {
+      const issue = parsed.error.issues[0];
+      throw new ServiceError(400, "bad-request", issue?.message ?? "The form was incomplete.", issue ? { field: issue.path.join(".") } : undefined);
+    }
     const command = parsed.data;
     if (command.intent === "create") {
-      const { token, row } = await createToken(member, command.name);
-      return { created: { token, name: row.name } };
+      const { token, row } = await createToken(member, command.name, command.expires);
+      return { created: { token, name: row.name, expiresAt: row.expiresAt } };
     }
     await revokeToken(member, command.tokenId);
     return { success: "Token revoked; scripts using it now get 401." };
@@ -44,10 +68,12 @@ export const meta: Route.MetaFunction = () => [{ title: "API tokens · Gaitloom"
 
 const when = (date: Date | string | null) => (date ? formatTime(date, { zone: false }) : "never");
 
+const lifetime = (days: number) => (days === 365 ? "1 year" : `${days} days`);
+
 export default function Tokens({ loaderData, actionData }: Route.ComponentProps) {
   const created = actionData && "created" in actionData ? actionData.created : null;
   return (
-    <div className="max-w-3xl space-y-6">
+    <div className="max-w-4xl space-y-6">
       <p className="text-ink-muted">
         A token acts with your role in {loaderData.workspace} and nowhere else. Send it as{" "}
         <code className="font-mono">Authorization: Bearer &lt;token&gt;</code> to {loaderData.apiUrl}.
@@ -59,9 +85,15 @@ export default function Tokens({ loaderData, actionData }: Route.ComponentProps)
       {created ? (
         <section role="status" aria-label="New token" className="rounded-lg border border-accent bg-accent-soft p-4">
           <p className="font-medium">Token “{created.name}” created. Copy it now: it is shown only this once.</p>
-          <code data-testid="new-token" className="mt-2 block break-all rounded bg-surface px-3 py-2 font-mono text-sm">
-            {created.token}
-          </code>
+          <div className="mt-2 flex items-start gap-2">
+            <code data-testid="new-token" className="block flex-1 break-all rounded bg-surface px-3 py-2 font-mono text-sm">
+              {created.token}
+            </code>
+            <CopyButton text={created.token} label="Copy token" className="shrink-0 py-2" />
+          </div>
+          <p className="mt-2 text-sm text-ink-muted">
+            {created.expiresAt ? `It stops working at ${formatTime(created.expiresAt)}.` : "It works until you revoke it."}
+          </p>
         </section>
       ) : null}
       <Form method="post" className="flex items-end gap-3 rounded-lg border border-line bg-surface p-6">
@@ -75,6 +107,17 @@ export default function Tokens({ loaderData, actionData }: Route.ComponentProps)
             placeholder="e.g. firmware build server"
             className="mt-1 w-full rounded-md border border-line bg-surface px-3 py-2"
           />
+        </label>
+        <label>
+          <span className="block text-sm font-medium">Expires</span>
+          <select name="expires" defaultValue="90" className="mt-1 rounded-md border border-line bg-surface px-3 py-2">
+            {loaderData.lifetimes.map((days) => (
+              <option key={days} value={days}>
+                after {lifetime(days)}
+              </option>
+            ))}
+            <option value="never">never</option>
+          </select>
         </label>
         <button type="submit" className="rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover:bg-accent-strong">
           Create token
@@ -91,6 +134,7 @@ export default function Tokens({ loaderData, actionData }: Route.ComponentProps)
               <th className="px-4 py-2 font-medium">Starts with</th>
               <th className="px-4 py-2 text-right font-medium">Created</th>
               <th className="px-4 py-2 text-right font-medium">Last used</th>
+              <th className="px-4 py-2 text-right font-medium">Expires</th>
               <th className="px-4 py-2">
                 <span className="sr-only">State</span>
               </th>
@@ -101,8 +145,17 @@ export default function Tokens({ loaderData, actionData }: Route.ComponentProps)
               <tr key={token.id} className="border-b border-line last:border-0">
                 <td className="px-4 py-2 font-medium">{token.name}</td>
                 <td className="px-4 py-2 font-mono">{token.prefix}…</td>
-                <td className="px-4 py-2 text-right">{when(token.createdAt)}</td>
-                <td className="px-4 py-2 text-right">{when(token.lastUsedAt)}</td>
+                <td className="px-4 py-2 text-right whitespace-nowrap tabular-nums">{when(token.createdAt)}</td>
+                <td className="px-4 py-2 text-right whitespace-nowrap tabular-nums">{when(token.lastUsedAt)}</td>
+                <td className="px-4 py-2 text-right whitespace-nowrap tabular-nums">
+                  {token.expiresAt === null ? (
+                    "never"
+                  ) : new Date(token.expiresAt).getTime() <= loaderData.now ? (
+                    <span className="text-danger">expired {when(token.expiresAt)}</span>
+                  ) : (
+                    when(token.expiresAt)
+                  )}
+                </td>
                 <td className="px-4 py-2 text-right">
                   {token.revokedAt ? (
                     <span className="text-ink-muted">revoked {when(token.revokedAt)}</span>

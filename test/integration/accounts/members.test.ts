@@ -35,8 +35,8 @@ describe("members and roles", () => {
     const entries = await database().select().from(auditLog).where(eq(auditLog.action, "member.role-changed"));
     expect(entries.map((entry) => entry.details)).toEqual(
       expect.arrayContaining([
-        { from: "lead", to: "owner" },
-        { from: "owner", to: "lead" },
+        { member: "Mara Lindqvist", from: "lead", to: "owner" },
+        { member: "Ines Okafor", from: "owner", to: "lead" },
       ]),
     );
   });

@@ -1,10 +1,12 @@
 import { beforeAll, beforeEach, describe, expect, test } from "vitest";
 import { seedDemo } from "../../../db/seed";
-import { bearer, demoIds, memberAs, outcome, type ApiRefusal, type DemoIds } from "../../support/routes";
+import { bearer, demoIds, memberAs, outcome, refusal as refusalOf, type ApiRefusal, type DemoIds } from "../../support/routes";
 import { type Member, requireApiAccess } from "~/platform/access.server";
 import { database } from "~/platform/db.server";
 import { resetRateLimits } from "~/platform/rate-limit.server";
 import { createToken, listTokens, revokeToken } from "~/features/accounts/tokens.server";
+import { apiTokens } from "../../../db/schema";
+import { eq } from "drizzle-orm";
 import { createWorkspace } from "~/features/accounts/workspaces.server";
 import { loader as apiWorkspace } from "~/routes/api.v1/workspace";
 
@@ -81,5 +83,33 @@ describe("API tokens", () => {
     const refusal = await outcome<ApiRefusal>(() => requireApiAccess(withToken(token), "versions.decide"));
     expect(refusal.status).toBe(403);
     expect(refusal.body.error.message).toBe("The firmware role cannot approve or send back versions.");
+  });
+
+  test("a token may expire: the holder picks 7, 30, 90 or 365 days at creation, or none; the list shows when", async () => {
+    const before = Date.now();
+    const { row } = await createToken(firmware, "for a month", 30);
+    const [listed] = (await listTokens(firmware)).filter((t) => t.id === row.id);
+    expect(listed.expiresAt!.getTime() - before).toBeGreaterThanOrEqual(30 * 86_400_000 - 1_000);
+    expect(listed.expiresAt!.getTime() - before).toBeLessThan(30 * 86_400_000 + 60_000);
+    const { row: forever } = await createToken(firmware, "no end", null);
+    expect(forever.expiresAt).toBeNull();
+    const refused = await refusalOf(() => createToken(firmware, "too long", 1000));
+    expect(refused).toMatchObject({
+      status: 422,
+      message: "Choose how long the token lasts: 7, 30, 90 or 365 days, or no expiry.",
+      details: { field: "expires" },
+    });
+  });
+
+  test("an expired token answers 401 with a message that says it expired, and when", async () => {
+    const { token, row } = await createToken(firmware, "short-lived", 7);
+    const expiredAt = new Date("2026-01-02T03:04:00Z");
+    await database().update(apiTokens).set({ expiresAt: expiredAt }).where(eq(apiTokens.id, row.id));
+    const refusal = await outcome<ApiRefusal>(() => requireApiAccess(withToken(token), "workspace.read"));
+    expect(refusal.status).toBe(401);
+    expect(refusal.body.error).toEqual({
+      code: "unauthorized",
+      message: "This API token (short-lived) expired at 2026-01-02 03:04 UTC; create a new one in Settings → API tokens.",
+    });
   });
 });

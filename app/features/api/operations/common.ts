@@ -89,10 +89,13 @@ const ERROR_CODES: ApiErrorCode[] = [
 
 const STATUS_RESPONSES = {
   400: ["BadRequest", "The request is malformed: a parameter or the JSON body; `details.parameter` names a bad query parameter."],
-  401: ["Unauthorized", "No session and no bearer token, a malformed Authorization header, or an unknown or revoked token."],
+  401: ["Unauthorized", "No session and no bearer token, a malformed Authorization header, or an unknown, revoked or expired token (the message says which)."],
   403: ["Forbidden", "The role cannot do this (the message says which), or a cookie-carrying mutation from another origin."],
   404: ["NotFound", "Nothing by that id in the caller's workspace (another workspace's things are not found either)."],
-  409: ["Conflict", "A conflict with the current state: a stale revision, or a table that needs an override reason."],
+  409: [
+    "Conflict",
+    "A conflict with the current state: a stale revision, a table that needs an override reason, or a delete refused while the object is not archived or something still references it (`details.reason`, and `details.references` lists what).",
+  ],
   413: ["PayloadTooLarge", "The body is larger than the route's limit (the message gives both sizes)."],
   422: ["Unprocessable", "The input is well-formed but invalid: `details` lists the issues as `{ path, message }`."],
   429: [

@@ -29,6 +29,43 @@ export function draftPaths(): OpenApiPaths {
   };
 }
 
+/** Archiving, restoring and deleting a gait (the ArchiveState and Deleted schemas are the robots'). */
+export function gaitArchivePaths(): OpenApiPaths {
+  return {
+    "/api/v1/gaits/{gaitId}": {
+      delete: {
+        operationId: "deleteGait",
+        summary: "Delete an archived gait none of whose versions was released",
+        description:
+          "Deletes the gait with its draft, versions and review history, for good. Refused with 409 while the gait is not archived (`details.reason` not-archived), " +
+          "or when any version of it was released, now or before a later release retired it (`details.reason` referenced; `details.references` lists those versions): " +
+          "firmware builds may still fetch them.",
+        tags: ["Gaits"],
+        parameters: [uuidPath("gaitId", "The gait.")],
+        responses: answers("The gait is deleted.", "Deleted", ...BY_ID, 409),
+      },
+    },
+    "/api/v1/gaits/{gaitId}/archive": {
+      post: {
+        operationId: "archiveGait",
+        summary: "Archive a gait: kept, out of the usual lists, restorable",
+        description: "Archiving an archived gait changes nothing. Its versions and tables stay readable.",
+        tags: ["Gaits"],
+        parameters: [uuidPath("gaitId", "The gait.")],
+        responses: answers("The gait, archived.", "ArchiveState", ...BY_ID),
+      },
+      delete: {
+        operationId: "restoreGait",
+        summary: "Restore an archived gait to the usual lists",
+        description: "Restoring a gait that is not archived changes nothing.",
+        tags: ["Gaits"],
+        parameters: [uuidPath("gaitId", "The gait.")],
+        responses: answers("The gait, restored (archivedAt null).", "ArchiveState", ...BY_ID),
+      },
+    },
+  };
+}
+
 export function draftSchemas(): Record<string, Json> {
   return {
     Draft: {

@@ -8,7 +8,16 @@ export function robotPaths(): OpenApiPaths {
         operationId: "listRobots",
         summary: "The workspace's robots",
         tags: ["Robots"],
-        responses: answers("Robots with their newest revision.", "RobotList", ...AUTH),
+        parameters: [
+          {
+            name: "archived",
+            in: "query",
+            required: false,
+            description: "true: the archived robots instead of those in use.",
+            schema: { type: "string", enum: ["true", "false"], default: "false" },
+          },
+        ],
+        responses: answers("Robots with their newest revision.", "RobotList", 400, ...AUTH),
       },
     },
     "/api/v1/robots/{robotId}": {
@@ -18,6 +27,34 @@ export function robotPaths(): OpenApiPaths {
         tags: ["Robots"],
         parameters: [uuidPath("robotId", "The robot.")],
         responses: answers("The robot.", "RobotDetail", ...BY_ID),
+      },
+      delete: {
+        operationId: "deleteRobot",
+        summary: "Delete an archived robot that no gait uses",
+        description:
+          "Deletes the robot with its revisions and calibration profiles, for good. Refused with 409 while the robot is not archived (`details.reason` not-archived), " +
+          "or while any gait, archived or not, uses it (`details.reason` referenced; `details.references` lists the gaits and the message names them).",
+        tags: ["Robots"],
+        parameters: [uuidPath("robotId", "The robot.")],
+        responses: answers("The robot is deleted.", "Deleted", ...BY_ID, 409),
+      },
+    },
+    "/api/v1/robots/{robotId}/archive": {
+      post: {
+        operationId: "archiveRobot",
+        summary: "Archive a robot: kept, out of the usual lists, restorable",
+        description: "Archiving an archived robot changes nothing. GET /api/v1/robots?archived=true lists the archived robots.",
+        tags: ["Robots"],
+        parameters: [uuidPath("robotId", "The robot.")],
+        responses: answers("The robot, archived.", "ArchiveState", ...BY_ID),
+      },
+      delete: {
+        operationId: "restoreRobot",
+        summary: "Restore an archived robot to the usual lists",
+        description: "Restoring a robot that is not archived changes nothing.",
+        tags: ["Robots"],
+        parameters: [uuidPath("robotId", "The robot.")],
+        responses: answers("The robot, restored (archivedAt null).", "ArchiveState", ...BY_ID),
       },
     },
     "/api/v1/robots/{robotId}/revisions/{number}": {
@@ -46,6 +83,7 @@ export function robotSchemas(): Record<string, Json> {
           legCount: { type: "integer" },
           latestRevision: { type: "integer" },
           updatedAt: dateTime,
+          archivedAt: { ...dateTime, type: ["string", "null"], description: "When the robot was archived; null while in use." },
           url: { type: "string" },
         }),
       },
@@ -60,9 +98,20 @@ export function robotSchemas(): Record<string, Json> {
         id: uuid,
         name: { type: "string" },
         createdAt: dateTime,
+        archivedAt: { ...dateTime, type: ["string", "null"], description: "When the robot was archived; null while in use." },
         latest: { allOf: [ref("RevisionSummary"), { type: "object", properties: { definition: ref("Robot") } }] },
         revisions: { type: "array", items: ref("RevisionSummary") },
       },
+    },
+    ArchiveState: {
+      type: "object",
+      description: "A robot or a gait after archiving or restoring it.",
+      properties: { id: uuid, name: { type: "string" }, archivedAt: { ...dateTime, type: ["string", "null"], description: "null: in use." } },
+    },
+    Deleted: {
+      type: "object",
+      description: "A robot or a gait that was deleted.",
+      properties: { id: uuid, name: { type: "string" }, deleted: { const: true } },
     },
     RobotRevision: {
       type: "object",
