@@ -125,7 +125,9 @@ export function signInReturnTo(location: { pathname: string; search: string }): 
 
 function UserMenu({ data }: { data: ShellData | null }) {
   const location = useLocation();
-  if (!data?.user) {
+  // No shell data (an error page whose loaders did not run): who is signed in is unknown, so neither "Sign in" nor a menu.
+  if (!data) return null;
+  if (!data.user) {
     return (
       <Link
         to={`/sign-in?returnTo=${encodeURIComponent(signInReturnTo(location))}`}

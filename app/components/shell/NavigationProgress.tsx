@@ -48,7 +48,8 @@ export function NavigationProgress() {
           />
         </div>
       ) : null}
-      <p role="status" aria-live="polite" className={shown ? "text-sm text-ink-muted" : "sr-only"}>
+      {/* A live region without the status role: pages keep their one status line for their own outcomes. */}
+      <p aria-live="polite" aria-atomic="true" className={shown ? "text-sm text-ink-muted" : "sr-only"}>
         {shown ? words : ""}
       </p>
     </>
