@@ -94,7 +94,10 @@ const STATUS_RESPONSES = {
   404: ["NotFound", "Nothing by that id in the caller's workspace (another workspace's things are not found either)."],
   409: ["Conflict", "A conflict with the current state: a stale revision, or a table that needs an override reason."],
   413: ["PayloadTooLarge", "The body is larger than the route's limit (the message gives both sizes)."],
-  422: ["Unprocessable", "The input is well-formed but invalid: `details` lists the issues as `{ path, message }`; a robot definition's issues also give `field`, the field's name in words, which the message starts with."],
+  422: [
+    "Unprocessable",
+    "The input is well-formed but invalid: `details` lists the issues as `{ path, message }`; a robot definition's issues also give `field`, the field's name in words, which the message starts with.",
+  ],
   429: [
     "TooManyRequests",
     "Too many requests in a minute with this token or this person's session, or too many unknown or revoked tokens from this address; the Retry-After header says when to try again.",
