@@ -40,7 +40,7 @@ for (const person of [
   { login: "theo-brandt", role: "animator" },
   { login: "kenji-wu", role: "viewer" },
 ]) {
-  test(`an ${person.role === "animator" ? "animator" : "viewer"} sees no entry for API tokens, in the menu or the settings`, async ({ page }) => {
+  test(`${person.role === "animator" ? "an animator" : "a viewer"} sees no entry for API tokens, in the menu or the settings`, async ({ page }) => {
     await signInAs(page, person.login, "/settings");
     await page.getByLabel("Your account").click();
     const menu = page.getByText(/^Signed in as @/).locator("..");
