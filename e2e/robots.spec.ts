@@ -90,7 +90,7 @@ test("an invalid upload lists the exact path and message, and saves nothing", as
 
   const alert = page.getByRole("alert");
   await expect(alert).toContainText("The definition has 1 problem. Nothing was saved.");
-  await expect(alert.getByRole("listitem")).toHaveText(["legs[2].joints.femur.minDeg: must be below maxDeg (got 40 ≥ 30)"]);
+  await expect(alert.getByRole("listitem")).toHaveText(["Leg RF, femur minimum must be below the maximum (got 40 ≥ 30)"]);
   await expect(page).toHaveURL(/\/robots\?(index&)?add=upload$/);
   await page.goto("/robots");
   await expect(page.getByRole("link", { name })).toHaveCount(0);

@@ -20,7 +20,7 @@ export {
   type Servo,
   type Vec3,
 } from "./robot";
-export { formatIssues, formatPath } from "./issues";
+export { formatIssues, formatPath, issueProblem } from "./issues";
 // Every bound of the formats is public: the sequence schema and the forms read them too.
 export * from "./bounds";
 export { DEG_PER_RAD, RAD_PER_DEG } from "./angles";

@@ -1,8 +1,26 @@
 // Turns zod's issues into the { path, message } pairs users read next to a
-// field: `legs[2].joints.femur.minDeg` / `must be below maxDeg (got 40 ≥ 30)`.
+// field: `legs[2].joints.femur.minDeg` / `must be below the maximum (got 40 ≥ 30)`.
+// Given the names of the fields, each message starts with the field's name
+// ("Leg LR, femur minimum must be below …") and the issue carries it as `field`;
+// the path stays beside it for programs.
 import type { z } from "zod";
 
-export type DefinitionIssue = { path: string; message: string };
+export type DefinitionIssue = {
+  /** Where, for programs: `legs[2].joints.femur.minDeg`; the document itself is the empty path. */
+  path: string;
+  /** What is wrong, a sentence for people; it starts with `field` when there is one. */
+  message: string;
+  /** The field's name for people ("Leg LR, femur minimum"), when the format names its fields. */
+  field?: string;
+};
+
+/** What is wrong, without the field's name: for a place that names the field already (beside its input). */
+export function issueProblem(issue: DefinitionIssue): string {
+  return issue.field && issue.message.startsWith(`${issue.field} `) ? issue.message.slice(issue.field.length + 1) : issue.message;
+}
+
+/** The name people read for the field at a path. */
+export type FieldNamer = (path: readonly PropertyKey[]) => string;
 
 type ZodIssue = z.core.$ZodIssue;
 
@@ -70,14 +88,22 @@ function messageOf(issue: ZodIssue): string {
   }
 }
 
-/** Flattens zod issues; an unknown key becomes one issue at the key's own path. */
-export function formatIssues(issues: readonly ZodIssue[]): DefinitionIssue[] {
+/** Flattens zod issues; an unknown key becomes one issue at the key's own path. With `nameOf`, each message starts with its field's name. */
+export function formatIssues(issues: readonly ZodIssue[], nameOf?: FieldNamer): DefinitionIssue[] {
   const out: DefinitionIssue[] = [];
+  const add = (path: readonly PropertyKey[], message: string) => {
+    if (!nameOf) {
+      out.push({ path: formatPath(path), message });
+      return;
+    }
+    const field = nameOf(path);
+    out.push({ path: formatPath(path), field, message: `${field} ${message}` });
+  };
   for (const issue of issues) {
     if (issue.code === "unrecognized_keys") {
-      for (const key of issue.keys) out.push({ path: formatPath([...issue.path, key]), message: "is not a known field (check the spelling)" });
+      for (const key of issue.keys) add([...issue.path, key], "is not a known field (check the spelling)");
     } else {
-      out.push({ path: formatPath(issue.path), message: messageOf(issue) });
+      add(issue.path, messageOf(issue));
     }
   }
   return out;

@@ -16,6 +16,7 @@ import {
   type Bound,
 } from "./bounds";
 import { describeValue, formatIssues, type DefinitionIssue } from "./issues";
+import { robotFieldName } from "./robot-fields";
 
 export const ROBOT_FORMAT = "gaitloom.robot/1";
 export const MIN_LEGS = 4;
@@ -63,12 +64,12 @@ const servoSchema = z
   })
   .superRefine((servo, ctx) => {
     if (servo.minUs >= servo.maxUs) {
-      ctx.addIssue({ code: "custom", path: ["minUs"], message: `must be below maxUs (got ${servo.minUs} ≥ ${servo.maxUs})` });
+      ctx.addIssue({ code: "custom", path: ["minUs"], message: `must be below the maximum pulse (got ${servo.minUs} ≥ ${servo.maxUs})` });
     } else if (servo.centerUs < servo.minUs || servo.centerUs > servo.maxUs) {
       ctx.addIssue({
         code: "custom",
         path: ["centerUs"],
-        message: `must lie within minUs..maxUs (got ${servo.centerUs} outside ${servo.minUs}..${servo.maxUs})`,
+        message: `must lie within the minimum and maximum pulse (got ${servo.centerUs} outside ${servo.minUs}..${servo.maxUs})`,
       });
     }
   });
@@ -83,7 +84,7 @@ const jointSchema = z
   })
   .superRefine((joint, ctx) => {
     if (joint.minDeg >= joint.maxDeg) {
-      ctx.addIssue({ code: "custom", path: ["minDeg"], message: `must be below maxDeg (got ${joint.minDeg} ≥ ${joint.maxDeg})` });
+      ctx.addIssue({ code: "custom", path: ["minDeg"], message: `must be below the maximum (got ${joint.minDeg} ≥ ${joint.maxDeg})` });
     }
   });
 
@@ -138,13 +139,13 @@ export const robotSchema = robotObjectSchema
   .superRefine((robot, ctx) => {
     const count = robot.legs.length;
     if (count < MIN_LEGS || count > MAX_LEGS) {
-      ctx.addIssue({ code: "custom", path: ["legs"], message: `must have ${MIN_LEGS} to ${MAX_LEGS} legs (got ${count})` });
+      ctx.addIssue({ code: "custom", path: ["legs"], message: `must number ${MIN_LEGS} to ${MAX_LEGS} (got ${count})` });
     }
     const firstIndexOfId = new Map<string, number>();
     robot.legs.forEach((leg, index) => {
       const earlier = firstIndexOfId.get(leg.id);
       if (earlier !== undefined) {
-        ctx.addIssue({ code: "custom", path: ["legs", index, "id"], message: `must be unique (got "${leg.id}", also legs[${earlier}])` });
+        ctx.addIssue({ code: "custom", path: ["legs", index, "id"], message: `must be unique (got "${leg.id}", also leg ${earlier + 1})` });
       } else {
         firstIndexOfId.set(leg.id, index);
       }
@@ -154,12 +155,12 @@ export const robotSchema = robotObjectSchema
       for (const jointName of JOINT_NAMES) {
         const channel = leg.joints[jointName].servo.channel;
         const owner = channelOwner.get(channel);
-        const here = `legs[${index}].joints.${jointName}`;
+        const here = `the ${leg.id} ${jointName}`;
         if (owner !== undefined) {
           ctx.addIssue({
             code: "custom",
             path: ["legs", index, "joints", jointName, "servo", "channel"],
-            message: `must be unique across the robot (got ${channel}, also ${owner})`,
+            message: `must be unique across the robot (got ${channel}, also used by ${owner})`,
           });
         } else {
           channelOwner.set(channel, here);
@@ -174,7 +175,7 @@ export const robotSchema = robotObjectSchema
         ctx.addIssue({
           code: "custom",
           path: ["legs", index, leg.row === undefined ? "side" : "row"],
-          message: `row ${legRow(robot, leg)} on the ${legSide(robot, leg)} side is taken by ${owner}`,
+          message: `clashes with ${owner}: both are row ${legRow(robot, leg)} on the ${legSide(robot, leg)} side`,
         });
       } else {
         seatOwner.set(seat, leg.id);
@@ -225,7 +226,7 @@ export type ParseRobotResult = { ok: true; robot: Robot } | { ok: false; issues:
 export function parseRobot(json: unknown): ParseRobotResult {
   const result = robotSchema.safeParse(json, { reportInput: true });
   if (result.success) return { ok: true, robot: result.data };
-  return { ok: false, issues: formatIssues(result.error.issues) };
+  return { ok: false, issues: formatIssues(result.error.issues, (path) => robotFieldName(json, path)) };
 }
 
 let generatedJsonSchema: Record<string, unknown> | undefined;

@@ -17,7 +17,7 @@
 //   t = |(a₃, d₃)|, zero offset = 90° − p_tibia + atan2(d₃, a₃) − atan2(d₂, a₂)
 //   (our tibia zero is at right angles to the femur, pointing down).
 import { XMLParser, XMLValidator } from "fast-xml-parser";
-import { DEG_PER_RAD } from "./angles";
+import { DEG_PER_RAD, RAD_PER_DEG } from "./angles";
 import { formatPath, type DefinitionIssue } from "./issues";
 import { JOINT_NAMES, parseRobot, ROBOT_FORMAT, type JointName, type Robot } from "./robot";
 
@@ -80,6 +80,50 @@ function tidy(value: number): number {
   const rounded = Number(value.toPrecision(12));
   return rounded === 0 ? 0 : rounded;
 }
+
+const roundTo = (value: number, decimals: number) => {
+  const rounded = Math.round(value * 10 ** decimals) / 10 ** decimals;
+  return rounded === 0 ? 0 : rounded;
+};
+
+// Degrees are kept to 0.001°, a hundredth of a table's 0.1° step.
+const ANGLE_DECIMALS = 3;
+// A value written to this many significant digits or more is read as a conversion from degrees.
+const CONVERTED_DIGITS = 4;
+
+/** How a number was written, as far as its shortest decimal form tells: its significant digits, and half a unit of its last digit. */
+function writtenPrecision(value: number): { digits: number; halfStep: number } {
+  const match = /^-?(\d+)(?:\.(\d+))?(?:e([+-]\d+))?$/.exec(String(value));
+  if (!match) return { digits: 0, halfStep: 0 };
+  const [, whole, fraction = "", exponent = "0"] = match;
+  const digits = `${whole}${fraction}`.replace(/^0+/, "").length;
+  return { digits, halfStep: 0.5 * 10 ** -(fraction.length - Number(exponent)) };
+}
+
+/**
+ * Degrees from a URDF value in radians (an angle, or a speed in rad/s), as the
+ * file means it. Radians written to four or more significant digits are
+ * usually whole degrees converted and cut short (0.7854 for 45°, which is
+ * 45.0001052296°): such a value reads as the degree value with the fewest
+ * decimals, up to three, that lies within its last digit's rounding. A value
+ * written shorter (0.5) is taken as written. Either way, to 0.001° (decision 014).
+ */
+function degreesFromRadians(radians: number): number {
+  const exact = radians * DEG_PER_RAD;
+  const { digits, halfStep } = writtenPrecision(radians);
+  if (digits >= CONVERTED_DIGITS) {
+    // A few ulps on top of the written step: the product with RAD_PER_DEG rounds too.
+    const tolerance = halfStep + 4 * Number.EPSILON * Math.abs(radians);
+    for (let decimals = 0; decimals < ANGLE_DECIMALS; decimals += 1) {
+      const candidate = roundTo(exact, decimals);
+      if (Math.abs(candidate * RAD_PER_DEG - radians) <= tolerance) return candidate;
+    }
+  }
+  return roundTo(exact, ANGLE_DECIMALS);
+}
+
+/** A number as the report shows it: at most three decimals. */
+const shown = (value: number) => String(roundTo(value, 3));
 
 type XmlNode = Record<string, unknown>;
 
@@ -154,7 +198,7 @@ function checkRevolute(joint: UrdfJoint, role: JointName): void {
 }
 
 function degrees(rad: number): string {
-  return `${tidy(rad * DEG_PER_RAD)}°`;
+  return `${shown(rad * DEG_PER_RAD)}°`;
 }
 
 /** Imports a robot from URDF XML; refuses chains it cannot map, naming the joint. */
@@ -332,13 +376,13 @@ function importOrRefuse(xml: string, options: UrdfImportOptions): UrdfImportResu
       const joint = urdfJoints[jointName];
       const limit = joint.limit!;
       const sign = signs[jointName];
-      const ends = [sign * limit.lower * DEG_PER_RAD, sign * limit.upper * DEG_PER_RAD];
-      const velocity = limit.velocity !== undefined && limit.velocity > 0 ? limit.velocity * DEG_PER_RAD : undefined;
+      const ends = [sign * degreesFromRadians(limit.lower), sign * degreesFromRadians(limit.upper)];
+      const velocity = limit.velocity !== undefined && limit.velocity > 0 ? degreesFromRadians(limit.velocity) : undefined;
       jointsOut[jointName] = {
-        minDeg: tidy(Math.min(ends[0], ends[1])),
-        maxDeg: tidy(Math.max(ends[0], ends[1])),
+        minDeg: Math.min(ends[0], ends[1]) || 0,
+        maxDeg: Math.max(ends[0], ends[1]) || 0,
         zeroOffsetDeg: tidy(wrapHalfTurn(zeroOffsetsRad[jointName] * DEG_PER_RAD)),
-        maxSpeedDegS: tidy(velocity ?? URDF_DEFAULT_SPEED_DEG_S),
+        maxSpeedDegS: velocity ?? URDF_DEFAULT_SPEED_DEG_S,
         servo: { channel: legIndex * 3 + jointIndex, ...URDF_SERVO_DEFAULTS },
       };
       if (sign < 0)
@@ -352,7 +396,7 @@ function importOrRefuse(xml: string, options: UrdfImportOptions): UrdfImportResu
         x: tidy(coxa.xyz[0] * MM_PER_M),
         y: tidy(coxa.xyz[1] * MM_PER_M),
         z: tidy((coxa.xyz[2] + femur.xyz[2]) * MM_PER_M),
-        yawDeg: tidy(wrapHalfTurn(coxa.rpy[2] * DEG_PER_RAD)),
+        yawDeg: wrapHalfTurn(degreesFromRadians(coxa.rpy[2])),
       },
       coxa: tidy(femur.xyz[0] * MM_PER_M),
       femur: tidy(femurMm),
@@ -361,8 +405,10 @@ function importOrRefuse(xml: string, options: UrdfImportOptions): UrdfImportResu
     };
     legs.push(leg);
     report.push(
-      `leg ${id}: ${coxa.name} → ${femur.name} → ${tibia.name} → foot "${foot.name}"; mount (${leg.mount.x}, ${leg.mount.y}, ${leg.mount.z}) mm, yaw ${leg.mount.yawDeg}°; ` +
-        `coxa ${leg.coxa} mm, femur ${leg.femur} mm, tibia ${leg.tibia} mm; zero offsets femur ${jointsOut.femur.zeroOffsetDeg}°, tibia ${jointsOut.tibia.zeroOffsetDeg}°`,
+      `leg ${id}: ${coxa.name} → ${femur.name} → ${tibia.name} → foot "${foot.name}"; ` +
+        `mount (${shown(leg.mount.x)}, ${shown(leg.mount.y)}, ${shown(leg.mount.z)}) mm, yaw ${shown(leg.mount.yawDeg)}°; ` +
+        `coxa ${shown(leg.coxa)} mm, femur ${shown(leg.femur)} mm, tibia ${shown(leg.tibia)} mm; ` +
+        `zero offsets femur ${shown(jointsOut.femur.zeroOffsetDeg)}°, tibia ${shown(jointsOut.tibia.zeroOffsetDeg)}°`,
       ...notes,
     );
   }

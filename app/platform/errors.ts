@@ -2,7 +2,8 @@
 // (errors.server.ts) and the components that show them, which must not
 // import server modules.
 
-export type Issue = { path: string; message: string };
+/** A problem at a path; `field` names the field in words when the message starts with it ("Leg LF, tibia length must be …"). */
+export type Issue = { path: string; message: string; field?: string };
 
 /**
  * What a client needs to act on a refusal: the form field to mark, the

@@ -1,14 +1,18 @@
 import { Link } from "react-router";
+import { Notice } from "~/components/common/Notice";
 import type { Route } from "./+types/home";
 import { currentMember, currentUser } from "~/platform/access.server";
 import { summarizeWorkspace } from "~/features/accounts/workspaces.server";
-import type { RoutePermissions } from "~/platform/permissions";
+import { ROLE_LABELS, type RoutePermissions } from "~/platform/permissions";
 
 export const permissions = { loader: "public" } satisfies RoutePermissions;
 
 export async function loader({ request }: Route.LoaderArgs) {
   const [user, member] = await Promise.all([currentUser(request), currentMember(request)]);
-  return { signedIn: Boolean(user), workspace: member ? await summarizeWorkspace(member.workspace) : null };
+  // After accepting an invitation: said for the workspace the person is now in, and only that one.
+  const joined =
+    member && new URL(request.url).searchParams.get("joined") === member.workspace.id ? { workspaceName: member.workspace.name, role: member.role } : null;
+  return { signedIn: Boolean(user), workspace: member ? await summarizeWorkspace(member.workspace) : null, joined };
 }
 
 export const meta: Route.MetaFunction = () => [{ title: "Gaitloom — walking motions you can ship" }];
@@ -17,9 +21,10 @@ const primary = "rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover
 const secondary = "rounded-md border border-line px-4 py-2 font-medium hover:bg-sunken";
 
 export default function Home({ loaderData }: Route.ComponentProps) {
-  const { workspace, signedIn } = loaderData;
+  const { workspace, signedIn, joined } = loaderData;
   return (
     <div className="mx-auto max-w-3xl py-6">
+      <Notice success={joined ? `You joined ${joined.workspaceName} as ${ROLE_LABELS[joined.role].toLowerCase()}.` : null} />
       <h1 className="text-3xl font-semibold tracking-tight">Walking motions you can ship</h1>
       <p className="mt-3 text-lg text-ink-muted">
         Lay out the key poses of a walk on a timeline and Gaitloom checks every frame against each leg's reach, joint limits, servo speed and balance. Approved

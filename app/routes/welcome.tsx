@@ -36,7 +36,9 @@ export async function action({ request }: Route.ActionArgs) {
         : (await acceptInvitation(user, { id: parsed.data.invitationId })).workspaceId;
     const session = await readSession(request);
     session.set("workspaceId", workspaceId);
-    return redirect("/", { headers: { "Set-Cookie": await commitSession(session) } });
+    // The start page confirms a workspace joined.
+    const next = parsed.data.intent === "accept" ? `/?joined=${workspaceId}` : "/";
+    return redirect(next, { headers: { "Set-Cookie": await commitSession(session) } });
   });
 }
 

@@ -8,9 +8,14 @@ import { formatPath, parseRobot, robotJsonSchema, type DefinitionIssue } from ".
 import { isBounded, numberSchemas, numericLeaves, withLeaf } from "../support/numbers";
 import { DEMO_ROBOT_FILES, demoRobotJson } from "../support/robots";
 
+/** The issues with what is wrong after the field's name (the robot test holds the names): `{ path, message: "must be at most 2000 (got …)" }`. */
 function issuesOf(json: unknown): DefinitionIssue[] {
   const parsed = parseRobot(json);
-  return parsed.ok ? [] : parsed.issues;
+  if (parsed.ok) return [];
+  return parsed.issues.map(({ path, field, message }) => {
+    if (!field || !message.startsWith(`${field} `)) throw new Error(`the message of ${path} does not start with its field's name: ${message}`);
+    return { path, message: message.slice(field.length + 1) };
+  });
 }
 
 const pier = demoRobotJson("pier-crawler");

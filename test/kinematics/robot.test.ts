@@ -16,7 +16,7 @@ function issuesOf(json: unknown) {
   return parsed.issues;
 }
 
-describe("parseRobot: every problem as { path, message }", () => {
+describe("parseRobot: every problem as { path, field, message }, the message in the words of the robot form", () => {
   it("accepts the demo robots", () => {
     for (const name of ["pier-crawler", "quay-walker", "hull-climber"] as const) {
       const parsed = parseRobot(demoRobotJson(name));
@@ -26,59 +26,96 @@ describe("parseRobot: every problem as { path, message }", () => {
 
   // Breaks the robot type cannot express (a wrong type, a misspelt or missing field) go through
   // Object.assign and Reflect.deleteProperty, as a hand-edited file would carry them.
-  const cases: [string, (robot: Robot) => unknown, { path: string; message: string }[]][] = [
+  // Each message starts with the field's name as the robot form labels it; the path stays beside it for programs.
+  const issue = (path: string, field: string, problem: string) => ({ path, field, message: `${field} ${problem}` });
+  const cases: [string, (robot: Robot) => unknown, { path: string; field: string; message: string }[]][] = [
     [
       "minDeg not below maxDeg",
       (r) => ((r.legs[2].joints.femur.minDeg = 40), (r.legs[2].joints.femur.maxDeg = 30), r),
-      [{ path: "legs[2].joints.femur.minDeg", message: "must be below maxDeg (got 40 ≥ 30)" }],
+      [issue("legs[2].joints.femur.minDeg", "Leg LR, femur minimum", "must be below the maximum (got 40 ≥ 30)")],
     ],
-    ["too few legs", (r) => ((r.legs = r.legs.slice(0, 3)), delete r.rest, r), [{ path: "legs", message: "must have 4 to 8 legs (got 3)" }]],
-    ["a repeated leg id", (r) => ((r.legs[3].id = "LF"), delete r.rest, r), [{ path: "legs[3].id", message: 'must be unique (got "LF", also legs[0])' }]],
+    ["too few legs", (r) => ((r.legs = r.legs.slice(0, 3)), delete r.rest, r), [issue("legs", "The robot's legs", "must number 4 to 8 (got 3)")]],
+    ["a repeated leg id", (r) => ((r.legs[3].id = "LF"), delete r.rest, r), [issue("legs[3].id", "Leg 4, name", 'must be unique (got "LF", also leg 1)')]],
     [
       "a repeated servo channel",
       (r) => ((r.legs[1].joints.tibia.servo.channel = 0), r),
-      [{ path: "legs[1].joints.tibia.servo.channel", message: "must be unique across the robot (got 0, also legs[0].joints.coxa)" }],
+      [issue("legs[1].joints.tibia.servo.channel", "Leg LM, tibia servo channel", "must be unique across the robot (got 0, also used by the LF coxa)")],
     ],
-    ["a rest pose for no leg", (r) => ((restOf(r).XX = { coxa: 0, femur: 0, tibia: 0 }), r), [{ path: "rest.XX", message: 'must name a leg (no leg "XX")' }]],
-    ["a rest pose missing a leg", (r) => (delete restOf(r).LM, r), [{ path: "rest.LM", message: "is missing: the rest pose gives every leg" }]],
+    [
+      "a rest pose for no leg",
+      (r) => ((restOf(r).XX = { coxa: 0, femur: 0, tibia: 0 }), r),
+      [issue("rest.XX", "Rest pose, leg XX", 'must name a leg (no leg "XX")')],
+    ],
+    ["a rest pose missing a leg", (r) => (delete restOf(r).LM, r), [issue("rest.LM", "Rest pose, leg LM", "is missing: the rest pose gives every leg")]],
     [
       "a rest angle outside the limits",
       (r) => ((restOf(r).LM.tibia = -120), r),
-      [{ path: "rest.LM.tibia", message: "must lie within the joint limits -85..80 (got -120)" }],
+      [issue("rest.LM.tibia", "Rest pose, leg LM, tibia", "must lie within the joint limits -85..80 (got -120)")],
     ],
-    ["a missing field", (r) => (Reflect.deleteProperty(r.legs[0], "femur"), r), [{ path: "legs[0].femur", message: "is required" }]],
-    ["a number given as text", (r) => (Object.assign(r.legs[0], { coxa: "30" }), r), [{ path: "legs[0].coxa", message: 'must be a number (got "30")' }]],
-    ["a zero link length", (r) => ((r.legs[0].tibia = 0), r), [{ path: "legs[0].tibia", message: "must be at least 1 (got 0)" }]],
+    ["a missing field", (r) => (Reflect.deleteProperty(r.legs[0], "femur"), r), [issue("legs[0].femur", "Leg LF, femur length", "is required")]],
+    [
+      "a number given as text",
+      (r) => (Object.assign(r.legs[0], { coxa: "30" }), r),
+      [issue("legs[0].coxa", "Leg LF, coxa length", 'must be a number (got "30")')],
+    ],
+    ["a zero link length", (r) => ((r.legs[0].tibia = 0), r), [issue("legs[0].tibia", "Leg LF, tibia length", "must be at least 1 (got 0)")]],
     [
       "a misspelt field",
       (r) => (Object.assign(r.legs[0].joints.coxa, { zeroOffset: 1 }), r),
-      [{ path: "legs[0].joints.coxa.zeroOffset", message: "is not a known field (check the spelling)" }],
+      [issue("legs[0].joints.coxa.zeroOffset", 'Leg LF, coxa joint "zeroOffset"', "is not a known field (check the spelling)")],
     ],
     [
       "another format",
       (r) => (Object.assign(r, { format: "gaitloom.robot/2" }), r),
-      [{ path: "format", message: 'must be "gaitloom.robot/1" (got "gaitloom.robot/2")' }],
+      [issue("format", "Format", 'must be "gaitloom.robot/1" (got "gaitloom.robot/2")')],
     ],
-    ["an unknown side", (r) => (Object.assign(r.legs[0], { side: "up" }), r), [{ path: "legs[0].side", message: 'must be one of "left", "right" (got "up")' }]],
+    [
+      "an unknown side",
+      (r) => (Object.assign(r.legs[0], { side: "up" }), r),
+      [issue("legs[0].side", "Leg LF, side", 'must be one of "left", "right" (got "up")')],
+    ],
     [
       "a centre pulse outside the range",
       (r) => ((r.legs[0].joints.coxa.servo.centerUs = 2600), r),
-      [{ path: "legs[0].joints.coxa.servo.centerUs", message: "must lie within minUs..maxUs (got 2600 outside 500..2500)" }],
+      [
+        issue(
+          "legs[0].joints.coxa.servo.centerUs",
+          "Leg LF, coxa servo centre pulse",
+          "must lie within the minimum and maximum pulse (got 2600 outside 500..2500)",
+        ),
+      ],
     ],
     [
       "minUs not below maxUs",
       (r) => ((r.legs[0].joints.coxa.servo.minUs = 2600), r),
-      [{ path: "legs[0].joints.coxa.servo.minUs", message: "must be below maxUs (got 2600 ≥ 2500)" }],
+      [issue("legs[0].joints.coxa.servo.minUs", "Leg LF, coxa servo minimum pulse", "must be below the maximum pulse (got 2600 ≥ 2500)")],
     ],
     [
       "a fractional channel",
       (r) => ((r.legs[0].joints.coxa.servo.channel = 1.5), r),
-      [{ path: "legs[0].joints.coxa.servo.channel", message: "must be a whole number (got 1.5)" }],
+      [issue("legs[0].joints.coxa.servo.channel", "Leg LF, coxa servo channel", "must be a whole number (got 1.5)")],
     ],
-    ["two legs in one row", (r) => ((r.legs[1].row = 0), r), [{ path: "legs[1].row", message: "row 0 on the left side is taken by LF" }]],
-    ["a mount yaw past a half turn", (r) => ((r.legs[0].mount.yawDeg = 200), r), [{ path: "legs[0].mount.yawDeg", message: "must be at most 180 (got 200)" }]],
-    ["a short centre of mass", (r) => (Object.assign(r.body, { com: [0, 0] }), r), [{ path: "body.com", message: "must have at least 3 items (got 2)" }]],
-    ["not an object at all", () => "hello", [{ path: "", message: 'must be an object (got "hello")' }]],
+    ["two legs in one row", (r) => ((r.legs[1].row = 0), r), [issue("legs[1].row", "Leg LM, row", "clashes with LF: both are row 0 on the left side")]],
+    [
+      "a mount yaw past a half turn",
+      (r) => ((r.legs[0].mount.yawDeg = 200), r),
+      [issue("legs[0].mount.yawDeg", "Leg LF, mount yaw", "must be at most 180 (got 200)")],
+    ],
+    ["a short centre of mass", (r) => (Object.assign(r.body, { com: [0, 0] }), r), [issue("body.com", "Centre of mass", "must have at least 3 items (got 2)")]],
+    [
+      "a centre of mass given as text",
+      (r) => (Object.assign(r.body, { com: [0, "up", 0] }), r),
+      [issue("body.com[1]", "Centre of mass y", 'must be a number (got "up")')],
+    ],
+    [
+      "a leg without a usable id, named by its place",
+      (r) => (Object.assign(r.legs[2], { id: "3rd", tibia: 0 }), delete r.rest, r),
+      [
+        issue("legs[2].id", "Leg 3, name", 'must start with a letter and hold only letters, digits and _, 16 at most (got "3rd")'),
+        issue("legs[2].tibia", "Leg 3, tibia length", "must be at least 1 (got 0)"),
+      ],
+    ],
+    ["not an object at all", () => "hello", [issue("", "The definition", 'must be an object (got "hello")')]],
   ];
   for (const [what, breakIt, expected] of cases) {
     it(`refuses ${what}`, () => {
@@ -91,8 +128,8 @@ describe("parseRobot: every problem as { path, message }", () => {
     robot.legs[0].coxa = -1;
     robot.legs[4].joints.femur.maxSpeedDegS = 0;
     expect(issuesOf(robot)).toEqual([
-      { path: "legs[0].coxa", message: "must be at least 1 (got -1)" },
-      { path: "legs[4].joints.femur.maxSpeedDegS", message: "must be at least 1 (got 0)" },
+      { path: "legs[0].coxa", field: "Leg LF, coxa length", message: "Leg LF, coxa length must be at least 1 (got -1)" },
+      { path: "legs[4].joints.femur.maxSpeedDegS", field: "Leg RM, femur maximum speed", message: "Leg RM, femur maximum speed must be at least 1 (got 0)" },
     ]);
   });
 });

@@ -125,7 +125,7 @@ describe("importUrdf (URDF XML specification: joint origin xyz/rpy in m/rad, axi
     expect(result.report).toContain('base link "base_link" is the body frame; 4 legs found');
     expect(result.report).toContain('ignored fixed joint "imu_joint" to "imu_link" (no moving parts)');
     expect(result.report).toContain(
-      'leg FL: fl_coxa → fl_femur → fl_tibia → foot "fl_foot"; mount (60, 40, -3) mm, yaw 35°; coxa 32 mm, femur 70 mm, tibia 100 mm; zero offsets femur 10°, tibia 36.8698976458°',
+      'leg FL: fl_coxa → fl_femur → fl_tibia → foot "fl_foot"; mount (60, 40, -3) mm, yaw 35°; coxa 32 mm, femur 70 mm, tibia 100 mm; zero offsets femur 10°, tibia 36.87°',
     );
     expect(result.report).toContain('leg RL: coxa "rl_coxa" axis (0 0 -1) turns against our sense: its angles and limits are negated');
     expect(result.report).toContain('leg RL: coxa "rl_coxa" gives no limit velocity: maxSpeedDegS set to 300');
@@ -217,7 +217,7 @@ describe("importUrdf (URDF XML specification: joint origin xyz/rpy in m/rad, axi
       editJoint("fl_coxa", (line) => line.replace('rpy="0 0 0.6108652381980153"', 'rpy="0.1 0 0.6108652381980153"')),
       {
         path: "joint.fl_coxa.origin.rpy",
-        message: 'coxa joint "fl_coxa": origin roll and pitch must be 0 (got 5.72957795131°, 0°): the coxa turns about the body\'s vertical',
+        message: 'coxa joint "fl_coxa": origin roll and pitch must be 0 (got 5.73°, 0°): the coxa turns about the body\'s vertical',
       },
     ],
     [

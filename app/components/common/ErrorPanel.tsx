@@ -33,21 +33,42 @@ export function RouteErrorBoundary() {
   );
 }
 
+// A title for each refusal we answer with, in our words: the framework's status
+// text is not ours ("Method Not Allowed") and, for a refusal thrown on the server,
+// not even the status's ("Internal Server Error" for a 410).
+const TITLES: Record<number, string> = {
+  400: "The request could not be read",
+  401: "Please sign in",
+  403: "Your role cannot do this",
+  404: "There is no page here",
+  405: "This page takes no form",
+  409: "This clashes with a change made meanwhile",
+  410: "This link no longer works",
+  413: "That was too large to take",
+  415: "That kind of content is not taken here",
+  422: "That could not be used",
+  429: "Too many requests for now",
+  503: "This is not available right now",
+};
+
+const DETAILS: Record<number, string> = {
+  401: "This page needs you signed in.",
+  403: "Ask an owner of the workspace for access.",
+  404: "The address may be mistyped, or the robot or gait it pointed to was removed.",
+  // The framework's own text for this names route modules: it is not for people.
+  405: "Something sent a form to an address that only shows a page, so nothing was changed. Open the page and use its own buttons.",
+  410: "The link was used, withdrawn or has expired.",
+};
+
 function describe(error: unknown): { status: number; title: string; detail: string } {
   if (isRouteErrorResponse(error)) {
     const message = typeof error.data === "string" ? error.data : error.data?.message;
-    if (error.status === 404) {
-      return {
-        status: 404,
-        title: "There is no page here",
-        detail: message ?? "The address may be mistyped, or the robot or gait it pointed to was removed.",
-      };
-    }
-    if (error.status === 401) return { status: 401, title: "Please sign in", detail: message ?? "This page needs you signed in." };
-    if (error.status === 403) {
-      return { status: 403, title: "Your role cannot do this", detail: message ?? "Ask an owner of the workspace for access." };
-    }
-    return { status: error.status, title: error.statusText || "Request failed", detail: message ?? "" };
+    const ours = error.status !== 405 && typeof message === "string" ? message : undefined;
+    return {
+      status: error.status,
+      title: TITLES[error.status] ?? (error.status >= 500 ? "Something broke on our side" : "The request was refused"),
+      detail: ours ?? DETAILS[error.status] ?? "Go back and try again; if it keeps happening, tell the owner of the workspace.",
+    };
   }
   return {
     status: 500,

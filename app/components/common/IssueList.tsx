@@ -1,8 +1,18 @@
-// Problems as a list, each written the one way: the path it is at, in code,
-// and what is wrong there.
+// Problems as a list, each written the one way: the message alone when it
+// names its field in words (a robot definition's: "Leg LF, tibia length must
+// be …"), else the path it is at, in code, and what is wrong there.
 import type { ComponentProps } from "react";
+import type { Issue } from "~/platform/errors";
 
-type Issue = { path: string; message: string };
+/** One issue as the lists show it. */
+export function IssueText({ issue, whole = "" }: { issue: Issue; whole?: string }) {
+  if (issue.field) return <>{issue.message}</>;
+  return (
+    <>
+      <code className="font-mono">{issue.path || whole}</code>: {issue.message}
+    </>
+  );
+}
 
 export function IssueList({
   issues,
@@ -17,7 +27,7 @@ export function IssueList({
     <ul {...list}>
       {issues.map((issue, index) => (
         <li key={`${issue.path}-${index}`}>
-          <code className="font-mono">{issue.path || whole}</code>: {issue.message}
+          <IssueText issue={issue} whole={whole} />
         </li>
       ))}
     </ul>

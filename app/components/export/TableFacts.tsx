@@ -49,7 +49,8 @@ export function TableFacts({ facts }: { facts: TableFactsData }) {
       {rows.map(([term, value]) => (
         <div key={term} className="contents">
           <dt className="text-ink-muted">{term}</dt>
-          <dd className="min-w-0">{value}</dd>
+          {/* A long file name breaks where it must instead of widening the page. */}
+          <dd className="min-w-0 [overflow-wrap:anywhere]">{value}</dd>
         </div>
       ))}
     </dl>

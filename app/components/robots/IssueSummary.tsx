@@ -1,5 +1,7 @@
-// Every problem of the working copy in one list, each linked to its field when
-// the form has one (the same messages also sit next to the fields).
+// Every problem of the working copy in one list, in the words of the form
+// ("Leg LF, tibia length must be …"), each linked to its field when the form
+// has one (the same messages also sit next to the fields).
+import { IssueText } from "~/components/common/IssueList";
 import type { DefinitionIssue } from "~/kinematics";
 
 export function IssueSummary({ issues, fieldFor }: { issues: readonly DefinitionIssue[]; fieldFor: (path: string) => string | null }) {
@@ -13,17 +15,16 @@ export function IssueSummary({ issues, fieldFor }: { issues: readonly Definition
       <ul className="mt-2 space-y-1">
         {issues.map((issue, index) => {
           const target = fieldFor(issue.path);
-          const path = <code className="font-mono">{issue.path || "(the whole definition)"}</code>;
+          const text = <IssueText issue={issue} whole="(the whole definition)" />;
           return (
             <li key={`${issue.path}-${index}`}>
               {target ? (
                 <a href={`#${target}`} className="underline underline-offset-2">
-                  {path}
+                  {text}
                 </a>
               ) : (
-                path
+                text
               )}
-              : {issue.message}
             </li>
           );
         })}

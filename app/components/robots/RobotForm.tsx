@@ -2,7 +2,8 @@
 // side views. The working copy is checked with parseRobot on every change and
 // each problem is shown next to its field. Save sends the whole definition with
 // the revision it started from; the server makes it the next revision or says why not.
-import { useCallback, useEffect, useMemo, useRef, useState } from "react";
+// Leaving with unsaved changes asks first (LeaveGuard).
+import { useCallback, useMemo, useRef, useState } from "react";
 import { Link, type FetcherWithComponents } from "react-router";
 import { IssueList } from "~/components/common/IssueList";
 import { Section } from "~/components/common/Section";
@@ -17,6 +18,7 @@ import { BodySection } from "./BodySection";
 import { EditorActionsProvider, EditorDataProvider, type EditorActions, type EditorData, type EditorMode } from "./robot-form-context";
 import { IssueSummary } from "./IssueSummary";
 import { JointTable } from "./JointTable";
+import { LeaveGuard } from "./LeaveGuard";
 import { LegTable } from "./LegTable";
 import { LegTools } from "./LegTools";
 import { RestPoseSection } from "./RestPoseSection";
@@ -165,13 +167,6 @@ function SaveBar({
   const result = fetcher.data;
   const definition = JSON.stringify(document);
 
-  useEffect(() => {
-    if (!dirty) return;
-    const warn = (event: BeforeUnloadEvent) => event.preventDefault();
-    window.addEventListener("beforeunload", warn);
-    return () => window.removeEventListener("beforeunload", warn);
-  }, [dirty]);
-
   const refusal = result && "error" in result ? result : null;
   const stale = refusal?.code === "stale" && refusal.details?.baseRevision === baseRevision ? refusal : null;
   const latest = stale?.details?.latest;
@@ -185,6 +180,7 @@ function SaveBar({
 
   return (
     <section aria-label="Save" className="sticky bottom-0 z-10 space-y-2 rounded-lg border border-line bg-surface px-4 py-3 shadow-sm">
+      <LeaveGuard dirty={dirty} />
       {stale && latest ? (
         <div role="alert" className="rounded-md border border-warning bg-warning-soft p-3 text-sm">
           <p className="font-semibold">

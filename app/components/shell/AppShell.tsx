@@ -2,6 +2,7 @@ import { Form, Link, NavLink, useLocation } from "react-router";
 import type { Role } from "~/platform/permissions";
 import { type Action, ROLE_LABELS, can } from "~/platform/permissions";
 import { Mark } from "./Mark";
+import { NavigationProgress } from "./NavigationProgress";
 import { ThemeToggle } from "./ThemeToggle";
 
 export type ShellData = {
@@ -30,6 +31,7 @@ export function AppShell({ data, children }: { data: ShellData | null; children:
         </Link>
         {data?.user ? <WorkspaceSwitcher data={data} /> : null}
         <div className="ml-auto flex items-center gap-3">
+          <NavigationProgress />
           {data?.localMail ? (
             <Link to="/local/mail" className="text-sm text-ink-muted hover:text-ink">
               Local inbox
@@ -111,12 +113,24 @@ function WorkspaceSwitcher({ data }: { data: ShellData }) {
   );
 }
 
+/**
+ * Where the header's "Sign in" brings the person back to: this page with its
+ * query, or, on the sign-in page itself, the page it was already taking them
+ * to (an invitation link, say), never the sign-in page.
+ */
+export function signInReturnTo(location: { pathname: string; search: string }): string {
+  if (location.pathname === "/sign-in") return new URLSearchParams(location.search).get("returnTo") ?? "/";
+  return `${location.pathname}${location.search}`;
+}
+
 function UserMenu({ data }: { data: ShellData | null }) {
   const location = useLocation();
-  if (!data?.user) {
+  // No shell data (an error page whose loaders did not run): who is signed in is unknown, so neither "Sign in" nor a menu.
+  if (!data) return null;
+  if (!data.user) {
     return (
       <Link
-        to={`/sign-in?returnTo=${encodeURIComponent(location.pathname)}`}
+        to={`/sign-in?returnTo=${encodeURIComponent(signInReturnTo(location))}`}
         className="rounded-md bg-accent px-3 py-1 text-sm font-medium text-on-accent hover:bg-accent-strong"
       >
         Sign in
@@ -135,9 +149,12 @@ function UserMenu({ data }: { data: ShellData | null }) {
       </summary>
       <div className="absolute right-0 z-20 mt-1 w-56 rounded-md border border-line bg-surface p-2 shadow-lg">
         <p className="px-2 py-1 text-xs text-ink-muted">Signed in as @{data.user.login}</p>
-        <Link to="/settings/tokens" className="block rounded px-2 py-1 text-sm hover:bg-sunken">
-          API tokens
-        </Link>
+        {/* Only the roles that may hold a token: the others would reach a refusal. */}
+        {can(data.role, "tokens.manage") ? (
+          <Link to="/settings/tokens" className="block rounded px-2 py-1 text-sm hover:bg-sunken">
+            API tokens
+          </Link>
+        ) : null}
         <Link to="/account/sessions" className="block rounded px-2 py-1 text-sm hover:bg-sunken">
           Your sessions
         </Link>

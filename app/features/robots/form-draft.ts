@@ -1,7 +1,7 @@
 // The robot editor's working copy: a JSON document shaped like a robot
 // definition that may be invalid while someone types. parseRobot checks it on
 // every change and its issues are shown next to the fields they name.
-import { parseRobot, type DefinitionIssue, type Robot } from "~/kinematics";
+import { issueProblem, parseRobot, type DefinitionIssue, type Robot } from "~/kinematics";
 import { getAt, setAt, type FieldPath } from "./paths";
 
 export type RobotDocument = Record<string, unknown>;
@@ -10,7 +10,7 @@ export type DraftCheck = {
   /** The parsed robot, or null while the document has problems. */
   robot: Robot | null;
   issues: DefinitionIssue[];
-  /** Issue messages by path (`legs[0].femur`), for the field that shows them. */
+  /** What is wrong, by path (`legs[0].femur`), for the field that shows it: the message without the field's name, which the input has. */
   byPath: Map<string, string[]>;
 };
 
@@ -18,7 +18,7 @@ export function checkDraft(document: RobotDocument): DraftCheck {
   const parsed = parseRobot(document);
   if (parsed.ok) return { robot: parsed.robot, issues: [], byPath: new Map() };
   const byPath = new Map<string, string[]>();
-  for (const issue of parsed.issues) byPath.set(issue.path, [...(byPath.get(issue.path) ?? []), issue.message]);
+  for (const issue of parsed.issues) byPath.set(issue.path, [...(byPath.get(issue.path) ?? []), issueProblem(issue)]);
   return { robot: null, issues: parsed.issues, byPath };
 }
 

@@ -14,6 +14,7 @@ import { requireAccess } from "~/platform/access.server";
 import { robotsWithProfiles } from "~/features/robots/calibration.server";
 import { config } from "~/platform/config.server";
 import { pageGuard } from "~/platform/errors.server";
+import { formatNumber } from "~/platform/format";
 import { benchPageData } from "./page-data.server";
 import type { RoutePermissions } from "~/platform/permissions";
 
@@ -41,6 +42,9 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
   const sweep = query.kind === "sweep";
   const leg = legs.find((entry) => entry.id === query.leg) ?? null;
   const joint = leg?.joints.find((entry) => entry.joint === query.joint) ?? null;
+  // The sweep's speed is measured from its frames, once, and said the same way wherever it is shown: the
+  // fraction × the limit is only what was asked, and a stretch in whole frames moves a little slower.
+  const peakSpeed = checks?.peakSpeedDegS ?? null;
   return (
     <>
       <PageHeader title="Bring-up tables" lead="Bench tests for a robot on a stand: centre every servo, then sweep one joint at a time through its range.">
@@ -123,8 +127,14 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
 
       {sweep && joint ? (
         <p className="mt-3 text-sm text-ink-muted">
-          {leg!.id}.{joint.joint} on channel {joint.channel}: {joint.minDeg}° to {joint.maxDeg}°, limit {joint.maxSpeedDegS}°/s; this sweep moves at{" "}
-          <span className="numeric">{Math.round(query.speed * joint.maxSpeedDegS * 10) / 10}</span>°/s.
+          {leg!.id}.{joint.joint} on channel {joint.channel}: {joint.minDeg}° to {joint.maxDeg}°, limit {joint.maxSpeedDegS}°/s
+          {peakSpeed !== null ? (
+            <>
+              ; this sweep moves at up to <span className="numeric">{speedText(peakSpeed)}</span>°/s (each stretch takes whole frames, so at most {query.speed}{" "}
+              × the limit)
+            </>
+          ) : null}
+          .
         </p>
       ) : null}
 
@@ -144,7 +154,7 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
             {`${Math.round(checks.durationS * 100) / 100} s long. `}
             {checks.peakSpeedDegS !== null && checks.limitDegS !== null ? (
               <span className={checks.peakSpeedDegS > checks.limitDegS ? "font-medium text-danger" : ""}>
-                Peak speed {Math.round(checks.peakSpeedDegS * 10) / 10}°/s of {checks.limitDegS}°/s allowed
+                Peak speed {speedText(checks.peakSpeedDegS)}°/s of {checks.limitDegS}°/s allowed
                 {checks.peakSpeedDegS > checks.limitDegS ? " — too fast for this servo" : ""}.
               </span>
             ) : null}
@@ -170,6 +180,9 @@ export default function BringUp({ loaderData }: Route.ComponentProps) {
     </>
   );
 }
+
+/** A joint speed as the page shows it: to 0.1°/s. */
+const speedText = (degreesPerSecond: number) => formatNumber(degreesPerSecond, 1);
 
 export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
   return <ErrorPanel error={error} />;

@@ -29,7 +29,8 @@ export async function action({ request, params }: Route.ActionArgs) {
     const { workspaceId } = await acceptInvitation(user, { token: params.token });
     const session = await readSession(request);
     session.set("workspaceId", workspaceId);
-    return redirect("/", { headers: { "Set-Cookie": await commitSession(session) } });
+    // The start page confirms what was joined.
+    return redirect(`/?joined=${workspaceId}`, { headers: { "Set-Cookie": await commitSession(session) } });
   });
 }
 

@@ -21,7 +21,7 @@ export default function SettingsLayout({ loaderData }: Route.ComponentProps) {
   ];
   return (
     <>
-      <PageHeader title="Settings" lead="The workspace, its members and their roles, and API tokens." />
+      <PageHeader title="Settings" lead={`The workspace, its members and their roles${loaderData.tokens ? ", and API tokens" : ""}.`} />
       <nav aria-label="Settings" className="mb-6 flex gap-1 border-b border-line">
         {tabs.map((tab) => (
           <NavLink

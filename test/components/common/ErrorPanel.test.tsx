@@ -1,6 +1,6 @@
 // @vitest-environment jsdom
 import { cleanup, render, screen } from "@testing-library/react";
-import { createRoutesStub, data } from "react-router";
+import { createRoutesStub, data, UNSAFE_ErrorResponseImpl as ErrorResponseImpl } from "react-router";
 import { afterEach, describe, expect, test } from "vitest";
 import { RouteErrorBoundary } from "~/components/common/ErrorPanel";
 
@@ -36,6 +36,26 @@ describe("ErrorPanel", () => {
     });
     expect(await screen.findByRole("heading", { name: "Your role cannot do this" })).toBeTruthy();
     expect(screen.getByText("Viewers cannot edit robots.")).toBeTruthy();
+  });
+
+  test("a 410 says the link no longer works, with the server's reason, never the status text the framework gives it", async () => {
+    renderFailingRoute(() => {
+      throw data({ message: "This invitation link was already used." }, { status: 410, statusText: "Internal Server Error" });
+    });
+    expect(await screen.findByRole("heading", { name: "This link no longer works" })).toBeTruthy();
+    expect(screen.getByText("This invitation link was already used.")).toBeTruthy();
+    expect(screen.queryByText(/Internal Server Error/)).toBeNull();
+  });
+
+  test("a 405 says the page takes no form in our words, not the framework's text naming route modules", async () => {
+    renderFailingRoute(() => {
+      // What the framework throws for a POST to a route without an action.
+      const text = 'You made a POST request to "/settings" but did not provide an `action` for route "routes/settings/layout"';
+      throw new ErrorResponseImpl(405, "Method Not Allowed", new Error(text), true);
+    });
+    expect(await screen.findByRole("heading", { name: "This page takes no form" })).toBeTruthy();
+    expect(screen.getByText(/nothing was changed/)).toBeTruthy();
+    expect(screen.queryByText(/routes\/settings|action|Method Not Allowed/)).toBeNull();
   });
 
   test("a crash is a 500 that says nothing saved was lost", async () => {

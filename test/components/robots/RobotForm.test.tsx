@@ -48,7 +48,9 @@ describe("robot editor", { timeout: 30_000 }, () => {
     expect(message?.textContent).toBe("⚠ must be at least 1 (got -5)");
     const summary = screen.getByRole("region", { name: "Problems" });
     expect(within(summary).getByText("1 problem to fix before saving")).toBeTruthy();
-    expect(within(summary).getByRole("link", { name: "legs[0].femur" }).getAttribute("href")).toBe(`#${femur.id}`);
+    // The summary names the field as people read it, not by its path.
+    expect(within(summary).getByRole("link", { name: "Leg LF, femur length must be at least 1 (got -5)" }).getAttribute("href")).toBe(`#${femur.id}`);
+    expect(within(summary).queryByText(/legs\[0\]/)).toBeNull();
     expect(screen.getByRole("button", { name: "Save as revision 4" })).toHaveProperty("disabled", true);
     expect(screen.getByText(/The views show the last valid definition/)).toBeTruthy();
 
@@ -65,7 +67,7 @@ describe("robot editor", { timeout: 30_000 }, () => {
     renderEditor("edit");
     const minimum = field("LM femur minimum (servo degrees)");
     fireEvent.change(minimum, { target: { value: "120" } });
-    expect(document.getElementById(minimum.getAttribute("aria-describedby")!)?.textContent).toMatch(/must be below maxDeg \(got 120 ≥ 85\)/);
+    expect(document.getElementById(minimum.getAttribute("aria-describedby")!)?.textContent).toMatch(/must be below the maximum \(got 120 ≥ 85\)/);
   });
 
   test("Save posts the whole definition with its base revision and message", async () => {

@@ -24,9 +24,11 @@ describe("the editor's working copy", () => {
     const check = checkDraft(document);
     expect(check.robot).toBeNull();
     expect(check.byPath.get("legs[0].femur")).toEqual(["must be at least 1 (got -5)"]);
-    expect(check.byPath.get("legs[1].joints.femur.minDeg")?.[0]).toMatch(/^must be below maxDeg \(got 90 ≥ \d+\)$/);
+    expect(check.byPath.get("legs[1].joints.femur.minDeg")?.[0]).toMatch(/^must be below the maximum \(got 90 ≥ \d+\)$/);
     expect(check.byPath.get("standHeight")).toEqual(['must be a number (got "abc")']);
     expect(check.byPath.get("body.massKg")).toEqual(["is required"]);
+    // Beside the field, what is wrong; the summary reads the whole message, which names the field.
+    expect(check.issues.find((issue) => issue.path === "legs[0].femur")?.message).toBe("Leg LF, femur length must be at least 1 (got -5)");
   });
 
   test("renaming a leg carries its rest angles; removing drops them", () => {

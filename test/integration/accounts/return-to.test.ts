@@ -39,7 +39,7 @@ describe("the sign-in page sends a signed-in person on, never off the site", () 
   test("a signed-out person gets the form with the checked address in it", async () => {
     const request = await requestsAs("signed-out", ids);
     const answer = await outcome(async () => load(signIn, await request("GET", `/sign-in?returnTo=${encodeURIComponent("/\t/evil.example")}`)));
-    expect(answer.body).toEqual({ returnTo: "/" });
+    expect(answer.body).toEqual({ returnTo: "/", invitation: null });
   });
 });
 

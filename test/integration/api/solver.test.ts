@@ -106,7 +106,10 @@ describe("POST /api/v1/solve", () => {
     expect(response.status).toBe(422);
     const body = response.body;
     expect(body.error.code).toBe("invalid");
-    expect(body.error.details).toContainEqual({ path: "robot.legs[2].joints.femur.minDeg", message: "must be below maxDeg (got 40 ≥ 30)" });
+    expect(body.error.details).toContainEqual({
+      path: "robot.legs[2].joints.femur.minDeg",
+      message: "Leg LR, femur minimum must be below the maximum (got 40 ≥ 30)",
+    });
   });
 
   test("an invalid sequence: 422 with paths under sequence.", async () => {
@@ -173,8 +176,8 @@ describe("hostile robots are refused before any work", () => {
     expect(response.status).toBe(422);
     const { error } = response.body as Refusal;
     expect(error.code).toBe("invalid");
-    expect(error.details).toContainEqual({ path: "robot.legs[0].femur", message: "must be at most 2000 (got 10000000)" });
-    expect(error.details).toContainEqual({ path: "robot.legs[5].tibia", message: "must be at most 2000 (got 10000000)" });
+    expect(error.details).toContainEqual({ path: "robot.legs[0].femur", message: "Leg LF, femur length must be at most 2000 (got 10000000)" });
+    expect(error.details).toContainEqual({ path: "robot.legs[5].tibia", message: "Leg RR, tibia length must be at most 2000 (got 10000000)" });
     expect(elapsedMs).toBeLessThan(5000);
   });
 
@@ -185,7 +188,7 @@ describe("hostile robots are refused before any work", () => {
     console.info(`POST /api/v1/ik with 1e200 mm links answered ${response.status} in ${elapsedMs.toFixed(1)} ms`);
     expect(response.status).toBe(422);
     const { error } = response.body as Refusal;
-    expect(error.details).toContainEqual({ path: "robot.legs[0].femur", message: "must be at most 2000 (got 1e+200)" });
+    expect(error.details).toContainEqual({ path: "robot.legs[0].femur", message: "Leg LF, femur length must be at most 2000 (got 1e+200)" });
     expect(elapsedMs).toBeLessThan(5000);
   });
 
@@ -197,6 +200,6 @@ describe("hostile robots are refused before any work", () => {
     const response = await post(solve, "/api/v1/solve", { robot: json, sequence });
     expect(response.status).toBe(422);
     const { error } = response.body as Refusal;
-    expect(error.details).toEqual([{ path: "robot.legs[3].tibia", message: "must be at most 2000 (got 1e+300)" }]);
+    expect(error.details).toEqual([{ path: "robot.legs[3].tibia", message: "Leg RF, tibia length must be at most 2000 (got 1e+300)" }]);
   });
 });

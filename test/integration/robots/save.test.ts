@@ -154,8 +154,8 @@ describe("bad saves are refused with what and where, and write nothing", () => {
     expect(answer.body).toMatchObject({ code: "invalid", error: "The definition has 2 problems. Nothing was saved." });
     expect(answer.body.details?.issues).toEqual(
       expect.arrayContaining([
-        { path: "legs[0].tibia", message: "must be at least 1 (got -1)" },
-        { path: "legs[2].joints.femur.minDeg", message: "must be below maxDeg (got 40 ≥ 30)" },
+        { path: "legs[0].tibia", field: "Leg LF, tibia length", message: "Leg LF, tibia length must be at least 1 (got -1)" },
+        { path: "legs[2].joints.femur.minDeg", field: "Leg LR, femur minimum", message: "Leg LR, femur minimum must be below the maximum (got 40 ≥ 30)" },
       ]),
     );
     expect(await revisionCount()).toBe(count);

@@ -56,7 +56,7 @@ describe("upload a robot definition", () => {
     expect(await database().select().from(robots).where(eq(robots.name, name))).toHaveLength(1);
   });
 
-  test("an invalid definition: 422 listing each path and message exactly, nothing saved", async () => {
+  test("an invalid definition: 422 listing each path, the field's name and the message in its words exactly, nothing saved", async () => {
     const broken = demoRobotJson("pier-crawler");
     broken.name = uniqueName("Broken");
     broken.legs[2].joints.femur.minDeg = 40;
@@ -68,9 +68,9 @@ describe("upload a robot definition", () => {
     expect(answer.status).toBe(422);
     expect(answer.body).toMatchObject({ code: "invalid", error: "The definition has 3 problems. Nothing was saved." });
     expect(answer.body.details?.issues).toEqual([
-      { path: "standHeight", message: "is required" },
-      { path: "legs[0].coxaLength", message: "is not a known field (check the spelling)" },
-      { path: "legs[2].joints.femur.minDeg", message: "must be below maxDeg (got 40 ≥ 30)" },
+      { path: "standHeight", field: "Stand height", message: "Stand height is required" },
+      { path: "legs[0].coxaLength", field: 'Leg LF, "coxaLength"', message: 'Leg LF, "coxaLength" is not a known field (check the spelling)' },
+      { path: "legs[2].joints.femur.minDeg", field: "Leg LR, femur minimum", message: "Leg LR, femur minimum must be below the maximum (got 40 ≥ 30)" },
     ]);
   });
 
@@ -83,9 +83,9 @@ describe("upload a robot definition", () => {
     const answer = await unchanged(() => upload({ file: jsonFile(broken) }));
     expect(answer.status).toBe(422);
     expect(answer.body.details?.issues).toEqual([
-      { path: "legs[2].joints.femur.minDeg", message: "must be below maxDeg (got 40 ≥ 30)" },
-      { path: "legs[1].id", message: 'must be unique (got "LF", also legs[0])' },
-      { path: "rest.LM", message: 'must name a leg (no leg "LM")' },
+      { path: "legs[2].joints.femur.minDeg", field: "Leg LR, femur minimum", message: "Leg LR, femur minimum must be below the maximum (got 40 ≥ 30)" },
+      { path: "legs[1].id", field: "Leg 2, name", message: 'Leg 2, name must be unique (got "LF", also leg 1)' },
+      { path: "rest.LM", field: "Rest pose, leg LM", message: 'Rest pose, leg LM must name a leg (no leg "LM")' },
     ]);
   });
 

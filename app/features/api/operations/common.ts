@@ -97,7 +97,10 @@ const STATUS_RESPONSES = {
     "A conflict with the current state: a stale revision, a table that needs an override reason, or a delete refused while the object is not archived or something still references it (`details.reason`, and `details.references` lists what).",
   ],
   413: ["PayloadTooLarge", "The body is larger than the route's limit (the message gives both sizes)."],
-  422: ["Unprocessable", "The input is well-formed but invalid: `details` lists the issues as `{ path, message }`."],
+  422: [
+    "Unprocessable",
+    "The input is well-formed but invalid: `details` lists the issues as `{ path, message }`; a robot definition's issues also give `field`, the field's name in words, which the message starts with.",
+  ],
   429: [
     "TooManyRequests",
     "Too many requests in a minute with this token or this person's session, or too many unknown or revoked tokens from this address; the Retry-After header says when to try again.",
