@@ -46,15 +46,20 @@ export function GeneratorPanel() {
   };
 
   return (
-    <Panel title="Template and parameters">
-      <div className="grid gap-3 p-3">
+    <Panel
+      title="Template and parameters"
+      layout="flex flex-wrap items-baseline justify-between gap-x-3"
+      tools={<p className="text-xs text-ink-muted">A change writes new keys from the template; hand edits are asked about first, and Undo brings them back.</p>}
+    >
+      {/* One compact block: the template and the eight numbers in as few rows as the width allows. */}
+      <div key={fieldsKey} className="grid grid-cols-2 gap-x-3 gap-y-2 p-3 sm:grid-cols-3 md:grid-cols-5">
         <label className="flex flex-col text-xs text-ink-muted">
           Template
           <select
             disabled={readOnly}
             value={current ? params.template : ""}
             onChange={(event) => change({ ...params, template: event.currentTarget.value as TemplateName, dutyFactor: undefined })}
-            className="rounded border border-line bg-surface px-1 py-1 text-sm text-ink"
+            className="rounded border border-line bg-surface px-1 py-0.5 text-sm text-ink"
           >
             {current ? null : <option value="">(none: hand-made keys)</option>}
             {templates.map((template) => (
@@ -64,25 +69,22 @@ export function GeneratorPanel() {
             ))}
           </select>
         </label>
-        <div key={fieldsKey} className="grid grid-cols-2 gap-2 sm:grid-cols-4 lg:grid-cols-2 2xl:grid-cols-4">
-          {FIELDS.map((field) => (
-            <NumberField
-              key={field.name}
-              label={field.label}
-              unit={field.unit}
-              value={params[field.name] as number | undefined}
-              placeholder={field.name === "bodyHeightMm" ? String(robot.standHeight) : field.name === "dutyFactor" ? "template's" : undefined}
-              optional={field.optional}
-              digits={field.digits ?? 1}
-              min={field.min}
-              max={field.max}
-              disabled={readOnly}
-              width="w-24"
-              onCommit={(value) => change({ ...params, [field.name]: value })}
-            />
-          ))}
-        </div>
-        <p className="text-xs text-ink-muted">A change writes new keys from the template; hand edits are asked about first, and Undo brings them back.</p>
+        {FIELDS.map((field) => (
+          <NumberField
+            key={field.name}
+            label={field.label}
+            unit={field.unit}
+            value={params[field.name] as number | undefined}
+            placeholder={field.name === "bodyHeightMm" ? String(robot.standHeight) : field.name === "dutyFactor" ? "template's" : undefined}
+            optional={field.optional}
+            digits={field.digits ?? 1}
+            min={field.min}
+            max={field.max}
+            disabled={readOnly}
+            width="w-24"
+            onCommit={(value) => change({ ...params, [field.name]: value })}
+          />
+        ))}
       </div>
       <dialog
         ref={confirm}

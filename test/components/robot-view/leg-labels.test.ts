@@ -1,6 +1,6 @@
 // Issue 16, item 5: the top view's leg labels do not overlap one another.
 import { expect, test } from "vitest";
-import { neutralStance } from "~/kinematics";
+import { neutralStance, type Vec3 } from "~/kinematics";
 import { legPostures } from "~/components/robot-view/leg-postures";
 import { topFrame } from "~/components/robot-view/frame";
 import { labelBox, placeLegLabels } from "~/components/robot-view/leg-labels";
@@ -15,7 +15,7 @@ for (const file of ["pier-crawler", "quay-walker", "hull-climber"] as DemoRobotF
     const frame = topFrame(robot, 360, 360);
     const stance = neutralStance(robot, robot.standHeight);
     // All feet pulled in to one spot near the body: the worst case for labels.
-    const bunched = Object.fromEntries(robot.legs.map((leg, index) => [leg.id, [20 + index * 2, index % 2 ? 8 : -8, -robot.standHeight] as const]));
+    const bunched: Record<string, Vec3> = Object.fromEntries(robot.legs.map((leg, index) => [leg.id, [20 + index * 2, index % 2 ? 8 : -8, -robot.standHeight]]));
     for (const feet of [stance, bunched]) {
       const postures = legPostures(robot, feet);
       const labels = placeLegLabels(

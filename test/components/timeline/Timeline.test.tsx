@@ -49,7 +49,7 @@ describe("Timeline", () => {
     const { store, container } = renderWithStore(<Timeline />);
     act(() => store.getState().moveKey({ legId: "LF", index: 1 }, 40 / 60));
     const flag = container.querySelector('[data-track="body"] [data-flag-kind="support-count"]')!;
-    expect(flag.textContent).toBe("▲feet");
+    expect(flag.textContent).toBe("▲ feet");
     expect(flag.getAttribute("data-from")).toBe("30");
     expect(flag.getAttribute("data-to")).toBe("39");
     expect(flag.getAttribute("title")).toMatch(/^Too few feet down, frames 30–39: /);

@@ -43,6 +43,6 @@ test("a badge reads its glyph, its whole tag and how many more runs it stands fo
   expect(first.severity).toBe("error");
   expect(first.hidden.map((run) => run.kind)).toEqual(["joint-limit"]);
   expect(badgeText(second)).toBe("▲ reach");
-  // Wide enough, each run has its own badge.
-  expect(layoutFlagBadges(runs, 60, 2000).map(badgeText)).toEqual(["◆ margin", "▲ limit", "▲ reach"]);
+  // Wide enough (a frame is 100 px), each run has its own badge.
+  expect(layoutFlagBadges(runs, 60, 6000).map(badgeText)).toEqual(["◆ margin", "▲ limit", "▲ reach"]);
 });
