@@ -45,3 +45,9 @@ test("A changed to another robot clears B and says why", () => {
     "B was cleared: Tripod cruise v2 is a gait of Pier crawler, and versions of two robots cannot be compared. B lists the gaits of Quay walker.",
   );
 });
+
+test("a pair of two robots from the address starts with B cleared and the reason", () => {
+  renderPicker("q1", "a1");
+  expect((screen.getByRole("combobox", { name: "B" }) as HTMLSelectElement).value).toBe("");
+  expect(screen.getByTestId("picker-hint").textContent).toMatch(/^B was cleared: Tripod cruise v1 is a gait of Pier crawler/);
+});

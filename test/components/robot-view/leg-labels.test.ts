@@ -15,7 +15,9 @@ for (const file of ["pier-crawler", "quay-walker", "hull-climber"] as DemoRobotF
     const frame = topFrame(robot, 360, 360);
     const stance = neutralStance(robot, robot.standHeight);
     // All feet pulled in to one spot near the body: the worst case for labels.
-    const bunched: Record<string, Vec3> = Object.fromEntries(robot.legs.map((leg, index) => [leg.id, [20 + index * 2, index % 2 ? 8 : -8, -robot.standHeight]]));
+    const bunched: Record<string, Vec3> = Object.fromEntries(
+      robot.legs.map((leg, index) => [leg.id, [20 + index * 2, index % 2 ? 8 : -8, -robot.standHeight]]),
+    );
     for (const feet of [stance, bunched]) {
       const postures = legPostures(robot, feet);
       const labels = placeLegLabels(
