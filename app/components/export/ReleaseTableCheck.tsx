@@ -34,7 +34,7 @@ export function ReleaseTableCheck({ check }: { check: ReleaseTableCheckData }) {
           Today's table is the one recorded at the release, byte for byte.
         </p>
       ) : (
-        <div role="status" className="rounded-md border border-warning bg-warning-soft px-3 py-2 text-ink">
+        <div data-testid="release-table-differs" className="rounded-md border border-warning bg-warning-soft px-3 py-2 text-ink">
           <p className="flex gap-2 font-medium">
             <span aria-hidden="true" className="text-warning">
               ⚠

@@ -22,9 +22,9 @@ const check = (change: Partial<ReleaseTableCheckData>): ReleaseTableCheckData =>
   ...change,
 });
 
-test("differs: says so as a status, names what changed, and shows both hashes", () => {
+test("differs: says so, names what changed, and shows both hashes", () => {
   render(<ReleaseTableCheck check={check({})} />);
-  const status = screen.getByRole("status");
+  const status = screen.getByTestId("release-table-differs");
   expect(status.textContent).toContain("Today's table differs from the one recorded at the release.");
   expect(status.textContent).toContain("Since the release, the exporter changed from 1.0.0 to 2.0.0, so the same query now gives other bytes.");
   expect(screen.getByTitle("a".repeat(64)).textContent).toBe("aaaaaaaaaaaa");
@@ -32,14 +32,14 @@ test("differs: says so as a status, names what changed, and shows both hashes", 
   expect(screen.getByRole("link", { name: "Download today's table" }).getAttribute("href")).toBe("/api/v1/gaits/g/versions/1/table?format=csv&units=deg");
 });
 
-test("matches: one quiet line, no status; no download link for those who may not download", () => {
+test("matches: one quiet line, no warning; no download link for those who may not download", () => {
   render(<ReleaseTableCheck check={check({ matches: true, reasons: [], downloadPath: null, today: { ...check({}).today, sha256: "a".repeat(64) } })} />);
-  expect(screen.queryByRole("status")).toBeNull();
+  expect(screen.queryByTestId("release-table-differs")).toBeNull();
   expect(screen.getByText("Today's table is the one recorded at the release, byte for byte.")).toBeTruthy();
   expect(screen.queryByRole("link")).toBeNull();
 });
 
 test("a table that cannot be made today says why", () => {
   render(<ReleaseTableCheck check={check({ today: { ...check({}).today, sha256: null, problem: "Version 1 cannot be solved." } })} />);
-  expect(screen.getByRole("status").textContent).toContain("It cannot be made again today: Version 1 cannot be solved.");
+  expect(screen.getByTestId("release-table-differs").textContent).toContain("It cannot be made again today: Version 1 cannot be solved.");
 });
