@@ -60,16 +60,19 @@ test("firmware downloads the released table in the app, and curl with a token ge
   await expect(page.getByRole("region", { name: /Table preview/ }).getByRole("columnheader", { name: "time_ms" })).toBeVisible();
 
   const downloading = page.waitForEvent("download");
-  await page.getByRole("link", { name: /^Download tripod_cruise_v1_us_50hz\.csv$/ }).click();
+  await page.getByRole("link", { name: /^Download tripod_cruise_v1_us_50hz_no-profile\.csv$/ }).click();
   const download = await downloading;
-  expect(download.suggestedFilename()).toBe("tripod_cruise_v1_us_50hz.csv");
+  expect(download.suggestedFilename()).toBe("tripod_cruise_v1_us_50hz_no-profile.csv");
   const fromBrowser = readFileSync((await download.path())!);
-  expect(fromBrowser.toString("utf8").split("\r\n")[0]).toMatch(/^frame,time_ms,/);
+  // The comment header first (issue 16), then the header record.
+  const lines = fromBrowser.toString("utf8").split("\r\n");
+  expect(lines[0]).toMatch(/^# Gaitloom angle table/);
+  expect(lines.find((line) => !line.startsWith("#"))).toMatch(/^frame,time_ms,/);
 
   // The command as the page gives it to copy, run as a build script would: curl with the token from the environment.
   const command = (await page.getByTestId("curl-command").textContent())!.trim();
   expect(command).toMatch(
-    /^curl -fsS -H "Authorization: Bearer \$GAITLOOM_TOKEN" -o 'tripod_cruise_v1_us_50hz\.csv' '.+\/api\/v1\/gaits\/.+\/versions\/released\/table\?format=csv&units=us'$/,
+    /^curl -fsS -H "Authorization: Bearer \$GAITLOOM_TOKEN" -o 'tripod_cruise_v1_us_50hz_no-profile\.csv' '.+\/api\/v1\/gaits\/.+\/versions\/released\/table\?format=csv&units=us'$/,
   );
   const url = new URL(command.match(/'([^']+)'$/)![1]);
   const target = new URL(url.pathname + url.search, baseURL).toString();
@@ -77,7 +80,7 @@ test("firmware downloads the released table in the app, and curl with a token ge
   const folder = mkdtempSync(join(tmpdir(), "gaitloom-export-"));
   try {
     await run("/bin/sh", ["-c", scriptCommand], { cwd: folder, env: { ...process.env, GAITLOOM_TOKEN: token } });
-    const fromCurl = readFileSync(join(folder, "tripod_cruise_v1_us_50hz.csv"));
+    const fromCurl = readFileSync(join(folder, "tripod_cruise_v1_us_50hz_no-profile.csv"));
     expect(fromCurl.equals(fromBrowser), "curl's bytes equal the browser download's").toBe(true);
   } finally {
     rmSync(folder, { recursive: true, force: true });

@@ -50,8 +50,8 @@ export function buildAngleTable(robot: Robot, sequence: Sequence, options: Angle
 }
 
 /**
- * The metadata the JSON and C tables carry, for a CSV download's HTTP headers
- * (RFC 4180 has no place for it in the file): the same object as the JSON's `meta`.
+ * The metadata every table carries (the CSV in its comment header), for a
+ * download's HTTP headers: the same object as the JSON's `meta`.
  */
 export function angleTableMetadata(robot: Robot, solved: SolvedSequence, options: TableOptions): TableMetadata {
   return angleTableData(robot, solved, options).meta;

@@ -18,30 +18,27 @@
 //
 // Every name carries the unit, so a degree and a pulse header of one gait can
 // be included together. The cells are the same integers the CSV and JSON
-// tables print with decimals.
+// tables print with decimals; the comment says what a cell is and how to get
+// back to the unit (radians = cell / 10000), as the JSON's meta.values does.
 import { TableExportError } from "./errors";
+import { CONTROL_CHARACTERS } from "./one-line";
 import { UNIT_ROUNDING, formatFixed } from "./rounding";
-import type { AngleTableData } from "./table";
+import { NO_PROFILE, type AngleTableData } from "./table";
 
 const MAX_IDENTIFIER_PART = 40;
 
 /** The gait name as a C identifier part: lower-case ASCII letters, digits and single underscores ("gait" if nothing is left). */
-export function cIdentifier(name: string): string {
+export function cIdentifier(name: string, fallback = "gait", maxLength = MAX_IDENTIFIER_PART): string {
   const ascii = name
     .normalize("NFKD")
     .replace(/[\u0300-\u036f]/g, "")
     .toLowerCase()
     .replace(/[^a-z0-9]+/g, "_")
     .replace(/^_+|_+$/g, "")
-    .slice(0, MAX_IDENTIFIER_PART)
+    .slice(0, maxLength)
     .replace(/_+$/, "");
-  return ascii || "gait";
+  return ascii || fallback;
 }
-
-// Control characters and the Unicode line separators would break a comment's
-// line in the C header, so they become spaces.
-// eslint-disable-next-line no-control-regex -- matching control characters is this pattern's purpose
-const CONTROL_CHARACTERS = /[\u0000-\u001f\u007f-\u009f\u2028\u2029]+/g;
 
 /**
  * Text safe inside a C block comment on one line: no control characters or
@@ -83,15 +80,16 @@ export function formatCHeader(table: AngleTableData): string {
 
   const periodUs = Math.round(meta.framePeriodMs * 1000);
   const comment: string[] = [
-    `Gaitloom angle table, ${rounding.label} (${rounding.cType}: value x ${rounding.scale}). Generated; do not edit.`,
+    "Gaitloom angle table. Generated; do not edit.",
     "",
+    `Cells:        ${rounding.cCell} (${macro}_SCALE)`,
     `Robot:        ${meta.robot.name}, revision ${meta.robot.revision}`,
     `Gait:         ${meta.gait.name}, version ${meta.gait.version}`,
     `Content hash: ${meta.gait.contentHash}`,
     `Rate:         ${meta.rateHz} Hz, ${frameCount} frames, frame period ${periodUs} us` +
       (meta.gait.loop === null ? "" : meta.gait.loop ? ", plays as a loop (frame N is frame 0)" : ", plays once"),
     `Units:        ${meta.units === "us" ? "pulse widths (us), reversal, centre and us/degree applied, clamped to each servo's range" : `servo ${meta.units === "deg" ? "degrees" : "radians"} in each joint's own sign (reversal belongs to pulses)`}`,
-    `Calibration:  ${meta.calibrationProfile ?? "none"}`,
+    `Calibration:  ${meta.calibrationProfile ?? NO_PROFILE}`,
     `Override:     ${meta.overrideReason ?? "none"}`,
     `Flags:        ${meta.flags.errors} errors, ${meta.flags.warnings} warnings` +
       (Object.keys(meta.flags.byKind).length
@@ -131,7 +129,7 @@ export function formatCHeader(table: AngleTableData): string {
   lines.push(`/* Servo channel of each column. */`);
   lines.push(`static const uint8_t ${array}_channel[${macro}_CHANNELS] = { ${channels.map((entry) => entry.channel).join(", ")} };`);
   lines.push("");
-  lines.push(`/* [frame][column]: ${cCommentText(rounding.label)}, value x ${rounding.scale}. */`);
+  lines.push(`/* [frame][column]: ${cCommentText(rounding.cCell)}. */`);
   lines.push(`static const ${rounding.cType} ${array}[${macro}_FRAMES][${macro}_CHANNELS] = {`);
   const cells: string[] = new Array(channelCount);
   for (let row = 0; row < frameCount; row += 1) {

@@ -12,15 +12,23 @@ export const TABLE_MEDIA_TYPES: Readonly<Record<TableFormat, string>> = {
   c: "text/x-c; charset=utf-8",
 };
 
+const MAX_PROFILE_PART = 100;
+
 const EXTENSIONS: Readonly<Record<TableFormat, string>> = { csv: "csv", json: "json", c: "h" };
 
 /**
- * `<gait>_v<version>_<units>_<rate>hz.<ext>`, e.g. `tripod_walk_v3_deg10_50hz.h`:
- * ASCII only, the same stem as the C identifiers.
+ * `<gait>_v<version>_<units>_<rate>hz_<profile>.<ext>`, ASCII only, the same
+ * stem as the C identifiers, where `<profile>` is `profile-<name>` (a stored
+ * profile's name carries its revision) or `no-profile`: a calibrated and an
+ * uncalibrated table never share a name, e.g.
+ * `tripod_walk_v3_deg10_50hz_profile-sn_0042_revision_2.h` and
+ * `tripod_walk_v3_deg10_50hz_no-profile.h`.
  */
-export function tableFileName(meta: Pick<TableMetadata, "gait" | "units" | "rateHz">, format: TableFormat): string {
+export function tableFileName(meta: Pick<TableMetadata, "gait" | "units" | "rateHz" | "calibrationProfile">, format: TableFormat): string {
   const units: TableUnits = meta.units;
   const version = cIdentifier(String(meta.gait.version));
   const rate = String(meta.rateHz).replace(".", "_");
-  return `${cIdentifier(meta.gait.name)}_v${version}_${UNIT_ROUNDING[units].cSuffix}_${rate}hz.${EXTENSIONS[format]}`;
+  // Longer than a C name's part, so that a long profile name keeps its revision.
+  const profile = meta.calibrationProfile === null ? "no-profile" : `profile-${cIdentifier(meta.calibrationProfile, "unnamed", MAX_PROFILE_PART)}`;
+  return `${cIdentifier(meta.gait.name)}_v${version}_${UNIT_ROUNDING[units].cSuffix}_${rate}hz_${profile}.${EXTENSIONS[format]}`;
 }

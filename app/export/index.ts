@@ -3,7 +3,7 @@
 export { EXPORTER_VERSION, TABLE_FORMAT } from "./version";
 export { TableExportError, type TableExportIssue } from "./errors";
 export { TABLE_FORMATS, TABLE_UNITS, type AngleTableOptions, type TableFormat, type TableUnits } from "./options";
-export { formatFixed } from "./rounding";
+export { formatFixed, tableUnitLabel } from "./rounding";
 export { SAFETY_NOTICE } from "./safety";
 export {
   calibrationIssuesForRobot,
@@ -13,7 +13,7 @@ export {
   type ValidCalibrationProfile,
 } from "./calibration";
 export { tableChannels } from "./channels";
-export { angleTableData, type AngleTableData } from "./table";
+export { angleTableData, type AngleTableData, type TableMetadata, type TableValues } from "./table";
 export { angleTable, angleTableMetadata, buildAngleTable, formatAngleTable, solveForTable } from "./angle-table";
 export { TABLE_MEDIA_TYPES, tableFileName } from "./files";
 export { centreTable, sweepTable, type BenchTable } from "./bench-tables";

@@ -1,16 +1,18 @@
-// JSON table, format "gaitloom.table/1":
+// JSON table, format "gaitloom.table/2":
 //   {
-//     "format": "gaitloom.table/1",
+//     "format": "gaitloom.table/2",
 //     "meta": { exporterVersion, solverVersion, exportedAt, robot: { name, revision },
-//               gait: { name, version, contentHash, loop }, units, unitLabel, scale, decimals,
-//               rateHz, framePeriodMs, frameCount, channelCount, calibrationProfile,
+//               gait: { name, version, contentHash, loop }, calibrationProfile, units,
+//               values: { unit, description, step, decimals },
+//               rateHz, framePeriodMs, frameCount, channelCount,
 //               overrideReason, flags: { errors, warnings, byKind }, clamped: [...], safety: [...] },
 //     "channels": [ { column, channel, leg, joint, name, reversed, centerUs, usPerDeg, minUs, maxUs, trimDeg } ],
 //     "frames": [ { "index": 0, "timeMs": 0.000, "values": [ ... one per channel, in channel order ] } ]
 //   }
-// Numbers in `frames` are printed from the same fixed-point integers as the
-// CSV and C tables, with the same decimals (so the text of a cell is the CSV's
-// text); one frame per line so that long tables stay readable and diffable.
+// Numbers in `frames` are plain values in meta.values.unit (never scaled),
+// printed from the same fixed-point integers as the CSV and C tables with the
+// same decimals (so the text of a cell is the CSV's text); one frame per line
+// so that long tables stay readable and diffable.
 import { formatFixed } from "./rounding";
 import type { AngleTableData } from "./table";
 import { TABLE_FORMAT } from "./version";
@@ -21,7 +23,7 @@ function indented(value: unknown, indent: string): string {
 
 export function formatJson(table: AngleTableData): string {
   const { meta, channels, frameIndex, timeUs, values } = table;
-  const { decimals } = meta;
+  const { decimals } = meta.values;
   const channelCount = channels.length;
   const frames: string[] = new Array(frameIndex.length);
   const cells: string[] = new Array(channelCount);

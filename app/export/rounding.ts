@@ -21,15 +21,59 @@ export type UnitRounding = {
   /** Smallest and largest integer the C type holds. */
   min: number;
   max: number;
-  /** What a cell is, in words (for comments and metadata). */
+  /** What a cell is, in words (for the page's preview). */
   label: string;
+  /** The rounding step in the unit: 1 / scale. */
+  step: number;
+  /** What a CSV or JSON number is, in a sentence that follows "Each value is" or "Each joint column is". */
+  meaning: string;
+  /** What a C cell is and how to get back to the unit. */
+  cCell: string;
 };
 
 export const UNIT_ROUNDING: Readonly<Record<TableUnits, UnitRounding>> = {
-  deg: { scale: 10, decimals: 1, cType: "int16_t", cSuffix: "deg10", min: -32768, max: 32767, label: "servo degrees, 0.1° steps" },
-  rad: { scale: 10000, decimals: 4, cType: "int32_t", cSuffix: "rad10000", min: -2147483648, max: 2147483647, label: "servo radians, 0.0001 rad steps" },
-  us: { scale: 1, decimals: 0, cType: "uint16_t", cSuffix: "us", min: 0, max: 65535, label: "servo pulse widths, whole µs" },
+  deg: {
+    scale: 10,
+    decimals: 1,
+    cType: "int16_t",
+    cSuffix: "deg10",
+    min: -32768,
+    max: 32767,
+    label: "servo degrees, 0.1° steps",
+    step: 0.1,
+    meaning: "the servo angle in degrees, in the joint's own sign, rounded to 0.1 degree; the numbers are degrees themselves, not scaled",
+    cCell: "int16_t tenths of a degree: degrees = cell / 10",
+  },
+  rad: {
+    scale: 10000,
+    decimals: 4,
+    cType: "int32_t",
+    cSuffix: "rad10000",
+    min: -2147483648,
+    max: 2147483647,
+    label: "servo radians, 0.0001 rad steps",
+    step: 0.0001,
+    meaning: "the servo angle in radians, in the joint's own sign, rounded to 0.0001 rad; the numbers are radians themselves, not scaled",
+    cCell: "int32_t ten-thousandths of a radian: radians = cell / 10000",
+  },
+  us: {
+    scale: 1,
+    decimals: 0,
+    cType: "uint16_t",
+    cSuffix: "us",
+    min: 0,
+    max: 65535,
+    label: "servo pulse widths, whole µs",
+    step: 1,
+    meaning: "the servo pulse width in whole microseconds, with the servo's centre, microseconds per degree and reversal applied, clamped to its range",
+    cCell: "uint16_t whole microseconds: microseconds = cell",
+  },
 };
+
+/** What a cell of a table in these units is, in a few words: "servo degrees, 0.1° steps". */
+export function tableUnitLabel(units: TableUnits): string {
+  return UNIT_ROUNDING[units].label;
+}
 
 /** Nearest integer, halves away from zero, never −0. */
 export function roundHalfAwayFromZero(value: number): number {

@@ -44,6 +44,22 @@ export type ChannelInfo = {
   trimDeg: number;
 };
 
+/** The calibration line of a table's header when no profile was applied. */
+export const NO_PROFILE = "none (the robot's own servo settings)";
+
+/**
+ * What the numbers of a CSV or JSON table are, said in full: plain values in
+ * `unit` (never scaled: the C header's fixed-point integers are its own and
+ * say so in its comment), rounded to `step`, printed with `decimals` decimals.
+ */
+export type TableValues = {
+  unit: TableUnits;
+  /** The numbers in a sentence, naming the calibration profile applied (or that none was). */
+  description: string;
+  step: number;
+  decimals: number;
+};
+
 /** Everything a table says about itself; the JSON table's `meta`, and what angleTableMetadata gives for a CSV download. */
 export type TableMetadata = {
   exporterVersion: string;
@@ -51,18 +67,15 @@ export type TableMetadata = {
   exportedAt: string | null;
   robot: { name: string; revision: number | string };
   gait: { name: string; version: number | string; contentHash: string; loop: boolean | null };
+  /** The profile's name as the header gives it (a stored one with its revision), or null: the robot's own servo settings. */
+  calibrationProfile: string | null;
   units: TableUnits;
-  /** What a cell is, in words. */
-  unitLabel: string;
-  /** The C integer is value × scale; CSV and JSON print the value with `decimals` decimals. */
-  scale: number;
-  decimals: number;
+  values: TableValues;
   rateHz: number;
   /** 1000 / rateHz, rounded to whole µs. */
   framePeriodMs: number;
   frameCount: number;
   channelCount: number;
-  calibrationProfile: string | null;
   overrideReason: string | null;
   flags: { errors: number; warnings: number; byKind: Partial<Record<FlagKind, number>> };
   clamped: ClampedCell[];
@@ -241,15 +254,18 @@ export function angleTableData(robot: Robot, solved: SolvedSequence, options: Ta
     exportedAt: meta.exportedAt ?? null,
     robot: { name: meta.robotName, revision: meta.robotRevision },
     gait: { name: meta.gaitName, version: meta.gaitVersion, contentHash: meta.contentHash, loop: meta.loop ?? null },
+    calibrationProfile,
     units,
-    unitLabel: unitRounding.label,
-    scale: unitRounding.scale,
-    decimals: unitRounding.decimals,
+    values: {
+      unit: units,
+      description: `Each value is ${unitRounding.meaning}. ${calibrationProfile === null ? "No calibration profile applied: the robot's own servo settings." : `Calibration profile ${calibrationProfile} applied.`}`,
+      step: unitRounding.step,
+      decimals: unitRounding.decimals,
+    },
     rateHz,
     framePeriodMs: timeToMicroseconds(1000 / rateHz) / 1000,
     frameCount: frames.length,
     channelCount,
-    calibrationProfile,
     overrideReason: parsed.overrideReason ?? null,
     flags,
     clamped,

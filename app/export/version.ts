@@ -2,7 +2,7 @@
 // apart from one made by other code and reproduced byte for byte.
 
 /** The exporter's version: bump it whenever the bytes of any table could change. */
-export const EXPORTER_VERSION = "1.0.0";
+export const EXPORTER_VERSION = "2.0.0";
 
 /** The `format` of the JSON table (and the family name of the CSV and C layouts). */
-export const TABLE_FORMAT = "gaitloom.table/1";
+export const TABLE_FORMAT = "gaitloom.table/2";

@@ -5,7 +5,7 @@ import { OVERRIDE, demoGaits, metaFor, readCsv, readJsonTable } from "./helpers"
 
 const UNIT_WORDS = { deg: "°", rad: "rad", us: "µs" } as const;
 
-describe("CSV export against RFC 4180, read back with papaparse (reference parser)", () => {
+describe('CSV export against RFC 4180 after its # comment header, read back with papaparse (reference parser, comments: "#")', () => {
   for (const gait of demoGaits()) {
     for (const units of TABLE_UNITS) {
       it(`${gait.label}, ${units}: every cell papaparse reads equals the JSON export`, () => {
@@ -40,7 +40,10 @@ describe("CSV export against RFC 4180, read back with papaparse (reference parse
     expect(csv.endsWith("\r\n"), "ends with CRLF").toBe(true);
     expect(/[^\r]\n/.test(csv), "a LF without CR before it").toBe(false);
     expect(/\r[^\n]/.test(csv), "a CR without LF after it").toBe(false);
-    expect(csv.split("\r\n").length - 1, "records (header + frames)").toBe(gait.solved.frames.length + 1);
+    const lines = csv.split("\r\n").slice(0, -1);
+    const comments = lines.filter((line) => line.startsWith("# "));
+    expect(lines.slice(0, comments.length), "the comment header comes first").toEqual(comments);
+    expect(lines.length - comments.length, "records (header + frames) after the comment header").toBe(gait.solved.frames.length + 1);
   });
 
   it("RFC 4180 §2.5–2.7: fields with comma, double quote, CR or LF are quoted, quotes doubled, and papaparse reads them back", () => {

@@ -36,7 +36,7 @@ describe("a table of the longest legs' gait holds finite numbers only", () => {
         const cells =
           format === "json"
             ? (JSON.parse(text) as { frames: { timeMs: number; values: number[] }[] }).frames.flatMap((frame) => [frame.timeMs, ...frame.values])
-            : Papa.parse<string[]>(text.trim(), { skipEmptyLines: true })
+            : Papa.parse<string[]>(text.trim(), { skipEmptyLines: true, comments: "#" })
                 .data.slice(1)
                 .flatMap((row) => row.map(Number));
         expect(cells.length).toBe(solved.frames.length * (robot.legs.length * 3 + (format === "json" ? 1 : 2)));

@@ -68,9 +68,9 @@ export const OVERRIDE = "Bench run on the stand, speed flags reviewed by the lea
 
 export { readJsonTable, type JsonTable } from "../support/tables";
 
-/** The records of a CSV file as papaparse reads it (RFC 4180), no type conversion. */
+/** The records of a CSV file as papaparse reads it (RFC 4180, the "#" comment header skipped), no type conversion. */
 export function readCsv(text: string): string[][] {
-  const result = Papa.parse<string[]>(text, { header: false, dynamicTyping: false, skipEmptyLines: false });
+  const result = Papa.parse<string[]>(text, { header: false, dynamicTyping: false, skipEmptyLines: false, comments: "#" });
   if (result.errors.length) throw new Error(`papaparse: ${result.errors.map((error) => error.message).join("; ")}`);
   const rows = result.data;
   // RFC 4180 allows a line break after the last record; papaparse then yields one empty record.

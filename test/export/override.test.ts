@@ -57,7 +57,7 @@ describe("override reason for versions with error flags (DESIGN.md, issue 8)", (
     );
     expect(stamped.meta.exportedAt).toBe("2025-03-01T10:00:00Z");
     expect(stamped.meta.solverVersion).toBe("gait 1");
-    expect(stamped.meta.exporterVersion).toBe("1.0.0");
+    expect(stamped.meta.exporterVersion).toBe("2.0.0");
     expect(codeOf(() => angleTable(clean.robot, clean.solved, { ...options, meta: metaFor(clean, { exporterVersion: "0.9.0" }) }))).toBe("exporter-version");
   });
 

@@ -75,7 +75,7 @@ describe("one rounding for every format (DESIGN.md: 0.1°, 0.0001 rad, whole µs
       ["us", 0],
     ] as const) {
       const json = readJsonTable(angleTable(robot, solved, { format: "json", units, meta }));
-      expect(json.meta.decimals).toBe(decimals);
+      expect(json.meta.values.decimals).toBe(decimals);
       const csv = readCsv(angleTable(robot, solved, { format: "csv", units, meta }));
       for (const record of csv.slice(1)) for (const cell of record.slice(2)) expect(decimalsOf(cell), `${units} cell "${cell}"`).toBe(decimals);
     }

@@ -63,8 +63,8 @@ describe("table layout (DESIGN.md: one row per frame, one column per joint in se
   it("download names and media types: text/csv with header=present (RFC 4180 §3), application/json, a .h for C", () => {
     const gait = demoGait("pier-crawler", { template: "tripod", cycleMs: 1200, fps: 50, strideMm: 60, name: "Tripod walk" });
     const meta = readJsonTable(angleTable(gait.robot, gait.solved, { format: "json", units: "deg", meta: metaFor(gait) })).meta as TableMetadata;
-    expect(tableFileName(meta, "c")).toBe("tripod_walk_v2_deg10_50hz.h");
-    expect(tableFileName({ ...meta, units: "us", rateHz: 12.5 }, "csv")).toBe("tripod_walk_v2_us_12_5hz.csv");
+    expect(tableFileName(meta, "c")).toBe("tripod_walk_v2_deg10_50hz_no-profile.h");
+    expect(tableFileName({ ...meta, units: "us", rateHz: 12.5 }, "csv")).toBe("tripod_walk_v2_us_12_5hz_no-profile.csv");
     expect(TABLE_MEDIA_TYPES.csv).toBe("text/csv; charset=utf-8; header=present");
     expect(TABLE_MEDIA_TYPES.json).toBe("application/json; charset=utf-8");
   });

@@ -1,4 +1,4 @@
-// Angle tables read back: the JSON table (format "gaitloom.table/1") as the
+// Angle tables read back: the JSON table (format "gaitloom.table/2") as the
 // exporter's unit tests and the table API's tests parse it.
 import type { AngleTableData } from "~/export";
 

@@ -1,9 +1,14 @@
-// Choosing A and B: any two versions of one robot's gaits, grouped by robot and gait.
+// Choosing A and B: any two versions of one robot's gaits, grouped by robot
+// and gait. Versions of two robots cannot be compared (their legs and joints
+// differ), so once A is picked B offers only A's robot's gaits; an A of
+// another robot clears B and the hint says why. Without script the server
+// refuses such a pair with the same reason beside the picker.
+import { useState } from "react";
 import { Form } from "react-router";
 import type { VersionState } from "../../../db/schema";
 import { stateWord } from "~/features/versions/state-labels";
 
-export type PickableVersion = { id: string; number: number; message: string; state: VersionState; gaitName: string; robotName: string };
+export type PickableVersion = { id: string; number: number; message: string; state: VersionState; gaitName: string; robotName: string; robotId: string };
 
 function Options({ versions }: { versions: readonly PickableVersion[] }) {
   const groups = new Map<string, PickableVersion[]>();
@@ -30,18 +35,68 @@ function Options({ versions }: { versions: readonly PickableVersion[] }) {
 }
 
 /** The version picked as side A or B. */
-function SidePicker({ side, versions, value }: { side: "A" | "B"; versions: readonly PickableVersion[]; value: string | null }) {
+function SidePicker({
+  side,
+  versions,
+  value,
+  onChange,
+}: {
+  side: "A" | "B";
+  versions: readonly PickableVersion[];
+  value: string;
+  onChange: (id: string) => void;
+}) {
+  const id = `compare-${side.toLowerCase()}`;
   return (
-    <label className="space-y-1 text-sm">
-      <span className="font-medium">{side}</span>
-      <select name={side.toLowerCase()} defaultValue={value ?? ""} required className="w-full rounded-md border border-line bg-canvas px-2 py-1.5 text-sm">
+    <div className="space-y-1 text-sm">
+      <label htmlFor={id} className="block font-medium">
+        {side}
+      </label>
+      <select
+        id={id}
+        name={side.toLowerCase()}
+        value={value}
+        onChange={(event) => onChange(event.currentTarget.value)}
+        required
+        aria-describedby="compare-picker-hint"
+        className="w-full rounded-md border border-line bg-canvas px-2 py-1.5 text-sm"
+      >
         <Options versions={versions} />
       </select>
-    </label>
+    </div>
   );
 }
 
+const versionName = (version: PickableVersion) => `${version.gaitName} v${version.number}`;
+
 export function ComparePicker({ versions, a, b }: { versions: readonly PickableVersion[]; a: string | null; b: string | null }) {
+  // A pair of two robots from the address (the server has refused it beside the picker): B starts cleared, saying why.
+  const given = (id: string | null) => versions.find((version) => version.id === id) ?? null;
+  const crossed = given(a) && given(b) && given(a)!.robotId !== given(b)!.robotId ? given(b) : null;
+  const [pickedA, setPickedA] = useState(a ?? "");
+  const [pickedB, setPickedB] = useState(crossed ? "" : (b ?? ""));
+  const [cleared, setCleared] = useState<PickableVersion | null>(crossed);
+  const versionA = versions.find((version) => version.id === pickedA) ?? null;
+  const choicesB = versionA ? versions.filter((version) => version.robotId === versionA.robotId) : versions;
+
+  const pickA = (id: string) => {
+    setPickedA(id);
+    const next = versions.find((version) => version.id === id);
+    const current = versions.find((version) => version.id === pickedB);
+    if (next && current && current.robotId !== next.robotId) {
+      setPickedB("");
+      setCleared(current);
+    } else {
+      setCleared(null);
+    }
+  };
+
+  const scope = versionA ? `B lists the gaits of ${versionA.robotName}` : null;
+  const hint = cleared
+    ? `B was cleared: ${versionName(cleared)} is a gait of ${cleared.robotName}, and versions of two robots cannot be compared.${scope ? ` ${scope}.` : ""}`
+    : scope
+      ? `${scope}: versions of two robots cannot be compared, their legs and joints differ.`
+      : "Pick A first: B then lists the gaits of A's robot.";
   return (
     <Form
       method="get"
@@ -49,11 +104,22 @@ export function ComparePicker({ versions, a, b }: { versions: readonly PickableV
       aria-label="Choose versions to compare"
       key={`${a}-${b}`}
     >
-      <SidePicker side="A" versions={versions} value={a} />
-      <SidePicker side="B" versions={versions} value={b} />
+      <SidePicker side="A" versions={versions} value={pickedA} onChange={pickA} />
+      <SidePicker
+        side="B"
+        versions={choicesB}
+        value={pickedB}
+        onChange={(id) => {
+          setPickedB(id);
+          setCleared(null);
+        }}
+      />
       <button type="submit" className="rounded-md bg-accent px-4 py-1.5 text-sm font-medium text-on-accent hover:bg-accent-strong">
         Compare
       </button>
+      <p id="compare-picker-hint" role="status" data-testid="picker-hint" className="text-xs text-ink-muted sm:col-span-3">
+        {hint}
+      </p>
     </Form>
   );
 }

@@ -1,24 +1,22 @@
 // Joint angles of A and B overlaid, one small plot per leg and joint, the
 // gap between the curves shaded; A solid, B dashed, so the two read apart
-// without colour. A line marks where the playback is.
+// without colour. As in the editor's plots (the same plot parts), the bands
+// past the joint's limits are shaded and flagged frames are marked under the
+// curves: A's filled, B's hollow, on two rows. A line marks where the playback is.
 import { area, line } from "d3-shape";
 import { scaleLinear } from "d3-scale";
 import { memo, useMemo, useState } from "react";
+import { angleRange, FlagMarks, LimitBands } from "~/components/joint-plots/plot-parts";
 import type { JointOverlay } from "~/features/compare";
 
 const WIDTH = 240;
-const HEIGHT = 96;
-const PAD = { left: 34, right: 6, top: 6, bottom: 14 };
+const HEIGHT = 104;
+const PAD = { left: 34, right: 6, top: 6, bottom: 22 };
 
 const Plot = memo(function Plot({ overlay }: { overlay: JointOverlay }) {
-  const { paths, ticks } = useMemo(() => {
+  const { paths, ticks, y, marks } = useMemo(() => {
     const values = [...overlay.a, ...overlay.b];
-    let low = Math.min(...values);
-    let high = Math.max(...values);
-    if (high - low < 2) {
-      low -= 1;
-      high += 1;
-    }
+    const [low, high] = angleRange(Math.min(...values), Math.max(...values), overlay.limits);
     const x = scaleLinear()
       .domain([0, 1])
       .range([PAD.left, WIDTH - PAD.right]);
@@ -26,6 +24,10 @@ const Plot = memo(function Plot({ overlay }: { overlay: JointOverlay }) {
       .domain([low, high])
       .nice(3)
       .range([HEIGHT - PAD.bottom, PAD.top]);
+    const marks = {
+      a: overlay.flags.a.map((mark) => ({ ...mark, x: x(mark.fraction) })),
+      b: overlay.flags.b.map((mark) => ({ ...mark, x: x(mark.fraction) })),
+    };
     const indices = overlay.fractions.map((_, index) => index);
     const lineOf = (series: number[]) =>
       line<number>()
@@ -36,10 +38,12 @@ const Plot = memo(function Plot({ overlay }: { overlay: JointOverlay }) {
         .x((index) => x(overlay.fractions[index]))
         .y0((index) => y(overlay.a[index]))
         .y1((index) => y(overlay.b[index]))(indices) ?? "";
-    return { paths: { a: lineOf(overlay.a), b: lineOf(overlay.b), gap }, ticks: y.ticks(3).map((value) => ({ value, y: y(value) })) };
+    return { paths: { a: lineOf(overlay.a), b: lineOf(overlay.b), gap }, ticks: y.ticks(3).map((value) => ({ value, y: y(value) })), y, marks };
   }, [overlay]);
+  const bottom = HEIGHT - PAD.bottom;
   return (
     <>
+      {overlay.limits ? <LimitBands limits={overlay.limits} angle={y} left={PAD.left} right={WIDTH - PAD.right} top={PAD.top} bottom={bottom} /> : null}
       {ticks.map((tick) => (
         <g key={tick.value}>
           <line x1={PAD.left} x2={WIDTH - PAD.right} y1={tick.y} y2={tick.y} className="stroke-line" strokeWidth={0.5} />
@@ -51,6 +55,9 @@ const Plot = memo(function Plot({ overlay }: { overlay: JointOverlay }) {
       <path d={paths.gap} className="fill-warning" opacity={0.3} />
       <path d={paths.a} className="fill-none stroke-ink" strokeWidth={1.5} />
       <path d={paths.b} className="fill-none stroke-accent" strokeWidth={1.5} strokeDasharray="4 2" />
+      <line x1={PAD.left} x2={WIDTH - PAD.right} y1={bottom} y2={bottom} className="stroke-ink-muted" strokeWidth={0.5} />
+      <FlagMarks marks={marks.a} y={bottom + 7} prefix="A: " side="a" />
+      <FlagMarks marks={marks.b} y={bottom + 15} prefix="B: " hollow side="b" />
     </>
   );
 });
@@ -77,6 +84,16 @@ export function JointOverlayPlots({ overlays, fraction, labels }: { overlays: re
         <span className="flex items-center gap-1">
           <span aria-hidden="true" className="inline-block h-3 w-5 bg-warning opacity-30" />
           difference
+        </span>
+        <span className="flex items-center gap-1">
+          <span aria-hidden="true" className="inline-block h-3 w-5 bg-danger-soft" />
+          shaded: past the joint limits
+        </span>
+        <span>
+          <span aria-hidden="true" className="text-danger">
+            ▲
+          </span>{" "}
+          flagged frames: A's filled, B's hollow under them
         </span>
         <label className="ml-auto flex items-center gap-1">
           <input type="checkbox" checked={onlyDifferent} onChange={(event) => setOnlyDifferent(event.target.checked)} />

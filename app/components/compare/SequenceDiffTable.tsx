@@ -2,7 +2,7 @@
 // per track the keys added, removed, moved or otherwise changed. Unchanged
 // keys are folded away.
 import { describeKeyChanges, type KeyDiff, type SequenceDiff } from "~/features/compare";
-import { describeChange } from "~/features/robots/changes";
+import { describeSettingChange } from "~/features/gaits";
 import { FramedTable, type Column } from "~/components/common/FramedTable";
 
 const STATUS_LOOKS: Record<KeyDiff["status"], { mark: string; label: string; className: string }> = {
@@ -50,9 +50,11 @@ export function SequenceDiffTable({ diff }: { diff: SequenceDiff }) {
       {diff.settings.length > 0 ? (
         <div className="rounded-lg border border-line bg-surface px-4 py-3 text-sm">
           <h3 className="font-medium">Settings</h3>
-          <ul className="mt-1 list-inside list-disc font-mono text-xs">
+          <ul className="mt-1 list-inside list-disc">
             {diff.settings.map((change) => (
-              <li key={change.path}>{describeChange(change)}</li>
+              <li key={change.path} title={change.path}>
+                {describeSettingChange(change)}
+              </li>
             ))}
           </ul>
         </div>

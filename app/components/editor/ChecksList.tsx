@@ -5,10 +5,10 @@
 import { useId, useMemo, useState } from "react";
 import { Panel } from "~/components/common/Panel";
 import type { Flag } from "~/gait";
-import { flagRuns, framesText, runPlace, type FlagRun } from "~/features/gaits/editor/flag-runs";
+import { checkSummary, flagRuns, framesText, runPlace, type FlagRun } from "~/features/gaits/editor/flag-runs";
 import { FLAG_LABELS } from "~/features/gaits/flag-labels";
 import { useEditor, useEditorStore } from "~/stores/editor-context";
-import { SEVERITY_GLYPH } from "../timeline/FlagLane";
+import { SEVERITY_GLYPH } from "~/features/gaits/editor/flag-badges";
 import type { useServerReference } from "./use-server-reference";
 
 const LIST_LIMIT = 150;
@@ -31,7 +31,7 @@ export function ChecksList({ reference }: { reference: ReturnType<typeof useServ
   const shown = source === "server" && serverFlags ? serverFlags : previewFlags;
   const runs = useMemo(() => flagRuns(shown), [shown]);
   const visible = showAll ? runs : runs.slice(0, LIST_LIMIT);
-  const errors = shown.filter((flag) => flag.severity === "error").length;
+  const summary = useMemo(() => checkSummary(shown), [shown]);
 
   let status: string;
   if (reference.isError) status = `The server check failed (${reference.error.message}); showing what it last said.`;
@@ -67,9 +67,7 @@ export function ChecksList({ reference }: { reference: ReturnType<typeof useServ
         ) : null}
         <p className="numeric mt-1 text-sm" data-testid="checks-count">
           {source === "server" && serverFlags ? "Server: " : "Preview: "}
-          {runs.length === 0
-            ? "no flags — every frame passes every check."
-            : `${errors} error and ${shown.length - errors} warning frames in ${runs.length} runs.`}
+          {runs.length === 0 ? "no flags — every frame passes every check." : `${summary.text} in ${runs.length} ${runs.length === 1 ? "run" : "runs"}.`}
         </p>
         {runs.length > 0 ? (
           <ul

@@ -1,7 +1,7 @@
 // The gait editor on one screen, arranged for the job: the Timeline (gait
-// diagram) and the Robot view side by side get the most room, Playback and
-// Checks under the Timeline, then Key details, Joint plots and the template
-// parameters along the bottom.
+// diagram) and the Robot view side by side get the most room; the template
+// parameters just above the Timeline, Playback and Checks under it; then Key
+// details and Joint plots along the bottom.
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { useCallback, useRef, useState } from "react";
 import type { Sequence } from "~/gait";
@@ -88,18 +88,19 @@ function EditorLayout(props: EditorScreenProps) {
       <ConflictBanner gaitId={props.gait.id} gaitName={props.gait.name} robotRevision={props.robotRevision} />
       <RestoreOffer gaitId={props.gait.id} serverSequence={props.sequence} serverUpdatedAt={props.updatedAt} />
       <Announcer />
+      {/* The parameters sit right above the timeline, so a stride change is seen there without scrolling (1280×800 and up). */}
       <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_24rem]">
         <div className="min-w-0 space-y-3">
+          <GeneratorPanel />
           <Timeline />
           <PlaybackBar />
           <ChecksList reference={reference} />
         </div>
         <RobotViewPanel />
       </div>
-      <div className="grid gap-3 lg:grid-cols-2 2xl:grid-cols-3">
+      <div className="grid gap-3 lg:grid-cols-2">
         <KeyDetails />
         <JointPlots />
-        <GeneratorPanel />
       </div>
       <HelpDialog ref={help} />
     </div>

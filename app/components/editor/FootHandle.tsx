@@ -1,5 +1,7 @@
 // The selected key's foot in the top view, to drag to a new place (or move
 // with the arrow keys: 1 mm, 10 mm with Shift; up is forward, left is left).
+// A grab cursor and a tooltip say so on hover, a dashed ring shows keyboard
+// focus, and the view's caption says it in words while a handle is shown.
 // Only keys that place the foot get a handle: during a stance the foot stays
 // where it touched down, so a lift-off key's foot follows from the stance.
 import { useRef } from "react";
@@ -46,6 +48,7 @@ export function FootHandle({ view }: { view: ViewFrame }) {
   };
   const nudge = (dx: number, dy: number) => store.getState().setKeyFoot(selection, poseApply(offset, [moved[0] + dx, moved[1] + dy, moved[2]]));
   const mm = (value: number) => Math.round(value);
+  const hint = `Drag the ${legId} foot, or use the arrow keys: 1 mm, 10 mm with Shift (up is forward).`;
 
   return (
     <g
@@ -53,8 +56,9 @@ export function FootHandle({ view }: { view: ViewFrame }) {
       tabIndex={0}
       aria-label={`Foot of the selected ${legId} key: x ${mm(neutralFoot[0])} mm, y ${mm(neutralFoot[1])} mm. Drag it, or use the arrow keys (Shift: 10 mm).`}
       data-testid="foot-handle"
-      style={{ pointerEvents: "all", cursor: "move", touchAction: "none" }}
-      className="outline-none [&:focus-visible>circle:first-child]:stroke-accent"
+      style={{ pointerEvents: "all", cursor: drag.current ? "grabbing" : "grab", touchAction: "none" }}
+      // The SVG group draws its own focus ring (the outer dashed circle), as an outline does not follow its shape.
+      className="group outline-none"
       onPointerDown={(event) => {
         event.preventDefault();
         event.currentTarget.setPointerCapture(event.pointerId);
@@ -90,6 +94,8 @@ export function FootHandle({ view }: { view: ViewFrame }) {
         nudge(move[0], move[1]);
       }}
     >
+      <title>{hint}</title>
+      <circle cx={x} cy={y} r={17} className="fill-none stroke-ink opacity-0 group-focus-visible:opacity-100" strokeWidth={2} strokeDasharray="4 3" />
       <circle cx={x} cy={y} r={11} className="fill-accent stroke-ink" fillOpacity={0.2} strokeWidth={1.5} />
       <circle cx={x} cy={y} r={3} className="fill-accent" />
       <path d={`M${x - 16},${y} h6 M${x + 10},${y} h6 M${x},${y - 16} v6 M${x},${y + 10} v6`} className="stroke-accent" strokeWidth={1.5} />

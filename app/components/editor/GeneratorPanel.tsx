@@ -8,19 +8,23 @@ import { hasHandEdits } from "~/features/gaits/editor/hand-edits";
 import { paramsOfSequence, suitableTemplates } from "~/features/gaits/editor/templates";
 import { useEditor, useEditorStore } from "~/stores/editor-context";
 import { Panel } from "~/components/common/Panel";
+import { SETTING_LABELS, type SettingPath } from "~/features/gaits";
 
 type NumberParam = "cycleMs" | "fps" | "strideMm" | "stepHeightMm" | "directionDeg" | "turnDegPerCycle" | "bodyHeightMm" | "dutyFactor";
 
-const FIELDS: { name: NumberParam; label: string; unit?: string; min?: number; max?: number; optional?: boolean; digits?: number }[] = [
-  { name: "cycleMs", label: "Cycle time", unit: "ms", min: 1, max: 600_000, digits: 0 },
-  { name: "fps", label: "Frame rate", unit: "frames/s", min: 1, max: 1000, digits: 0 },
-  { name: "strideMm", label: "Stride", unit: "mm" },
-  { name: "stepHeightMm", label: "Step height", unit: "mm", min: 0, max: 1000 },
-  { name: "directionDeg", label: "Direction", unit: "°" },
-  { name: "turnDegPerCycle", label: "Turn per cycle", unit: "°" },
-  { name: "bodyHeightMm", label: "Body height", unit: "mm", min: 1, optional: true },
-  { name: "dutyFactor", label: "Duty factor", min: 0.01, max: 0.99, optional: true, digits: 3 },
+// Names and units from the one list every page uses (the comparison's changed settings too).
+const FIELDS: { name: NumberParam; setting: SettingPath; min?: number; max?: number; optional?: boolean; digits?: number }[] = [
+  { name: "cycleMs", setting: "cycleMs", min: 1, max: 600_000, digits: 0 },
+  { name: "fps", setting: "fps", min: 1, max: 1000, digits: 0 },
+  { name: "strideMm", setting: "generator.strideMm" },
+  { name: "stepHeightMm", setting: "generator.stepHeightMm", min: 0, max: 1000 },
+  { name: "directionDeg", setting: "generator.directionDeg" },
+  { name: "turnDegPerCycle", setting: "generator.turnDegPerCycle" },
+  { name: "bodyHeightMm", setting: "generator.bodyHeightMm", min: 1, optional: true },
+  { name: "dutyFactor", setting: "generator.dutyFactor", min: 0.01, max: 0.99, optional: true, digits: 3 },
 ];
+
+const labelOf = (setting: SettingPath): { label: string; unit?: string } => SETTING_LABELS[setting];
 
 export function GeneratorPanel() {
   const store = useEditorStore();
@@ -46,15 +50,20 @@ export function GeneratorPanel() {
   };
 
   return (
-    <Panel title="Template and parameters">
-      <div className="grid gap-3 p-3">
+    <Panel
+      title="Template and parameters"
+      layout="flex flex-wrap items-baseline justify-between gap-x-3"
+      tools={<p className="text-xs text-ink-muted">A change writes new keys from the template; hand edits are asked about first, and Undo brings them back.</p>}
+    >
+      {/* One compact block: the template and the eight numbers in as few rows as the width allows. */}
+      <div key={fieldsKey} className="grid grid-cols-2 gap-x-3 gap-y-2 px-3 py-2 sm:grid-cols-3 md:grid-cols-5">
         <label className="flex flex-col text-xs text-ink-muted">
-          Template
+          {SETTING_LABELS["generator.template"].label}
           <select
             disabled={readOnly}
             value={current ? params.template : ""}
             onChange={(event) => change({ ...params, template: event.currentTarget.value as TemplateName, dutyFactor: undefined })}
-            className="rounded border border-line bg-surface px-1 py-1 text-sm text-ink"
+            className="rounded border border-line bg-surface px-1 py-0.5 text-sm text-ink"
           >
             {current ? null : <option value="">(none: hand-made keys)</option>}
             {templates.map((template) => (
@@ -64,25 +73,22 @@ export function GeneratorPanel() {
             ))}
           </select>
         </label>
-        <div key={fieldsKey} className="grid grid-cols-2 gap-2 sm:grid-cols-4 lg:grid-cols-2 2xl:grid-cols-4">
-          {FIELDS.map((field) => (
-            <NumberField
-              key={field.name}
-              label={field.label}
-              unit={field.unit}
-              value={params[field.name] as number | undefined}
-              placeholder={field.name === "bodyHeightMm" ? String(robot.standHeight) : field.name === "dutyFactor" ? "template's" : undefined}
-              optional={field.optional}
-              digits={field.digits ?? 1}
-              min={field.min}
-              max={field.max}
-              disabled={readOnly}
-              width="w-24"
-              onCommit={(value) => change({ ...params, [field.name]: value })}
-            />
-          ))}
-        </div>
-        <p className="text-xs text-ink-muted">A change writes new keys from the template; hand edits are asked about first, and Undo brings them back.</p>
+        {FIELDS.map((field) => (
+          <NumberField
+            key={field.name}
+            label={labelOf(field.setting).label}
+            unit={labelOf(field.setting).unit}
+            value={params[field.name] as number | undefined}
+            placeholder={field.name === "bodyHeightMm" ? String(robot.standHeight) : field.name === "dutyFactor" ? "template's" : undefined}
+            optional={field.optional}
+            digits={field.digits ?? 1}
+            min={field.min}
+            max={field.max}
+            disabled={readOnly}
+            width="w-24"
+            onCommit={(value) => change({ ...params, [field.name]: value })}
+          />
+        ))}
       </div>
       <dialog
         ref={confirm}

@@ -7,6 +7,7 @@ import { groundRings, SideView, TopView } from "~/components/robot-view";
 import { topFrame } from "~/components/robot-view";
 import { SOLVE_DEFAULTS } from "~/gait";
 import { useEditor } from "~/stores/editor-context";
+import { keyPlacesFoot } from "~/features/gaits/editor/key-edits";
 import { FootHandle } from "./FootHandle";
 import { frameGeometry, type FrameGeometry } from "./frame-geometry";
 import { Panel } from "~/components/common/Panel";
@@ -63,6 +64,7 @@ export function RobotViewPanel() {
           </svg>
           <figcaption className="px-1 text-xs text-ink-muted">
             From above, forward up. Shaded: support polygon of the feet down; dashed circle: the stability margin round the CoM.
+            <FootHint />
           </figcaption>
         </figure>
         <figure>
@@ -78,6 +80,18 @@ export function RobotViewPanel() {
         </figure>
       </div>
     </Panel>
+  );
+}
+
+/** While a key's foot can be moved, the caption says how: with the pointer or the keyboard. */
+function FootHint() {
+  const legId = useEditor((state) => (state.readOnly ? null : (state.selection?.legId ?? null)));
+  const placesFoot = useEditor((state) => (state.selection ? keyPlacesFoot(state.sequence, state.selection) : false));
+  if (!legId || !placesFoot) return null;
+  return (
+    <span className="mt-0.5 block text-ink" data-testid="foot-hint">
+      <span aria-hidden>✥ </span>Ringed: the {legId} foot of the selected key. Drag it, or Tab to it and use the arrow keys (Shift: 10 mm).
+    </span>
   );
 }
 

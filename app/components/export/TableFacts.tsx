@@ -29,7 +29,7 @@ export function TableFacts({ facts }: { facts: TableFactsData }) {
       "Frames",
       <span className="numeric">{`${facts.frameCount} at ${facts.rateHz} Hz (${facts.framePeriodMs} ms apart), ${facts.channelCount} channels`}</span>,
     ],
-    ["Calibration", facts.calibrationProfile ?? "none (the robot definition's servo settings)"],
+    ["Calibration profile", facts.calibrationProfile ?? "none (the robot's own servo settings)"],
     [
       "Flags",
       facts.flags.errors + facts.flags.warnings === 0
@@ -40,7 +40,7 @@ export function TableFacts({ facts }: { facts: TableFactsData }) {
     ],
     ["Clamped pulses", facts.clampedCount === 0 ? "none" : `${facts.clampedCount} cells clamped to the servo range`],
     ...(facts.overrideReason ? ([["Override", facts.overrideReason]] as [string, React.ReactNode][]) : []),
-    ["File", <span>{`${facts.fileName} · ${kib(facts.bytes)}`}</span>],
+    ["File", <span className="break-all">{`${facts.fileName} · ${kib(facts.bytes)}`}</span>],
     ["SHA-256", <code className="font-mono text-xs break-all">{facts.sha256}</code>],
     ["Made by", `exporter ${facts.exporterVersion}, solver ${facts.solverVersion ?? "—"}`],
   ];

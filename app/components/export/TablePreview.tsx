@@ -11,6 +11,8 @@ export type TablePreviewData = {
   values: number[];
   decimals: number;
   unitLabel: string;
+  /** What the numbers are, naming the calibration profile applied: the table's meta.values.description. */
+  valuesDescription: string;
   frameCount: number;
   shownRows: number;
 };
@@ -39,7 +41,7 @@ export function TablePreview({ preview }: { preview: TablePreviewData }) {
           ? `The first ${preview.shownRows} of ${preview.frameCount} frames; the file holds them all.`
           : `All ${preview.frameCount} frames`}
         {" · "}
-        {preview.unitLabel}. Hover a column name for its channel.
+        {preview.valuesDescription} Hover a column name for its channel.
       </p>
     </div>
   );

@@ -21,12 +21,18 @@ export function TableResult({
   return (
     <div className="mt-6 grid gap-6 xl:grid-cols-[minmax(0,1fr)_24rem]">
       <section aria-labelledby="preview-heading" className={`min-w-0 ${busy ? "opacity-60" : ""}`}>
-        <div className="mb-2 flex items-center justify-between gap-3">
+        <div className="mb-2 flex flex-wrap items-center justify-between gap-x-3 gap-y-2">
           <h2 id="preview-heading" className="text-lg font-semibold">
             Preview
           </h2>
-          <a href={download.path} download={download.fileName} className="rounded-md bg-accent px-4 py-2 font-medium text-on-accent hover:bg-accent-strong">
-            Download {download.fileName}
+          {/* The file name names the calibration profile: shown whole, broken anywhere rather than cut. */}
+          <a
+            href={download.path}
+            download={download.fileName}
+            className="flex max-w-full min-w-0 flex-col rounded-md bg-accent px-4 py-1.5 text-on-accent hover:bg-accent-strong"
+          >
+            <span className="font-medium">Download </span>
+            <span className="font-mono text-xs break-all">{download.fileName}</span>
           </a>
         </div>
         <TablePreview preview={table.preview} />

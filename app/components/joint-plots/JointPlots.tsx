@@ -11,6 +11,8 @@ import type { Joint, JointName } from "~/kinematics";
 import { useEditor } from "~/stores/editor-context";
 import { jointSeries, type JointSeries } from "./joint-series";
 import { Panel } from "~/components/common/Panel";
+import { jointFlags, type FlaggedFrame } from "~/features/gaits";
+import { angleRange, FlagMarks, LimitBands } from "./plot-parts";
 
 const WIDTH = 600;
 const HEIGHT = 96;
@@ -20,16 +22,12 @@ type Scales = { x: (frame: number) => number; angle: ReturnType<typeof scaleLine
 
 function scalesFor(series: JointSeries, joint: Joint, frames: number): Scales {
   // The curve sets the range; a limit within 15° of it is shown too, farther ones would flatten the curve.
-  let low = series.minAngleDeg;
-  let high = series.maxAngleDeg;
-  if (joint.minDeg > low - 15) low = Math.min(low, joint.minDeg);
-  if (joint.maxDeg < high + 15) high = Math.max(high, joint.maxDeg);
-  const pad = Math.max(2, (high - low) * 0.1);
+  const [low, high] = angleRange(series.minAngleDeg, series.maxAngleDeg, joint);
   const x = scaleLinear()
     .domain([0, Math.max(1, frames - 1)])
     .range([MARGIN.left, WIDTH - MARGIN.right]);
   const angle = scaleLinear()
-    .domain([low - pad, high + pad])
+    .domain([low, high])
     .range([HEIGHT - MARGIN.bottom, MARGIN.top])
     .nice();
   const speed = scaleLinear()
@@ -46,7 +44,6 @@ const PlotCurves = memo(function PlotCurves({ series, joint, scales, legIndex }:
   const speedLine = line<number>()
     .x((_, i) => x(i))
     .y((value) => speed(value));
-  const [domainLow, domainHigh] = angle.domain();
   const top = MARGIN.top;
   const bottom = HEIGHT - MARGIN.bottom;
   const right = WIDTH - MARGIN.right;
@@ -54,24 +51,8 @@ const PlotCurves = memo(function PlotCurves({ series, joint, scales, legIndex }:
   const overSpeed = speed(joint.maxSpeedDegS);
   return (
     <g>
-      {/* Outside the joint limits: shaded bands with a dashed edge. */}
-      {joint.maxDeg < domainHigh ? (
-        <rect x={MARGIN.left} y={top} width={right - MARGIN.left} height={Math.max(0, angle(joint.maxDeg) - top)} className="fill-danger-soft" />
-      ) : null}
-      {joint.minDeg > domainLow ? (
-        <rect
-          x={MARGIN.left}
-          y={angle(joint.minDeg)}
-          width={right - MARGIN.left}
-          height={Math.max(0, bottom - angle(joint.minDeg))}
-          className="fill-danger-soft"
-        />
-      ) : null}
-      {[joint.minDeg, joint.maxDeg]
-        .filter((limit) => limit > domainLow && limit < domainHigh)
-        .map((limit) => (
-          <line key={limit} x1={MARGIN.left} x2={right} y1={angle(limit)} y2={angle(limit)} className="stroke-danger" strokeDasharray="4 3" strokeWidth={1} />
-        ))}
+      {/* Outside the joint limits: shaded bands with a dashed edge (the comparison's plots draw the same). */}
+      <LimitBands limits={joint} angle={angle} left={MARGIN.left} right={right} top={top} bottom={bottom} />
       {ticks.map((tick) => (
         <g key={tick}>
           <line x1={MARGIN.left - 3} x2={right} y1={angle(tick)} y2={angle(tick)} className="stroke-line" strokeWidth={0.5} />
@@ -104,6 +85,7 @@ function JointPlot({
   joint,
   frames,
   legIndex,
+  flagged,
 }: {
   legId: string;
   name: JointName;
@@ -111,8 +93,10 @@ function JointPlot({
   joint: Joint;
   frames: number;
   legIndex: number;
+  flagged: readonly FlaggedFrame[];
 }) {
   const scales = useMemo(() => scalesFor(series, joint, frames), [series, joint, frames]);
+  const marks = useMemo(() => flagged.map((entry) => ({ ...entry, x: scales.x(entry.frame) })), [flagged, scales]);
   const label =
     `${legId} ${name}: from ${series.minAngleDeg.toFixed(1)}° to ${series.maxAngleDeg.toFixed(1)}° over the cycle, ` +
     `limits ${joint.minDeg}° to ${joint.maxDeg}°; peak speed ${Math.round(series.peakSpeedDegS)}°/s of ${joint.maxSpeedDegS}°/s.`;
@@ -131,6 +115,7 @@ function JointPlot({
         data-peak-speed={Math.round(series.peakSpeedDegS)}
       >
         <PlotCurves series={series} joint={joint} scales={scales} legIndex={legIndex} />
+        <FlagMarks marks={marks} y={HEIGHT - MARGIN.bottom + 9} />
         <PlotPlayhead scales={scales} />
       </svg>
     </figure>
@@ -166,7 +151,7 @@ export function JointPlots() {
       layout="flex items-baseline justify-between gap-2"
       className="[contain:content]"
       testId="joint-plots"
-      tools={<p className="text-xs text-ink-muted">solid: angle · dashed: speed · shaded: past the joint limits</p>}
+      tools={<p className="text-xs text-ink-muted">solid: angle · dashed: speed · shaded: past the joint limits · ▲ ◆ flagged frames</p>}
     >
       <div className="grid gap-1 p-2">
         {series && leg ? (
@@ -179,6 +164,7 @@ export function JointPlots() {
               joint={leg.joints[entry.joint]}
               frames={preview!.frames.length}
               legIndex={legIndex}
+              flagged={jointFlags(preview!.flags, leg.id, entry.joint)}
             />
           ))
         ) : (

@@ -6,6 +6,7 @@ import { memo, useMemo } from "react";
 import { RAD_PER_DEG, type ReachRing, type Robot } from "~/kinematics";
 import { topFrame, type ViewFrame } from "./frame";
 import { legFill, legStroke } from "./leg-colours";
+import { placeLegLabels } from "./leg-labels";
 import type { LegPosture } from "./leg-postures";
 import { FootMarker } from "./FootMarker";
 import { ViewPicture } from "./ViewPicture";
@@ -25,6 +26,17 @@ export type TopViewProps = {
 
 export function TopView({ robot, postures, rings, highlightLegId, width = 360, height = 360, label, description }: TopViewProps) {
   const frame = useMemo(() => topFrame(robot, width, height), [robot, width, height]);
+  const labels = useMemo(() => {
+    const placed = placeLegLabels(
+      postures.map((posture) => ({
+        id: posture.legId,
+        text: `${posture.legId}${!posture.reachable || posture.violations.length > 0 ? " !" : ""}`,
+        foot: frame.toScreen(posture.points.foot[0], posture.points.foot[1]),
+      })),
+      frame.toScreen(0, 0),
+    );
+    return new Map(placed.map((label) => [label.id, label]));
+  }, [postures, frame]);
   return (
     <ViewPicture
       width={width}
@@ -45,9 +57,16 @@ export function TopView({ robot, postures, rings, highlightLegId, width = 360, h
             <g key={posture.legId} opacity={faded ? 0.35 : 1} data-leg={posture.legId}>
               <polyline points={path} className={`${legStroke(posture.index)} fill-none`} strokeWidth={3} strokeLinecap="round" strokeLinejoin="round" />
               <FootMarker x={footX} y={footY} index={posture.index} flagged={flagged} />
-              <text x={footX + 7} y={footY - 7} className="fill-ink text-[11px] font-medium">
-                {posture.legId}
-                {flagged ? " !" : ""}
+              {/* Beside the foot, away from the body and from the other labels; a halo keeps it readable over the legs. */}
+              <text
+                x={labels.get(posture.legId)?.x}
+                y={labels.get(posture.legId)?.y}
+                textAnchor={labels.get(posture.legId)?.anchor}
+                className="fill-ink stroke-surface text-[11px] font-medium [paint-order:stroke]"
+                strokeWidth={3}
+                strokeLinejoin="round"
+              >
+                {labels.get(posture.legId)?.text}
               </text>
             </g>
           );

@@ -44,7 +44,8 @@ export const KeyMarker = memo(function KeyMarker({ keyRef, t, contact, legIndex,
       aria-roledescription={disabled ? undefined : attributes["aria-roledescription"]}
       onClick={() => onSelect(keyRef)}
       data-key={`${keyRef.legId ?? "body"}:${keyRef.index}`}
-      className={`absolute top-1/2 z-10 flex h-6 w-6 -translate-x-1/2 -translate-y-1/2 items-center justify-center rounded-full outline-none ${
+      // The focus ring (an outline, 2 px off the key) differs from the selection's ring, so a keyboard user sees both.
+      className={`absolute top-1/2 z-10 flex h-6 w-6 -translate-x-1/2 -translate-y-1/2 items-center justify-center rounded-full focus-visible:z-20 focus-visible:outline-2 focus-visible:outline-offset-2 focus-visible:outline-ink ${
         selected ? "bg-accent-soft ring-2 ring-accent" : "hover:bg-sunken"
       } ${isDragging ? "cursor-grabbing" : disabled ? "cursor-pointer" : "cursor-grab"} touch-none`}
       style={{ left: `${t * 100}%` }}

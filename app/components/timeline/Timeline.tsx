@@ -176,6 +176,7 @@ export function Timeline() {
 }
 
 function TimelineLegend() {
+  const readOnly = useEditor((state) => state.readOnly);
   return (
     <p className="flex flex-wrap gap-x-4 gap-y-1 border-t border-line px-3 py-1.5 text-xs text-ink-muted">
       <span>
@@ -202,7 +203,11 @@ function TimelineLegend() {
         </span>
         warning
       </span>
-      <span>Drag keys to move them (Shift: tenths of a frame); double-click a track to add a key.</span>
+      {readOnly ? (
+        <span>Click a key to see its details; your role cannot move keys.</span>
+      ) : (
+        <span>Drag keys to move them (Shift: tenths of a frame); double-click a track to add a key.</span>
+      )}
     </p>
   );
 }

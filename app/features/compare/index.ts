@@ -14,7 +14,7 @@ export {
   type TrackDiff,
 } from "./sequence-diff";
 export { metricDeltas, peakJointSpeed, type MetricId, type MetricRow, type MetricSummary } from "./metrics";
-export { jointOverlays, sampleAt, sampleFractions, type AngleFrames, type JointOverlay } from "./joint-series";
+export { jointOverlays, sampleAt, sampleFractions, type AngleFrames, type JointOverlay, type OverlayFlagMark } from "./joint-series";
 export { frameAt, playbackOf, syncedFractions, type Playback, type PlaybackFrame, type SyncMode } from "./playback";
 export { frameRanges, groupFlags, type FlagGroup } from "./flag-groups";
 export { robotRevisionDiff, type RobotRevisionDiff } from "./robot-diff";

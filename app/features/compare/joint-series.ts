@@ -1,13 +1,24 @@
 // Joint angle curves of two versions on one time axis, for the overlaid joint
 // plots: both resampled by linear interpolation onto the same cycle fractions,
 // so the gap between them can be shaded and measured. Pure.
+import type { Flag, FlagKind, Severity } from "../../gait/index";
 import { JOINT_NAMES, type JointAngles, type JointName } from "../../kinematics/index";
+import { jointFlags } from "../gaits/index";
 
 /** The angles of one solve, frame by frame: what the plots need of a SolvedSequence. */
 export type AngleFrames = {
   loop: boolean;
   frames: readonly { legs: Readonly<Record<string, { angles: JointAngles }>> }[];
+  /** The version's flags, for the marks under its curves. */
+  flags?: readonly Flag[];
+  /** How many frames the flags' frame numbers count (the version's own solve; `frames` may be fewer, for display). */
+  flagFrameCount?: number;
+  /** Each leg's joint limits (servo degrees), for the shaded bands. */
+  limits?: Readonly<Record<string, Readonly<Record<JointName, { minDeg: number; maxDeg: number }>>>>;
 };
+
+/** A flagged frame of one side, at its place on the shared cycle axis. */
+export type OverlayFlagMark = { fraction: number; frame: number; kind: FlagKind; severity: Severity };
 
 export type JointOverlay = {
   legId: string;
@@ -19,7 +30,18 @@ export type JointOverlay = {
   b: number[];
   /** Largest |B − A| over the samples, degrees. */
   maxDifferenceDeg: number;
+  /** The joint's limits in A's robot revision (B's where A gives none); null when neither does. */
+  limits: { minDeg: number; maxDeg: number } | null;
+  /** Flagged frames of A and of B on this joint (its own flags and its leg's that name no joint). */
+  flags: { a: OverlayFlagMark[]; b: OverlayFlagMark[] };
 };
+
+function marksOf(side: AngleFrames, legId: string, joint: JointName): OverlayFlagMark[] {
+  if (!side.flags) return [];
+  const count = side.flagFrameCount ?? side.frames.length;
+  const span = Math.max(1, side.loop ? count : count - 1);
+  return jointFlags(side.flags, legId, joint).map((flagged) => ({ ...flagged, fraction: flagged.frame / span }));
+}
 
 /**
  * Value at cycle fraction `fraction` of per-frame values: a loop has frames at
@@ -61,7 +83,17 @@ export function jointOverlays(a: AngleFrames, b: AngleFrames): JointOverlay[] {
       for (let index = 0; index < fractions.length; index += 1) {
         maxDifferenceDeg = Math.max(maxDifferenceDeg, Math.abs(sampledB[index] - sampledA[index]));
       }
-      overlays.push({ legId, joint, fractions, a: sampledA, b: sampledB, maxDifferenceDeg });
+      const limits = a.limits?.[legId]?.[joint] ?? b.limits?.[legId]?.[joint] ?? null;
+      overlays.push({
+        legId,
+        joint,
+        fractions,
+        a: sampledA,
+        b: sampledB,
+        maxDifferenceDeg,
+        limits: limits && { minDeg: limits.minDeg, maxDeg: limits.maxDeg },
+        flags: { a: marksOf(a, legId, joint), b: marksOf(b, legId, joint) },
+      });
     }
   }
   return overlays;

@@ -2,4 +2,4 @@
 // has no database but hashes with node:crypto and throws ServiceError, so
 // there is no browser-safe index.ts.
 export { RELEASE_TABLE, benchQuerySchema, matchesIfNoneMatch, tableQuerySchema } from "./query";
-export { recordReleaseTable } from "./releases.server";
+export { checkReleaseTable, recordReleaseTable, type ReleaseTableCheck } from "./releases.server";

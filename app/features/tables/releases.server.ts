@@ -80,3 +80,53 @@ export async function releaseRecordOf(versionId: string, db: Reader = database()
   const [row] = await db.select().from(releases).where(eq(releases.versionId, versionId)).orderBy(desc(releases.createdAt)).limit(1);
   return row ?? null;
 }
+
+/** A release record beside today's table made from its recorded query: the version page's check. */
+export type ReleaseTableCheck = {
+  recorded: { sha256: string; exporterVersion: string; solverVersion: string; tableFormat: string; createdAt: Date };
+  /** Today's table from the recorded query; `sha256` null when it cannot be made today (`problem` says why). */
+  today: { sha256: string | null; exporterVersion: string; solverVersion: string; problem: string | null };
+  matches: boolean;
+  /** What changed since the release, in words ("the exporter changed from 1.0.0 to 2.0.0"); empty when neither version did. */
+  reasons: string[];
+};
+
+/**
+ * Makes the release's canonical table again with today's code (the recorded
+ * query: format, units, override) and compares its SHA-256 with the recorded
+ * one. Null when the version has no release record. A solve on the worker
+ * pool, as a download is.
+ */
+export async function checkReleaseTable(versionId: string, db: Reader = database()): Promise<ReleaseTableCheck | null> {
+  const record = await releaseRecordOf(versionId, db);
+  if (!record) return null;
+  const version = await tableVersionById(versionId, db);
+  if (!version) return null;
+  const recorded = new URLSearchParams(record.tableFormat);
+  const reasons: string[] = [];
+  if (record.exporterVersion !== EXPORTER_VERSION) reasons.push(`the exporter changed from ${record.exporterVersion} to ${EXPORTER_VERSION}`);
+  if (record.solverVersion !== SOLVER_VERSION) reasons.push(`the solver changed from ${record.solverVersion} to ${SOLVER_VERSION}`);
+  let sha256: string | null = null;
+  let problem: string | null = null;
+  try {
+    const format = recorded.get("format") === RELEASE_TABLE.format ? RELEASE_TABLE.format : null;
+    const units = recorded.get("units") === RELEASE_TABLE.units ? RELEASE_TABLE.units : null;
+    if (!format || !units) throw new ServiceError(422, "invalid", `The recorded query "${record.tableFormat}" is not one this exporter makes.`);
+    sha256 = (await renderVersionTable(prepareReleaseTable(version, format, units, recorded.get("override")))).sha256;
+  } catch (error) {
+    if (!(error instanceof ServiceError)) throw error;
+    problem = error.message;
+  }
+  return {
+    recorded: {
+      sha256: record.tableSha256,
+      exporterVersion: record.exporterVersion,
+      solverVersion: record.solverVersion,
+      tableFormat: record.tableFormat,
+      createdAt: record.createdAt,
+    },
+    today: { sha256, exporterVersion: EXPORTER_VERSION, solverVersion: SOLVER_VERSION, problem },
+    matches: sha256 === record.tableSha256,
+    reasons,
+  };
+}

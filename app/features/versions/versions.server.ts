@@ -17,6 +17,7 @@ import {
   metricDeltas,
   playbackOf,
   robotRevisionDiff,
+  type AngleFrames,
   type FlagGroup,
   type JointOverlay,
   type MetricRow,
@@ -559,6 +560,17 @@ export type Comparison = {
   overlays: JointOverlay[];
 };
 
+/** One side of the joint overlays: the display frames, the version's flags and its robot revision's joint limits. */
+function overlaySide(solved: SolvedVersion): AngleFrames {
+  return {
+    loop: solved.sequence.loop,
+    frames: solved.display.frames,
+    flags: solved.solved.flags,
+    flagFrameCount: solved.solved.summary.frames,
+    limits: Object.fromEntries(solved.robot.legs.map((leg) => [leg.id, leg.joints])),
+  };
+}
+
 /** Any two versions of the same gait, or of two gaits on the same robot: what changed from A to B. */
 export async function compareVersions(workspaceId: string, aId: string, bId: string): Promise<Comparison> {
   const [a, b] = await Promise.all([getVersionById(workspaceId, aId), getVersionById(workspaceId, bId)]);
@@ -596,6 +608,6 @@ export async function compareVersions(workspaceId: string, aId: string, bId: str
     metrics: metricDeltas({ ...a.summary, cycleMs: solvedA.sequence.cycleMs }, { ...b.summary, cycleMs: solvedB.sequence.cycleMs }),
     diff: diffSequences(solvedA.sequence, solvedB.sequence),
     robotDiff: robotRevisionDiff(revisionA, revisionB),
-    overlays: jointOverlays({ loop: solvedA.sequence.loop, frames: solvedA.display.frames }, { loop: solvedB.sequence.loop, frames: solvedB.display.frames }),
+    overlays: jointOverlays(overlaySide(solvedA), overlaySide(solvedB)),
   };
 }

@@ -3,6 +3,7 @@
 // command. Page composition only; the tables themselves come from
 // app/features/tables, the same code as the download API.
 import { z } from "zod";
+import { tableUnitLabel } from "~/export";
 import { JOINT_NAMES, parseRobot } from "~/kinematics";
 import { listProfiles } from "~/features/robots/calibration.server";
 import { attempt, ServiceError } from "~/platform/errors.server";
@@ -34,8 +35,9 @@ export function previewOf(rendered: RenderedTable, limit = PREVIEW_ROWS) {
       frameIndex: Array.from(data.frameIndex.subarray(0, shownRows)),
       timeUs: Array.from(data.timeUs.subarray(0, shownRows)),
       values: Array.from(data.values.subarray(0, shownRows * meta.channelCount)),
-      decimals: meta.decimals,
-      unitLabel: meta.unitLabel,
+      decimals: meta.values.decimals,
+      unitLabel: tableUnitLabel(meta.units),
+      valuesDescription: meta.values.description,
       frameCount: meta.frameCount,
       shownRows,
     },

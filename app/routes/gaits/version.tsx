@@ -20,6 +20,8 @@ import { readIntentForm } from "~/platform/intent-form.server";
 import { mailSentAbout, resendMail } from "~/platform/outbox.server";
 import { approvalRules, approveVersion, releaseVersion, requestReview, reviewersFor, sendBackVersion } from "~/features/versions/review.server";
 import { getGait, getVersion, listVersions, solveVersion } from "~/features/versions/versions.server";
+import { checkReleaseTable } from "~/features/tables/index.server";
+import { ReleaseTableCheck } from "~/components/export/ReleaseTableCheck";
 
 const versionParams = z.object({
   gaitId: id(),
@@ -66,11 +68,13 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   if (!parsed.success) throw notFound();
   const [version, gait] = await Promise.all([getVersion(workspace.id, parsed.data.gaitId, parsed.data.number), getGait(workspace.id, parsed.data.gaitId)]);
   if (!version || !gait) throw notFound();
-  const [solved, reviewers, siblings, mails] = await Promise.all([
+  const [solved, reviewers, siblings, mails, releaseCheck] = await Promise.all([
     solveVersion(version),
     reviewersFor(workspace.id, version.author?.id ?? null),
     listVersions(workspace.id, gait.id),
     mailSentAbout({ type: "gait_version", id: version.id }, user.id),
+    // Today's table beside the one the release recorded (a solve, as a download is).
+    checkReleaseTable(version.id),
   ]);
   const others = siblings.filter((sibling) => sibling.id !== version.id).map(({ id, number, message, state }) => ({ id, number, message, state }));
   const previous = others.filter((other) => other.number < version.number).sort((x, y) => y.number - x.number)[0] ?? null;
@@ -86,6 +90,10 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     releasedId: released?.id ?? null,
     // What the signed-in person's review steps mailed, and how it went.
     mails,
+    releaseTable: releaseCheck && {
+      ...releaseCheck,
+      downloadPath: can(role, "tables.download") ? `/api/v1/gaits/${gait.id}/versions/${version.number}/table?${releaseCheck.recorded.tableFormat}` : null,
+    },
     approval: approvalRules({ authorId: version.author?.id ?? null, errors: version.errors }, { userId: user.id, role }),
     can: {
       requestReview: can(role, "versions.requestReview"),
@@ -159,6 +167,7 @@ export default function VersionPage({ loaderData, actionData }: Route.ComponentP
     previousId,
     releasedId,
     mails,
+    releaseTable,
     approval,
     can: allowed,
   } = useFreshWhile(loaderData, (data) => data.mails.some((mail) => mail.state === "queued"));
@@ -205,6 +214,7 @@ export default function VersionPage({ loaderData, actionData }: Route.ComponentP
             </div>
             <VersionFacts version={version} />
           </section>
+          {releaseTable ? <ReleaseTableCheck check={releaseTable} /> : null}
           <section aria-labelledby="checks-heading" className="space-y-2">
             <h2 id="checks-heading" className="text-lg font-semibold">
               Checks

@@ -19,7 +19,8 @@ test("with no server answer yet the list says so and shows the preview's flags",
   expect(screen.getByTestId("checks-status").textContent).toBe("Asking the server for its reference check…");
   expect(screen.getByTestId("checks-count").textContent).toBe("Preview: no flags — every frame passes every check.");
   act(() => store.getState().moveKey({ legId: "LF", index: 1 }, 40 / 60));
-  expect(screen.getByTestId("checks-count").textContent).toBe("Preview: 10 error and 0 warning frames in 1 runs.");
+  // Issue 16: frames counted as frames, flags as flags.
+  expect(screen.getByTestId("checks-count").textContent).toBe("Preview: 10 frames with errors, 0 with warnings (10 flags) in 1 run.");
 });
 
 test("the server's reference, labelled; agreeing with the preview or not; a run moves the playhead", () => {

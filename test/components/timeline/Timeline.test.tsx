@@ -49,10 +49,21 @@ describe("Timeline", () => {
     const { store, container } = renderWithStore(<Timeline />);
     act(() => store.getState().moveKey({ legId: "LF", index: 1 }, 40 / 60));
     const flag = container.querySelector('[data-track="body"] [data-flag-kind="support-count"]')!;
-    expect(flag.textContent).toBe("▲feet");
+    expect(flag.textContent).toBe("▲ feet");
     expect(flag.getAttribute("data-from")).toBe("30");
     expect(flag.getAttribute("data-to")).toBe("39");
     expect(flag.getAttribute("title")).toMatch(/^Too few feet down, frames 30–39: /);
+  });
+
+  test("keys show a focus ring: no key button takes the outline away (issue 16)", () => {
+    const { container } = renderWithStore(<Timeline />);
+    const keys = container.querySelectorAll("[data-key]");
+    expect(keys.length).toBeGreaterThan(0);
+    for (const key of keys) {
+      expect(key.className, key.getAttribute("aria-label") ?? "").not.toMatch(/(^| )outline-none( |$)/);
+      expect(key.className).toMatch(/focus-visible:/);
+    }
+    expect(container.textContent).toContain("Drag keys to move them");
   });
 
   test("key commands act on the selection and say when they cannot", () => {
@@ -67,8 +78,11 @@ describe("Timeline", () => {
   });
 
   test("a read-only timeline has no key commands, and its keys still select", () => {
-    const { store } = renderWithStore(<Timeline />, { readOnly: true });
+    const { store, container } = renderWithStore(<Timeline />, { readOnly: true });
     expect(screen.queryByRole("toolbar", { name: "Key commands" })).toBeNull();
+    // Issue 16: it does not invite a drag it will not do.
+    expect(container.textContent).not.toMatch(/drag keys/i);
+    expect(container.textContent).toContain("Click a key to see its details; your role cannot move keys.");
     fireEvent.click(screen.getByRole("button", { name: /^LF key 2 of 2/ }));
     expect(store.getState().selection).toEqual({ legId: "LF", index: 1 });
   });

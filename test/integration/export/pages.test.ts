@@ -56,7 +56,8 @@ describe("/export", () => {
     assert.exists(data.download, "the page's download");
     expect(data.table.facts).toMatchObject({ rateHz: 25, frameCount: 25, units: "us" });
     const file = await getTable(bearer(data.download.path, token), gaitId, 2);
-    expect(file.text.split("\r\n")[1].split(",").slice(2).map(Number)).toEqual(data.table.preview.values.slice(0, data.table.facts.channelCount));
+    const records = file.text.split("\r\n").filter((line) => !line.startsWith("#"));
+    expect(records[1].split(",").slice(2).map(Number)).toEqual(data.table.preview.values.slice(0, data.table.facts.channelCount));
     expect(data.table.facts.sha256).toBeTruthy();
   });
 
@@ -95,7 +96,7 @@ describe("bench tables", () => {
   test("centre: every pulse at its servo's centerUs, held for 2 s at 50 Hz", async () => {
     const answer = await get<JsonTable>("kind=centre&format=json&units=us");
     expect(answer.status).toBe(200);
-    expect(answer.headers.get("Content-Disposition")).toBe('attachment; filename="pier_crawler_centre_vbench_us_50hz.json"');
+    expect(answer.headers.get("Content-Disposition")).toBe('attachment; filename="pier_crawler_centre_vbench_us_50hz_no-profile.json"');
     expect(answer.body.meta.frameCount).toBe(100);
     for (const frame of [answer.body.frames[0], answer.body.frames[99]]) {
       frame.values.forEach((us, column) => expect(us).toBe(answer.body.channels[column].centerUs));

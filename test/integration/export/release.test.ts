@@ -48,7 +48,7 @@ describe("recordReleaseTable", () => {
     expect(sha256(again.text)).toBe(stored.tableSha256);
     expect(again.headers.get("Repr-Digest")).toBe(`sha-256=:${Buffer.from(stored.tableSha256, "hex").toString("base64")}:`);
     // The canonical table is degrees as CSV at the sequence's own rate (50 Hz).
-    expect(again.headers.get("Content-Disposition")).toBe('attachment; filename="tripod_cruise_v1_deg10_50hz.csv"');
+    expect(again.headers.get("Content-Disposition")).toBe('attachment; filename="tripod_cruise_v1_deg10_50hz_no-profile.csv"');
   });
 
   test("inside a transaction that rolls back, nothing is stored", async () => {

@@ -57,9 +57,9 @@ async function expectedTable(
 
 describe("formats and units", () => {
   test.each([
-    ["csv", "deg", "tripod_cruise_v1_deg10_50hz.csv"],
-    ["json", "rad", "tripod_cruise_v1_rad10000_50hz.json"],
-    ["c", "us", "tripod_cruise_v1_us_50hz.h"],
+    ["csv", "deg", "tripod_cruise_v1_deg10_50hz_no-profile.csv"],
+    ["json", "rad", "tripod_cruise_v1_rad10000_50hz_no-profile.json"],
+    ["c", "us", "tripod_cruise_v1_us_50hz_no-profile.h"],
   ] as const)("%s in %s: the exporter's bytes, its media type and file name", async (format, units, fileName) => {
     const answer = await get(tripod, 1, `format=${format}&units=${units}`);
     expect(answer.status).toBe(200);
@@ -72,8 +72,8 @@ describe("formats and units", () => {
 
   test("the defaults are CSV in degrees at the sequence's own rate", async () => {
     const answer = await get(tripod, 1);
-    expect(answer.headers.get("Content-Disposition")).toBe('attachment; filename="tripod_cruise_v1_deg10_50hz.csv"');
-    const rows = Papa.parse<string[]>(answer.text.trim(), { skipEmptyLines: true }).data;
+    expect(answer.headers.get("Content-Disposition")).toBe('attachment; filename="tripod_cruise_v1_deg10_50hz_no-profile.csv"');
+    const rows = Papa.parse<string[]>(answer.text.trim(), { skipEmptyLines: true, comments: "#" }).data;
     expect(rows[0].slice(0, 3)).toEqual(["frame", "time_ms", rows[0][2]]);
     expect(rows.length - 1, "frames: round(1200 ms × 50 Hz / 1000)").toBe(60);
   });
@@ -111,7 +111,7 @@ describe("another rate solves the sequence again", () => {
   test("rate=20: round(1200 × 20 / 1000) = 24 frames, each a fresh solve at 20 Hz (not resampled from 50 Hz)", async () => {
     const answer = await get<JsonTable>(tripod, 1, "format=json&rate=20");
     expect(answer.status).toBe(200);
-    expect(answer.headers.get("Content-Disposition")).toBe('attachment; filename="tripod_cruise_v1_deg10_20hz.json"');
+    expect(answer.headers.get("Content-Disposition")).toBe('attachment; filename="tripod_cruise_v1_deg10_20hz_no-profile.json"');
     expect(answer.body.meta.rateHz).toBe(20);
     expect(answer.body.meta.frameCount).toBe(24);
     expect(answer.text).toBe(await expectedTable(tripod, 1, { format: "json", units: "deg", rateHz: 20 }));
@@ -140,7 +140,7 @@ describe("released", () => {
     expect(released.status).toBe(200);
     expect(released.text).toBe(byNumber.text);
     expect(released.headers.get("ETag")).toBe(byNumber.headers.get("ETag"));
-    expect(released.headers.get("Content-Disposition")).toBe('attachment; filename="tripod_cruise_v1_deg10_50hz.h"');
+    expect(released.headers.get("Content-Disposition")).toBe('attachment; filename="tripod_cruise_v1_deg10_50hz_no-profile.h"');
   });
 
   test("a gait with no released version: 404 JSON that says so", async () => {
@@ -204,7 +204,7 @@ describe("error flags need an override reason", () => {
     expect(answer.body.error.details).toMatchObject({ parameter: "override", reason: "override-required", errorFlags: { "com-outside": 34 } });
   });
 
-  test("with override: the reason is in the JSON meta, the C comment and the CSV's headers", async () => {
+  test("with override: the reason is in the JSON meta, the C comment and the CSV's comment and headers", async () => {
     const reason = "Bench test on the stand: the support flags do not apply";
     const query = `override=${encodeURIComponent(reason)}`;
     const json = await get<JsonTable>(crawl, 1, `format=json&${query}`);
@@ -215,6 +215,7 @@ describe("error flags need an override reason", () => {
     expect(header.text).toContain(reason);
     const csv = await get(crawl, 1, `format=csv&${query}`);
     expect(decodeURIComponent(csv.headers.get("Gaitloom-Override")!)).toBe(reason);
+    expect(csv.text).toContain(`\r\n# Override: ${reason}\r\n`);
     expect(csv.headers.get("Gaitloom-Flags")).toBe("errors=34; warnings=66; clamped=0");
   });
 
@@ -249,6 +250,20 @@ describe("calibration profiles", () => {
       expect(trimmed.body.frames[frame].values[column], `frame ${frame}, LF.coxa in degrees`).toBeCloseTo(plain.body.frames[frame].values[column] + 2.5, 6);
     }
     expect(decodeURIComponent(trimmed.headers.get("Gaitloom-Calibration")!)).toBe(`${name} (revision 1)`);
+  });
+
+  test("issue 16: the CSV names its profile in its file name and its comment header; without one it says so", async () => {
+    const csv = await get(tripod, 1, `format=csv&profile=${encodeURIComponent(name)}`);
+    expect(csv.status).toBe(200);
+    const stem = name.toLowerCase().replace(/[^a-z0-9]+/g, "_");
+    expect(csv.headers.get("Content-Disposition")).toBe(`attachment; filename="tripod_cruise_v1_deg10_50hz_profile-${stem}_revision_1.csv"`);
+    const comment = csv.text.split("\r\n").filter((line) => line.startsWith("# "));
+    expect(comment).toContain(`# Calibration profile: ${name} (revision 1)`);
+    expect(comment).toContain("# Robot: Pier crawler, revision 1");
+    expect(comment.some((line) => line.startsWith("# Units: deg. Each joint column is the servo angle in degrees"))).toBe(true);
+    const plain = await get(tripod, 1, "format=csv");
+    expect(plain.headers.get("Content-Disposition")).toBe('attachment; filename="tripod_cruise_v1_deg10_50hz_no-profile.csv"');
+    expect(plain.text).toContain("\r\n# Calibration profile: none (the robot's own servo settings)\r\n");
   });
 
   test("saving the profile again changes the tag (its revision is part of it)", async () => {
@@ -360,7 +375,7 @@ describe("the audit log", () => {
     const head = new Request(`http://127.0.0.1:3000${tablePath(tripod, 1)}`, { method: "HEAD", headers: { Authorization: `Bearer ${token}` } });
     const answer = await getTable(head, tripod, 1);
     expect(answer.status).toBe(200);
-    expect(answer.headers.get("Content-Disposition")).toBe('attachment; filename="tripod_cruise_v1_deg10_50hz.csv"');
+    expect(answer.headers.get("Content-Disposition")).toBe('attachment; filename="tripod_cruise_v1_deg10_50hz_no-profile.csv"');
     expect((await auditEntries("table.downloaded", 1))[0].id).toBe(before);
   });
 

@@ -11,22 +11,37 @@ const tableHeadersDoc = {
       "The representation's tag: version content hash, format, units, rate, calibration profile and revision, override, exporter and solver versions.",
     schema: { type: "string" },
   },
-  "Content-Disposition": { description: 'attachment; filename="<gait>_v<version>_<units>_<rate>hz.<csv|json|h>"', schema: { type: "string" } },
+  "Content-Disposition": {
+    description:
+      'attachment; filename="<gait>_v<version>_<units>_<rate>hz_<profile>.<csv|json|h>", where <profile> is profile-<name and revision> or no-profile, e.g. tripod_cruise_v1_deg10_50hz_profile-sn_0042_revision_2.csv.',
+    schema: { type: "string" },
+  },
   "Repr-Digest": { description: "RFC 9530: sha-256 of the bytes (a release record stores the same hash in hex).", schema: { type: "string" } },
-  "Gaitloom-Gait": { description: "Gait name (percent-encoded), version and content hash: the metadata a CSV cannot hold.", schema: { type: "string" } },
+  "Gaitloom-Gait": { description: "Gait name (percent-encoded), version and content hash, as the table's header gives them.", schema: { type: "string" } },
+  "Gaitloom-Calibration": {
+    description: "The calibration profile applied, with its revision (percent-encoded); absent when none was.",
+    schema: { type: "string" },
+  },
   "Gaitloom-Flags": { description: "errors=…; warnings=…; clamped=…", schema: { type: "string" } },
 };
 
 const tableContent = {
   "text/csv": {
-    schema: { type: "string", description: `${TABLE_MEDIA_TYPES.csv}: header record frame,time_ms,<leg>.<joint>… in channel order, CRLF line ends.` },
+    schema: {
+      type: "string",
+      description: [
+        `${TABLE_MEDIA_TYPES.csv}, CRLF line ends. First a comment header: lines starting with "# " naming the robot and revision, gait and version, content hash, calibration profile, what the numbers are (plain degrees, radians or microseconds, never scaled), rate, flags, override reason, exporter and solver versions and the safety notice.`,
+        "Then the header record frame,time_ms,<leg>.<joint>… in channel order and one record per frame.",
+        'Readers skip the comment lines when told to: pandas read_csv(path, comment="#"), R read.csv(path, comment.char = "#"), readr read_csv(path, comment = "#"), papaparse { comments: "#" }; with Python\'s csv module or NumPy\'s loadtxt, leave out the lines starting with "#" first.',
+      ].join(" "),
+    },
   },
   "application/json": { schema: ref("AngleTable") },
   "text/x-c": {
     schema: {
       type: "string",
       description:
-        "A C99 header: the frame count, frame period, channel map and a static const fixed-point array, with a comment block naming robot, revision, gait version and content hash.",
+        "A C99 header: the frame count, frame period, channel map and a static const fixed-point array, with a comment block saying what a cell is (e.g. int16_t tenths of a degree: degrees = cell / 10) and naming robot, revision, gait version, content hash and calibration profile.",
     },
   },
 };
@@ -60,7 +75,7 @@ export function angleTablePaths(): OpenApiPaths {
         description: [
           "One row per frame, one column per joint in servo-channel order, as CSV, JSON or a C header, in degrees, radians or pulse widths.",
           "The version's sequence is solved with the robot revision it pins; another `rate` solves it again at that rate (never an interpolation).",
-          "A `profile` applies a calibration profile of the robot and is named, with its revision, in the header.",
+          "A `profile` applies a calibration profile of the robot and is named, with its revision, in the file name and the table's header (the CSV's comment lines, the JSON's meta, the C comment); a table without one says `no-profile` in its file name.",
           "A version with error flags, or pulses clamped to the servo range, is exported only with an `override` reason (409 without it), written into the header.",
           `Tables are reproducible byte for byte; a release stores the SHA-256 of its canonical table (format=${RELEASE_TABLE.format}&units=${RELEASE_TABLE.units}) with the solver and exporter versions.`,
           "Every download (not a 304) is recorded in the workspace's audit log.",
@@ -93,7 +108,7 @@ export function tableSchemas(): Record<string, Json> {
   return {
     AngleTable: {
       type: "object",
-      description: `The JSON table (${TABLE_FORMAT}): one integer per cell in fixed point, printed with meta.decimals decimals; channels in servo-channel order.`,
+      description: `The JSON table (${TABLE_FORMAT}): one plain number per cell in meta.values.unit (degrees, radians or microseconds, never scaled), rounded to meta.values.step; channels in servo-channel order.`,
       required: ["format", "meta", "channels", "frames"],
       properties: {
         format: { const: TABLE_FORMAT },
@@ -112,12 +127,26 @@ export function tableSchemas(): Record<string, Json> {
                 loop: { type: ["boolean", "null"] },
               },
             },
+            calibrationProfile: {
+              type: ["string", "null"],
+              description: "The calibration profile applied, with its revision; null: the robot's own servo settings.",
+            },
             units: { type: "string", enum: ["deg", "rad", "us"] },
+            values: {
+              type: "object",
+              description: "What the numbers in frames[].values are.",
+              required: ["unit", "description", "step", "decimals"],
+              properties: {
+                unit: { type: "string", enum: ["deg", "rad", "us"], description: "Every value is in this unit itself: degrees, radians or microseconds." },
+                description: { type: "string", description: "The values in a sentence, naming the calibration profile applied." },
+                step: { type: "number", description: "The values are rounded to multiples of this: 0.1, 0.0001 or 1." },
+                decimals: { type: "integer", description: "Decimals printed." },
+              },
+            },
             rateHz: { type: "number" },
             framePeriodMs: { type: "number" },
             frameCount: { type: "integer" },
             channelCount: { type: "integer" },
-            calibrationProfile: { type: ["string", "null"] },
             overrideReason: { type: ["string", "null"] },
             flags: { type: "object" },
             clamped: { type: "array", items: { type: "object" } },

@@ -56,3 +56,18 @@ export const framesText = (run: Pick<FlagRun, "fromFrame" | "toFrame">) =>
 
 /** "LF femur" / "LF" / "body" — where a run belongs. */
 export const runPlace = (run: Pick<FlagRun, "leg" | "joint">) => (run.leg ? `${run.leg}${run.joint ? ` ${run.joint}` : ""}` : "body");
+
+/**
+ * The Checks list's count: frames counted once however many flags they hold,
+ * flags counted as flags — "10 frames with errors, 0 with warnings (14 flags)".
+ * A frame with both an error and a warning counts in both.
+ */
+export function checkSummary(flags: readonly Flag[]): { errorFrames: number; warningFrames: number; flags: number; text: string } {
+  const errorFrames = new Set<number>();
+  const warningFrames = new Set<number>();
+  for (const flag of flags) (flag.severity === "error" ? errorFrames : warningFrames).add(flag.frame);
+  const counts = { errorFrames: errorFrames.size, warningFrames: warningFrames.size, flags: flags.length };
+  if (flags.length === 0) return { ...counts, text: "no flags" };
+  const text = `${counts.errorFrames} ${counts.errorFrames === 1 ? "frame" : "frames"} with errors, ${counts.warningFrames} with warnings (${counts.flags} ${counts.flags === 1 ? "flag" : "flags"})`;
+  return { ...counts, text };
+}
