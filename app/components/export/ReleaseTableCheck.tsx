@@ -2,6 +2,7 @@
 // bytes today, or not and why (DESIGN.md: "a version page says when today's
 // table differs from its recorded hash").
 import { formatTime, shortHash } from "~/platform/format";
+import { Section } from "~/components/common/Section";
 
 export type ReleaseTableCheckData = {
   recorded: { sha256: string; exporterVersion: string; solverVersion: string; tableFormat: string; createdAt: Date | string };
@@ -24,10 +25,8 @@ function Hash({ sha256 }: { sha256: string | null }) {
 export function ReleaseTableCheck({ check }: { check: ReleaseTableCheckData }) {
   const { recorded, today } = check;
   return (
-    <section aria-labelledby="release-table-heading" className="rounded-lg border border-line bg-surface p-4 text-sm">
-      <h2 id="release-table-heading" className="mb-2 font-semibold">
-        Release table
-      </h2>
+    <Section title="Release table" className="space-y-2 rounded-lg border border-line bg-surface p-4 text-sm">
+      {" "}
       {check.matches ? (
         <p className="flex gap-2 text-ok">
           <span aria-hidden="true">✓</span>
@@ -69,6 +68,6 @@ export function ReleaseTableCheck({ check }: { check: ReleaseTableCheckData }) {
           Download today's table
         </a>
       ) : null}
-    </section>
+    </Section>
   );
 }

@@ -3,6 +3,7 @@
 import { useEffect, useRef } from "react";
 import { Form } from "react-router";
 import { formatTime } from "~/platform/format";
+import { Section } from "~/components/common/Section";
 
 export type DraftPanelProps = {
   gait: {
@@ -33,10 +34,8 @@ export function DraftPanel({ gait, draftRevision, canCommit, committing, message
     if (resetKey) formRef.current?.reset();
   }, [resetKey]);
   return (
-    <section aria-labelledby="draft-heading" className="rounded-lg border border-line bg-surface p-4">
-      <h2 id="draft-heading" className="text-lg font-semibold">
-        Working draft
-      </h2>
+    <Section title="Working draft" className="rounded-lg border border-line bg-surface p-4">
+      {" "}
       {draft.hasSequence ? (
         <p className="mt-1 text-sm text-ink-muted">
           Draft revision <span className="font-mono tabular-nums">{draftRevision}</span>, saved {formatTime(draft.updatedAt)}
@@ -86,6 +85,6 @@ export function DraftPanel({ gait, draftRevision, canCommit, committing, message
           ) : null}
         </Form>
       ) : null}
-    </section>
+    </Section>
   );
 }

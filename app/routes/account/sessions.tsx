@@ -5,6 +5,7 @@ import { Form, redirect } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/sessions";
 import { Notice } from "~/components/common/Notice";
+import { RowAction } from "~/components/common/RowAction";
 import { PageHeader } from "~/components/common/PageHeader";
 import { endAllSessions, endSession, listSessions } from "~/features/accounts/sessions.server";
 import { requireUser } from "~/platform/access.server";
@@ -81,17 +82,9 @@ export default function Sessions({ loaderData, actionData }: Route.ComponentProp
                 {entry.current ? (
                   <span className="rounded-full bg-accent-soft px-2 py-0.5 text-xs font-medium text-accent-strong">This browser</span>
                 ) : (
-                  <Form method="post">
-                    <input type="hidden" name="intent" value="end" />
-                    <input type="hidden" name="sessionId" value={entry.id} />
-                    <button
-                      type="submit"
-                      className="rounded-md border border-line px-3 py-1 text-danger hover:bg-sunken"
-                      aria-label={`Sign out of ${entry.browser}, last seen ${when(entry.lastSeenAt)}`}
-                    >
-                      Sign out
-                    </button>
-                  </Form>
+                  <RowAction intent="end" idName="sessionId" id={entry.id} label={`Sign out of ${entry.browser}, last seen ${when(entry.lastSeenAt)}`} danger>
+                    Sign out
+                  </RowAction>
                 )}
               </td>
             </tr>

@@ -2,8 +2,10 @@
 import { Form, useNavigation } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/members";
+import { FramedTable } from "~/components/common/FramedTable";
 import { MailState } from "~/components/common/MailState";
 import { Notice } from "~/components/common/Notice";
+import { RowAction } from "~/components/common/RowAction";
 import { useFreshWhile } from "~/components/common/useFreshWhile";
 import { requireAccess } from "~/platform/access.server";
 import { readForm } from "~/platform/body.server";
@@ -189,21 +191,19 @@ export default function Members({ loaderData, actionData }: Route.ComponentProps
           </Form>
 
           {invitations.length > 0 ? (
-            <table className="mt-6 w-full border-collapse text-left text-sm">
-              <caption className="mb-2 text-left font-medium">Pending invitations</caption>
-              <thead className="border-b border-line text-ink-muted">
-                <tr>
-                  <th className="py-2 font-medium">E-mail</th>
-                  <th className="py-2 font-medium">Role</th>
-                  <th className="py-2 font-medium">Invited by</th>
-                  <th className="py-2 font-medium">Mail</th>
-                  <th className="py-2 text-right font-medium">Expires</th>
-                  <th className="py-2">
-                    <span className="sr-only">Actions</span>
-                  </th>
-                </tr>
-              </thead>
-              <tbody>
+            <div className="mt-6">
+              <h3 className="mb-2 text-sm font-medium">Pending invitations</h3>
+              <FramedTable
+                label="Pending invitations"
+                columns={[
+                  { label: "E-mail" },
+                  { label: "Role" },
+                  { label: "Invited by" },
+                  { label: "Mail" },
+                  { label: "Expires", align: "right" },
+                  { label: "Actions", hidden: true },
+                ]}
+              >
                 {invitations.map((invitation) => (
                   <tr key={invitation.id} className="border-b border-line last:border-0">
                     <td className="py-2">{invitation.email}</td>
@@ -215,23 +215,21 @@ export default function Members({ loaderData, actionData }: Route.ComponentProps
                     </td>
                     <td className="flex justify-end gap-2 py-2">
                       {(["resend", "revoke"] as const).map((intent) => (
-                        <Form method="post" key={intent}>
-                          <input type="hidden" name="intent" value={intent} />
-                          <input type="hidden" name="invitationId" value={invitation.id} />
-                          <button
-                            type="submit"
-                            className={button}
-                            aria-label={`${intent === "resend" ? "Resend" : "Revoke"} the invitation for ${invitation.email}`}
-                          >
-                            {intent === "resend" ? "Resend" : "Revoke"}
-                          </button>
-                        </Form>
+                        <RowAction
+                          key={intent}
+                          intent={intent}
+                          idName="invitationId"
+                          id={invitation.id}
+                          label={`${intent === "resend" ? "Resend" : "Revoke"} the invitation for ${invitation.email}`}
+                        >
+                          {intent === "resend" ? "Resend" : "Revoke"}
+                        </RowAction>
                       ))}
                     </td>
                   </tr>
                 ))}
-              </tbody>
-            </table>
+              </FramedTable>
+            </div>
           ) : null}
         </section>
       ) : null}

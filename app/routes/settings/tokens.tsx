@@ -3,7 +3,9 @@ import { Form } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/tokens";
 import { CopyButton } from "~/components/common/CopyButton";
+import { FramedTable } from "~/components/common/FramedTable";
 import { Notice } from "~/components/common/Notice";
+import { RowAction } from "~/components/common/RowAction";
 import { requireAccess } from "~/platform/access.server";
 import { readForm } from "~/platform/body.server";
 import { permissionOfEveryIntent } from "~/platform/intent-form.server";
@@ -126,53 +128,44 @@ export default function Tokens({ loaderData, actionData }: Route.ComponentProps)
       {loaderData.tokens.length === 0 ? (
         <p className="text-ink-muted">You have no tokens for this workspace yet.</p>
       ) : (
-        <table className="w-full border-collapse rounded-lg bg-surface text-left text-sm">
-          <caption className="sr-only">Your API tokens</caption>
-          <thead className="border-b border-line text-ink-muted">
-            <tr>
-              <th className="px-4 py-2 font-medium">Name</th>
-              <th className="px-4 py-2 font-medium">Starts with</th>
-              <th className="px-4 py-2 text-right font-medium">Created</th>
-              <th className="px-4 py-2 text-right font-medium">Last used</th>
-              <th className="px-4 py-2 text-right font-medium">Expires</th>
-              <th className="px-4 py-2">
-                <span className="sr-only">State</span>
-              </th>
+        <FramedTable
+          label="Your API tokens"
+          columns={[
+            { label: "Name" },
+            { label: "Starts with" },
+            { label: "Created", align: "right" },
+            { label: "Last used", align: "right" },
+            { label: "Expires", align: "right" },
+            { label: "State", hidden: true },
+          ]}
+        >
+          {loaderData.tokens.map((token) => (
+            <tr key={token.id} className="border-b border-line last:border-0">
+              <td className="px-4 py-2 font-medium">{token.name}</td>
+              <td className="px-4 py-2 font-mono">{token.prefix}…</td>
+              <td className="px-4 py-2 text-right whitespace-nowrap tabular-nums">{when(token.createdAt)}</td>
+              <td className="px-4 py-2 text-right whitespace-nowrap tabular-nums">{when(token.lastUsedAt)}</td>
+              <td className="px-4 py-2 text-right whitespace-nowrap tabular-nums">
+                {token.expiresAt === null ? (
+                  "never"
+                ) : new Date(token.expiresAt).getTime() <= loaderData.now ? (
+                  <span className="text-danger">expired {when(token.expiresAt)}</span>
+                ) : (
+                  when(token.expiresAt)
+                )}
+              </td>
+              <td className="px-4 py-2 text-right">
+                {token.revokedAt ? (
+                  <span className="text-ink-muted">revoked {when(token.revokedAt)}</span>
+                ) : (
+                  <RowAction intent="revoke" idName="tokenId" id={token.id} label={`Revoke ${token.name}`} danger>
+                    Revoke
+                  </RowAction>
+                )}
+              </td>
             </tr>
-          </thead>
-          <tbody>
-            {loaderData.tokens.map((token) => (
-              <tr key={token.id} className="border-b border-line last:border-0">
-                <td className="px-4 py-2 font-medium">{token.name}</td>
-                <td className="px-4 py-2 font-mono">{token.prefix}…</td>
-                <td className="px-4 py-2 text-right whitespace-nowrap tabular-nums">{when(token.createdAt)}</td>
-                <td className="px-4 py-2 text-right whitespace-nowrap tabular-nums">{when(token.lastUsedAt)}</td>
-                <td className="px-4 py-2 text-right whitespace-nowrap tabular-nums">
-                  {token.expiresAt === null ? (
-                    "never"
-                  ) : new Date(token.expiresAt).getTime() <= loaderData.now ? (
-                    <span className="text-danger">expired {when(token.expiresAt)}</span>
-                  ) : (
-                    when(token.expiresAt)
-                  )}
-                </td>
-                <td className="px-4 py-2 text-right">
-                  {token.revokedAt ? (
-                    <span className="text-ink-muted">revoked {when(token.revokedAt)}</span>
-                  ) : (
-                    <Form method="post">
-                      <input type="hidden" name="intent" value="revoke" />
-                      <input type="hidden" name="tokenId" value={token.id} />
-                      <button type="submit" className="rounded-md border border-line px-3 py-1 text-danger hover:bg-sunken" aria-label={`Revoke ${token.name}`}>
-                        Revoke
-                      </button>
-                    </Form>
-                  )}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+          ))}
+        </FramedTable>
       )}
     </div>
   );
