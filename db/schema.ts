@@ -1,13 +1,32 @@
 // The database schema. Migrations under db/migrations are generated from this
 // file with `npx drizzle-kit generate` and committed; never edit them by hand.
 import { sql } from "drizzle-orm";
-import { bigint, bigserial, index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp, unique, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import {
+  type AnyPgColumn,
+  bigint,
+  bigserial,
+  index,
+  integer,
+  jsonb,
+  pgEnum,
+  pgTable,
+  primaryKey,
+  text,
+  timestamp,
+  unique,
+  uniqueIndex,
+  uuid,
+} from "drizzle-orm/pg-core";
 
 export const roleEnum = pgEnum("role", ["owner", "lead", "animator", "firmware", "viewer"]);
 
 export const versionStateEnum = pgEnum("version_state", ["committed", "in-review", "sent-back", "approved", "released", "retired"]);
 
+// The columns most tables share, written once.
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
+const primaryId = () => uuid("id").primaryKey().defaultRandom();
+/** A row that belongs to another and goes with it. */
+const belongsTo = (name: string, parent: () => AnyPgColumn) => uuid(name).notNull().references(parent, { onDelete: "cascade" });
 
 export const users = pgTable("users", {
   id: uuid("id").primaryKey().defaultRandom(),
@@ -24,6 +43,9 @@ export const users = pgTable("users", {
   createdAt: createdAt(),
 });
 
+/** Who did something; kept as history when the person is gone from the workspace. */
+const person = (name: string) => uuid(name).references(() => users.id);
+
 export const workspaces = pgTable("workspaces", {
   id: uuid("id").primaryKey().defaultRandom(),
   slug: text("slug").notNull().unique(),
@@ -34,12 +56,8 @@ export const workspaces = pgTable("workspaces", {
 export const memberships = pgTable(
   "memberships",
   {
-    workspaceId: uuid("workspace_id")
-      .notNull()
-      .references(() => workspaces.id, { onDelete: "cascade" }),
-    userId: uuid("user_id")
-      .notNull()
-      .references(() => users.id, { onDelete: "cascade" }),
+    workspaceId: belongsTo("workspace_id", () => workspaces.id),
+    userId: belongsTo("user_id", () => users.id),
     role: roleEnum("role").notNull(),
     createdAt: createdAt(),
   },
@@ -50,11 +68,9 @@ export const robots = pgTable(
   "robots",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    workspaceId: uuid("workspace_id")
-      .notNull()
-      .references(() => workspaces.id, { onDelete: "cascade" }),
+    workspaceId: belongsTo("workspace_id", () => workspaces.id),
     name: text("name").notNull(),
-    createdById: uuid("created_by_id").references(() => users.id),
+    createdById: person("created_by_id"),
     createdAt: createdAt(),
     // Archived: kept and restorable, hidden from the usual lists (decision 012).
     archivedAt: timestamp("archived_at", { withTimezone: true }),
@@ -68,13 +84,11 @@ export const robotRevisions = pgTable(
   "robot_revisions",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    robotId: uuid("robot_id")
-      .notNull()
-      .references(() => robots.id, { onDelete: "cascade" }),
+    robotId: belongsTo("robot_id", () => robots.id),
     number: integer("number").notNull(),
     definition: jsonb("definition").notNull(),
     message: text("message").notNull().default(""),
-    authorId: uuid("author_id").references(() => users.id),
+    authorId: person("author_id"),
     createdAt: createdAt(),
   },
   (table) => [unique("robot_revisions_robot_number").on(table.robotId, table.number)],
@@ -85,12 +99,8 @@ export const gaits = pgTable(
   "gaits",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    workspaceId: uuid("workspace_id")
-      .notNull()
-      .references(() => workspaces.id, { onDelete: "cascade" }),
-    robotId: uuid("robot_id")
-      .notNull()
-      .references(() => robots.id, { onDelete: "cascade" }),
+    workspaceId: belongsTo("workspace_id", () => workspaces.id),
+    robotId: belongsTo("robot_id", () => robots.id),
     name: text("name").notNull(),
     description: text("description").notNull().default(""),
     draftSequence: jsonb("draft_sequence"),
@@ -98,8 +108,8 @@ export const gaits = pgTable(
     // Optimistic concurrency: every draft save must name the revision it started from.
     draftRevision: integer("draft_revision").notNull().default(0),
     draftUpdatedAt: timestamp("draft_updated_at", { withTimezone: true }).notNull().defaultNow(),
-    draftUpdatedById: uuid("draft_updated_by_id").references(() => users.id),
-    createdById: uuid("created_by_id").references(() => users.id),
+    draftUpdatedById: person("draft_updated_by_id"),
+    createdById: person("created_by_id"),
     createdAt: createdAt(),
     // Archived: kept and restorable, hidden from the usual lists (decision 012).
     archivedAt: timestamp("archived_at", { withTimezone: true }),
@@ -112,12 +122,10 @@ export const gaitVersions = pgTable(
   "gait_versions",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    gaitId: uuid("gait_id")
-      .notNull()
-      .references(() => gaits.id, { onDelete: "cascade" }),
+    gaitId: belongsTo("gait_id", () => gaits.id),
     number: integer("number").notNull(),
     message: text("message").notNull(),
-    authorId: uuid("author_id").references(() => users.id),
+    authorId: person("author_id"),
     robotRevisionId: uuid("robot_revision_id")
       .notNull()
       .references(() => robotRevisions.id),
@@ -128,7 +136,7 @@ export const gaitVersions = pgTable(
     contentHash: text("content_hash").notNull(),
     state: versionStateEnum("state").notNull().default("committed"),
     // The content above never changes (a trigger refuses it); the review fields below do.
-    reviewerId: uuid("reviewer_id").references(() => users.id),
+    reviewerId: person("reviewer_id"),
     stateChangedAt: timestamp("state_changed_at", { withTimezone: true }).notNull().defaultNow(),
     createdAt: createdAt(),
   },
@@ -146,10 +154,8 @@ export const reviewEvents = pgTable(
   "review_events",
   {
     id: bigserial("id", { mode: "number" }).primaryKey(),
-    versionId: uuid("version_id")
-      .notNull()
-      .references(() => gaitVersions.id, { onDelete: "cascade" }),
-    actorId: uuid("actor_id").references(() => users.id),
+    versionId: belongsTo("version_id", () => gaitVersions.id),
+    actorId: person("actor_id"),
     fromState: versionStateEnum("from_state"),
     toState: versionStateEnum("to_state").notNull(),
     comment: text("comment").notNull().default(""),
@@ -163,10 +169,8 @@ export const reviewEvents = pgTable(
 /** What a release shipped, so its table can be reproduced byte for byte. */
 export const releases = pgTable("releases", {
   id: uuid("id").primaryKey().defaultRandom(),
-  versionId: uuid("version_id")
-    .notNull()
-    .references(() => gaitVersions.id, { onDelete: "cascade" }),
-  releasedById: uuid("released_by_id").references(() => users.id),
+  versionId: belongsTo("version_id", () => gaitVersions.id),
+  releasedById: person("released_by_id"),
   tableSha256: text("table_sha256").notNull(),
   tableFormat: text("table_format").notNull(),
   solverVersion: text("solver_version").notNull(),
@@ -179,13 +183,11 @@ export const calibrationProfiles = pgTable(
   "calibration_profiles",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    robotId: uuid("robot_id")
-      .notNull()
-      .references(() => robots.id, { onDelete: "cascade" }),
+    robotId: belongsTo("robot_id", () => robots.id),
     name: text("name").notNull(),
     profile: jsonb("profile").notNull(),
     revision: integer("revision").notNull().default(1),
-    updatedById: uuid("updated_by_id").references(() => users.id),
+    updatedById: person("updated_by_id"),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
     createdAt: createdAt(),
   },
@@ -197,18 +199,16 @@ export const invitations = pgTable(
   "invitations",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    workspaceId: uuid("workspace_id")
-      .notNull()
-      .references(() => workspaces.id, { onDelete: "cascade" }),
+    workspaceId: belongsTo("workspace_id", () => workspaces.id),
     email: text("email").notNull(),
     role: roleEnum("role").notNull(),
     tokenHash: text("token_hash").notNull().unique(),
-    invitedById: uuid("invited_by_id").references(() => users.id),
+    invitedById: person("invited_by_id"),
     expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
     lastSentAt: timestamp("last_sent_at", { withTimezone: true }).notNull().defaultNow(),
     sendCount: integer("send_count").notNull().default(1),
     acceptedAt: timestamp("accepted_at", { withTimezone: true }),
-    acceptedById: uuid("accepted_by_id").references(() => users.id),
+    acceptedById: person("accepted_by_id"),
     revokedAt: timestamp("revoked_at", { withTimezone: true }),
     createdAt: createdAt(),
   },
@@ -220,12 +220,8 @@ export const apiTokens = pgTable(
   "api_tokens",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    workspaceId: uuid("workspace_id")
-      .notNull()
-      .references(() => workspaces.id, { onDelete: "cascade" }),
-    userId: uuid("user_id")
-      .notNull()
-      .references(() => users.id, { onDelete: "cascade" }),
+    workspaceId: belongsTo("workspace_id", () => workspaces.id),
+    userId: belongsTo("user_id", () => users.id),
     name: text("name").notNull(),
     tokenHash: text("token_hash").notNull().unique(),
     // The first characters, so a person can tell their tokens apart.
