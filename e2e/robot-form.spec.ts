@@ -91,7 +91,10 @@ test('robot problems read in the form\'s words: "Leg LF, tibia length must be at
   // Beside the field, what is wrong; the field's own label names it.
   await expect(page.getByRole("textbox", { name: "LF tibia length (mm)" })).toHaveAccessibleDescription("must be at least 1 (got 0)");
   await expectNoSeriousAxeViolations(page);
-  if (shots) await page.screenshot({ path: `${shots}/7-robot-problems-in-words.png`, fullPage: false });
+  if (shots) {
+    await problems.scrollIntoViewIfNeeded();
+    await page.screenshot({ path: `${shots}/7-robot-problems-in-words.png`, fullPage: false });
+  }
   // The link takes the person to the field.
   await problems.getByRole("link", { name: /^Leg LF, tibia length/ }).click();
   await expect(page).toHaveURL(/#field-legs-0-tibia$/);
