@@ -48,14 +48,18 @@ export function EditorScreen(props: EditorScreenProps) {
 function Announcer() {
   const notice = useEditor((state) => state.notice);
   return (
+    // A toast at the window's foot: it takes no room above the timeline and stays in view wherever the page is scrolled.
     <p
       role="status"
       aria-live="polite"
       data-testid="editor-notice"
-      className={`min-h-5 text-sm ${notice?.tone === "error" ? "text-danger" : "text-ink-muted"}`}
+      className="pointer-events-none fixed inset-x-0 bottom-4 z-40 flex justify-center px-4 text-sm"
     >
       {notice ? (
-        <span key={notice.id}>
+        <span
+          key={notice.id}
+          className={`rounded-md border bg-surface px-3 py-1.5 shadow-lg ${notice.tone === "error" ? "border-danger text-danger" : "border-line text-ink"}`}
+        >
           {notice.tone === "error" ? <span aria-hidden>▲ </span> : null}
           {notice.text}
         </span>
