@@ -52,7 +52,10 @@ export function GeneratorPanel() {
   return (
     // Not a Panel: a compact block (a heading line, then the fields), so it fits above the timeline at 1280×800.
     <section aria-labelledby={titleId} className="rounded-lg border border-line bg-surface">
-      <div key={fieldsKey} className="grid grid-cols-2 gap-x-3 gap-y-2 px-3 pt-2 pb-3 sm:grid-cols-3 md:grid-cols-5">
+      <div
+        key={fieldsKey}
+        className="grid grid-cols-2 gap-x-3 gap-y-2 px-3 pt-2 pb-3 sm:grid-cols-3 md:grid-cols-[minmax(9.5rem,1.5fr)_repeat(4,minmax(0,1fr))]"
+      >
         <h2 id={titleId} className="col-span-full font-semibold">
           Template and parameters
         </h2>
