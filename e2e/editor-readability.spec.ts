@@ -37,18 +37,17 @@ async function setParameter(page: Page, label: RegExp, value: string) {
   await field.press("Enter");
 }
 
-/** At this window size, with the page at its top, the timeline and the whole parameter panel are on screen. */
+/** At this window size, with the page at its top, the whole parameter panel and the timeline's tracks (the gait diagram) are on screen together. */
 async function expectParametersBesideTimeline(page: Page, width: number, height: number) {
   await page.setViewportSize({ width, height });
   await page.evaluate(() => window.scrollTo(0, 0));
-  const timeline = (await page.getByRole("region", { name: "Timeline" }).boundingBox())!;
+  const tracks = (await page.getByTestId("timeline-lanes").boundingBox())!;
   const parameters = (await page.getByRole("region", { name: "Template and parameters" }).boundingBox())!;
-  expect(timeline.y, `${width}×${height}: the timeline starts on screen`).toBeGreaterThanOrEqual(0);
-  expect(timeline.y + timeline.height, `${width}×${height}: the timeline ends on screen`).toBeLessThanOrEqual(height);
-  expect(
-    parameters.y + parameters.height,
-    `${width}×${height}: the parameter panel ends on screen (${parameters.y + parameters.height} px)`,
-  ).toBeLessThanOrEqual(height);
+  expect(parameters.y, `${width}×${height}: the parameter panel starts on screen`).toBeGreaterThanOrEqual(0);
+  expect(parameters.y + parameters.height, `${width}×${height}: the parameter panel ends on screen`).toBeLessThanOrEqual(height);
+  expect(tracks.y + tracks.height, `${width}×${height}: the timeline's tracks end on screen (${Math.round(tracks.y + tracks.height)} px)`).toBeLessThanOrEqual(
+    height,
+  );
 }
 
 test("animator: a gait full of flags stays readable, and the parameters sit with the timeline", async ({ page }) => {

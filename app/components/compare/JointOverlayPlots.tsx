@@ -117,6 +117,7 @@ export function JointOverlayPlots({ overlays, fraction, labels }: { overlays: re
                   viewBox={`0 0 ${WIDTH} ${HEIGHT}`}
                   className="h-auto w-full"
                   role="img"
+                  data-limits={overlay.limits ? `${overlay.limits.minDeg}..${overlay.limits.maxDeg}` : undefined}
                   aria-label={`${overlay.legId} ${overlay.joint}, servo degrees over the cycle: A and B differ by up to ${overlay.maxDifferenceDeg.toFixed(1)}°`}
                 >
                   <Plot overlay={overlay} />

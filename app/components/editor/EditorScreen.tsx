@@ -3,7 +3,7 @@
 // parameters just above the Timeline, Playback and Checks under it; then Key
 // details and Joint plots along the bottom.
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { useCallback, useRef, useState } from "react";
+import { useCallback, useEffect, useRef, useState } from "react";
 import type { Sequence } from "~/gait";
 import type { Robot } from "~/kinematics";
 import { EditorStoreProvider, useEditor } from "~/stores/editor-context";
@@ -45,19 +45,33 @@ export function EditorScreen(props: EditorScreenProps) {
   );
 }
 
+/** How long the notice toast stays on screen; screen readers have it at once from the live region. */
+const NOTICE_SHOWN_MS = 10_000;
+
 function Announcer() {
   const notice = useEditor((state) => state.notice);
+  const [hiddenId, setHiddenId] = useState<number | null>(null);
+  useEffect(() => {
+    if (!notice) return;
+    const timer = setTimeout(() => setHiddenId(notice.id), NOTICE_SHOWN_MS);
+    return () => clearTimeout(timer);
+  }, [notice]);
+  const shown = notice && notice.id !== hiddenId ? notice : null;
   return (
+    // A toast at the window's foot: it takes no room above the timeline and stays in view wherever the page is scrolled.
     <p
       role="status"
       aria-live="polite"
       data-testid="editor-notice"
-      className={`min-h-5 text-sm ${notice?.tone === "error" ? "text-danger" : "text-ink-muted"}`}
+      className="pointer-events-none fixed inset-x-0 bottom-4 z-40 flex justify-center px-4 text-sm"
     >
-      {notice ? (
-        <span key={notice.id}>
-          {notice.tone === "error" ? <span aria-hidden>▲ </span> : null}
-          {notice.text}
+      {shown ? (
+        <span
+          key={shown.id}
+          className={`rounded-md border bg-surface px-3 py-1.5 shadow-lg ${shown.tone === "error" ? "border-danger text-danger" : "border-line text-ink"}`}
+        >
+          {shown.tone === "error" ? <span aria-hidden>▲ </span> : null}
+          {shown.text}
         </span>
       ) : null}
     </p>
@@ -82,7 +96,14 @@ function EditorLayout(props: EditorScreenProps) {
       />
       {props.canEdit ? null : (
         <p className="rounded-md bg-sunken px-3 py-2 text-sm">
-          <span aria-hidden>ⓘ </span>You can look at every frame and its checks; your role cannot change gaits.
+          {/* A drawn "i": the circled-i character is missing from common fonts and showed as an empty box. */}
+          <span
+            aria-hidden
+            className="mr-1.5 inline-flex h-4 w-4 items-center justify-center rounded-full border border-ink-muted align-[-2px] text-[10px] font-semibold"
+          >
+            i
+          </span>
+          You can look at every frame and its checks; your role cannot change gaits.
         </p>
       )}
       <ConflictBanner gaitId={props.gait.id} gaitName={props.gait.name} robotRevision={props.robotRevision} />

@@ -1,13 +1,12 @@
 // The template and its parameters. Changing one regenerates the keys at once,
 // or after a confirmation when the keys hold hand edits that would be lost
 // (regenerating is one undo step either way). Body keys are kept.
-import { useMemo, useRef, useState } from "react";
+import { useId, useMemo, useRef, useState } from "react";
 import type { GaitParams, TemplateName } from "~/gait";
 import { NumberField } from "~/components/key-details/NumberField";
 import { hasHandEdits } from "~/features/gaits/editor/hand-edits";
 import { paramsOfSequence, suitableTemplates } from "~/features/gaits/editor/templates";
 import { useEditor, useEditorStore } from "~/stores/editor-context";
-import { Panel } from "~/components/common/Panel";
 import { SETTING_LABELS, type SettingPath } from "~/features/gaits";
 
 type NumberParam = "cycleMs" | "fps" | "strideMm" | "stepHeightMm" | "directionDeg" | "turnDegPerCycle" | "bodyHeightMm" | "dutyFactor";
@@ -37,6 +36,7 @@ export function GeneratorPanel() {
   // Kept keys put the typed value back: the fields start again from the sequence.
   const [fieldsKey, setFieldsKey] = useState(0);
   const confirm = useRef<HTMLDialogElement>(null);
+  const titleId = useId();
   const params: GaitParams = current ?? { template: templates[0]?.name ?? "wave", cycleMs: sequence.cycleMs, fps: sequence.fps };
 
   const change = (next: GaitParams) => {
@@ -50,13 +50,15 @@ export function GeneratorPanel() {
   };
 
   return (
-    <Panel
-      title="Template and parameters"
-      layout="flex flex-wrap items-baseline justify-between gap-x-3"
-      tools={<p className="text-xs text-ink-muted">A change writes new keys from the template; hand edits are asked about first, and Undo brings them back.</p>}
-    >
-      {/* One compact block: the template and the eight numbers in as few rows as the width allows. */}
-      <div key={fieldsKey} className="grid grid-cols-2 gap-x-3 gap-y-2 px-3 py-2 sm:grid-cols-3 md:grid-cols-5">
+    // Not a Panel: a compact block (a heading line, then the fields), so it fits above the timeline at 1280×800.
+    <section aria-labelledby={titleId} className="rounded-lg border border-line bg-surface">
+      <div
+        key={fieldsKey}
+        className="grid grid-cols-2 gap-x-3 gap-y-2 px-3 pt-2 pb-3 sm:grid-cols-3 md:grid-cols-[minmax(9.5rem,1.5fr)_repeat(4,minmax(0,1fr))]"
+      >
+        <h2 id={titleId} className="col-span-full font-semibold">
+          Template and parameters
+        </h2>
         <label className="flex flex-col text-xs text-ink-muted">
           {SETTING_LABELS["generator.template"].label}
           <select
@@ -89,6 +91,9 @@ export function GeneratorPanel() {
             onCommit={(value) => change({ ...params, [field.name]: value })}
           />
         ))}
+        <p className="self-end text-xs text-ink-muted max-md:col-span-full">
+          A change writes new keys; hand edits are asked about first, and Undo brings them back.
+        </p>
       </div>
       <dialog
         ref={confirm}
@@ -122,6 +127,6 @@ export function GeneratorPanel() {
           </button>
         </form>
       </dialog>
-    </Panel>
+    </section>
   );
 }

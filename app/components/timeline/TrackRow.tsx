@@ -14,7 +14,7 @@ import { KeyMarker } from "./KeyMarker";
 
 const EMPTY: readonly never[] = [];
 
-export const TRACK_HEIGHT = "h-11";
+export const TRACK_HEIGHT = "h-10";
 
 export function keyLabel(legId: string | null, index: number, count: number, key: LegKey | BodyKey, cycleFrames: number, fps: number): string {
   const frame = Math.round(key.t * cycleFrames);

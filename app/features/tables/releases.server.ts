@@ -100,12 +100,41 @@ export type ReleaseTableCheck = {
 export async function checkReleaseTable(versionId: string, db: Reader = database()): Promise<ReleaseTableCheck | null> {
   const record = await releaseRecordOf(versionId, db);
   if (!record) return null;
+  // A version and its release record never change, so today's hash of a record is worked out once per process.
+  const cached = todaysHashes.get(record.id);
+  const today = cached ?? (await todaysReleaseTable(versionId, record, db));
+  if (!today) return null;
+  if (!cached) remember(record.id, today);
+  return {
+    recorded: {
+      sha256: record.tableSha256,
+      exporterVersion: record.exporterVersion,
+      solverVersion: record.solverVersion,
+      tableFormat: record.tableFormat,
+      createdAt: record.createdAt,
+    },
+    today,
+    matches: today.sha256 === record.tableSha256,
+    reasons: [
+      ...(record.exporterVersion !== EXPORTER_VERSION ? [`the exporter changed from ${record.exporterVersion} to ${EXPORTER_VERSION}`] : []),
+      ...(record.solverVersion !== SOLVER_VERSION ? [`the solver changed from ${record.solverVersion} to ${SOLVER_VERSION}`] : []),
+    ],
+  };
+}
+
+const TODAYS_HASHES_KEPT = 500;
+const todaysHashes = new Map<string, ReleaseTableCheck["today"]>();
+
+function remember(recordId: string, today: ReleaseTableCheck["today"]): void {
+  if (todaysHashes.size >= TODAYS_HASHES_KEPT) todaysHashes.delete(todaysHashes.keys().next().value!);
+  todaysHashes.set(recordId, today);
+}
+
+/** The release's canonical table made again with today's code from the recorded query, and its SHA-256 (null with the reason when it cannot be made). */
+async function todaysReleaseTable(versionId: string, record: ReleaseRecord, db: Reader): Promise<ReleaseTableCheck["today"] | null> {
   const version = await tableVersionById(versionId, db);
   if (!version) return null;
   const recorded = new URLSearchParams(record.tableFormat);
-  const reasons: string[] = [];
-  if (record.exporterVersion !== EXPORTER_VERSION) reasons.push(`the exporter changed from ${record.exporterVersion} to ${EXPORTER_VERSION}`);
-  if (record.solverVersion !== SOLVER_VERSION) reasons.push(`the solver changed from ${record.solverVersion} to ${SOLVER_VERSION}`);
   let sha256: string | null = null;
   let problem: string | null = null;
   try {
@@ -117,16 +146,5 @@ export async function checkReleaseTable(versionId: string, db: Reader = database
     if (!(error instanceof ServiceError)) throw error;
     problem = error.message;
   }
-  return {
-    recorded: {
-      sha256: record.tableSha256,
-      exporterVersion: record.exporterVersion,
-      solverVersion: record.solverVersion,
-      tableFormat: record.tableFormat,
-      createdAt: record.createdAt,
-    },
-    today: { sha256, exporterVersion: EXPORTER_VERSION, solverVersion: SOLVER_VERSION, problem },
-    matches: sha256 === record.tableSha256,
-    reasons,
-  };
+  return { sha256, exporterVersion: EXPORTER_VERSION, solverVersion: SOLVER_VERSION, problem };
 }
