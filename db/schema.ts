@@ -24,7 +24,6 @@ export const versionStateEnum = pgEnum("version_state", ["committed", "in-review
 
 // The columns most tables share, written once.
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
-const primaryId = () => uuid("id").primaryKey().defaultRandom();
 /** A row that belongs to another and goes with it. */
 const belongsTo = (name: string, parent: () => AnyPgColumn) => uuid(name).notNull().references(parent, { onDelete: "cascade" });
 
