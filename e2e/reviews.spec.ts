@@ -40,6 +40,8 @@ test("an animator commits two versions and asks for review; the lead compares th
   page,
   browser,
 }, testInfo) => {
+  // Two people, two commits, a review, a release: 58 s of the default 60 s at a load of 12 on 2 cores.
+  test.setTimeout(120_000);
   const stamp = `${Date.now().toString(36)}-${testInfo.workerIndex}`;
   const messageA = `Wide stance, e2e ${stamp}`;
   const messageB = `Quicker sets of four, e2e ${stamp}`;
