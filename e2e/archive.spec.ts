@@ -15,7 +15,7 @@ const quayWalker = JSON.parse(readFileSync(new URL("../db/demo/robots/quay-walke
 const uniqueName = (label: string) => `${label} ${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}`;
 
 const shoot = async (page: Page, name: string) => {
-  if (process.env.GAITLOOM_SHOTS) await page.screenshot({ path: `/work/shots/16/8-${name}.png`, fullPage: true });
+  if (process.env.GAITLOOM_SHOTS) await page.screenshot({ path: `${process.env.GAITLOOM_SHOTS}/8-${name}.png`, fullPage: true });
 };
 
 const noSeriousViolations = async (page: Page) => expect(await axeViolations(page, ["serious", "critical"])).toEqual([]);

@@ -7,7 +7,7 @@ import { signInAs } from "./support/sign-in";
 import { expect, test, type Page } from "./support/test";
 
 const shot = async (page: Page, name: string) => {
-  if (process.env.GAITLOOM_SHOTS) await page.screenshot({ path: `/work/shots/16/6-${name}.png`, fullPage: true });
+  if (process.env.GAITLOOM_SHOTS) await page.screenshot({ path: `${process.env.GAITLOOM_SHOTS}/6-${name}.png`, fullPage: true });
 };
 
 async function versionId(page: Page, text: string): Promise<string> {

@@ -11,7 +11,7 @@ import { signInAs } from "./support/sign-in";
 import { expect, test, type Page } from "./support/test";
 
 const shot = async (page: Page, name: string, fullPage = true) => {
-  if (process.env.GAITLOOM_SHOTS) await page.screenshot({ path: `/work/shots/16/5-${name}.png`, fullPage });
+  if (process.env.GAITLOOM_SHOTS) await page.screenshot({ path: `${process.env.GAITLOOM_SHOTS}/5-${name}.png`, fullPage });
 };
 
 type Box = { x: number; y: number; width: number; height: number };

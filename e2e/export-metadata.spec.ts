@@ -7,7 +7,7 @@ import { axeViolations } from "./support/axe";
 import { signInAs } from "./support/sign-in";
 import { expect, test } from "./support/test";
 
-const shots = (name: string) => (process.env.GAITLOOM_SHOTS ? { path: `/work/shots/16/4-${name}.png`, fullPage: true } : null);
+const shots = (name: string) => (process.env.GAITLOOM_SHOTS ? { path: `${process.env.GAITLOOM_SHOTS}/4-${name}.png`, fullPage: true } : null);
 
 test("a CSV made with a calibration profile names it in its file name and its comment header", async ({ page }) => {
   // Five pages and a download on a shared machine.

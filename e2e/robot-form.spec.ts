@@ -8,7 +8,7 @@ import { signInAs } from "./support/sign-in";
 import { expect, test, type Page } from "./support/test";
 
 const crabUrdf = readFileSync(new URL("../test/kinematics/fixtures/test-crab.urdf", import.meta.url), "utf8");
-const shots = process.env.GAITLOOM_SHOTS ? "/work/shots/16" : null;
+const shots = process.env.GAITLOOM_SHOTS ?? null;
 const uniqueName = (label: string) => `${label} ${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}`;
 
 // Back is blocked through the browser's history (a popstate the router reverts); once in about

@@ -10,7 +10,7 @@ import { signInAs } from "./support/sign-in";
 import { expect, test, type Page } from "./support/test";
 
 const shoot = async (page: Page, name: string) => {
-  if (process.env.GAITLOOM_SHOTS) await page.screenshot({ path: `/work/shots/16/8-${name}.png`, fullPage: true });
+  if (process.env.GAITLOOM_SHOTS) await page.screenshot({ path: `${process.env.GAITLOOM_SHOTS}/8-${name}.png`, fullPage: true });
 };
 
 test.use({ viewport: { width: 1440, height: 900 } });
